@@ -1,0 +1,18 @@
+import { DeskHome } from "@/components/DeskHome";
+import { requirePageViewer } from "@/lib/auth/guards";
+
+export const metadata = { title: "House desk" };
+
+export default async function HouseHome() {
+  const viewer = await requirePageViewer("house.manage", "/house");
+  return (
+    <DeskHome
+      title={`House desk · ${viewer.name}`}
+      intro="Run the exchange: accounts and roles, the reference data every grade is measured against, and the maker registry behind source codes."
+      actions={[
+        { href: "/house/users", title: "Accounts and roles", text: "Grant mediator and house roles; see who has joined." },
+        { href: "/reference", title: "Valve reference", text: "What dealers see when they look a type up." },
+      ]}
+    />
+  );
+}

@@ -1,0 +1,52 @@
+import Link from "next/link";
+import type { Viewer } from "@/lib/auth/guards";
+import { can, ROLE_LABEL } from "@/lib/auth/roles";
+import { Mark } from "./Mark";
+import { SignOutButton } from "./SignOutButton";
+
+type NavItem = { href: string; label: string };
+
+/** Navigation for what the viewer's roles allow; later features add their links here. */
+export function navFor(viewer: Viewer | null): NavItem[] {
+  const items: NavItem[] = [{ href: "/reference", label: "Valve reference" }];
+  if (!viewer) return items;
+  if (can(viewer.roles, "lots.consign")) items.push({ href: "/consignor", label: "My consignments" });
+  if (can(viewer.roles, "lots.bid")) items.push({ href: "/dealer", label: "Dealer desk" });
+  if (can(viewer.roles, "shelf.use")) items.push({ href: "/shelf", label: "Unconfirmed shelf" });
+  if (can(viewer.roles, "disputes.mediate")) items.push({ href: "/mediation", label: "Mediation" });
+  if (can(viewer.roles, "house.manage")) items.push({ href: "/house", label: "House desk" });
+  return items;
+}
+
+export function SiteHeader({ viewer }: { viewer: Viewer | null }) {
+  return (
+    <header className="border-b border-flash-200 bg-white">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+        <Link href="/" className="flex items-center gap-2 font-semibold text-flash-900">
+          <Mark />
+          <span className="text-lg tracking-tight">Getterline</span>
+        </Link>
+        <nav aria-label="Main" className="flex flex-1 flex-wrap gap-x-4 gap-y-1 text-sm">
+          {navFor(viewer).map((i) => (
+            <Link key={i.href} href={i.href} className="text-flash-700 underline-offset-4 hover:text-flash-900 hover:underline">
+              {i.label}
+            </Link>
+          ))}
+        </nav>
+        {viewer ? (
+          <div className="flex items-center gap-3 text-sm">
+            <span className="text-flash-700">
+              {viewer.name} <span className="text-flash-500">· {viewer.roles.map((r) => ROLE_LABEL[r]).join(", ")}</span>
+            </span>
+            <SignOutButton />
+          </div>
+        ) : (
+          <div className="flex items-center gap-3 text-sm">
+            <Link href="/sign-in" className="text-flash-800 underline-offset-4 hover:underline">Sign in</Link>
+            <Link href="/sign-up" className="btn-primary">Open an account</Link>
+          </div>
+        )}
+      </div>
+    </header>
+  );
+}

@@ -1,0 +1,28 @@
+/**
+ * Cross-site request refusal for cookie-authenticated writes. A browser sends
+ * Origin on every cross-origin POST and Sec-Fetch-Site on modern engines;
+ * either naming another site is refused. Requests with neither (curl, server
+ * to server) carry no ambient browser cookies worth forging, and pass.
+ */
+export function isCrossSite(
+  method: string,
+  headers: { get(name: string): string | null },
+  allowedOrigins: readonly string[],
+): boolean {
+  if (["GET", "HEAD", "OPTIONS"].includes(method.toUpperCase())) return false;
+  const origin = headers.get("origin");
+  if (origin && origin !== "null") return !allowedOrigins.includes(origin);
+  if (origin === "null") return true;
+  const site = headers.get("sec-fetch-site");
+  return site === "cross-site";
+}
+
+/** Origins a request may come from: its own host plus the configured ones. */
+export function allowedOriginsFor(host: string | null, configured: string[], proto = "http"): string[] {
+  const list = new Set(configured.filter(Boolean).map((o) => o.replace(/\/$/, "")));
+  if (host) {
+    list.add(`${proto}://${host}`);
+    list.add(`https://${host}`);
+  }
+  return [...list];
+}

@@ -1,0 +1,130 @@
+import { createHash, randomBytes } from "node:crypto";
+import bcrypt from "bcryptjs";
+import { Op, UniqueConstraintError } from "sequelize";
+import { db, PasswordResetToken, SignInAttempt, User } from "../../models";
+import { ApiError } from "../api/errors";
+import { throttleDecision, SIGN_IN_WINDOW_MS } from "../auth/rate-limit";
+import type { Role } from "../auth/roles";
+import { env } from "../config/env";
+import { sendMail } from "../mail/mailer";
+import type { ResetConfirmInput, SignInInput, SignUpInput } from "../validation/account";
+
+const BCRYPT_ROUNDS = 11;
+const RESET_TTL_MS = 60 * 60 * 1000;
+let dummy: Promise<string> | undefined;
+const dummyHash = () => (dummy ??= bcrypt.hash("no-such-account", BCRYPT_ROUNDS));
+
+/** What the rest of the app may know about a person (never the hash). */
+export type AccountView = { id: string; email: string; displayName: string; roles: Role[]; createdAt: string };
+
+export function presentAccount(u: User): AccountView {
+  return { id: u.id, email: u.email, displayName: u.displayName, roles: [...u.roles], createdAt: u.createdAt.toISOString() };
+}
+
+export const hashPassword = (plain: string) => bcrypt.hash(plain, BCRYPT_ROUNDS);
+
+/** Sign-up as consignor or dealer; a second sign-up with the same e-mail is a 409. */
+export async function signUp(input: SignUpInput): Promise<AccountView> {
+  db();
+  try {
+    const user = await User.create({
+      email: input.email, displayName: input.displayName, passwordHash: await hashPassword(input.password), roles: [input.role],
+    });
+    return presentAccount(user);
+  } catch (e) {
+    if (e instanceof UniqueConstraintError) {
+      throw new ApiError("conflict", "An account with that e-mail already exists", { email: "Already registered; sign in or reset the password" });
+    }
+    throw e;
+  }
+}
+
+/**
+ * Check a password, throttled per account and per address. Throws
+ * rate_limited (429) before looking at the password when either is over its
+ * limit, invalid_credentials (401) on a wrong e-mail or password.
+ */
+export async function authenticate(input: SignInInput, ip: string): Promise<AccountView> {
+  db();
+  const email = input.email.trim().toLowerCase();
+  const since = new Date(Date.now() - SIGN_IN_WINDOW_MS);
+  const decision = throttleDecision(await SignInAttempt.recentFailures(email, ip, since));
+  if (!decision.allowed) {
+    throw new ApiError(
+      "rate_limited",
+      `Too many failed sign-in attempts for this ${decision.scope === "account" ? "account" : "address"}. Try again in about ${Math.ceil(decision.retryAfterSeconds / 60)} minutes, or reset your password.`,
+      undefined,
+      { "Retry-After": String(decision.retryAfterSeconds) },
+    );
+  }
+  const user = await User.findOne({ where: { email } });
+  // Compare against a dummy hash when the account is missing so timing does not reveal it.
+  const ok = await bcrypt.compare(input.password, user?.passwordHash ?? (await dummyHash()));
+  const succeeded = Boolean(user && ok && !user.disabledAt);
+  await SignInAttempt.create({ email, ip, succeeded });
+  if (!succeeded || !user) throw new ApiError("invalid_credentials", "That e-mail and password do not match an account");
+  return presentAccount(user);
+}
+
+/** Current roles from the database (JWT roles can be stale). */
+export async function currentRoles(userId: string): Promise<Role[] | null> {
+  db();
+  const u = await User.findByPk(userId, { attributes: ["id", "roles", "disabledAt"] });
+  if (!u || u.disabledAt) return null;
+  return [...u.roles];
+}
+
+const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
+
+/**
+ * E-mail a single-use reset link. Answers the same whether or not the address
+ * has an account, so the form cannot be used to probe for members.
+ */
+export async function requestPasswordReset(emailRaw: string): Promise<void> {
+  db();
+  const email = emailRaw.trim().toLowerCase();
+  const user = await User.findOne({ where: { email } });
+  if (!user || user.disabledAt) return;
+  const token = randomBytes(32).toString("base64url");
+  await PasswordResetToken.create({ userId: user.id, tokenHash: sha256(token), expiresAt: new Date(Date.now() + RESET_TTL_MS) });
+  const link = `${env().NEXTAUTH_URL}/reset-password?token=${token}`;
+  await sendMail({
+    to: user.email,
+    subject: "Reset your Getterline password",
+    text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Getterline account. If it was you, open this link within an hour:\n\n${link}\n\nIf it was not you, ignore this message; your password stays as it is.\n\nGetterline Exchange`,
+  });
+}
+
+/** Set a new password from a reset link; the link works once and within its hour. */
+export async function confirmPasswordReset(input: ResetConfirmInput): Promise<void> {
+  const s = db();
+  await s.transaction(async (t) => {
+    const row = await PasswordResetToken.findOne({
+      where: { tokenHash: sha256(input.token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      lock: t.LOCK.UPDATE, transaction: t,
+    });
+    if (!row) throw new ApiError("gone", "This reset link has expired or was already used. Ask for a new one.");
+    await User.update({ passwordHash: await hashPassword(input.password) }, { where: { id: row.userId }, transaction: t });
+    await row.update({ usedAt: new Date() }, { transaction: t });
+  });
+}
+
+/** The house's list of accounts, newest first. */
+export async function listAccounts(): Promise<AccountView[]> {
+  db();
+  const users = await User.findAll({ order: [["createdAt", "DESC"]], limit: 1000 });
+  return users.map(presentAccount);
+}
+
+/** The house grants or removes roles; an admin cannot remove their own admin role. */
+export async function setRoles(actorId: string, userId: string, roles: Role[]): Promise<AccountView> {
+  db();
+  const user = await User.findByPk(userId);
+  if (!user) throw new ApiError("not_found", "No such account");
+  const unique = [...new Set(roles)];
+  if (actorId === userId && !unique.includes("admin")) {
+    throw new ApiError("conflict", "You cannot remove your own house role", { roles: "Keep the house role on your own account" });
+  }
+  await user.update({ roles: unique });
+  return presentAccount(user);
+}

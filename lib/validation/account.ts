@@ -1,0 +1,38 @@
+import { z } from "zod";
+import { SELF_SERVICE_ROLES } from "../auth/roles";
+
+/** Shared by the sign-up form and POST /api/account/sign-up. */
+export const SignUpSchema = z.object({
+  displayName: z.string().trim().min(2, "Enter a name of at least 2 characters").max(80, "At most 80 characters"),
+  email: z.email("Enter a valid e-mail address").max(254),
+  password: z.string().min(10, "Use at least 10 characters").max(200, "At most 200 characters"),
+  role: z.enum(SELF_SERVICE_ROLES, { message: "Choose consignor or dealer" }),
+});
+export type SignUpInput = z.infer<typeof SignUpSchema>;
+
+/** Shared by the sign-in form and the credentials check. */
+export const SignInSchema = z.object({
+  email: z.email("Enter a valid e-mail address").max(254),
+  password: z.string().min(1, "Enter your password").max(200),
+});
+export type SignInInput = z.infer<typeof SignInSchema>;
+
+/** Shared by the forgotten-password form and POST /api/account/password-reset. */
+export const ResetRequestSchema = z.object({ email: z.email("Enter a valid e-mail address").max(254) });
+export type ResetRequestInput = z.infer<typeof ResetRequestSchema>;
+
+/** Shared by the new-password form and POST /api/account/password-reset/confirm. */
+export const ResetConfirmSchema = z
+  .object({
+    token: z.string().min(20).max(200),
+    password: z.string().min(10, "Use at least 10 characters").max(200),
+    confirm: z.string(),
+  })
+  .refine((v) => v.password === v.confirm, { message: "The two passwords differ", path: ["confirm"] });
+export type ResetConfirmInput = z.infer<typeof ResetConfirmSchema>;
+
+/** Shared by the house's user table and PATCH /api/admin/users/:id. */
+export const RolesUpdateSchema = z.object({
+  roles: z.array(z.enum(["consignor", "dealer", "mediator", "admin"])).max(4),
+});
+export type RolesUpdateInput = z.infer<typeof RolesUpdateSchema>;

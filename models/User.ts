@@ -1,0 +1,47 @@
+import {
+  DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
+} from "sequelize";
+import { ROLES, type Role } from "../lib/auth/roles";
+
+/** A person who signs in: consignor, dealer, mediator and/or house admin. */
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<string>;
+  declare email: string;
+  declare displayName: string;
+  declare passwordHash: string;
+  declare roles: Role[];
+  declare disabledAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  hasRole(role: Role): boolean {
+    return this.roles.includes(role);
+  }
+
+  static initModel(sequelize: Sequelize): typeof User {
+    User.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        email: {
+          type: DataTypes.STRING(254), allowNull: false, unique: true,
+          set(v: string) { this.setDataValue("email", v.trim().toLowerCase()); },
+        },
+        displayName: { type: DataTypes.STRING(80), allowNull: false },
+        passwordHash: { type: DataTypes.STRING(100), allowNull: false },
+        roles: {
+          type: DataTypes.ARRAY(DataTypes.STRING(16)), allowNull: false, defaultValue: [],
+          validate: {
+            known(v: string[]) {
+              for (const r of v) if (!(ROLES as readonly string[]).includes(r)) throw new Error(`unknown role ${r}`);
+            },
+          },
+        },
+        disabledAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "users", modelName: "User" },
+    );
+    return User;
+  }
+}

@@ -1,0 +1,28 @@
+#!/usr/bin/env bash
+# npm run demo — install, start PostgreSQL and the mail catcher, migrate, seed
+# the demo, build and serve Getterline at http://localhost:3000.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib.sh
+ensure_node_modules
+ensure_env
+ensure_db
+export DATABASE_URL=${DATABASE_URL:-$(bash scripts/db.sh url)}
+export NODE_ENV=production
+node --import tsx scripts/migrate.ts seed
+if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib models server next.config.mjs -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; then
+  npx next build
+fi
+mkdir -p .data
+if port_busy 1080; then
+  echo "demo: a mail catcher already answers on 1080"
+else
+  node --import tsx server/mail-catcher.ts > .data/mail-catcher.log 2>&1 &
+  CATCHER=$!
+  trap 'kill $CATCHER 2>/dev/null || true' EXIT
+fi
+echo
+echo "  Getterline:  http://localhost:${PORT:-3000}   (demo accounts and password in README.md)"
+echo "  Local inbox: http://127.0.0.1:1080"
+echo
+node --import tsx server/index.ts

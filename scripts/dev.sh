@@ -1,0 +1,15 @@
+#!/usr/bin/env bash
+# npm run dev — like the demo, but Next in development mode with hot reload.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib.sh
+ensure_node_modules
+ensure_env
+ensure_db
+export DATABASE_URL=${DATABASE_URL:-$(bash scripts/db.sh url)}
+node --import tsx scripts/migrate.ts seed
+if ! port_busy 1080; then
+  node --import tsx server/mail-catcher.ts > .data/mail-catcher.log 2>&1 &
+  trap "kill $! 2>/dev/null || true" EXIT
+fi
+NODE_ENV=development node --import tsx server/index.ts

@@ -1,0 +1,47 @@
+// Database CLI: node --import tsx scripts/migrate.ts up|down|seed|reset
+// Creates the database named in DATABASE_URL when it does not exist yet.
+import { loadEnvConfig } from "@next/env";
+loadEnvConfig(process.cwd());
+import pg from "pg";
+import { env } from "../lib/config/env";
+import { migrator, seeder } from "../lib/db/migrator";
+import { sequelizeFor } from "../lib/db/sequelize";
+
+async function ensureDatabase(url: string): Promise<void> {
+  const u = new URL(url);
+  const name = u.pathname.replace(/^\//, "");
+  u.pathname = "/postgres";
+  const c = new pg.Client({ connectionString: u.toString() });
+  await c.connect();
+  try {
+    const r = await c.query("SELECT 1 FROM pg_database WHERE datname = $1", [name]);
+    if (r.rowCount === 0) {
+      await c.query(`CREATE DATABASE "${name.replace(/"/g, '""')}"`);
+      console.log(`migrate: created database ${name}`);
+    }
+  } finally {
+    await c.end();
+  }
+}
+
+async function main(): Promise<void> {
+  const cmd = process.argv[2] ?? "up";
+  const url = env().DATABASE_URL;
+  await ensureDatabase(url);
+  const s = sequelizeFor(url, 2);
+  try {
+    if (cmd === "up") await migrator(s).up();
+    else if (cmd === "down") await migrator(s).down();
+    else if (cmd === "seed") { await migrator(s).up(); await seeder(s).up(); }
+    else if (cmd === "reset") {
+      await seeder(s).down({ to: 0 });
+      await migrator(s).down({ to: 0 });
+      await migrator(s).up();
+      await seeder(s).up();
+    } else throw new Error(`unknown command ${cmd}`);
+  } finally {
+    await s.close();
+  }
+}
+
+main().catch((e) => { console.error(e); process.exit(1); });

@@ -1,0 +1,72 @@
+// Getterline's one process: Next.js and socket.io on one port, with a clean
+// shutdown on SIGTERM (stop accepting, close sockets, drain, close the pool).
+import { loadEnvConfig } from "@next/env";
+loadEnvConfig(process.cwd(), process.env.NODE_ENV !== "production");
+
+import http from "node:http";
+import next from "next";
+import pg from "pg";
+import { env } from "../lib/config/env";
+import { getSequelize } from "../lib/db/sequelize";
+import { initModels } from "../models";
+import { attachSockets } from "./socket";
+
+async function main(): Promise<void> {
+  const e = env();
+  const dev = process.env.NODE_ENV !== "production";
+  const app = next({ dev, hostname: "localhost", port: e.PORT });
+  const handle = app.getRequestHandler();
+  await app.prepare();
+  initModels(getSequelize());
+
+  let inFlight = 0;
+  let closing = false;
+  const server = http.createServer((req, res) => {
+    if (closing) res.setHeader("Connection", "close");
+    // Our own stamp of the peer address, used for sign-in throttling; a client cannot set it.
+    req.headers["x-getterline-peer"] = req.socket.remoteAddress ?? "unknown";
+    inFlight++;
+    res.on("close", () => inFlight--);
+    void handle(req, res);
+  });
+
+  const pool = new pg.Pool({ connectionString: e.DATABASE_URL, max: 3 });
+  pool.on("error", (err) => console.error("[socket pool]", err.message));
+  // The adapter keeps one client checked out for LISTEN without an error
+  // listener; without this a database restart would be an uncaught exception.
+  pool.on("connect", (client) => client.on("error", (err) => console.error("[socket pool client]", err.message)));
+  const io = await attachSockets(server, pool);
+
+  const upgrade = app.getUpgradeHandler();
+  server.on("upgrade", (req, socket, head) => {
+    if (req.url?.startsWith("/_next/")) void upgrade(req, socket, head);
+    // /socket.io upgrades are handled by socket.io's own listener.
+  });
+
+  server.listen(e.PORT, e.HOST, () => {
+    console.log(`getterline: ready on http://localhost:${e.PORT} (${dev ? "development" : "production"}, pid ${process.pid})`);
+  });
+
+  const shutdown = async (signal: string) => {
+    if (closing) return;
+    closing = true;
+    console.log(`getterline: ${signal} received, shutting down`);
+    const force = setTimeout(() => { console.error("getterline: forced exit after 10 s"); process.exit(1); }, 10_000);
+    force.unref();
+    server.close(); // stop accepting
+    await new Promise<void>((r) => io.close(() => r())); // disconnect sockets
+    server.closeIdleConnections();
+    while (inFlight > 0) await new Promise((r) => setTimeout(r, 50)); // drain requests
+    await getSequelize().close().catch(() => undefined);
+    await pool.end().catch(() => undefined);
+    console.log("getterline: stopped cleanly");
+    process.exit(0);
+  };
+  process.on("SIGTERM", () => void shutdown("SIGTERM"));
+  process.on("SIGINT", () => void shutdown("SIGINT"));
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});

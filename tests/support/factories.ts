@@ -1,0 +1,56 @@
+// Shared factories and helpers for integration tests.
+import { encode } from "next-auth/jwt";
+import { NextRequest } from "next/server";
+import type { Role } from "../../lib/auth/roles";
+import { hashPassword } from "../../lib/services/accounts";
+import { db, User } from "../../models";
+
+let n = 0;
+
+export async function makeUser(roles: Role[], password = "correct-horse-battery"): Promise<User> {
+  db();
+  n += 1;
+  return User.create({
+    email: `person${Date.now()}${n}@example.test`,
+    displayName: `Test person ${n}`,
+    passwordHash: await hashPassword(password),
+    roles,
+  });
+}
+
+/** A next-auth session cookie for the user, signed with the test secret. */
+export async function sessionCookie(user: User): Promise<string> {
+  const token = await encode({
+    token: { uid: user.id, roles: user.roles, email: user.email, name: user.displayName, sub: user.id },
+    secret: process.env.NEXTAUTH_SECRET!,
+  });
+  return `next-auth.session-token=${token}`;
+}
+
+export function request(url: string, init: { method?: string; json?: unknown; body?: string; headers?: Record<string, string> } = {}): NextRequest {
+  const headers: Record<string, string> = { host: "localhost:3000", ...init.headers };
+  let body = init.body;
+  if (init.json !== undefined) {
+    body = JSON.stringify(init.json);
+    headers["content-type"] ??= "application/json";
+  }
+  return new NextRequest(new URL(url, "http://localhost:3000"), { method: init.method ?? (body ? "POST" : "GET"), headers, body });
+}
+
+export const noParams = { params: Promise.resolve({}) };
+
+/** Messages the local mail catcher holds for an address, newest first. */
+export async function inbox(to: string): Promise<{ subject: string; text: string }[]> {
+  const res = await fetch(`${process.env.MAIL_CATCHER_URL}/api/messages?to=${encodeURIComponent(to)}`);
+  return (await res.json()) as { subject: string; text: string }[];
+}
+
+export async function waitForMail(to: string, timeoutMs = 5000): Promise<{ subject: string; text: string }> {
+  const end = Date.now() + timeoutMs;
+  while (Date.now() < end) {
+    const m = await inbox(to);
+    if (m.length) return m[0]!;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no mail for ${to}`);
+}
