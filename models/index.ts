@@ -4,17 +4,19 @@ import { PasswordResetToken } from "./PasswordResetToken";
 import { SignInAttempt } from "./SignInAttempt";
 import { User } from "./User";
 
-const g = globalThis as unknown as { __getterlineModelsFor?: Sequelize };
+// Module-local on purpose: the custom server and Next's bundle each hold their
+// own copies of the model classes, and each copy must be initialised.
+let initialisedFor: Sequelize | undefined;
 
 /** Initialise every model on the shared Sequelize instance (once per instance). */
 export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
-  if (g.__getterlineModelsFor === sequelize) return sequelize;
+  if (initialisedFor === sequelize) return sequelize;
   User.initModel(sequelize);
   SignInAttempt.initModel(sequelize);
   PasswordResetToken.initModel(sequelize);
   User.hasMany(PasswordResetToken, { foreignKey: "userId", onDelete: "CASCADE" });
   PasswordResetToken.belongsTo(User, { foreignKey: "userId" });
-  g.__getterlineModelsFor = sequelize;
+  initialisedFor = sequelize;
   return sequelize;
 }
 

@@ -1,4 +1,4 @@
-// Database CLI: node --import tsx scripts/migrate.ts up|down|seed|reset
+// Database CLI: node --import tsx scripts/migrate.ts up|down|seed|reset|fresh
 // Creates the database named in DATABASE_URL when it does not exist yet.
 import { loadEnvConfig } from "@next/env";
 loadEnvConfig(process.cwd());
@@ -24,15 +24,30 @@ async function ensureDatabase(url: string): Promise<void> {
   }
 }
 
+async function dropDatabase(url: string): Promise<void> {
+  const u = new URL(url);
+  const name = u.pathname.replace(/^\//, "");
+  u.pathname = "/postgres";
+  const c = new pg.Client({ connectionString: u.toString() });
+  await c.connect();
+  try {
+    await c.query(`DROP DATABASE IF EXISTS "${name.replace(/"/g, '""')}" WITH (FORCE)`);
+  } finally {
+    await c.end();
+  }
+}
+
 async function main(): Promise<void> {
   const cmd = process.argv[2] ?? "up";
   const url = env().DATABASE_URL;
+  // "fresh": drop, recreate, migrate and seed (used for the browser tests' database).
+  if (cmd === "fresh") await dropDatabase(url);
   await ensureDatabase(url);
   const s = sequelizeFor(url, 2);
   try {
     if (cmd === "up") await migrator(s).up();
     else if (cmd === "down") await migrator(s).down();
-    else if (cmd === "seed") { await migrator(s).up(); await seeder(s).up(); }
+    else if (cmd === "seed" || cmd === "fresh") { await migrator(s).up(); await seeder(s).up(); }
     else if (cmd === "reset") {
       await seeder(s).down({ to: 0 });
       await migrator(s).down({ to: 0 });

@@ -13,6 +13,8 @@ import { attachSockets } from "./socket";
 
 async function main(): Promise<void> {
   const e = env();
+  // next-auth reads NEXTAUTH_URL from process.env itself.
+  process.env.NEXTAUTH_URL ??= `http://localhost:${e.PORT}`;
   const dev = process.env.NODE_ENV !== "production";
   const app = next({ dev, hostname: "localhost", port: e.PORT });
   const handle = app.getRequestHandler();
