@@ -9,6 +9,7 @@ import pg from "pg";
 import { env } from "../lib/config/env";
 import { getSequelize } from "../lib/db/sequelize";
 import { initModels } from "../models";
+import { gracefulShutdown } from "./shutdown";
 import { attachSockets } from "./socket";
 
 async function main(): Promise<void> {
@@ -21,14 +22,9 @@ async function main(): Promise<void> {
   await app.prepare();
   initModels(getSequelize());
 
-  let inFlight = 0;
-  let closing = false;
   const server = http.createServer((req, res) => {
-    if (closing) res.setHeader("Connection", "close");
     // Our own stamp of the peer address, used for sign-in throttling; a client cannot set it.
     req.headers["x-getterline-peer"] = req.socket.remoteAddress ?? "unknown";
-    inFlight++;
-    res.on("close", () => inFlight--);
     void handle(req, res);
   });
 
@@ -49,19 +45,15 @@ async function main(): Promise<void> {
     console.log(`getterline: ready on http://localhost:${e.PORT} (${dev ? "development" : "production"}, pid ${process.pid})`);
   });
 
+  const stopper = gracefulShutdown(server, {
+    closeSockets: () => new Promise<void>((r) => { io.close(() => r()); }),
+    closers: [() => getSequelize().close(), () => pool.end()],
+    log: (m) => console.log(`getterline: ${m}`),
+  });
   const shutdown = async (signal: string) => {
-    if (closing) return;
-    closing = true;
     console.log(`getterline: ${signal} received, shutting down`);
-    const force = setTimeout(() => { console.error("getterline: forced exit after 10 s"); process.exit(1); }, 10_000);
-    force.unref();
-    server.close(); // stop accepting
-    await new Promise<void>((r) => io.close(() => r())); // disconnect sockets
-    server.closeIdleConnections();
-    while (inFlight > 0) await new Promise((r) => setTimeout(r, 50)); // drain requests
-    await getSequelize().close().catch(() => undefined);
-    await pool.end().catch(() => undefined);
-    console.log("getterline: stopped cleanly");
+    setTimeout(() => { console.error("getterline: forced exit after 10 s"); process.exit(1); }, 10_000).unref();
+    await stopper.shutdown();
     process.exit(0);
   };
   process.on("SIGTERM", () => void shutdown("SIGTERM"));
