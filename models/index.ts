@@ -1,6 +1,9 @@
 import type { Sequelize } from "sequelize";
 import { getSequelize } from "../lib/db/sequelize";
+import { Maker, MakerCode } from "./Maker";
 import { PasswordResetToken } from "./PasswordResetToken";
+import { ShelfTube } from "./ShelfTube";
+import { ValveType, ValveTypeRevision } from "./ValveType";
 import { SignInAttempt } from "./SignInAttempt";
 import { User } from "./User";
 
@@ -16,6 +19,15 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   PasswordResetToken.initModel(sequelize);
   User.hasMany(PasswordResetToken, { foreignKey: "userId", onDelete: "CASCADE" });
   PasswordResetToken.belongsTo(User, { foreignKey: "userId" });
+  ValveType.initModel(sequelize);
+  ValveTypeRevision.initModel(sequelize);
+  Maker.initModel(sequelize);
+  MakerCode.initModel(sequelize);
+  ShelfTube.initModel(sequelize);
+  Maker.hasMany(MakerCode, { foreignKey: "makerId", as: "codes" });
+  MakerCode.belongsTo(Maker, { foreignKey: "makerId", as: "maker" });
+  ShelfTube.belongsTo(Maker, { foreignKey: "makerId", as: "maker" });
+  ShelfTube.belongsTo(User, { foreignKey: "ownerId", as: "owner" });
   initialisedFor = sequelize;
   return sequelize;
 }
@@ -25,4 +37,4 @@ export function db(): Sequelize {
   return initModels(getSequelize());
 }
 
-export { PasswordResetToken, SignInAttempt, User };
+export { Maker, MakerCode, PasswordResetToken, ShelfTube, SignInAttempt, User, ValveType, ValveTypeRevision };

@@ -23,7 +23,10 @@ export const ERROR_STATUS = {
 
 export type ErrorCode = keyof typeof ERROR_STATUS;
 
-export type ErrorBody = { error: { code: ErrorCode; message: string; fields?: Record<string, string> } };
+/** `details` carries machine-readable extras, e.g. { candidates: [...] } on a 404 for an unknown type. */
+export type ErrorBody = {
+  error: { code: ErrorCode; message: string; fields?: Record<string, string>; details?: Record<string, unknown> };
+};
 
 export class ApiError extends Error {
   constructor(
@@ -31,6 +34,7 @@ export class ApiError extends Error {
     message: string,
     readonly fields?: Record<string, string>,
     readonly headers?: Record<string, string>,
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
     this.name = "ApiError";
@@ -41,7 +45,14 @@ export class ApiError extends Error {
   }
 
   toBody(): ErrorBody {
-    return { error: { code: this.code, message: this.message, ...(this.fields ? { fields: this.fields } : {}) } };
+    return {
+      error: {
+        code: this.code,
+        message: this.message,
+        ...(this.fields ? { fields: this.fields } : {}),
+        ...(this.details ? { details: this.details } : {}),
+      },
+    };
   }
 }
 

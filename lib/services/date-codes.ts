@@ -1,0 +1,39 @@
+import { ApiError } from "../api/errors";
+import { readDateCode, parseEuropeanDateLine, type DateCodeResult, type EuropeanDateResult } from "../valves/date-code";
+import { decodeDesignation } from "../valves/designation";
+import type { DateCodeQueryInput } from "../validation/valves";
+import { referenceFor } from "./valve-types";
+
+export type DateCodeAnswer = {
+  code: string;
+  type: { designation: string; introducedYear?: number; envelopeSuffix?: string } | null;
+  eia: DateCodeResult;
+  /** Tried when the code looks like an etched European date line (ends in a month letter). */
+  european: EuropeanDateResult | null;
+};
+
+/**
+ * Read a code off the glass into ranked dates. With a type, candidates before
+ * its introduction or its envelope suffix's era are dropped with reasons.
+ */
+export async function readCodeForType(q: DateCodeQueryInput): Promise<DateCodeAnswer> {
+  let type: DateCodeAnswer["type"] = null;
+  if (q.type) {
+    const d = decodeDesignation(q.type);
+    if (!d.ok) throw new ApiError("validation_failed", d.message, { type: d.message });
+    const ref = await referenceFor(d.normalised);
+    type = {
+      designation: d.normalised,
+      ...(ref?.introduced ? { introducedYear: ref.introduced.year } : {}),
+      ...(d.envelope?.suffix ? { envelopeSuffix: d.envelope.suffix } : {}),
+    };
+  }
+  const ctx = {
+    ...(type?.introducedYear ? { introducedYear: type.introducedYear } : {}),
+    ...(type?.envelopeSuffix ? { envelopeSuffix: type.envelopeSuffix } : {}),
+    ...(q.endOfProduction ? { endOfProductionYear: q.endOfProduction } : {}),
+  };
+  const eia = readDateCode(q.code, ctx);
+  const european = /\d[A-Za-z]\d?$/.test(q.code.trim()) ? parseEuropeanDateLine(q.code, { ...ctx, schemes: ["A-L", "skip-I"] }) : null;
+  return { code: q.code, type, eia, european };
+}

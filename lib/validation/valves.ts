@@ -1,0 +1,32 @@
+import { z } from "zod";
+
+/** A designation as typed (normalised later by the decoder); bounded so a 10 KB string is a 400. */
+export const DesignationParam = z.string().trim().min(1, "Enter a designation").max(40, "A designation is at most 40 characters");
+
+/** GET /api/valves/date-codes/{code}?type=… */
+export const DateCodeQuery = z.object({
+  code: z.string().trim().min(1, "Enter a code").max(24, "A date code is at most 24 characters"),
+  type: z.string().trim().max(40, "A designation is at most 40 characters").optional(),
+  endOfProduction: z.coerce.number().int().min(1930).max(2030).optional(),
+});
+export type DateCodeQueryInput = z.infer<typeof DateCodeQuery>;
+
+const positive = z.number().finite().positive().max(1_000_000);
+
+/** Correction of a reference row by the house (PATCH /api/valves/types/{designation}). */
+export const ReferenceEditSchema = z.object({
+  reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
+  source: z.string().trim().min(2).max(40),
+  heaterVolts: positive.nullable(),
+  heaterAmps: positive.nullable(),
+  introducedYear: z.number().int().min(1900).max(2030).nullable(),
+  plateVolts: positive.nullable(),
+  gridVolts: z.number().finite().min(-500).max(0).nullable(),
+  screenVolts: positive.nullable(),
+  mu: positive.nullable(),
+  gmMicromho: positive.nullable(),
+  plateCurrentMa: positive.nullable(),
+  rpOhms: positive.nullable(),
+  note: z.string().trim().max(500),
+});
+export type ReferenceEditInput = z.infer<typeof ReferenceEditSchema>;

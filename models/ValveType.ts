@@ -1,0 +1,75 @@
+import {
+  DataTypes, Model, Op, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
+} from "sequelize";
+import type { ReferenceType } from "../lib/valves/reference-data";
+
+/** The editable part of a reference row (everything but its names and source). */
+export type ValveTypeData = Omit<ReferenceType, "designation" | "aliases" | "source">;
+
+/** Reference data for one type, as the house keeps it (loaded from published figures, corrected with history). */
+export class ValveType extends Model<InferAttributes<ValveType>, InferCreationAttributes<ValveType>> {
+  declare designation: string;
+  declare aliases: string[];
+  declare data: ValveTypeData;
+  declare source: string;
+  declare revision: CreationOptional<number>;
+  declare updatedBy: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  /** The row as the pure code's ReferenceType. */
+  toReference(): ReferenceType {
+    return { ...this.data, designation: this.designation, aliases: this.aliases, source: this.source as ReferenceType["source"] };
+  }
+
+  /** Find by designation or alias (already normalised). */
+  static findByName(name: string): Promise<ValveType | null> {
+    return ValveType.findOne({ where: { [Op.or]: [{ designation: name }, { aliases: { [Op.contains]: [name] } }] } });
+  }
+
+  static initModel(sequelize: Sequelize): typeof ValveType {
+    ValveType.init(
+      {
+        designation: { type: DataTypes.STRING(32), primaryKey: true },
+        aliases: { type: DataTypes.ARRAY(DataTypes.STRING(32)), allowNull: false, defaultValue: [] },
+        data: { type: DataTypes.JSONB, allowNull: false },
+        source: { type: DataTypes.STRING(40), allowNull: false },
+        revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        updatedBy: { type: DataTypes.UUID, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "valve_types", modelName: "ValveType" },
+    );
+    return ValveType;
+  }
+}
+
+/** One recorded change to a reference row: who, when, why, before and after. */
+export class ValveTypeRevision extends Model<InferAttributes<ValveTypeRevision>, InferCreationAttributes<ValveTypeRevision>> {
+  declare id: CreationOptional<number>;
+  declare designation: string;
+  declare revision: number;
+  declare changedBy: string | null;
+  declare reason: string;
+  declare before: unknown;
+  declare after: unknown;
+  declare createdAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): typeof ValveTypeRevision {
+    ValveTypeRevision.init(
+      {
+        id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true, get() { return Number(this.getDataValue("id")); } },
+        designation: { type: DataTypes.STRING(32), allowNull: false },
+        revision: { type: DataTypes.INTEGER, allowNull: false },
+        changedBy: { type: DataTypes.UUID, allowNull: true },
+        reason: { type: DataTypes.STRING(500), allowNull: false },
+        before: { type: DataTypes.JSONB, allowNull: false },
+        after: { type: DataTypes.JSONB, allowNull: false },
+        createdAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "valve_type_revisions", modelName: "ValveTypeRevision", updatedAt: false },
+    );
+    return ValveTypeRevision;
+  }
+}
