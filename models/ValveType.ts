@@ -55,6 +55,7 @@ export class ValveTypeRevision extends Model<InferAttributes<ValveTypeRevision>,
   declare before: unknown;
   declare after: unknown;
   declare createdAt: CreationOptional<Date>;
+  declare changer?: { displayName: string } | null;
 
   static initModel(sequelize: Sequelize): typeof ValveTypeRevision {
     ValveTypeRevision.init(

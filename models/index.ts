@@ -28,6 +28,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   MakerCode.belongsTo(Maker, { foreignKey: "makerId", as: "maker" });
   ShelfTube.belongsTo(Maker, { foreignKey: "makerId", as: "maker" });
   ShelfTube.belongsTo(User, { foreignKey: "ownerId", as: "owner" });
+  ValveTypeRevision.belongsTo(User, { foreignKey: "changedBy", as: "changer" });
   initialisedFor = sequelize;
   return sequelize;
 }

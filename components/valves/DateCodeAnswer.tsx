@@ -53,6 +53,20 @@ export function DateCodeAnswer({ data }: { data: Answer }) {
           </details>
         ) : null}
       </div>
+      {data.source?.ok ? (
+        <div className="card space-y-2">
+          <h3 className="font-semibold">As a source code: <span className="code">{data.source.code}</span></h3>
+          {data.source.found ? (
+            <p className="text-sm">
+              Registered to <strong>{data.source.entries.map((e) => e.makerName).join(", ")}</strong>
+              {data.source.demoOnly ? <span className="ml-1 rounded bg-flash-100 px-1.5 text-xs">demo registry</span> : null}
+            </p>
+          ) : (
+            <p className="text-sm text-flash-700">Not in the house registry.</p>
+          )}
+          <p className="text-xs text-flash-600">{data.source.caveat}</p>
+        </div>
+      ) : null}
       {european ? (
         <div className="card space-y-2">
           <h3 className="font-semibold">As an etched European date line</h3>

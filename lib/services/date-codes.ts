@@ -2,6 +2,8 @@ import { ApiError } from "../api/errors";
 import { readDateCode, parseEuropeanDateLine, type DateCodeResult, type EuropeanDateResult } from "../valves/date-code";
 import { decodeDesignation } from "../valves/designation";
 import type { DateCodeQueryInput } from "../validation/valves";
+import type { SourceCodeLookup } from "../valves/source-code";
+import { lookupRegisteredCode } from "./makers";
 import { referenceFor } from "./valve-types";
 
 export type DateCodeAnswer = {
@@ -10,6 +12,8 @@ export type DateCodeAnswer = {
   eia: DateCodeResult;
   /** Tried when the code looks like an etched European date line (ends in a month letter). */
   european: EuropeanDateResult | null;
+  /** The registry's answer for a source code printed with the date, or for three digits that may be one. */
+  source: SourceCodeLookup | null;
 };
 
 /**
@@ -35,5 +39,7 @@ export async function readCodeForType(q: DateCodeQueryInput): Promise<DateCodeAn
   };
   const eia = readDateCode(q.code, ctx);
   const european = /\d[A-Za-z]\d?$/.test(q.code.trim()) ? parseEuropeanDateLine(q.code, { ...ctx, schemes: ["A-L", "skip-I"] }) : null;
-  return { code: q.code, type, eia, european };
+  const sourceText = eia.ok ? (eia.sourceCode ?? (eia.flags.includes("may-be-source-code") ? eia.digits : null)) : null;
+  const source = sourceText ? await lookupRegisteredCode(sourceText) : null;
+  return { code: q.code, type, eia, european, source };
 }

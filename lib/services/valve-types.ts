@@ -4,7 +4,7 @@ import type { DecodedDesignation } from "../valves/designation";
 import { findEquivalents, type EquivalentsResult } from "../valves/equivalents";
 import { hazardsForType, type HazardReport } from "../valves/hazards";
 import { findReferenceType, type ReferenceType } from "../valves/reference-data";
-import { db, ValveType, ValveTypeRevision } from "../../models";
+import { db, User, ValveType, ValveTypeRevision } from "../../models";
 import type { ValveTypeData } from "../../models/ValveType";
 import type { ReferenceEditInput } from "../validation/valves";
 
@@ -60,9 +60,13 @@ export async function listReferenceTypes(): Promise<(ReferenceType & { revision:
 /** The change history of one row, newest first. */
 export async function referenceHistory(designation: string) {
   db();
-  const rows = await ValveTypeRevision.findAll({ where: { designation }, order: [["revision", "DESC"]], limit: 200 });
+  const rows = await ValveTypeRevision.findAll({
+    where: { designation }, order: [["revision", "DESC"]], limit: 200,
+    include: [{ model: User, as: "changer", attributes: ["displayName"] }],
+  });
   return rows.map((r) => ({
-    revision: r.revision, changedBy: r.changedBy, reason: r.reason, before: r.before, after: r.after, at: r.createdAt.toISOString(),
+    revision: r.revision, changedBy: r.changer?.displayName ?? "a removed account", reason: r.reason,
+    before: r.before, after: r.after, at: r.createdAt.toISOString(),
   }));
 }
 

@@ -30,3 +30,44 @@ export const ReferenceEditSchema = z.object({
   note: z.string().trim().max(500),
 });
 export type ReferenceEditInput = z.infer<typeof ReferenceEditSchema>;
+
+/** Most tubes one grading request may carry; a bigger batch is split by the caller. */
+export const MAX_GRADE_TUBES = 20_000;
+
+const Reading = z.number().finite().positive().max(100_000);
+
+/** POST /api/valves/grade */
+export const GradeRequestSchema = z.object({
+  measure: z.enum(["gm", "emission", "plate-current"]).default("gm"),
+  chartNewValue: Reading.optional(),
+  thresholds: z
+    .object({
+      strongMinPct: z.number().min(1).max(500),
+      goodMinPct: z.number().min(1).max(500),
+      fairMinPct: z.number().min(1).max(500),
+      rejectBelowPct: z.number().min(0).max(500),
+      sectionBalanceMaxSpreadPct: z.number().min(0.1).max(100),
+    })
+    .partial()
+    .optional(),
+  tolerancePct: z.number().gt(0).lt(100).default(5),
+  onPlateCurrent: z.boolean().default(false),
+  tubes: z
+    .array(
+      z.object({
+        id: z.string().trim().min(1).max(64),
+        sections: z.array(Reading).max(4, "At most 4 sections per tube"),
+        chartNewValue: Reading.optional(),
+        plateCurrentMa: Reading.optional(),
+        shorts: z.boolean().optional(),
+        leakage: z.boolean().optional(),
+        gas: z.boolean().optional(),
+        vacuumLoss: z.boolean().optional(),
+        openHeater: z.boolean().optional(),
+      }),
+    )
+    .min(1, "Send at least one tube")
+    .max(MAX_GRADE_TUBES, `At most ${MAX_GRADE_TUBES.toLocaleString("en")} tubes per request`)
+    .refine((ts) => new Set(ts.map((t) => t.id)).size === ts.length, "Tube ids must be unique"),
+});
+export type GradeRequest = z.infer<typeof GradeRequestSchema>;

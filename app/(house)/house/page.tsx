@@ -11,6 +11,8 @@ export default async function HouseHome() {
       intro="Run the exchange: accounts and roles, the reference data every grade is measured against, and the maker registry behind source codes."
       actions={[
         { href: "/house/users", title: "Accounts and roles", text: "Grant mediator and house roles; see who has joined." },
+        { href: "/house/reference", title: "Reference data", text: "Correct the published figures readings are graded against; every change is kept." },
+        { href: "/house/makers", title: "Maker registry", text: "Source codes and their makers; import from CSV with a preview." },
         { href: "/reference", title: "Valve reference", text: "What dealers see when they look a type up." },
       ]}
     />
