@@ -1,5 +1,9 @@
 import type { Sequelize } from "sequelize";
 import { getSequelize } from "../lib/db/sequelize";
+import { Lot } from "./Lot";
+import { LotEvent, LotImport } from "./LotEvent";
+import { LotItem } from "./LotItem";
+import { LotPhoto } from "./LotPhoto";
 import { Maker, MakerCode } from "./Maker";
 import { PasswordResetToken } from "./PasswordResetToken";
 import { ShelfTube } from "./ShelfTube";
@@ -29,6 +33,16 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   ShelfTube.belongsTo(Maker, { foreignKey: "makerId", as: "maker" });
   ShelfTube.belongsTo(User, { foreignKey: "ownerId", as: "owner" });
   ValveTypeRevision.belongsTo(User, { foreignKey: "changedBy", as: "changer" });
+  Lot.initModel(sequelize);
+  LotItem.initModel(sequelize);
+  LotPhoto.initModel(sequelize);
+  LotEvent.initModel(sequelize);
+  LotImport.initModel(sequelize);
+  Lot.belongsTo(User, { foreignKey: "consignorId", as: "consignor" });
+  Lot.hasMany(LotItem, { foreignKey: "lotId", as: "items" });
+  Lot.hasMany(LotPhoto, { foreignKey: "lotId", as: "photos" });
+  Lot.hasMany(LotEvent, { foreignKey: "lotId", as: "events" });
+  LotEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
   initialisedFor = sequelize;
   return sequelize;
 }
@@ -38,4 +52,4 @@ export function db(): Sequelize {
   return initModels(getSequelize());
 }
 
-export { Maker, MakerCode, PasswordResetToken, ShelfTube, SignInAttempt, User, ValveType, ValveTypeRevision };
+export { Lot, LotEvent, LotImport, LotItem, LotPhoto, Maker, MakerCode, PasswordResetToken, ShelfTube, SignInAttempt, User, ValveType, ValveTypeRevision };

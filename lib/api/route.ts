@@ -63,6 +63,13 @@ export async function readJson<S extends z.ZodType>(req: NextRequest, schema: S,
   return parseWith(schema, raw);
 }
 
+/** Validate route params; anything malformed is answered as "not found". */
+export function parseParams<S extends z.ZodType>(schema: S, raw: unknown): z.infer<S> {
+  const r = schema.safeParse(raw);
+  if (!r.success) throw new ApiError("not_found", "Not found");
+  return r.data;
+}
+
 /** Validate any input with its schema; 400 with per-field messages on failure. */
 export function parseWith<S extends z.ZodType>(schema: S, raw: unknown): z.infer<S> {
   const r = schema.safeParse(raw);

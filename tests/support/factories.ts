@@ -54,3 +54,17 @@ export async function waitForMail(to: string, timeoutMs = 5000): Promise<{ subje
   }
   throw new Error(`no mail for ${to}`);
 }
+
+/** The viewer object the guards produce, for calling services directly. */
+export function viewerOf(u: User) {
+  return { id: u.id, email: u.email, name: u.displayName, roles: [...u.roles] };
+}
+
+/** A plain item as the consignor's form sends it. */
+export function itemInput(over: Partial<import("../../lib/validation/lots").ItemInput> = {}): import("../../lib/validation/lots").ItemInput {
+  return {
+    designation: "12AX7", quantity: 1, labelBrand: "Fairmont Home Radio", makerName: null, makerBasis: "unconfirmed",
+    sourceCode: null, dateCode: null, features: {}, condition: "used", vacuumLoss: false, defects: [], hazards: [],
+    readings: [], notes: "", ...over,
+  };
+}

@@ -1,0 +1,143 @@
+import { Op, QueryTypes } from "sequelize";
+import type { Viewer } from "../auth/guards";
+import { ApiError } from "../api/errors";
+import { decodeDesignation } from "../valves/designation";
+import type { ItemInput, LotDetailsInput } from "../validation/lots";
+import { db, Lot, LotEvent, LotItem, LotPhoto, User } from "../../models";
+import type { LotState } from "../../models/Lot";
+import { assertCanView, assertConsignorCanEdit, seesReserve } from "./lot-access";
+
+/** What a designation becomes when typed: normalised where possible, flagged for review when unknown. */
+export function normaliseTyped(typed: string): { designation: string; known: boolean } {
+  const d = decodeDesignation(typed);
+  if (d.ok) return { designation: d.normalised, known: d.knownType };
+  return { designation: (d.normalised ?? typed.trim().toUpperCase()).slice(0, 40), known: false };
+}
+
+export type ItemView = ReturnType<typeof presentItem>;
+
+export function presentItem(i: LotItem) {
+  return {
+    id: i.id, position: i.position, designationTyped: i.designationTyped, designation: i.designation, designationKnown: i.designationKnown,
+    quantity: i.quantity, labelBrand: i.labelBrand, makerName: i.makerName, makerBasis: i.makerBasis, sourceCode: i.sourceCode,
+    dateCode: i.dateCode, features: i.features, condition: i.condition, vacuumLoss: i.vacuumLoss, defects: i.defects,
+    hazards: i.hazards, readings: i.readings, notes: i.notes,
+  };
+}
+
+export type LotView = ReturnType<typeof presentLot>;
+
+/** A lot as the viewer may see it: the reserve only for the house and the consignor. */
+export function presentLot(lot: Lot, viewer: Viewer | null) {
+  const reserve = seesReserve(viewer, lot);
+  return {
+    id: lot.id, title: lot.title, provenance: lot.provenance, shippingOrigin: lot.shippingOrigin, testerKind: lot.testerKind,
+    testerNotes: lot.testerNotes, state: lot.state as LotState, consignorId: lot.consignorId,
+    consignorName: lot.consignor?.displayName ?? null,
+    estimateLowCents: lot.estimateLowCents, estimateHighCents: lot.estimateHighCents,
+    reserveCents: reserve ? lot.reserveCents : undefined,
+    submittedAt: lot.submittedAt?.toISOString() ?? null, approvedAt: lot.approvedAt?.toISOString() ?? null,
+    extraReview: lot.extraReview, updatedAt: lot.updatedAt.toISOString(), createdAt: lot.createdAt.toISOString(),
+  };
+}
+
+/** A consignor starts a lot as a draft. */
+export async function createLot(viewer: Viewer, input: LotDetailsInput): Promise<LotView> {
+  const s = db();
+  const lot = await s.transaction(async (t) => {
+    const l = await Lot.create({ ...input, consignorId: viewer.id }, { transaction: t });
+    await LotEvent.create({ lotId: l.id, actorId: viewer.id, kind: "created" }, { transaction: t });
+    return l;
+  });
+  return presentLot(lot, viewer);
+}
+
+/** The consignor edits the lot's details while it is theirs to change. */
+export async function updateLotDetails(viewer: Viewer, lotId: string, input: LotDetailsInput): Promise<LotView> {
+  const s = db();
+  return s.transaction(async (t) => {
+    const lot = assertConsignorCanEdit(viewer, await Lot.findByPk(lotId, { lock: t.LOCK.UPDATE, transaction: t }));
+    await lot.update(input, { transaction: t });
+    return presentLot(lot, viewer);
+  });
+}
+
+/** One lot with its items, photos and trail, as the viewer may see it. */
+export async function getLot(viewer: Viewer | null, lotId: string) {
+  db();
+  if (!/^[0-9a-f-]{36}$/i.test(lotId)) throw new ApiError("not_found", "No such lot");
+  const lot = assertCanView(viewer, await Lot.findByPk(lotId, {
+    include: [{ model: User, as: "consignor", attributes: ["id", "displayName"] }],
+  }));
+  const [items, photos, events] = await Promise.all([
+    LotItem.findAll({ where: { lotId }, order: [["position", "ASC"]] }),
+    LotPhoto.findAll({ where: { lotId }, order: [["createdAt", "ASC"]] }),
+    LotEvent.findAll({ where: { lotId }, order: [["createdAt", "ASC"], ["id", "ASC"]], include: [{ model: User, as: "actor", attributes: ["displayName"] }] }),
+  ]);
+  return {
+    lot: presentLot(lot, viewer),
+    items: items.map(presentItem),
+    photos: photos.map((p) => ({ id: p.id, itemId: p.itemId, caption: p.caption, width: p.width, height: p.height })),
+    events: events.map((e) => ({ id: e.id, kind: e.kind, comment: e.comment, details: e.details, at: e.createdAt.toISOString(), actor: e.actor?.displayName ?? null })),
+  };
+}
+
+/** Lots listed for a viewer: the consignor's own, the house's queue, or approved lots for dealers. */
+export async function listLots(viewer: Viewer, scope: "mine" | "approved" | "review") {
+  db();
+  const where =
+    scope === "mine" ? { consignorId: viewer.id } : scope === "approved" ? { state: "approved" } : { state: { [Op.in]: ["in-review"] } };
+  const lots = await Lot.findAll({
+    where, order: scope === "review" ? [["submittedAt", "ASC"]] : [["updatedAt", "DESC"]], limit: 500,
+    include: [{ model: User, as: "consignor", attributes: ["id", "displayName"] }],
+  });
+  const counts = lots.length
+    ? await db().query<{ lot_id: string; tubes: string; lines: string }>(
+        `SELECT lot_id, SUM(quantity) AS tubes, COUNT(*) AS lines FROM lot_items WHERE lot_id IN (:ids) GROUP BY lot_id`,
+        { replacements: { ids: lots.map((l) => l.id) }, type: QueryTypes.SELECT },
+      )
+    : [];
+  const by = new Map(counts.map((c) => [c.lot_id, { tubes: Number(c.tubes), lines: Number(c.lines) }]));
+  return lots.map((l) => ({ ...presentLot(l, viewer), tubes: by.get(l.id)?.tubes ?? 0, lines: by.get(l.id)?.lines ?? 0 }));
+}
+
+function itemValues(input: ItemInput) {
+  const { designation, known } = normaliseTyped(input.designation);
+  return {
+    designationTyped: input.designation, designation, designationKnown: known, quantity: input.quantity, labelBrand: input.labelBrand,
+    makerName: input.makerName || null, makerBasis: input.makerBasis, sourceCode: input.sourceCode || null, dateCode: input.dateCode || null,
+    features: input.features, condition: input.condition, vacuumLoss: input.vacuumLoss, defects: input.defects,
+    hazards: input.hazards, readings: input.readings, notes: input.notes,
+  };
+}
+
+/** Add an item to the consignor's lot; unknown designations are kept and flagged, never refused. */
+export async function addItem(viewer: Viewer, lotId: string, input: ItemInput): Promise<ItemView> {
+  const s = db();
+  return s.transaction(async (t) => {
+    assertConsignorCanEdit(viewer, await Lot.findByPk(lotId, { lock: t.LOCK.UPDATE, transaction: t }));
+    const max = (await LotItem.max("position", { where: { lotId }, transaction: t })) as number | null;
+    const item = await LotItem.create({ lotId, position: (max ?? 0) + 1, ...itemValues(input) }, { transaction: t });
+    return presentItem(item);
+  });
+}
+
+export async function updateItem(viewer: Viewer, lotId: string, itemId: string, input: ItemInput): Promise<ItemView> {
+  const s = db();
+  return s.transaction(async (t) => {
+    assertConsignorCanEdit(viewer, await Lot.findByPk(lotId, { lock: t.LOCK.UPDATE, transaction: t }));
+    const item = await LotItem.findOne({ where: { id: itemId, lotId }, transaction: t });
+    if (!item) throw new ApiError("not_found", "No such item in this lot");
+    await item.update(itemValues(input), { transaction: t });
+    return presentItem(item);
+  });
+}
+
+export async function removeItem(viewer: Viewer, lotId: string, itemId: string): Promise<void> {
+  const s = db();
+  await s.transaction(async (t) => {
+    assertConsignorCanEdit(viewer, await Lot.findByPk(lotId, { lock: t.LOCK.UPDATE, transaction: t }));
+    const n = await LotItem.destroy({ where: { id: itemId, lotId }, transaction: t });
+    if (!n) throw new ApiError("not_found", "No such item in this lot");
+  });
+}

@@ -1,0 +1,81 @@
+import { z } from "zod";
+
+const text = (max: number) => z.string().trim().max(max, `At most ${max} characters`);
+
+export const TESTER_KIND_VALUES = ["untested", "mutual-conductance", "emission", "curve-tracer", "other"] as const;
+export const CONDITION_VALUES = ["new-in-box", "new-old-stock", "used"] as const;
+export const BASIS_VALUES = ["source-code-confirmed", "construction-matched", "unconfirmed"] as const;
+export const HAZARD_VALUES = ["beryllium-oxide", "radioactive", "mercury-vapour", "glass"] as const;
+
+/** The lot's own details: shared by the consignor's form and POST/PATCH /api/lots. */
+export const LotDetailsSchema = z.object({
+  title: z.string().trim().min(3, "Give the lot a title of at least 3 characters").max(140),
+  provenance: text(4000),
+  shippingOrigin: text(140),
+  testerKind: z.enum(TESTER_KIND_VALUES, { message: "Choose how the tubes were tested" }),
+  testerNotes: text(500),
+});
+export type LotDetailsInput = z.infer<typeof LotDetailsSchema>;
+
+const reading = z.number().finite().positive("Readings are positive numbers").max(100_000);
+
+/** One tester run on one tube of an item. */
+export const ReadingSchema = z.object({
+  tubeNo: z.number().int().min(1).max(10_000),
+  measure: z.enum(["gm", "emission", "plate-current"]),
+  sections: z.array(reading).min(1, "Enter at least one section reading").max(4),
+  chartNewValue: reading.optional(),
+  plateCurrentMa: reading.optional(),
+  shorts: z.boolean().optional(),
+  leakage: z.boolean().optional(),
+  gas: z.boolean().optional(),
+});
+export type ReadingInput = z.infer<typeof ReadingSchema>;
+
+/** One line of a lot: shared by the item form, the grid and POST/PATCH /api/lots/:id/items. */
+export const ItemSchema = z.object({
+  designation: z.string().trim().min(1, "Enter the designation as printed").max(40, "At most 40 characters"),
+  quantity: z.number().int("Whole tubes only").min(1, "At least 1").max(10_000),
+  labelBrand: text(120),
+  makerName: text(120).nullable(),
+  makerBasis: z.enum(BASIS_VALUES),
+  sourceCode: text(16).nullable(),
+  dateCode: text(16).nullable(),
+  features: z.record(z.string().max(40), z.string().max(80)).refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
+  condition: z.enum(CONDITION_VALUES, { message: "Choose the condition" }),
+  vacuumLoss: z.boolean(),
+  defects: z.array(text(200)).max(10),
+  hazards: z.array(z.enum(HAZARD_VALUES)).max(4),
+  readings: z.array(ReadingSchema).max(500),
+  notes: text(1000),
+}).refine((i) => i.readings.every((r) => r.tubeNo <= i.quantity), { message: "A reading names a tube number above the quantity", path: ["readings"] })
+  .refine((i) => i.makerBasis === "unconfirmed" || Boolean(i.makerName), { message: "Name the maker, or mark it unconfirmed", path: ["makerName"] })
+  .refine((i) => i.makerBasis !== "source-code-confirmed" || Boolean(i.sourceCode), { message: "A source-code confirmation needs the source code", path: ["sourceCode"] });
+export type ItemInput = z.infer<typeof ItemSchema>;
+
+/** The house's decision on a submitted lot. Money in cents. */
+export const ReviewDecisionSchema = z.discriminatedUnion("action", [
+  z.object({ action: z.literal("request-changes"), comment: z.string().trim().min(5, "Say what needs changing").max(4000) }),
+  z.object({
+    action: z.literal("approve"),
+    comment: text(4000),
+    estimateLowCents: z.number().int().min(0),
+    estimateHighCents: z.number().int().min(0),
+    reserveCents: z.number().int().min(0),
+    reserveAgreed: z.literal(true, { message: "Approve only with a reserve the consignor has agreed" }),
+  }).refine((d) => d.estimateHighCents >= d.estimateLowCents, { message: "The high estimate is below the low", path: ["estimateHighCents"] })
+    .refine((d) => d.reserveCents <= d.estimateLowCents, { message: "By convention the reserve is at most the low estimate", path: ["reserveCents"] }),
+  z.object({ action: z.literal("decline"), comment: z.string().trim().min(5, "Say why the lot is declined").max(4000) }),
+]);
+export type ReviewDecision = z.infer<typeof ReviewDecisionSchema>;
+
+/** A correction after approval: visible and dated on the lot page. */
+export const AmendmentSchema = z.object({
+  itemId: z.uuid().nullable(),
+  description: z.string().trim().min(5, "Describe the correction").max(2000),
+  quantity: z.number().int().min(1).max(10_000).optional(),
+  vacuumLoss: z.boolean().optional(),
+  condition: z.enum(CONDITION_VALUES).optional(),
+  notes: text(1000).optional(),
+});
+export type AmendmentInput = z.infer<typeof AmendmentSchema>;
