@@ -1,6 +1,6 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pg-boss", "bcryptjs", "nodemailer", "umzug"],
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pg-boss", "bcryptjs", "nodemailer", "umzug", "sharp"],
   poweredByHeader: false,
   reactStrictMode: true,
   typedRoutes: false,

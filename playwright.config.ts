@@ -37,6 +37,7 @@ export default defineConfig({
       DATABASE_URL: process.env.E2E_DATABASE_URL ?? "postgres://app@127.0.0.1:54329/getterline_e2e",
       SMTP_PORT: "2525",
       MAIL_CATCHER_URL: "http://127.0.0.1:2580",
+      S3_ENDPOINT: "http://127.0.0.1:4589",
     },
   },
 });

@@ -13,16 +13,10 @@ node --import tsx scripts/migrate.ts seed
 if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib models server next.config.mjs -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; then
   npx next build
 fi
-mkdir -p .data
-if port_busy 1080; then
-  echo "demo: a mail catcher already answers on 1080"
-else
-  node --import tsx server/mail-catcher.ts > .data/mail-catcher.log 2>&1 &
-  CATCHER=$!
-  trap 'kill $CATCHER 2>/dev/null || true' EXIT
-fi
+start_local_services
+trap stop_local_services EXIT
 echo
 echo "  Getterline:  http://localhost:${PORT:-3000}   (demo accounts and password in README.md)"
-echo "  Local inbox: http://127.0.0.1:1080"
+echo "  Local inbox: http://127.0.0.1:1080   Photos are kept by the local S3 stand-in under .data/s3"
 echo
 node --import tsx server/index.ts

@@ -8,8 +8,6 @@ ensure_env
 ensure_db
 export DATABASE_URL=${DATABASE_URL:-$(bash scripts/db.sh url)}
 node --import tsx scripts/migrate.ts seed
-if ! port_busy 1080; then
-  node --import tsx server/mail-catcher.ts > .data/mail-catcher.log 2>&1 &
-  trap "kill $! 2>/dev/null || true" EXIT
-fi
+start_local_services
+trap stop_local_services EXIT
 NODE_ENV=development node --import tsx server/index.ts

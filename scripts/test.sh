@@ -28,15 +28,11 @@ echo "== browser tests (Playwright, Debian's Chromium)"
 PW=1
 if DATABASE_URL=$E2E_DATABASE_URL MIGRATE_QUIET=1 node --import tsx scripts/migrate.ts fresh >/dev/null \
    && NODE_ENV=production npx next build >reports/next-build.log 2>&1; then
-  CATCHER_PID=""
-  if ! port_busy 2580; then
-    MAIL_CATCHER_SMTP_PORT=2525 MAIL_CATCHER_HTTP_PORT=2580 MAIL_CATCHER_DIR=.data/mail-test \
-      node --import tsx server/mail-catcher.ts > reports/mail-catcher.log 2>&1 &
-    CATCHER_PID=$!
-  fi
+  MAIL_CATCHER_SMTP_PORT=2525 MAIL_CATCHER_HTTP_PORT=2580 MAIL_CATCHER_DIR=.data/mail-test S3_FAKE_PORT=4589 S3_FAKE_DIR=.data/s3-e2e \
+    start_local_services
   npx playwright test
   PW=$?
-  [ -n "$CATCHER_PID" ] && kill "$CATCHER_PID" 2>/dev/null
+  stop_local_services
 else
   echo "e2e: preparing the database or building failed; see reports/next-build.log" >&2
   tail -30 reports/next-build.log >&2
