@@ -106,7 +106,7 @@ function itemValues(input: ItemInput) {
   return {
     designationTyped: input.designation, designation, designationKnown: known, quantity: input.quantity, labelBrand: input.labelBrand,
     makerName: input.makerName || null, makerBasis: input.makerBasis, sourceCode: input.sourceCode || null, dateCode: input.dateCode || null,
-    features: input.features, condition: input.condition, vacuumLoss: input.vacuumLoss, defects: input.defects,
+    features: Object.fromEntries(Object.entries(input.features).filter(([, v]) => v.trim() !== "")), condition: input.condition, vacuumLoss: input.vacuumLoss, defects: input.defects,
     hazards: input.hazards, readings: input.readings, notes: input.notes,
   };
 }

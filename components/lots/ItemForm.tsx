@@ -1,0 +1,170 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useFieldArray, useForm, useWatch } from "react-hook-form";
+import { CautionStrip } from "@/components/CautionStrip";
+import { Field, FormAlert } from "@/components/forms/Field";
+import { ApiClientError, apiFetch } from "@/lib/client/api";
+import type { ItemView } from "@/lib/services/lots";
+import { BASIS_VALUES, CONDITION_VALUES, HAZARD_VALUES, ItemSchema, withoutBlankSections, type ItemInput } from "@/lib/validation/lots";
+import { decodeDesignation } from "@/lib/valves/designation";
+import { hazardsForType } from "@/lib/valves/hazards";
+import { BASIS_WORDS, CONDITION_WORDS, HAZARD_WORDS } from "./words";
+
+/** Construction features a consignor can describe, in our own vocabulary. */
+const FEATURES: { key: string; label: string; hint: string }[] = [
+  { key: "plateShape", label: "Plate shape", hint: "flat, box, round" },
+  { key: "plateColour", label: "Plate colour", hint: "grey, black, bright" },
+  { key: "plateSurface", label: "Plate surface", hint: "smooth, ribbed, dimpled, finned" },
+  { key: "getterShape", label: "Getter shape", hint: "halo, D, square, disc, wire" },
+  { key: "getterPosition", label: "Getter position", hint: "top, side, bottom" },
+  { key: "micas", label: "Micas", hint: "count and shape" },
+  { key: "markings", label: "Markings", hint: "silk-screen, stamped, etched" },
+];
+
+const EMPTY: ItemInput = {
+  designation: "", quantity: 1, labelBrand: "", makerName: null, makerBasis: "unconfirmed", sourceCode: null, dateCode: null,
+  features: {}, condition: "used", vacuumLoss: false, defects: [], hazards: [], readings: [], notes: "",
+};
+
+export function toInput(i: ItemView): ItemInput {
+  return {
+    designation: i.designationTyped, quantity: i.quantity, labelBrand: i.labelBrand, makerName: i.makerName, makerBasis: i.makerBasis,
+    sourceCode: i.sourceCode, dateCode: i.dateCode, features: i.features, condition: i.condition, vacuumLoss: i.vacuumLoss,
+    defects: i.defects, hazards: i.hazards as ItemInput["hazards"], readings: i.readings, notes: i.notes,
+  };
+}
+
+const num = (v: unknown) => (v === "" || v == null || Number.isNaN(Number(v)) ? undefined : Number(v));
+
+/** Add or edit one item of a lot, with its per-tube readings. */
+export function ItemForm({ lotId, item, onDone }: { lotId: string; item?: ItemView; onDone: () => void }) {
+  const [problem, setProblem] = useState<string | null>(null);
+  const { register, control, handleSubmit, formState, setError, setValue } = useForm<ItemInput>({
+    resolver: (values, ctx, opts) => zodResolver(ItemSchema)(withoutBlankSections(values), ctx, opts),
+    defaultValues: item ? toInput(item) : EMPTY,
+  });
+  const readings = useFieldArray({ control, name: "readings" });
+  const typed = useWatch({ control, name: "designation" });
+  const defects = useWatch({ control, name: "defects" });
+  const decoded = typed ? decodeDesignation(typed) : null;
+  const hazards = decoded?.ok ? hazardsForType(decoded.normalised).notices.filter((n) => n.certainty !== "always") : [];
+
+  async function onSubmit(values: ItemInput) {
+    setProblem(null);
+    try {
+      if (item) await apiFetch(`/api/lots/${lotId}/items/${item.id}`, { method: "PUT", json: values });
+      else await apiFetch(`/api/lots/${lotId}/items`, { json: values });
+      onDone();
+    } catch (e) {
+      if (e instanceof ApiClientError && e.fields) for (const [k, v] of Object.entries(e.fields)) setError(k as keyof ItemInput, { message: v });
+      setProblem(e instanceof Error ? e.message : "Could not save the item");
+    }
+  }
+
+  const e = formState.errors;
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} className="space-y-4" noValidate aria-label={item ? "Edit item" : "Add an item"}>
+      {problem ? <FormAlert>{problem}</FormAlert> : null}
+      <div className="grid gap-3 sm:grid-cols-3">
+        <Field id="designation" label="Designation as printed" error={e.designation?.message}
+          hint={decoded ? (decoded.ok ? `Reads as ${decoded.normalised}${decoded.knownType ? "" : " (not in our lists: flagged for review)"}` : "Not readable: it will be flagged for review") : undefined}>
+          <input id="designation" className="input code" autoComplete="off" {...register("designation")} />
+        </Field>
+        <Field id="quantity" label="Quantity" error={e.quantity?.message}>
+          <input id="quantity" type="number" min={1} className="input" {...register("quantity", { valueAsNumber: true })} />
+        </Field>
+        <Field id="condition" label="Condition" error={e.condition?.message}>
+          <select id="condition" className="input" {...register("condition")}>
+            {CONDITION_VALUES.map((c) => <option key={c} value={c}>{CONDITION_WORDS[c]}</option>)}
+          </select>
+        </Field>
+      </div>
+      {hazards.map((h) => (
+        <CautionStrip key={h.kind} anchor={h.kind === "mercury-vapour" ? "mercury" : h.kind}><strong>{h.title}.</strong> {h.caution}</CautionStrip>
+      ))}
+      <div className="grid gap-3 sm:grid-cols-3">
+        <Field id="labelBrand" label="Label as printed" hint="The name on the glass or box, not the maker" error={e.labelBrand?.message}>
+          <input id="labelBrand" className="input" {...register("labelBrand")} />
+        </Field>
+        <Field id="makerName" label="Attributed maker" error={e.makerName?.message}>
+          <input id="makerName" className="input" {...register("makerName", { setValueAs: (v) => (v ? v : null) })} />
+        </Field>
+        <Field id="makerBasis" label="On what basis" error={e.makerBasis?.message}>
+          <select id="makerBasis" className="input" {...register("makerBasis")}>
+            {BASIS_VALUES.map((b) => <option key={b} value={b}>{BASIS_WORDS[b]}</option>)}
+          </select>
+        </Field>
+        <Field id="sourceCode" label="Source code" error={e.sourceCode?.message}>
+          <input id="sourceCode" className="input code" {...register("sourceCode", { setValueAs: (v) => (v ? v : null) })} />
+        </Field>
+        <Field id="dateCode" label="Date code" error={e.dateCode?.message}>
+          <input id="dateCode" className="input code" {...register("dateCode", { setValueAs: (v) => (v ? v : null) })} />
+        </Field>
+        <div className="flex items-end pb-2">
+          <label className="inline-flex items-center gap-2 text-sm">
+            <input type="checkbox" {...register("vacuumLoss")} /> White getter flash (vacuum lost)
+          </label>
+        </div>
+      </div>
+      <fieldset className="rounded-md border border-flash-200 p-3">
+        <legend className="px-1 text-sm font-medium">Construction</legend>
+        <div className="grid gap-3 sm:grid-cols-3 lg:grid-cols-4">
+          {FEATURES.map((f) => (
+            <Field key={f.key} id={`feat-${f.key}`} label={f.label} hint={f.hint}>
+              <input id={`feat-${f.key}`} className="input" {...register(`features.${f.key}` as const, { setValueAs: (v) => v ?? "" })} />
+            </Field>
+          ))}
+        </div>
+      </fieldset>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <Field id="defects" label="Physical defects" hint="Separate with semicolons: bent pin; loose base" error={e.defects?.message}>
+          <input id="defects" className="input" defaultValue={(defects ?? []).join("; ")}
+            onChange={(ev) => setValue("defects", ev.target.value.split(";").map((s) => s.trim()).filter(Boolean))} />
+        </Field>
+        <fieldset>
+          <legend className="label">Hazards you know of</legend>
+          <div className="mt-1 flex flex-wrap gap-3">
+            {HAZARD_VALUES.map((h) => (
+              <label key={h} className="inline-flex items-center gap-1.5 text-sm">
+                <input type="checkbox" value={h} {...register("hazards")} /> {HAZARD_WORDS[h]}
+              </label>
+            ))}
+          </div>
+        </fieldset>
+      </div>
+      <fieldset className="space-y-2 rounded-md border border-flash-200 p-3">
+        <legend className="px-1 text-sm font-medium">Test readings, one row per tube</legend>
+        {e.readings?.message ? <p className="field-error">{e.readings.message}</p> : null}
+        {readings.fields.map((f, i) => (
+          <div key={f.id} className="grid grid-cols-2 items-end gap-2 sm:grid-cols-8">
+            <Field id={`r${i}-tube`} label="Tube #"><input id={`r${i}-tube`} type="number" className="input" {...register(`readings.${i}.tubeNo`, { valueAsNumber: true })} /></Field>
+            <Field id={`r${i}-measure`} label="Measure">
+              <select id={`r${i}-measure`} className="input" {...register(`readings.${i}.measure`)}>
+                <option value="gm">Gm</option><option value="emission">Emission</option><option value="plate-current">Plate current</option>
+              </select>
+            </Field>
+            <Field id={`r${i}-s1`} label="Section 1"><input id={`r${i}-s1`} inputMode="decimal" className="input" {...register(`readings.${i}.sections.0`, { setValueAs: num })} /></Field>
+            <Field id={`r${i}-s2`} label="Section 2"><input id={`r${i}-s2`} inputMode="decimal" className="input" {...register(`readings.${i}.sections.1`, { setValueAs: num })} /></Field>
+            <Field id={`r${i}-chart`} label="Chart new"><input id={`r${i}-chart`} inputMode="decimal" className="input" {...register(`readings.${i}.chartNewValue`, { setValueAs: num })} /></Field>
+            <div className="col-span-2 flex flex-wrap gap-2 pb-2 text-sm">
+              <label className="inline-flex items-center gap-1"><input type="checkbox" {...register(`readings.${i}.shorts`)} />Short</label>
+              <label className="inline-flex items-center gap-1"><input type="checkbox" {...register(`readings.${i}.leakage`)} />Leakage</label>
+              <label className="inline-flex items-center gap-1"><input type="checkbox" {...register(`readings.${i}.gas`)} />Gas</label>
+            </div>
+            <button type="button" className="btn-quiet mb-1 justify-center" onClick={() => readings.remove(i)} aria-label={`Remove reading ${i + 1}`}>Remove</button>
+          </div>
+        ))}
+        <button type="button" className="btn-quiet" onClick={() => readings.append({ tubeNo: readings.fields.length + 1, measure: "gm", sections: [] })}>Add a reading</button>
+      </fieldset>
+      <Field id="notes" label="Notes" error={e.notes?.message}>
+        <input id="notes" className="input" {...register("notes")} />
+      </Field>
+      <div className="flex gap-2">
+        <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>{item ? "Save item" : "Add item"}</button>
+        <button type="button" className="btn-quiet" onClick={onDone}>Cancel</button>
+      </div>
+    </form>
+  );
+}
