@@ -23,7 +23,7 @@ const reading = z.number().finite().positive("Readings are positive numbers").ma
 export const ReadingSchema = z.object({
   tubeNo: z.number().int().min(1).max(10_000),
   measure: z.enum(["gm", "emission", "plate-current"]),
-  sections: z.array(reading).min(1, "Enter at least one section reading").max(4),
+  sections: z.array(reading).max(4),
   chartNewValue: reading.optional(),
   plateCurrentMa: reading.optional(),
   shorts: z.boolean().optional(),
@@ -48,10 +48,16 @@ export const ItemSchema = z.object({
   hazards: z.array(z.enum(HAZARD_VALUES)).max(4),
   readings: z.array(ReadingSchema).max(500),
   notes: text(1000),
-}).refine((i) => i.readings.every((r) => r.tubeNo <= i.quantity), { message: "A reading names a tube number above the quantity", path: ["readings"] })
+}).refine((i) => i.readings.every((r) => r.sections.length > 0 || r.shorts || r.leakage || r.gas), { message: "Each reading needs a section value, or a short, leakage or gas failure", path: ["readings"] })
+  .refine((i) => i.readings.every((r) => r.tubeNo <= i.quantity), { message: "A reading names a tube number above the quantity", path: ["readings"] })
   .refine((i) => i.makerBasis === "unconfirmed" || Boolean(i.makerName), { message: "Name the maker, or mark it unconfirmed", path: ["makerName"] })
   .refine((i) => i.makerBasis !== "source-code-confirmed" || Boolean(i.sourceCode), { message: "A source-code confirmation needs the source code", path: ["sourceCode"] });
 export type ItemInput = z.infer<typeof ItemSchema>;
+
+/** Blank section boxes in a form arrive as undefined: the form drops them before checking. */
+export function withoutBlankSections(values: ItemInput): ItemInput {
+  return { ...values, readings: values.readings.map((r) => ({ ...r, sections: r.sections.filter((x) => typeof x === "number" && !Number.isNaN(x)) })) };
+}
 
 /** The house's decision on a submitted lot. Money in cents. */
 export const ReviewDecisionSchema = z.discriminatedUnion("action", [
