@@ -1,5 +1,6 @@
 // Benchmark: grade and match 10,000 synthetic readings (seeded, demo data only).
 // Run: node --import tsx scripts/bench-grading.ts [count] [tolerancePct]
+// (add --expose-gc before --import for heap figures taken after a collection)
 import { performance } from "node:perf_hooks";
 import { gradeReading, type TesterReading } from "../lib/valves/grading";
 import { findMatchedPairs, findMatchedQuads, type MatchReading, type MatchResult } from "../lib/valves/matching";
