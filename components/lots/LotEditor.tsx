@@ -6,7 +6,9 @@ import { FormAlert } from "@/components/forms/Field";
 import { apiFetch } from "@/lib/client/api";
 import { formatCents } from "@/lib/money/cents";
 import type { getLot, ItemView } from "@/lib/services/lots";
+import { CsvImportPanel } from "./CsvImportPanel";
 import { ItemForm, toInput } from "./ItemForm";
+import { PhotoPanel } from "./PhotoPanel";
 import { ItemsGrid } from "./ItemsGrid";
 import { LotDetailsForm } from "./LotDetailsForm";
 import { LotTrail } from "./LotTrail";
@@ -19,7 +21,7 @@ export type LotData = Awaited<ReturnType<typeof getLot>>;
  * bulk import, photos and the review trail. Data comes from /api/lots/:id
  * through TanStack Query; every change refetches it.
  */
-export function LotEditor({ initial, importPanel, photoPanel }: { initial: LotData; importPanel?: React.ReactNode; photoPanel?: React.ReactNode }) {
+export function LotEditor({ initial }: { initial: LotData }) {
   const qc = useQueryClient();
   const id = initial.lot.id;
   const key = ["lot", id];
@@ -79,8 +81,9 @@ export function LotEditor({ initial, importPanel, photoPanel }: { initial: LotDa
         ) : null}
         <ItemsGrid items={data.items} editable={editable} onEdit={(i) => setEditing(i)} onRemove={onRemove} onQuickChange={onQuickChange} />
       </section>
-      {editable && importPanel ? importPanel : null}
-      {photoPanel}
+      {editable ? <CsvImportPanel lotId={id} onApplied={() => void refresh()} /> : null}
+      <PhotoPanel lotId={id} photos={data.photos} editable={editable} onChange={() => void refresh()}
+        items={data.items.map((i) => ({ id: i.id, label: `Line ${i.position}: ${i.designation}${i.labelBrand ? ` (${i.labelBrand})` : ""}` }))} />
       <section aria-labelledby="details-h" className="space-y-2">
         <h2 id="details-h" className="text-lg font-semibold">Lot details</h2>
         <LotDetailsForm lotId={id} readOnly={!editable} initial={{
