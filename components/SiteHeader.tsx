@@ -10,11 +10,15 @@ type NavItem = { href: string; label: string };
 export function navFor(viewer: Viewer | null): NavItem[] {
   const items: NavItem[] = [{ href: "/reference", label: "Valve reference" }];
   if (!viewer) return items;
+  items.push({ href: "/lots", label: "Lots" });
   if (can(viewer.roles, "lots.consign")) items.push({ href: "/consignor", label: "My consignments" });
   if (can(viewer.roles, "lots.bid")) items.push({ href: "/dealer", label: "Dealer desk" });
   if (can(viewer.roles, "shelf.use")) items.push({ href: "/shelf", label: "Unconfirmed shelf" });
   if (can(viewer.roles, "disputes.mediate")) items.push({ href: "/mediation", label: "Mediation" });
-  if (can(viewer.roles, "house.manage")) items.push({ href: "/house", label: "House desk" });
+  if (can(viewer.roles, "house.manage")) {
+    items.push({ href: "/house/review", label: "Review queue" });
+    items.push({ href: "/house", label: "House desk" });
+  }
   return items;
 }
 

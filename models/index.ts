@@ -40,6 +40,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   LotImport.initModel(sequelize);
   Lot.belongsTo(User, { foreignKey: "consignorId", as: "consignor" });
   Lot.hasMany(LotItem, { foreignKey: "lotId", as: "items" });
+  LotItem.belongsTo(Lot, { foreignKey: "lotId" });
   Lot.hasMany(LotPhoto, { foreignKey: "lotId", as: "photos" });
   Lot.hasMany(LotEvent, { foreignKey: "lotId", as: "events" });
   LotEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });

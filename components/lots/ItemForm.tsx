@@ -5,23 +5,13 @@ import { useState } from "react";
 import { useFieldArray, useForm, useWatch } from "react-hook-form";
 import { CautionStrip } from "@/components/CautionStrip";
 import { Field, FormAlert } from "@/components/forms/Field";
+import { ConstructionFields } from "@/components/valves/ConstructionFields";
 import { ApiClientError, apiFetch } from "@/lib/client/api";
 import type { ItemView } from "@/lib/services/lots";
 import { BASIS_VALUES, CONDITION_VALUES, HAZARD_VALUES, ItemSchema, withoutBlankSections, type ItemInput } from "@/lib/validation/lots";
 import { decodeDesignation } from "@/lib/valves/designation";
 import { hazardsForType } from "@/lib/valves/hazards";
 import { BASIS_WORDS, CONDITION_WORDS, HAZARD_WORDS } from "./words";
-
-/** Construction features a consignor can describe, in our own vocabulary. */
-const FEATURES: { key: string; label: string; hint: string }[] = [
-  { key: "plateShape", label: "Plate shape", hint: "flat, box, round" },
-  { key: "plateColour", label: "Plate colour", hint: "grey, black, bright" },
-  { key: "plateSurface", label: "Plate surface", hint: "smooth, ribbed, dimpled, finned" },
-  { key: "getterShape", label: "Getter shape", hint: "halo, D, square, disc, wire" },
-  { key: "getterPosition", label: "Getter position", hint: "top, side, bottom" },
-  { key: "micas", label: "Micas", hint: "count and shape" },
-  { key: "markings", label: "Markings", hint: "silk-screen, stamped, etched" },
-];
 
 const EMPTY: ItemInput = {
   designation: "", quantity: 1, labelBrand: "", makerName: null, makerBasis: "unconfirmed", sourceCode: null, dateCode: null,
@@ -108,16 +98,10 @@ export function ItemForm({ lotId, item, onDone }: { lotId: string; item?: ItemVi
           </label>
         </div>
       </div>
-      <fieldset className="rounded-md border border-flash-200 p-3">
-        <legend className="px-1 text-sm font-medium">Construction</legend>
-        <div className="grid gap-3 sm:grid-cols-3 lg:grid-cols-4">
-          {FEATURES.map((f) => (
-            <Field key={f.key} id={`feat-${f.key}`} label={f.label} hint={f.hint}>
-              <input id={`feat-${f.key}`} className="input" {...register(`features.${f.key}` as const, { setValueAs: (v) => v ?? "" })} />
-            </Field>
-          ))}
-        </div>
-      </fieldset>
+      <details className="rounded-md border border-flash-200 p-3" open={Object.keys(item?.features ?? {}).length > 0}>
+        <summary className="cursor-pointer text-sm font-medium">Construction (plates, getter, micas, base): the evidence for who made it</summary>
+        <div className="mt-3"><ConstructionFields register={register} /></div>
+      </details>
       <div className="grid gap-3 sm:grid-cols-2">
         <Field id="defects" label="Physical defects" hint="Separate with semicolons: bent pin; loose base" error={e.defects?.message}>
           <input id="defects" className="input" defaultValue={(defects ?? []).join("; ")}

@@ -42,16 +42,16 @@ export function LotSummaryPanel({ summary: s, chart }: { summary: LotSummary; ch
           <h3 className="font-semibold">By type family</h3>
           <table className="w-full text-sm">
             <thead className="text-left text-flash-600">
-              <tr><th scope="col" className="py-1 font-medium">Family</th><th scope="col" className="py-1 font-medium">Tubes</th><th scope="col" className="py-1 font-medium">Tested</th><th scope="col" className="py-1 font-medium">Strong / good / fair / weak / reject</th><th scope="col" className="py-1 font-medium">Pairs / quads</th></tr>
+              <tr><th scope="col" className="py-1 pr-3 font-medium">Family</th><th scope="col" className="py-1 pr-3 font-medium">Tubes</th><th scope="col" className="py-1 pr-3 font-medium">Tested</th><th scope="col" className="py-1 pr-3 font-medium">Strong / good / fair / weak / reject</th><th scope="col" className="py-1 pr-3 font-medium">Pairs / quads</th></tr>
             </thead>
             <tbody>
               {s.families.map((f) => (
                 <tr key={f.key} className="border-t border-flash-100">
-                  <td className="py-1">{f.label}</td>
-                  <td className="py-1">{f.tubes}</td>
-                  <td className="py-1">{f.tests.tested}</td>
-                  <td className="code py-1">{f.tests.strong} / {f.tests.good} / {f.tests.fair} / {f.tests.weak} / {f.tests.reject}</td>
-                  <td className="py-1">{f.pairs} / {f.quads}{f.quadsProven ? "" : "*"}</td>
+                  <td className="py-1 pr-3">{f.label}</td>
+                  <td className="py-1 pr-3">{f.tubes}</td>
+                  <td className="py-1 pr-3">{f.tests.tested}</td>
+                  <td className="code py-1 pr-3">{f.tests.strong} / {f.tests.good} / {f.tests.fair} / {f.tests.weak} / {f.tests.reject}</td>
+                  <td className="py-1 pr-3">{f.pairs} / {f.quads}{f.quadsProven ? "" : "*"}</td>
                 </tr>
               ))}
             </tbody>

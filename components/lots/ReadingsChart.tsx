@@ -9,7 +9,8 @@ export function ReadingsChart({ points }: { points: NominalPoint[] }) {
   if (points.length === 0) return <p className="text-sm text-flash-600">No Gm readings with a published figure to compare against.</p>;
   const W = 560, H = 180, pad = 32;
   const max = Math.max(140, ...points.map((p) => p.percentOfNominal));
-  const y = (pct: number) => H - pad / 2 - ((H - pad) * pct) / max;
+  const min = Math.min(40, ...points.map((p) => p.percentOfNominal));
+  const y = (pct: number) => H - pad / 2 - ((H - pad) * (pct - min)) / (max - min);
   const x = (i: number) => pad + ((W - pad - 8) * (i + 0.5)) / points.length;
   return (
     <figure className="space-y-1">

@@ -4,6 +4,7 @@ import { ApiError } from "../api/errors";
 import { DEFAULT_MAX_BYTES, parseLotCsv, type ParsedRow } from "../lots/csv-import";
 import { db, Lot, LotEvent, LotImport, LotItem } from "../../models";
 import { assertConsignorCanEdit } from "./lot-access";
+import { normaliseFeatures } from "./lots";
 
 export type ImportPreviewRow = {
   line: number; designation: string; flagged: boolean; quantity: number; label: string | null; tested: boolean; alreadyImported: boolean;
@@ -28,7 +29,7 @@ function toValues(lotId: string, row: ParsedRow, position: number) {
     designationKnown: i.designation.status === "known",
     quantity: i.quantity, labelBrand: i.labelBrand ?? "", makerName: i.attributedMaker.makerName, makerBasis: i.attributedMaker.basis,
     sourceCode: i.codes.source ?? null, dateCode: i.codes.date ?? null,
-    features: { ...i.construction, ...(i.codes.other ? { otherCode: i.codes.other } : {}) },
+    features: normaliseFeatures({ ...i.construction, ...(i.codes.other ? { otherCode: i.codes.other } : {}) }),
     condition: i.condition, vacuumLoss: i.vacuumLoss, defects: i.defects, hazards: i.hazards,
     readings: i.readings.map((r) => ({ ...r, tubeNo: r.tubeNo ?? 1 })), notes,
   };

@@ -1,6 +1,7 @@
 import { Op, QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
+import { featuresFromText, featuresToText } from "../valves/construction-text";
 import { decodeDesignation } from "../valves/designation";
 import type { ItemInput, LotDetailsInput } from "../validation/lots";
 import { db, Lot, LotEvent, LotItem, LotPhoto, User } from "../../models";
@@ -12,6 +13,13 @@ export function normaliseTyped(typed: string): { designation: string; known: boo
   const d = decodeDesignation(typed);
   if (d.ok) return { designation: d.normalised, known: d.knownType };
   return { designation: (d.normalised ?? typed.trim().toUpperCase()).slice(0, 40), known: false };
+}
+
+/** Known construction features in our vocabulary's spelling; anything else kept as typed. */
+export function normaliseFeatures(record: Record<string, string>): Record<string, string> {
+  const { features, ignored } = featuresFromText(record);
+  const kept = Object.fromEntries(Object.entries(record).filter(([k, v]) => v.trim() !== "" && ignored.some((x) => x === k || x.startsWith(`${k}=`))));
+  return { ...kept, ...featuresToText(features) };
 }
 
 export type ItemView = ReturnType<typeof presentItem>;
@@ -106,7 +114,7 @@ function itemValues(input: ItemInput) {
   return {
     designationTyped: input.designation, designation, designationKnown: known, quantity: input.quantity, labelBrand: input.labelBrand,
     makerName: input.makerName || null, makerBasis: input.makerBasis, sourceCode: input.sourceCode || null, dateCode: input.dateCode || null,
-    features: Object.fromEntries(Object.entries(input.features).filter(([, v]) => v.trim() !== "")), condition: input.condition, vacuumLoss: input.vacuumLoss, defects: input.defects,
+    features: normaliseFeatures(input.features), condition: input.condition, vacuumLoss: input.vacuumLoss, defects: input.defects,
     hazards: input.hazards, readings: input.readings, notes: input.notes,
   };
 }
