@@ -19,8 +19,8 @@ export default async function RootLayout({ children }: { children: React.ReactNo
         <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:px-3 focus:py-2">
           Skip to content
         </a>
-        <SiteHeader viewer={viewer} />
         <Providers>
+          <SiteHeader viewer={viewer} />
           <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8">{children}</main>
         </Providers>
         <footer className="border-t border-flash-200 bg-white">

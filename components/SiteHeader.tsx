@@ -2,6 +2,7 @@ import Link from "next/link";
 import type { Viewer } from "@/lib/auth/guards";
 import { can, ROLE_LABEL } from "@/lib/auth/roles";
 import { Mark } from "./Mark";
+import { NoticeBell } from "./live/NoticeBell";
 import { SignOutButton } from "./SignOutButton";
 
 type NavItem = { href: string; label: string };
@@ -10,6 +11,7 @@ type NavItem = { href: string; label: string };
 export function navFor(viewer: Viewer | null): NavItem[] {
   const items: NavItem[] = [{ href: "/reference", label: "Valve reference" }];
   if (!viewer) return items;
+  items.push({ href: "/sales", label: "Sales" });
   items.push({ href: "/lots", label: "Lots" });
   if (can(viewer.roles, "lots.consign")) items.push({ href: "/consignor", label: "My consignments" });
   if (can(viewer.roles, "lots.bid")) items.push({ href: "/dealer", label: "Dealer desk" });
@@ -42,6 +44,7 @@ export function SiteHeader({ viewer }: { viewer: Viewer | null }) {
             <span className="text-flash-700">
               {viewer.name} <span className="text-flash-500">· {viewer.roles.map((r) => ROLE_LABEL[r]).join(", ")}</span>
             </span>
+            <NoticeBell />
             <SignOutButton />
           </div>
         ) : (

@@ -6,6 +6,7 @@ import { LotItem } from "./LotItem";
 import { LotPhoto } from "./LotPhoto";
 import { Maker, MakerCode } from "./Maker";
 import { PasswordResetToken } from "./PasswordResetToken";
+import { Notice, Sale, SaleLot } from "./Sale";
 import { ShelfTube } from "./ShelfTube";
 import { ValveType, ValveTypeRevision } from "./ValveType";
 import { SignInAttempt } from "./SignInAttempt";
@@ -44,6 +45,12 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Lot.hasMany(LotPhoto, { foreignKey: "lotId", as: "photos" });
   Lot.hasMany(LotEvent, { foreignKey: "lotId", as: "events" });
   LotEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
+  Sale.initModel(sequelize);
+  SaleLot.initModel(sequelize);
+  Notice.initModel(sequelize);
+  Sale.hasMany(SaleLot, { foreignKey: "saleId", as: "saleLots" });
+  SaleLot.belongsTo(Sale, { foreignKey: "saleId", as: "sale" });
+  SaleLot.belongsTo(Lot, { foreignKey: "lotId", as: "lot" });
   initialisedFor = sequelize;
   return sequelize;
 }
@@ -53,4 +60,5 @@ export function db(): Sequelize {
   return initModels(getSequelize());
 }
 
+export { Notice, Sale, SaleLot };
 export { Lot, LotEvent, LotImport, LotItem, LotPhoto, Maker, MakerCode, PasswordResetToken, ShelfTube, SignInAttempt, User, ValveType, ValveTypeRevision };

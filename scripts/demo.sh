@@ -19,4 +19,4 @@ echo
 echo "  Getterline:  http://localhost:${PORT:-3000}   (demo accounts and password in README.md)"
 echo "  Local inbox: http://127.0.0.1:1080   Photos are kept by the local S3 stand-in under .data/s3"
 echo
-node --import tsx server/index.ts
+DEMO_LIVE=1 node --import tsx server/index.ts

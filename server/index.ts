@@ -9,6 +9,8 @@ import pg from "pg";
 import { env } from "../lib/config/env";
 import { getSequelize } from "../lib/db/sequelize";
 import { initModels } from "../models";
+import { startQueue, stopQueue } from "../lib/jobs/queue";
+import { startClosingWorker } from "../lib/services/lot-closing";
 import { gracefulShutdown } from "./shutdown";
 import { attachSockets } from "./socket";
 
@@ -35,6 +37,10 @@ async function main(): Promise<void> {
   pool.on("connect", (client) => client.on("error", (err) => console.error("[socket pool client]", err.message)));
   const io = await attachSockets(server, pool);
 
+  await startQueue(e.DATABASE_URL);
+  const stopSweeper = await startClosingWorker();
+  const stopDemo = process.env.DEMO_LIVE === "1" ? await (await import("./demo-live")).startDemoLife() : () => undefined;
+
   const upgrade = app.getUpgradeHandler();
   server.on("upgrade", (req, socket, head) => {
     if (req.url?.startsWith("/_next/")) void upgrade(req, socket, head);
@@ -47,7 +53,7 @@ async function main(): Promise<void> {
 
   const stopper = gracefulShutdown(server, {
     closeSockets: () => new Promise<void>((r) => { io.close(() => r()); }),
-    closers: [() => getSequelize().close(), () => pool.end()],
+    closers: [async () => { stopDemo(); stopSweeper(); }, () => stopQueue(), () => getSequelize().close(), () => pool.end()],
     log: (m) => console.log(`getterline: ${m}`),
   });
   const shutdown = async (signal: string) => {

@@ -1,10 +1,30 @@
 /**
  * Socket event payloads, typed once for server and client. Events are named
- * `<resource>.<verb>`, rooms `<kind>:<id>`. Later issues add lot and sale events.
+ * `<resource>.<verb>`, rooms `<kind>:<id>`. Every lot event carries the
+ * lot's sequence number: clients apply them in order and refetch on a gap.
  */
+export type LotLive = {
+  saleLotId: string;
+  saleId: string;
+  seq: number;
+  phase: "open" | "sold" | "unsold" | "withdrawn";
+  priceCents: number;
+  bidCount: number;
+  leaderPaddle: number | null;
+  reserveMet: boolean;
+  minimumCents: number;
+  closesAt: string;
+  extended: boolean;
+  hammerCents: number | null;
+};
+
 export interface ServerToClientEvents {
   "session.ready": (p: { userId: string; roles: string[] }) => void;
   "notice.created": (p: { id: string; text: string; href?: string; at: string }) => void;
+  /** A bid was accepted (or retracted): the lot's new public state. */
+  "lot.bid": (p: LotLive) => void;
+  /** The lot closed: sold or unsold. */
+  "lot.closed": (p: LotLive) => void;
 }
 
 export interface ClientToServerEvents {
@@ -20,3 +40,5 @@ export function joinableRoom(room: string): boolean {
 }
 
 export const userRoom = (userId: string) => `user:${userId}`;
+export const lotRoom = (saleLotId: string) => `lot:${saleLotId}`;
+export const saleRoom = (saleId: string) => `sale:${saleId}`;

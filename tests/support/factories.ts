@@ -68,3 +68,14 @@ export function itemInput(over: Partial<import("../../lib/validation/lots").Item
     readings: [], notes: "", ...over,
   };
 }
+
+/** An approved lot with one item, ready to be offered in a sale. */
+export async function approvedLot(consignor: User, admin: User, reserveCents = 5_000) {
+  const { createLot, addItem } = await import("../../lib/services/lots");
+  const { submitLot, decideLot } = await import("../../lib/services/lot-review");
+  const lot = await createLot(viewerOf(consignor), { title: `Test lot ${Date.now()}`, provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" });
+  await addItem(viewerOf(consignor), lot.id, itemInput());
+  await submitLot(viewerOf(consignor), lot.id);
+  await decideLot(viewerOf(admin), lot.id, { action: "approve", comment: "", estimateLowCents: reserveCents, estimateHighCents: reserveCents * 2, reserveCents, reserveAgreed: true });
+  return lot;
+}

@@ -1,0 +1,25 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { LiveLot } from "@/components/live/LiveLot";
+import { ApiError } from "@/lib/api/errors";
+import { requirePageViewer } from "@/lib/auth/guards";
+import { can } from "@/lib/auth/roles";
+import { getSaleLot } from "@/lib/services/sales";
+
+export const metadata = { title: "Live lot" };
+
+export default async function LiveLotPage({ params }: { params: Promise<{ id: string; saleLotId: string }> }) {
+  const { id, saleLotId } = await params;
+  const viewer = await requirePageViewer("account.read", `/sales/${id}/lots/${saleLotId}`);
+  if (!/^[0-9a-f-]{36}$/i.test(saleLotId)) notFound();
+  const data = await getSaleLot(viewer, saleLotId).catch((e) => { if (e instanceof ApiError && e.code === "not_found") notFound(); throw e; });
+  if (data.live.saleId !== id) notFound();
+  return (
+    <div className="space-y-4">
+      <p className="text-sm"><Link href={`/sales/${id}`} className="underline">{data.sale.title}</Link> / lot {data.live.position}</p>
+      <h1 className="text-2xl font-semibold">{data.live.title}</h1>
+      <p className="text-sm text-flash-700">Consigned by {data.live.consignor}</p>
+      <LiveLot initial={data} canBid={can(viewer.roles, "lots.bid")} lotHref={`/lots/${data.live.lotId}`} />
+    </div>
+  );
+}

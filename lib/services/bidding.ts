@@ -1,0 +1,123 @@
+import { QueryTypes, Transaction } from "sequelize";
+import type { Viewer } from "../auth/guards";
+import { ApiError } from "../api/errors";
+import { minimumBidFor, placeBid, type BidOutcome, type BidRefusal, type ProxyState } from "../auction/proxy";
+import { extendOnBid } from "../auction/soft-close";
+import { emitTo } from "../realtime/emit";
+import { lotRoom, saleRoom, type LotLive } from "../realtime/events";
+import { db } from "../../models";
+import { scheduleClose } from "./lot-closing";
+import { notifyOutbid } from "./notices";
+import { paddleFor, paddlesOf } from "./paddles";
+
+/** Refusals in words a dealer reads. */
+export const REFUSAL_WORDS: Record<BidRefusal | "not-started", string> = {
+  "lot-not-open": "This lot is not taking bids.",
+  "after-close": "The lot closed before your bid arrived.",
+  "own-lot": "You cannot bid on your own lot.",
+  "invalid-amount": "Enter a whole amount in dollars and cents.",
+  "below-minimum": "Your maximum is below the next minimum bid.",
+  "max-not-raised": "You already lead; a new maximum must be higher than your current one.",
+  "out-of-sequence": "Another bid was placed at the same moment; please try again.",
+  "not-started": "The sale has not started yet.",
+};
+
+export type BidResult =
+  | { accepted: true; outcome: BidOutcome; seq: number; live: LotLive; yourMaxCents: number; leading: boolean; replayed: boolean }
+  | { accepted: false; reason: BidRefusal | "not-started"; message: string; minimumCents: number; live: LotLive };
+
+type Row = {
+  id: string; sale_id: string; phase: LotLive["phase"]; closes_at: Date; extension_count: number; seq: number; state: ProxyState;
+  starts_at: Date; soft_close_seconds: number; db_now: Date; hammer_cents: number | null;
+};
+
+const saleOf = new Map<string, string>();
+
+/** The public state of a lot from its row (never the leader's maximum). */
+export function liveFrom(r: { id: string; sale_id: string; phase: LotLive["phase"]; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null }, leaderPaddle: number | null, extended = false): LotLive {
+  return {
+    saleLotId: r.id, saleId: r.sale_id, seq: r.seq, phase: r.phase, priceCents: r.state.priceCents, bidCount: r.state.bidCount,
+    leaderPaddle, reserveMet: r.state.reserveMet, minimumCents: minimumBidFor(r.state), closesAt: r.closes_at.toISOString(), extended,
+    hammerCents: r.hammer_cents,
+  };
+}
+
+/**
+ * Place a maximum bid. One transaction takes the lot's row lock, decides
+ * with the pure rules, appends the bid with the next sequence number and
+ * moves the close on a late bid; only after commit is it broadcast. The same
+ * idempotency key from the same bidder returns the first answer.
+ */
+export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: number, idempotencyKey: string): Promise<BidResult> {
+  const s = db();
+  let saleId = saleOf.get(saleLotId);
+  if (!saleId) {
+    const r = await s.query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT });
+    if (!r[0]) throw new ApiError("not_found", "No such lot in a sale");
+    saleId = r[0].sale_id;
+    saleOf.set(saleLotId, saleId);
+  }
+  const paddle = await paddleFor(saleId, viewer.id);
+
+  const done = await s.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (t) => {
+    const [row] = await s.query<Row>(
+      `SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.extension_count, sl.seq, sl.state, sl.hammer_cents,
+              s.starts_at, s.soft_close_seconds, now() AS db_now
+         FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.id = :saleLotId FOR UPDATE OF sl`,
+      { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
+    );
+    if (!row) throw new ApiError("not_found", "No such lot in a sale");
+    const [prior] = await s.query<{ seq: number; outcome: BidOutcome; max_cents: number }>(
+      `SELECT seq, outcome, max_cents FROM bids WHERE sale_lot_id = :saleLotId AND bidder_id = :bidder AND idempotency_key = :key`,
+      { replacements: { saleLotId, bidder: viewer.id, key: idempotencyKey }, type: QueryTypes.SELECT, transaction: t },
+    );
+    if (prior) return { kind: "replayed" as const, row, prior };
+    const nowMs = row.db_now.getTime();
+    if (nowMs < row.starts_at.getTime()) return { kind: "refused" as const, row, reason: "not-started" as const, minimumCents: minimumBidFor(row.state) };
+    const previousLeader = row.state.leader?.bidderId ?? null;
+    const decision = placeBid(row.state, { bidderId: viewer.id, maxCents, placedAtMs: nowMs, seq: row.seq + 1 }, { phase: row.phase, closesAtMs: row.closes_at.getTime() });
+    if (!decision.accepted) return { kind: "refused" as const, row, reason: decision.reason, minimumCents: decision.minimumCents };
+    const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, { windowSeconds: row.soft_close_seconds, maxExtensions: null });
+    const next = decision.state;
+    const seq = row.seq + 1;
+    await s.query(
+      `UPDATE sale_lots SET seq = :seq, state = :state::jsonb, price_cents = :price, bid_count = :count, leader_id = :leader,
+              reserve_met = :reserveMet, closes_at = :closesAt, extension_count = :ext, updated_at = now() WHERE id = :saleLotId;
+       INSERT INTO bids (sale_lot_id, seq, bidder_id, max_cents, price_after_cents, outcome, idempotency_key, placed_at)
+       VALUES (:saleLotId, :seq, :bidder, :max, :price, :outcome, :key, :placedAt)`,
+      {
+        replacements: {
+          seq, state: JSON.stringify(next), price: next.priceCents, count: next.bidCount, leader: next.leader?.bidderId ?? null,
+          reserveMet: next.reserveMet, closesAt: new Date(clock.closesAtMs), ext: clock.extensionCount, saleLotId,
+          bidder: viewer.id, max: maxCents, outcome: decision.outcome, key: idempotencyKey, placedAt: row.db_now,
+        },
+        transaction: t,
+      },
+    );
+    return {
+      kind: "accepted" as const, outcome: decision.outcome, seq, previousLeader, extended: clock.extended,
+      row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
+    };
+  });
+
+  if (done.kind === "refused") {
+    const leader = done.row.state.leader ? (await paddlesOf(saleId, [done.row.state.leader.bidderId])).get(done.row.state.leader.bidderId) ?? null : null;
+    return { accepted: false, reason: done.reason, message: REFUSAL_WORDS[done.reason], minimumCents: done.minimumCents, live: liveFrom(done.row, leader) };
+  }
+  if (done.kind === "replayed") {
+    const leader = done.row.state.leader ? (await paddlesOf(saleId, [done.row.state.leader.bidderId])).get(done.row.state.leader.bidderId) ?? null : null;
+    return {
+      accepted: true, outcome: done.prior.outcome, seq: done.prior.seq, live: liveFrom(done.row, leader), yourMaxCents: done.prior.max_cents,
+      leading: done.row.state.leader?.bidderId === viewer.id, replayed: true,
+    };
+  }
+  const leaderId = done.row.state.leader!.bidderId;
+  const leaderPaddle = leaderId === viewer.id ? paddle : (await paddlesOf(saleId, [leaderId])).get(leaderId) ?? null;
+  const live = liveFrom(done.row, leaderPaddle, done.extended);
+  emitTo([lotRoom(saleLotId), saleRoom(saleId)], "lot.bid", live);
+  if (done.extended) void scheduleClose(saleLotId, done.row.closes_at).catch((e: Error) => console.error("[close] reschedule failed", e.message));
+  // The bidder hears about a proxy outbid in this answer; the notice is for a leader who lost the lead.
+  const outbid = done.previousLeader && done.previousLeader !== leaderId ? done.previousLeader : null;
+  if (outbid) void notifyOutbid(outbid, saleLotId, live).catch((e: Error) => console.error("[notice] outbid failed", e.message));
+  return { accepted: true, outcome: done.outcome, seq: done.seq, live, yourMaxCents: maxCents, leading: leaderId === viewer.id, replayed: false };
+}

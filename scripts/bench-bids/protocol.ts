@@ -1,0 +1,28 @@
+// Bid benchmark: messages between the bench and its watcher process.
+
+export type FromParent =
+  | { type: "start"; url: string; saleLotId: string; cookies: string[]; batch: number }
+  | { type: "query"; id: number; from: number; to: number }
+  | { type: "stop" };
+
+/** Per-sequence receipts over all watchers for seq `from`, `from + 1`, …; arrival times are epoch ms. */
+export type Receipts = {
+  from: number;
+  /** Distinct watchers that received each seq. */
+  counts: number[];
+  /** When the last of them received it. */
+  lastArrival: number[];
+  /** Extra copies of each seq received by a watcher that already had it. */
+  dupes: number[];
+  maxSeq: number;
+  disconnects: number;
+  connectErrors: number;
+  /** lot.bid events for other lots (expected 0). */
+  otherEvents: number;
+  connected: number;
+};
+
+export type ToParent =
+  | { type: "ready"; connected: number; ms: number }
+  | { type: "failed"; message: string }
+  | ({ type: "result"; id: number } & Receipts);
