@@ -32,6 +32,16 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
   const keyRef = useRef<string | null>(null);
   const live = data.live;
   const left = useCountdown(live.closesAt);
+  const [connected, setConnected] = useState(false);
+  useEffect(() => {
+    const s = liveSocket();
+    const on = () => setConnected(true);
+    const off = () => setConnected(false);
+    setConnected(s.connected);
+    s.on("connect", on);
+    s.on("disconnect", off);
+    return () => { s.off("connect", on); s.off("disconnect", off); };
+  }, []);
 
   useEffect(() => {
     const refetch = () => void qc.invalidateQueries({ queryKey: key });
@@ -110,6 +120,10 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
             <p className="text-lg font-semibold">{live.bidCount === 0 ? "—" : live.reserveMet ? "Met" : "Not met"}</p>
           </div>
         </div>
+        <p className="text-xs text-flash-600" data-testid="live-link" data-connected={connected}>
+          <span aria-hidden="true" className={`mr-1 inline-block h-2 w-2 rounded-full ${connected ? "bg-glow-500" : "bg-flash-300"}`} />
+          {connected ? "Live: updates arrive as bids are placed" : "Reconnecting… the page refreshes its figures when the link is back"}
+        </p>
         <p aria-live="polite" className="min-h-5 text-sm font-medium text-glow-700">{announce}</p>
         <p data-testid="standing" className="text-sm">{standing}</p>
         {open && canBid && !data.you.ownLot ? (
