@@ -49,10 +49,11 @@ test("two instances: broadcasts cross, a killed instance loses no committed bid,
     const consignor = await cookieFor(db, "odette@consignor.getterline.test");
     const dealers = await Promise.all(["quill@dealer.getterline.test", "bellweather@dealer.getterline.test", "northbank@dealer.getterline.test"].map((e) => cookieFor(db, e)));
 
-    // Three approved lots, made through the API.
+    // Three approved lots, made through the API (titles unique to this run).
+    const run = Date.now().toString(36);
     const lotIds: string[] = [];
     for (let i = 0; i < 3; i++) {
-      const lot = (await call(PORTS[0]!, consignor, "POST", "/api/lots", { title: `Cluster lot ${i + 1}`, provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" })).body.lot as { id: string };
+      const lot = (await call(PORTS[0]!, consignor, "POST", "/api/lots", { title: `Cluster lot ${i + 1} ${run}`, provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" })).body.lot as { id: string };
       const item = { designation: "6V6GT", quantity: 2, labelBrand: "Tri-County Parts", makerName: null, makerBasis: "unconfirmed", sourceCode: null, dateCode: null, features: {}, condition: "used", vacuumLoss: false, defects: [], hazards: [], readings: [], notes: "" };
       expect((await call(PORTS[0]!, consignor, "POST", `/api/lots/${lot.id}/items`, item)).status).toBe(201);
       expect((await call(PORTS[1]!, consignor, "POST", `/api/lots/${lot.id}/submit`)).status).toBe(200);
@@ -104,7 +105,7 @@ test("two instances: broadcasts cross, a killed instance loses no committed bid,
       expect(c.seq).toBe(c.last_bid + 1); // the close itself took exactly one sequence number
     }
     const mails = (await (await fetch("http://127.0.0.1:2580/api/messages")).json()) as { subject: string }[];
-    for (let i = 1; i <= 3; i++) expect(mails.filter((m) => m.subject === `Sold: Cluster lot ${i}`)).toHaveLength(1);
+    for (let i = 1; i <= 3; i++) expect(mails.filter((m) => m.subject === `Sold: Cluster lot ${i} ${run}`)).toHaveLength(1);
   } finally {
     a.kill("SIGKILL");
     b.kill("SIGTERM");
