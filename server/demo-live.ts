@@ -2,6 +2,7 @@
 // keeps a sale running with lots closing over the next hour, and a few
 // simulated dealers bidding at random intervals so a newcomer sees prices move.
 import { QueryTypes } from "sequelize";
+import { minimumBidFor, type ProxyState } from "../lib/auction/proxy";
 import type { Viewer } from "../lib/auth/guards";
 import type { Role } from "../lib/auth/roles";
 import { placeMaxBid } from "../lib/services/bidding";
@@ -84,8 +85,8 @@ async function ensureDemoSale(): Promise<void> {
 
 /** One simulated dealer bids on one open demo lot, up to a limit of their own. */
 async function simulatedBid(bidders: Viewer[]): Promise<void> {
-  const open = await db().query<{ id: string; price_cents: number; estimate_high_cents: number; bid_count: number }>(
-    `SELECT sl.id, sl.price_cents, l.estimate_high_cents, sl.bid_count FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id JOIN lots l ON l.id = sl.lot_id
+  const open = await db().query<{ id: string; price_cents: number; estimate_high_cents: number; bid_count: number; state: ProxyState }>(
+    `SELECT sl.id, sl.price_cents, l.estimate_high_cents, sl.bid_count, sl.state FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id JOIN lots l ON l.id = sl.lot_id
       WHERE s.is_demo AND sl.phase = 'open' AND sl.closes_at > now() AND s.starts_at <= now()`,
     { type: QueryTypes.SELECT },
   );
@@ -93,9 +94,11 @@ async function simulatedBid(bidders: Viewer[]): Promise<void> {
   const lot = open[Math.floor(Math.random() * open.length)]!;
   const who = bidders[Math.floor(Math.random() * bidders.length)]!;
   const limit = Math.round(lot.estimate_high_cents * (0.6 + Math.random() * 0.6));
-  if (lot.price_cents >= limit) return;
-  const max = Math.min(limit, Math.round((lot.price_cents || 0) * (1.05 + Math.random() * 0.25)) + 500);
-  await placeMaxBid(who, lot.id, Math.max(max, 100), `demo-${Date.now()}-${Math.random().toString(36).slice(2)}`);
+  const minimum = minimumBidFor(lot.state);
+  if (minimum > limit) return;
+  const max = Math.min(limit, Math.round(minimum * (1 + Math.random() * 0.2)));
+  const r = await placeMaxBid(who, lot.id, max, `demo-${Date.now()}-${Math.random().toString(36).slice(2)}`);
+  if (!r.accepted && r.reason !== "own-lot" && r.reason !== "max-not-raised") console.log(`demo: simulated bid refused (${r.reason})`);
 }
 
 /** Start the demo's life in this instance if no other instance runs it. */
@@ -107,7 +110,7 @@ export async function startDemoLife(): Promise<() => void> {
   let stopped = false;
   const tick = () => {
     if (stopped) return;
-    void simulatedBid(bidders).catch(() => undefined).finally(() => { if (!stopped) timer = setTimeout(tick, 4_000 + Math.random() * 11_000); });
+    void simulatedBid(bidders).catch(() => undefined).finally(() => { if (!stopped) timer = setTimeout(tick, 2_000 + Math.random() * 6_000); });
   };
   let timer = setTimeout(tick, 3_000);
   const renew = setInterval(() => void ensureDemoSale().catch((e: Error) => console.error("[demo]", e.message)), 5 * 60_000);
