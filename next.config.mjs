@@ -1,6 +1,6 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pg-boss", "bcryptjs", "nodemailer", "umzug", "sharp"],
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pg-boss", "bcryptjs", "nodemailer", "umzug", "sharp", "pdfkit", "stripe"],
   poweredByHeader: false,
   reactStrictMode: true,
   typedRoutes: false,

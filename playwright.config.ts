@@ -38,6 +38,7 @@ export default defineConfig({
       SMTP_PORT: "2525",
       MAIL_CATCHER_URL: "http://127.0.0.1:2580",
       S3_ENDPOINT: "http://127.0.0.1:4589",
+      STRIPE_API_PORT: "12121",
     },
   },
 });

@@ -9,6 +9,8 @@ import { emitTo } from "../realtime/emit";
 import { lotRoom, saleRoom } from "../realtime/events";
 import { db, User } from "../../models";
 import { liveFrom } from "./bidding";
+import { releaseDue } from "./escrow";
+import { invoiceSoldLot } from "./invoices";
 import { notify } from "./notices";
 import { paddlesOf } from "./paddles";
 
@@ -62,6 +64,7 @@ export async function closeSaleLot(saleLotId: string): Promise<"closed" | "alrea
   const leaderId = row.state.leader?.bidderId;
   const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId])).get(leaderId) ?? null : null;
   emitTo([lotRoom(row.id), saleRoom(row.sale_id)], "lot.closed", liveFrom(row, paddle));
+  if (outcome.phase === "sold") await invoiceSoldLot(row.id).catch((e: Error) => console.error("[invoice] failed; the sweeper retries", e.message));
   await closingMail(row, outcome).catch((e: Error) => console.error("[mail] closing notice failed", e.message));
   return "closed";
 }
@@ -93,6 +96,12 @@ export async function sweepDueLots(): Promise<number> {
     { type: QueryTypes.SELECT },
   );
   for (const d of due) await scheduleClose(d.id, d.closes_at);
+  // A sold lot whose invoice was not written (a crash between the two) is invoiced now.
+  const uninvoiced = await db().query<{ id: string }>(
+    `SELECT sl.id FROM sale_lots sl WHERE sl.phase = 'sold' AND NOT EXISTS (SELECT 1 FROM invoices i WHERE i.sale_lot_id = sl.id) LIMIT 50`,
+    { type: QueryTypes.SELECT },
+  );
+  for (const u of uninvoiced) await invoiceSoldLot(u.id);
   return due.length;
 }
 
@@ -104,7 +113,10 @@ export async function startClosingWorker(): Promise<() => void> {
     for (const job of jobs) await closeSaleLot(job.data.saleLotId);
   });
   await sweepDueLots();
-  const timer = setInterval(() => void sweepDueLots().catch((e: Error) => console.error("[close] sweep failed", e.message)), 10_000);
+  const timer = setInterval(() => {
+    void sweepDueLots().catch((e: Error) => console.error("[close] sweep failed", e.message));
+    void releaseDue().catch((e: Error) => console.error("[escrow] sweep failed", e.message));
+  }, 10_000);
   timer.unref();
   return () => clearInterval(timer);
 }

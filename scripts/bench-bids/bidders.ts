@@ -90,13 +90,13 @@ function record(ledger: Ledger, phase: string, dealer: number, key: string, sent
  * minimum any answer has shown), with a fresh key, as fast as answers come
  * back, until the deadline. Returns when every request has been answered.
  */
-export async function saturate(client: BidClient, ledger: Ledger, dealers: number, seconds: number, phase = "saturation"): Promise<{ elapsedMs: number; sent: number }> {
+export async function saturate(client: BidClient, ledger: Ledger, dealers: number, seconds: number, phase = "saturation", abort: () => boolean = () => false): Promise<{ elapsedMs: number; sent: number }> {
   const start = now();
   const deadline = start + seconds * 1000;
   let sent = 0;
   let lastAnswer = start;
   const loop = async (dealer: number) => {
-    while (now() < deadline) {
+    while (now() < deadline && !abort()) {
       const key = `bench-${randomUUID()}`;
       const amount = ledger.minimumCents;
       ledger.sent.set(key, { bidder: dealer, answered: false });
@@ -115,12 +115,14 @@ export async function saturate(client: BidClient, ledger: Ledger, dealers: numbe
 
 /**
  * Open loop: bids are sent on a fixed schedule (rate per second) whatever
- * the answers do, rotating over the dealers. Each bid's amount is one
- * increment above the previous one sent (or the highest minimum seen, if
- * that is higher), so bids arriving in order are each accepted at the
- * minimum. Records how late each send was against its schedule.
+ * the answers do, rotating over the dealers. Each bid's maximum is two
+ * increments above the previous one sent (or the highest minimum seen, if
+ * that is higher): bids arriving in order are each accepted as the new
+ * leader, and a bid overtaken in the server by the next one is still above
+ * the minimum and accepted (outbid by proxy) instead of refused. Records how
+ * late each send was against its schedule.
  */
-export async function openLoop(client: BidClient, ledger: Ledger, dealers: number, seconds: number, rate: number, incrementCents: number): Promise<{ sent: number; sendLagMs: number[] }> {
+export async function openLoop(client: BidClient, ledger: Ledger, dealers: number, seconds: number, rate: number, incrementCents: number, abort: () => boolean = () => false): Promise<{ sent: number; sendLagMs: number[] }> {
   const interval = 1000 / rate;
   const total = Math.max(1, Math.round(seconds * rate));
   const start = now() + 20;
@@ -136,7 +138,7 @@ export async function openLoop(client: BidClient, ledger: Ledger, dealers: numbe
         const dealer = i % dealers;
         nextAmount = Math.max(nextAmount, ledger.minimumCents);
         const amount = nextAmount;
-        nextAmount += incrementCents;
+        nextAmount += 2 * incrementCents;
         const key = `bench-${randomUUID()}`;
         ledger.sent.set(key, { bidder: dealer, answered: false });
         const sentAt = now();
@@ -144,11 +146,11 @@ export async function openLoop(client: BidClient, ledger: Ledger, dealers: numbe
         inflight.push(client.bid(dealer, amount, key).then((a) => record(ledger, "latency", dealer, key, sentAt, a)));
         i++;
       }
-      if (i >= total) return resolve();
+      if (i >= total || abort()) return resolve();
       setTimeout(tick, Math.max(0, start + i * interval - now()));
     };
     setTimeout(tick, Math.max(0, start - now()));
   });
   await Promise.all(inflight);
-  return { sent: total, sendLagMs };
+  return { sent: i, sendLagMs };
 }

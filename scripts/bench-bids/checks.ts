@@ -14,6 +14,8 @@ export function percentile(values: number[], p: number): number {
 export const round = (x: number, digits = 1) => (Number.isFinite(x) ? Math.round(x * 10 ** digits) / 10 ** digits : null);
 
 export type Audit = {
+  /** Accepted bids missing from some watcher or from the table (each bid once). */
+  lost: number;
   /** Accepted bids some watcher never received. */
   lostBroadcast: number;
   /** Accepted bids with no row (same seq and key) in the bids table. */
@@ -43,11 +45,15 @@ export function audit(accepted: Accepted[], receipts: Receipts, watchers: number
   const answeredSeqs = new Map<number, number>();
   let lostBroadcast = 0;
   let lostTable = 0;
+  let lost = 0;
   for (const a of accepted) {
     answeredSeqs.set(a.seq, (answeredSeqs.get(a.seq) ?? 0) + 1);
-    if (got(a.seq) < watchers) { lostBroadcast++; note(`seq ${a.seq} reached ${got(a.seq)} of ${watchers} watchers`); }
+    const notBroadcast = got(a.seq) < watchers;
     const row = bySeq.get(a.seq);
-    if (!row || row.idempotency_key !== a.key) { lostTable++; note(`seq ${a.seq} (key ${a.key}) is not in the bids table`); }
+    const notStored = !row || row.idempotency_key !== a.key;
+    if (notBroadcast) { lostBroadcast++; note(`seq ${a.seq} reached ${got(a.seq)} of ${watchers} watchers`); }
+    if (notStored) { lostTable++; note(`seq ${a.seq} (key ${a.key}) is not in the bids table`); }
+    if (notBroadcast || notStored) lost++;
   }
   let dupAnswers = 0;
   for (const [seq, n] of answeredSeqs) if (n > 1) { dupAnswers += n - 1; note(`seq ${seq} answered as accepted ${n} times`); }
@@ -68,5 +74,5 @@ export function audit(accepted: Accepted[], receipts: Receipts, watchers: number
   for (let i = 0; i < receipts.counts.length; i++) if (receipts.counts[i]! > 0 && !bySeq.has(receipts.from + i)) phantom++;
   if (phantom) note(`${phantom} broadcast seqs have no bids row`);
 
-  return { lostBroadcast, lostTable, dupBroadcast, dupAnswers, dupKeys: table.dupKeys, gaps: gaps + (table.lotSeq !== maxSeq ? 1 : 0), unanswered, phantom, examples };
+  return { lost, lostBroadcast, lostTable, dupBroadcast, dupAnswers, dupKeys: table.dupKeys, gaps: gaps + (table.lotSeq !== maxSeq ? 1 : 0), unanswered, phantom, examples };
 }

@@ -15,6 +15,10 @@ export type Receipts = {
   /** Extra copies of each seq received by a watcher that already had it. */
   dupes: number[];
   maxSeq: number;
+  /** Arrivals with a seq below one the same watcher already had (broadcasts overtaking each other). */
+  outOfOrder: number;
+  /** Arrivals that skipped seqs the watcher had not seen yet (a client following the seq rule would refetch). */
+  jumps: number;
   disconnects: number;
   connectErrors: number;
   /** lot.bid events for other lots (expected 0). */

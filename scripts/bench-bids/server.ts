@@ -19,15 +19,34 @@ export async function freePort(from = 3300, to = 3399, skip: number[] = []): Pro
   throw new Error(`no free port in ${from}-${to}`);
 }
 
-/** Build once if the lead's build is missing (`npx next build`, bounded to 10 minutes). */
-export function ensureBuild(cwd: string, log: (m: string) => void): void {
-  if (fs.existsSync(path.join(cwd, ".next", "BUILD_ID"))) return;
+/**
+ * Build once if the lead's build is missing (`npx next build`, bounded to 10
+ * minutes). When someone else's build is running, wait for its BUILD_ID instead.
+ */
+export async function ensureBuild(cwd: string, log: (m: string) => void): Promise<void> {
+  const id = path.join(cwd, ".next", "BUILD_ID");
+  if (fs.existsSync(id)) return;
   log("no production build in .next: running `npx next build` (takes ~30 s)");
-  const r = spawnSync("npx", ["next", "build"], { cwd, stdio: "inherit", timeout: 600_000 });
-  if (r.status !== 0) throw new Error(`next build failed (${r.status ?? r.signal})`);
+  const r = spawnSync("npx", ["next", "build"], { cwd, encoding: "utf8", timeout: 600_000, maxBuffer: 64 * 1024 * 1024 });
+  const out = `${r.stdout ?? ""}${r.stderr ?? ""}`;
+  if (r.status === 0) return;
+  if (/Another next build process is already running/.test(out)) {
+    log("another next build is running: waiting up to 10 minutes for .next/BUILD_ID");
+    const deadline = Date.now() + 600_000;
+    while (Date.now() < deadline) {
+      if (fs.existsSync(id)) return;
+      await new Promise((res) => setTimeout(res, 2_000));
+    }
+    throw new Error("the other next build did not finish within 10 minutes");
+  }
+  throw new Error(`next build failed (${r.status ?? r.signal}):\n${out.slice(-3000)}`);
 }
 
-export type AppServer = { port: number; child: ChildProcess; logFile: string; stop: () => Promise<void> };
+export type AppServer = {
+  port: number; child: ChildProcess; logFile: string; stop: () => Promise<void>;
+  /** How the app ended if it is no longer running ("SIGTERM", "1"), or null while it runs. */
+  exited: () => string | null;
+};
 
 /**
  * Start `node --import tsx server/index.ts` in production mode on `port`,
@@ -58,10 +77,16 @@ export async function startServer(opts: {
   });
   fs.closeSync(out);
   let exited: string | null = null;
-  const exit = new Promise<void>((resolve) => child.once("exit", (code, signal) => { exited = `${code ?? signal}`; resolve(); }));
+  let stopping = false;
+  const exit = new Promise<void>((resolve) => child.once("exit", (code, signal) => {
+    exited = `${code ?? signal}`;
+    if (!stopping) console.error(`bench-bids: the app under test exited by itself or was stopped from outside (${exited}); see ${opts.logFile}`);
+    resolve();
+  }));
 
   const stop = async () => {
     if (exited !== null) return;
+    stopping = true;
     child.kill("SIGTERM");
     const t = setTimeout(() => { if (exited === null) child.kill("SIGKILL"); }, 15_000);
     await exit;
@@ -80,5 +105,5 @@ export async function startServer(opts: {
     if (status === 200) break;
     await new Promise((r) => setTimeout(r, 250));
   }
-  return { port: opts.port, child, logFile: opts.logFile, stop };
+  return { port: opts.port, child, logFile: opts.logFile, stop, exited: () => exited };
 }

@@ -5,6 +5,7 @@ import { encode } from "next-auth/jwt";
 import pg from "pg";
 import { flatLadder } from "../../lib/auction/increments";
 import { initialProxyState } from "../../lib/auction/proxy";
+import type { Role } from "../../lib/auth/roles";
 
 /** Where the private cluster listens (see scripts/db.sh). */
 export const CLUSTER = { host: "127.0.0.1", port: 54329, user: "app" } as const;
@@ -13,7 +14,7 @@ export const CLUSTER = { host: "127.0.0.1", port: 54329, user: "app" } as const;
 export const OPENING_CENTS = 100;
 export const INCREMENT_CENTS = 100;
 
-export type BenchUser = { id: string; email: string; name: string; roles: string[] };
+export type BenchUser = { id: string; email: string; name: string; roles: Role[] };
 export type Seeded = {
   saleId: string;
   /** The lot the app is benchmarked on. */
@@ -82,7 +83,7 @@ export async function seed(url: string, dealers: number, watchers: number): Prom
   await c.connect();
   try {
     const now = new Date();
-    const user = (kind: string, i: number, roles: string[]): BenchUser => {
+    const user = (kind: string, i: number, roles: Role[]): BenchUser => {
       const n = String(i + 1).padStart(3, "0");
       return { id: randomUUID(), email: `bench-${kind}-${n}@bench.getterline.test`, name: `Bench ${kind} ${n}`, roles };
     };

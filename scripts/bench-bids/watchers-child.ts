@@ -43,12 +43,15 @@ let disconnects = 0;
 let connectErrors = 0;
 let otherEvents = 0;
 let maxSeq = 0;
+let outOfOrder = 0;
+let jumps = 0;
 
 async function startAll(url: string, saleLotId: string, cookies: string[], batch: number): Promise<void> {
   const room = `lot:${saleLotId}`;
   const started = now();
   const one = (cookie: string) => new Promise<void>((resolve, reject) => {
     const seen = new SeqSet();
+    let highest = -1;
     const s = connect(url, {
       path: "/socket.io", transports: ["websocket"], forceNew: true, reconnection: true, reconnectionDelay: 200,
       extraHeaders: { cookie }, timeout: 20_000,
@@ -75,6 +78,9 @@ async function startAll(url: string, saleLotId: string, cookies: string[], batch
       grow(seq);
       if (seq > maxSeq) maxSeq = seq;
       if (seen.add(seq)) { dupes[seq]!++; return; }
+      if (highest >= 0 && seq < highest) outOfOrder++;
+      else if (highest >= 0 && seq > highest + 1) jumps++;
+      if (seq > highest) highest = seq;
       counts[seq]!++;
       if (at > lastArrival[seq]!) lastArrival[seq] = at;
     });
@@ -94,7 +100,7 @@ process.on("message", (m: FromParent) => {
       counts: Array.from(counts.subarray(m.from, m.from + n)),
       lastArrival: Array.from(lastArrival.subarray(m.from, m.from + n)),
       dupes: Array.from(dupes.subarray(m.from, m.from + n)),
-      maxSeq, disconnects, connectErrors, otherEvents, connected: sockets.filter((s) => s.connected).length,
+      maxSeq, outOfOrder, jumps, disconnects, connectErrors, otherEvents, connected: sockets.filter((s) => s.connected).length,
     });
   } else if (m.type === "stop") {
     for (const s of sockets) s.disconnect();

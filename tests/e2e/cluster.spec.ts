@@ -13,7 +13,7 @@ const base = (p: number) => `http://localhost:${p}`;
 
 function startInstance(port: number): ChildProcess {
   return spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
-    env: { ...process.env, NODE_ENV: "production", PORT: String(port), NEXTAUTH_URL: base(port), DATABASE_URL: DB, SMTP_PORT: "2525", MAIL_CATCHER_URL: "http://127.0.0.1:2580", S3_ENDPOINT: "http://127.0.0.1:4589", DEMO_LIVE: "0" },
+    env: { ...process.env, NODE_ENV: "production", PORT: String(port), NEXTAUTH_URL: base(port), DATABASE_URL: DB, SMTP_PORT: "2525", MAIL_CATCHER_URL: "http://127.0.0.1:2580", S3_ENDPOINT: "http://127.0.0.1:4589", STRIPE_API_PORT: "12121", DEMO_LIVE: "0" },
     stdio: "ignore",
   });
 }

@@ -1,0 +1,110 @@
+import { QueryTypes } from "sequelize";
+import type { Viewer } from "../auth/guards";
+import { ApiError } from "../api/errors";
+import { env } from "../config/env";
+import { sendMail } from "../mail/mailer";
+import { formatCents } from "../money/cents";
+import { inspectionWindowEnd } from "../money/inspection";
+import { escrowReleasedEntries, payoutSentEntries } from "../money/ledger";
+import { stripe, stripeConfig } from "../stripe/client";
+import { db, User } from "../../models";
+import type { InvoiceRow } from "./invoices";
+import { post } from "./ledger";
+
+/** Move an invoice from one state to the next under its row lock; 409 from any other state. */
+async function step(invoiceId: string, from: string, fn: (inv: InvoiceRow, t: import("sequelize").Transaction) => Promise<void>) {
+  const s = db();
+  return s.transaction(async (t) => {
+    const [inv] = await s.query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
+    if (!inv) throw new ApiError("not_found", "No such invoice");
+    if (inv.state !== from) throw new ApiError("conflict", `The invoice is ${inv.state}, not ${from}`);
+    await fn(inv, t);
+    return inv;
+  });
+}
+
+/** The house records the shipment (carrier and tracking number). */
+export async function markShipped(invoiceId: string, carrier: string, tracking: string): Promise<void> {
+  const inv = await step(invoiceId, "paid-held", async (_i, t) => {
+    await db().query(`UPDATE invoices SET state = 'shipped', carrier = :carrier, tracking = :tracking, shipped_at = now(), updated_at = now() WHERE id = :invoiceId`, { replacements: { carrier, tracking, invoiceId }, transaction: t });
+  });
+  await mailParty(inv.buyer_id, "Your tubes are on their way", `Your lot (invoice ${inv.number}) has shipped with ${carrier}, tracking ${tracking}.`);
+}
+
+/** The house records delivery; the inspection window starts (house setting: 7 days + 1 per 25 tubes, at most 21). */
+export async function markDelivered(invoiceId: string): Promise<Date> {
+  let ends = new Date();
+  const inv = await step(invoiceId, "shipped", async (i, t) => {
+    ends = new Date(inspectionWindowEnd(Date.now(), i.tube_count));
+    await db().query(`UPDATE invoices SET state = 'delivered', delivered_at = now(), inspection_ends_at = :ends, updated_at = now() WHERE id = :invoiceId`, { replacements: { ends, invoiceId }, transaction: t });
+  });
+  await mailParty(inv.buyer_id, "Delivered: your inspection window is open",
+    `Invoice ${inv.number} is marked delivered. Inspect and test the tubes by ${ends.toUTCString()}; open a claim before then if anything is not as listed. Otherwise the house pays the consignor at the end of the window.`);
+  return ends;
+}
+
+/** The buyer accepts the lot before the window ends: release at once. */
+export async function acceptDelivery(viewer: Viewer, invoiceId: string): Promise<void> {
+  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+  if (!inv || inv.buyer_id !== viewer.id) throw new ApiError("not_found", "No such invoice");
+  await release(invoiceId, "accepted by the buyer");
+}
+
+async function payoutAccount(userId: string): Promise<string> {
+  const [row] = await db().query<{ stripe_account_id: string }>(`SELECT stripe_account_id FROM payout_accounts WHERE user_id = :userId`, { replacements: { userId }, type: QueryTypes.SELECT });
+  if (row) return row.stripe_account_id;
+  const user = await User.findByPk(userId, { attributes: ["email", "displayName"] });
+  const acct = await stripe().accounts.create(
+    { type: "custom", email: user?.email, capabilities: { transfers: { requested: true } }, metadata: { user_id: userId } },
+    { idempotencyKey: `payout-account:${userId}` },
+  );
+  await db().query(`INSERT INTO payout_accounts (user_id, stripe_account_id, created_at) VALUES (:userId, :acct, now()) ON CONFLICT (user_id) DO NOTHING`, { replacements: { userId, acct: acct.id } });
+  const [again] = await db().query<{ stripe_account_id: string }>(`SELECT stripe_account_id FROM payout_accounts WHERE user_id = :userId`, { replacements: { userId }, type: QueryTypes.SELECT });
+  return again!.stripe_account_id;
+}
+
+/**
+ * Release escrow: transfer the consignor's payout (hammer − commission) to
+ * their connected account with a key tied to the invoice, then, in one
+ * transaction, post the release and the payout and mark the invoice released.
+ * A retry finds the same transfer and posts nothing twice.
+ */
+export async function release(invoiceId: string, why: string): Promise<boolean> {
+  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+  if (!inv) throw new ApiError("not_found", "No such invoice");
+  if (inv.state === "released") return false;
+  if (inv.state !== "delivered") throw new ApiError("conflict", `The invoice is ${inv.state}; escrow is released only after delivery`);
+  const payout = inv.hammer_cents - inv.commission_cents;
+  const account = await payoutAccount(inv.consignor_id);
+  const transfer = await stripe().transfers.create(
+    { amount: payout, currency: stripeConfig().CURRENCY, destination: account, transfer_group: `invoice:${inv.id}`, metadata: { invoice_id: inv.id } },
+    { idempotencyKey: `invoice:${inv.id}:release` },
+  );
+  const released = await db().transaction(async (t) => {
+    const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
+    if (!locked || locked.state !== "delivered") return false;
+    await post(t, "escrow-released", invoiceId, escrowReleasedEntries({ hammerCents: inv.hammer_cents, premiumCents: inv.premium_cents, commissionCents: inv.commission_cents }));
+    await post(t, "payout-sent", invoiceId, payoutSentEntries(payout), transfer.id);
+    await db().query(`UPDATE invoices SET state = 'released', released_at = now(), transfer_id = :tr, updated_at = now() WHERE id = :invoiceId`, { replacements: { tr: transfer.id, invoiceId }, transaction: t });
+    return true;
+  });
+  if (released) {
+    await mailParty(inv.consignor_id, "You have been paid",
+      `Escrow for invoice ${inv.number} is released (${why}). ${formatCents(payout)} is on its way to your payout account: hammer ${formatCents(inv.hammer_cents)} less commission ${formatCents(inv.commission_cents)}.\nStatement: ${env().NEXTAUTH_URL}/statements/${inv.id}`);
+  }
+  return released;
+}
+
+/** Release every delivered invoice whose inspection window has ended without a claim. */
+export async function releaseDue(): Promise<number> {
+  const due = await db().query<{ id: string }>(`SELECT id FROM invoices WHERE state = 'delivered' AND inspection_ends_at <= now() LIMIT 50`, { type: QueryTypes.SELECT });
+  let n = 0;
+  for (const d of due) if (await release(d.id, "inspection window ended").catch((e: Error) => { console.error("[escrow] release failed", e.message); return false; })) n++;
+  return n;
+}
+
+async function mailParty(userId: string, subject: string, body: string): Promise<void> {
+  const u = await User.findByPk(userId, { attributes: ["email", "displayName"] });
+  if (!u) return;
+  await sendMail({ to: u.email, subject, text: `Hello ${u.displayName},\n\n${body}\n\nGetterline Exchange` }).catch((e: Error) => console.error("[mail]", e.message));
+}

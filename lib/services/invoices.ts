@@ -1,0 +1,130 @@
+import { randomUUID } from "node:crypto";
+import { QueryTypes } from "sequelize";
+import type { Viewer } from "../auth/guards";
+import { ApiError } from "../api/errors";
+import { env } from "../config/env";
+import { sendMail } from "../mail/mailer";
+import { formatCents } from "../money/cents";
+import { DEFAULT_COMMISSION_TIERS, DEFAULT_FEE_SCHEDULE, invoiceFor, sellersCommissionCents } from "../money/fees";
+import { invoiceIssuedEntries } from "../money/ledger";
+import { DEFAULT_SHIPPING_TABLE, shippingQuote } from "../money/shipping";
+import { db, User } from "../../models";
+import { post } from "./ledger";
+
+/** House settings for invoices (our own figures; see lib/money for the rules). */
+export const INVOICE_SETTINGS = {
+  dueDays: 7,
+  /** Packed weight per tube, grams: the tube, its box and cushioning [SUG, house figure]. */
+  gramsPerTube: 60,
+  zone: "home",
+};
+
+/** Shipping for a lot: parcels of at most the table's heaviest band, each priced by our table. */
+export function shippingFor(tubes: number): number {
+  const maxParcel = DEFAULT_SHIPPING_TABLE.bands[DEFAULT_SHIPPING_TABLE.bands.length - 1]!.upToGrams;
+  let grams = Math.max(1, tubes) * INVOICE_SETTINGS.gramsPerTube;
+  let cents = 0;
+  while (grams > 0) {
+    const parcel = Math.min(grams, maxParcel);
+    const q = shippingQuote(DEFAULT_SHIPPING_TABLE, parcel, INVOICE_SETTINGS.zone);
+    if (q.kind !== "rate") throw new Error(`shipping table cannot price ${parcel} g to ${INVOICE_SETTINGS.zone}`);
+    cents += q.cents;
+    grams -= parcel;
+  }
+  return cents;
+}
+
+export type InvoiceRow = {
+  id: string; number: string; sale_lot_id: string; lot_id: string; buyer_id: string; consignor_id: string; state: string;
+  hammer_cents: number; premium_bp: number; premium_cents: number; shipping_cents: number; tax_cents: number; total_cents: number;
+  commission_cents: number; processor_fee_cents: number | null; tube_count: number; due_at: Date; payment_intent_id: string | null;
+  last_payment_error: string | null; paid_at: Date | null; carrier: string | null; tracking: string | null; shipped_at: Date | null;
+  delivered_at: Date | null; inspection_ends_at: Date | null; released_at: Date | null; transfer_id: string | null; created_at: Date;
+};
+
+/**
+ * Invoice a sold lot once: hammer, buyer's premium (house rate), shipping
+ * from our weight-band table, tax where configured; the commission is fixed
+ * now from the house's tiers. Posts the invoice to the ledger in the same
+ * transaction and e-mails the buyer. Calling it again changes nothing.
+ */
+export async function invoiceSoldLot(saleLotId: string): Promise<string | null> {
+  const s = db();
+  const created = await s.transaction(async (t) => {
+    const [sl] = await s.query<{ id: string; lot_id: string; buyer_id: string | null; consignor_id: string; hammer_cents: number | null; phase: string; tubes: string }>(
+      `SELECT sl.id, sl.lot_id, sl.buyer_id, sl.consignor_id, sl.hammer_cents, sl.phase,
+              (SELECT COALESCE(SUM(quantity), 0) FROM lot_items WHERE lot_id = sl.lot_id) AS tubes
+         FROM sale_lots sl WHERE sl.id = :saleLotId FOR UPDATE`,
+      { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
+    );
+    if (!sl || sl.phase !== "sold" || !sl.buyer_id || sl.hammer_cents == null) return null;
+    const [existing] = await s.query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t });
+    if (existing) return null;
+    const tubes = Number(sl.tubes);
+    const shippingCents = shippingFor(tubes);
+    const inv = invoiceFor({ hammerCents: sl.hammer_cents, shippingCents }, DEFAULT_FEE_SCHEDULE);
+    const commission = sellersCommissionCents(sl.hammer_cents, DEFAULT_COMMISSION_TIERS);
+    const id = randomUUID();
+    const [{ n }] = await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, { type: QueryTypes.SELECT, transaction: t }) as [{ n: string }];
+    await s.query(
+      `INSERT INTO invoices (id, number, sale_lot_id, lot_id, buyer_id, consignor_id, state, hammer_cents, premium_bp, premium_cents, shipping_cents, tax_cents, total_cents,
+                             commission_cents, tube_count, due_at, created_at, updated_at)
+       VALUES (:id, :number, :saleLotId, :lotId, :buyer, :consignor, 'awaiting-payment', :hammer, :bp, :premium, :shipping, :tax, :total, :commission, :tubes,
+               now() + (:dueDays || ' days')::interval, now(), now())`,
+      {
+        replacements: {
+          id, number: `GL-${new Date().getUTCFullYear()}-${n}`, saleLotId, lotId: sl.lot_id, buyer: sl.buyer_id, consignor: sl.consignor_id,
+          hammer: inv.hammerCents, bp: DEFAULT_FEE_SCHEDULE.buyersPremiumBp, premium: inv.premiumCents, shipping: inv.shippingCents, tax: inv.taxCents,
+          total: inv.totalCents, commission, tubes, dueDays: String(INVOICE_SETTINGS.dueDays),
+        },
+        transaction: t,
+      },
+    );
+    await post(t, "invoice-issued", id, invoiceIssuedEntries(inv));
+    return { id, buyerId: sl.buyer_id, total: inv.totalCents };
+  });
+  if (!created) return null;
+  const buyer = await User.findByPk(created.buyerId, { attributes: ["email", "displayName"] });
+  if (buyer) {
+    await sendMail({
+      to: buyer.email, subject: "Your Getterline invoice",
+      text: `Hello ${buyer.displayName},\n\nYour invoice for the lot you won is ready: ${formatCents(created.total)} due within ${INVOICE_SETTINGS.dueDays} days.\nThe house holds your payment until you have received and inspected the tubes.\n\nPay: ${env().NEXTAUTH_URL}/invoices/${created.id}\n\nGetterline Exchange`,
+    }).catch((e: Error) => console.error("[mail] invoice failed", e.message));
+  }
+  return created.id;
+}
+
+/** One invoice, for its buyer, its consignor (without buyer details) or the house. */
+export async function getInvoice(viewer: Viewer, invoiceId: string) {
+  const [inv] = await db().query<InvoiceRow & { title: string; sale_id: string }>(
+    `SELECT i.*, l.title, sl.sale_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id WHERE i.id = :invoiceId`,
+    { replacements: { invoiceId }, type: QueryTypes.SELECT },
+  );
+  const house = viewer.roles.includes("admin");
+  if (!inv || !(house || inv.buyer_id === viewer.id || inv.consignor_id === viewer.id)) throw new ApiError("not_found", "No such invoice");
+  return presentInvoice(inv, viewer);
+}
+
+export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: string }, viewer: Viewer) {
+  const buyerView = viewer.roles.includes("admin") || inv.buyer_id === viewer.id;
+  return {
+    id: inv.id, number: inv.number, title: inv.title ?? "", saleId: inv.sale_id, saleLotId: inv.sale_lot_id, lotId: inv.lot_id, state: inv.state,
+    hammerCents: inv.hammer_cents, premiumBp: inv.premium_bp, premiumCents: inv.premium_cents, shippingCents: inv.shipping_cents, taxCents: inv.tax_cents,
+    totalCents: inv.total_cents, tubeCount: inv.tube_count, dueAt: inv.due_at.toISOString(), paidAt: inv.paid_at?.toISOString() ?? null,
+    carrier: inv.carrier, tracking: inv.tracking, shippedAt: inv.shipped_at?.toISOString() ?? null, deliveredAt: inv.delivered_at?.toISOString() ?? null,
+    inspectionEndsAt: inv.inspection_ends_at?.toISOString() ?? null, releasedAt: inv.released_at?.toISOString() ?? null,
+    lastPaymentError: buyerView ? inv.last_payment_error : null, isBuyer: inv.buyer_id === viewer.id, isConsignor: inv.consignor_id === viewer.id,
+    commissionCents: buyerView && !viewer.roles.includes("admin") ? undefined : inv.commission_cents,
+  };
+}
+
+/** Invoices the viewer is party to (the house sees all). */
+export async function listInvoices(viewer: Viewer) {
+  const house = viewer.roles.includes("admin");
+  const rows = await db().query<InvoiceRow & { title: string; sale_id: string }>(
+    `SELECT i.*, l.title, sl.sale_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id
+      ${house ? "" : "WHERE i.buyer_id = :me OR i.consignor_id = :me"} ORDER BY i.created_at DESC LIMIT 500`,
+    { replacements: { me: viewer.id }, type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => presentInvoice(r, viewer));
+}

@@ -1,0 +1,134 @@
+import { QueryTypes } from "sequelize";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { ApiError } from "../../lib/api/errors";
+import { DEFAULT_COMMISSION_TIERS, sellersCommissionCents } from "../../lib/money/fees";
+import { placeMaxBid } from "../../lib/services/bidding";
+import { markDelivered, markShipped, releaseDue } from "../../lib/services/escrow";
+import { balances, trialBalance } from "../../lib/services/ledger";
+import { closeSaleLot } from "../../lib/services/lot-closing";
+import { payInvoice } from "../../lib/services/payments";
+import { reconcile } from "../../lib/services/reconcile";
+import { createSale } from "../../lib/services/sales";
+import { statementCsv, statementFor } from "../../lib/services/statements";
+import { db } from "../../models";
+import { startTestStripe, type TestStripe } from "../setup/stripe";
+import { approvedLot, makeUser, viewerOf } from "../support/factories";
+
+let fake: TestStripe;
+const logged: string[] = [];
+beforeAll(async () => {
+  fake = await startTestStripe();
+  for (const k of ["log", "warn", "error", "info"] as const) {
+    const orig = console[k];
+    vi.spyOn(console, k).mockImplementation((...a: unknown[]) => { logged.push(a.map(String).join(" ")); orig(...(a as [])); });
+  }
+});
+afterAll(async () => { vi.restoreAllMocks(); await fake.stop(); });
+
+const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000): Promise<T> => {
+  const end = Date.now() + ms;
+  let v = await fn();
+  while (!ok(v) && Date.now() < end) { await new Promise((r) => setTimeout(r, 100)); v = await fn(); }
+  return v;
+};
+const invoice = async (id: string) => (await db().query<{ state: string; total_cents: number; hammer_cents: number; premium_cents: number; shipping_cents: number; commission_cents: number; processor_fee_cents: number | null; last_payment_error: string | null; payment_intent_id: string | null }>(
+  `SELECT * FROM invoices WHERE id = :id`, { replacements: { id }, type: QueryTypes.SELECT }))[0]!;
+
+async function soldLot(hammerMaxes: [number, number]) {
+  const admin = await makeUser(["admin"]);
+  const consignor = await makeUser(["consignor"]);
+  const lot = await approvedLot(consignor, admin, 2_000);
+  const sale = await createSale(viewerOf(admin), { title: "Escrow test", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 2_500).toISOString(), gapSeconds: 30, softCloseSeconds: 1, lots: [{ lotId: lot.id, openingCents: 1_000 }] });
+  const [sl] = await db().query<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, { replacements: { id: sale.id }, type: QueryTypes.SELECT });
+  const buyer = await makeUser(["dealer"]);
+  const under = await makeUser(["dealer"]);
+  await placeMaxBid(viewerOf(buyer), sl!.id, hammerMaxes[0], "e-1");
+  await placeMaxBid(viewerOf(under), sl!.id, hammerMaxes[1], "e-2");
+  await new Promise((r) => setTimeout(r, 2_700));
+  expect(await closeSaleLot(sl!.id)).toBe("closed");
+  const [inv] = await db().query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, { replacements: { id: sl!.id }, type: QueryTypes.SELECT });
+  return { invoiceId: inv!.id, buyer, consignor, saleId: sale.id };
+}
+
+describe("escrow through the Stripe SDK against the local fake", () => {
+  it("walks invoice → declined → paid and held → shipped → delivered → released, balanced at every step", async () => {
+    const { invoiceId, buyer, consignor, saleId } = await soldLot([3_000, 2_500]);
+    const i0 = await invoice(invoiceId);
+    // Hammer: 2,500 + one increment ($2 from $20, house 1-2-5 ladder) = 2,700 [CTP proxy rule].
+    expect(i0.hammer_cents).toBe(2_700);
+    expect(i0.premium_cents).toBe(270); // 10 % buyer's premium, the house rate [SUG]
+    expect(i0.commission_cents).toBe(sellersCommissionCents(2_700, DEFAULT_COMMISSION_TIERS)); // 20 % under $500 [SUG tiers]
+    expect(i0.commission_cents).toBe(540);
+    expect(i0.total_cents).toBe(i0.hammer_cents + i0.premium_cents + i0.shipping_cents);
+    expect(await trialBalance()).toBe(0);
+
+    const card = { expMonth: 12, expYear: 2030, cvc: "123" };
+    const declined = await payInvoice(viewerOf(buyer), invoiceId, { ...card, number: "4000000000000002", attemptKey: "attempt-decline" }).catch((e) => e);
+    expect(declined).toBeInstanceOf(ApiError);
+    expect((declined as ApiError).code).toBe("conflict");
+    expect((await invoice(invoiceId)).state).toBe("awaiting-payment");
+
+    const ok = await payInvoice(viewerOf(buyer), invoiceId, { ...card, number: "4242 4242 4242 4242", attemptKey: "attempt-good" });
+    expect(ok.status).toBe("succeeded");
+    const paid = await until(() => invoice(invoiceId), (i) => i.state === "paid-held");
+    expect(paid.state).toBe("paid-held");
+    expect(paid.processor_fee_cents).toBeGreaterThan(0);
+    expect(await trialBalance()).toBe(0);
+
+    // The same event delivered three more times changes nothing.
+    const entries = async () => Number((await db().query<{ n: string }>(`SELECT COUNT(*) AS n FROM ledger_entries WHERE invoice_id = :id`, { replacements: { id: invoiceId }, type: QueryTypes.SELECT }))[0]!.n);
+    const before = await entries();
+    const evt = fake.received.at(-1)!;
+    for (let k = 0; k < 3; k++) await fetch(`${fake.url}/_fake/events/${evt}/redeliver`, { method: "POST" });
+    await new Promise((r) => setTimeout(r, 800));
+    expect(await entries()).toBe(before);
+    expect((await invoice(invoiceId)).state).toBe("paid-held");
+
+    await markShipped(invoiceId, "Demo Parcel Co.", "DP123456789");
+    await markDelivered(invoiceId);
+    expect(await releaseDue()).toBe(0); // the inspection window is still open
+    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: invoiceId } }); // the clock moves past the window
+    expect(await releaseDue()).toBe(1);
+    expect((await invoice(invoiceId)).state).toBe("released");
+    expect(await releaseDue()).toBe(0);
+
+    const b = await balances(invoiceId);
+    expect(b["escrow-held"]).toBe(0);
+    expect(b["consignor-payable"]).toBe(0);
+    expect(b["house-revenue-premium"]).toBe(-270);
+    expect(b["house-revenue-commission"]).toBe(-540);
+    expect(await trialBalance()).toBe(0);
+
+    const st = await statementFor(viewerOf(consignor), saleId);
+    expect(st.totals.payoutCents).toBe(2_700 - 540);
+    expect(st.totals.paidOutCents).toBe(2_160);
+    expect(statementCsv(st)).toContain("21.60");
+
+    const rec = await reconcile();
+    expect(rec.differences).toEqual([]);
+  }, 60_000);
+
+  it("a card that asks for authentication is paid once the buyer authenticates", async () => {
+    const { invoiceId, buyer } = await soldLot([4_000, 3_000]);
+    const r = await payInvoice(viewerOf(buyer), invoiceId, { number: "4000002500003155", expMonth: 1, expYear: 2031, cvc: "999", attemptKey: "attempt-3ds" });
+    expect(r.status).toBe("requires_action");
+    const pi = (await invoice(invoiceId)).payment_intent_id!;
+    const auth = await fetch(`${fake.url}/_fake/payment_intents/${pi}/authenticate`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ outcome: "succeed" }) });
+    expect(auth.ok).toBe(true);
+    expect((await until(() => invoice(invoiceId), (i) => i.state === "paid-held")).state).toBe("paid-held");
+  }, 30_000);
+
+  it("keeps card numbers and the secret key out of our database and logs", async () => {
+    const cols = await db().query<{ table_name: string; column_name: string }>(
+      `SELECT table_name, column_name FROM information_schema.columns WHERE table_schema = 'public' AND data_type IN ('text', 'character varying', 'jsonb', 'json')`,
+      { type: QueryTypes.SELECT },
+    );
+    for (const needle of ["4242424242424242", "4000002500003155", "4000000000000002", process.env.STRIPE_SECRET_KEY!]) {
+      for (const c of cols) {
+        const [hit] = await db().query<{ n: number }>(`SELECT 1 AS n FROM "${c.table_name}" WHERE "${c.column_name}"::text LIKE :needle LIMIT 1`, { replacements: { needle: `%${needle}%` }, type: QueryTypes.SELECT });
+        expect(hit, `${needle.slice(0, 6)}… found in ${c.table_name}.${c.column_name}`).toBeUndefined();
+      }
+      expect(logged.some((l) => l.includes(needle))).toBe(false);
+    }
+  });
+});
