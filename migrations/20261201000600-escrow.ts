@@ -13,7 +13,7 @@ export async function up({ context: qi }: Ctx): Promise<void> {
   await qi.createTable("invoices", {
     id: { type: DataTypes.UUID, primaryKey: true },
     number: { type: DataTypes.STRING(24), allowNull: false, unique: true },
-    sale_lot_id: { type: DataTypes.UUID, allowNull: false, unique: true, references: { model: "sale_lots", key: "id" }, onDelete: "RESTRICT" },
+    sale_lot_id: { type: DataTypes.UUID, allowNull: false, references: { model: "sale_lots", key: "id" }, onDelete: "RESTRICT" },
     lot_id: { type: DataTypes.UUID, allowNull: false, references: { model: "lots", key: "id" }, onDelete: "RESTRICT" },
     buyer_id: { type: DataTypes.UUID, allowNull: false, references: { model: "users", key: "id" } },
     consignor_id: { type: DataTypes.UUID, allowNull: false, references: { model: "users", key: "id" } },
@@ -44,6 +44,9 @@ export async function up({ context: qi }: Ctx): Promise<void> {
   });
   await qi.sequelize.query(`ALTER TABLE invoices ADD CONSTRAINT invoices_state CHECK (state IN ('awaiting-payment','paid-held','shipped','delivered','released','disputed','refunded','cancelled'))`);
   await qi.sequelize.query(`ALTER TABLE invoices ADD CONSTRAINT invoices_money CHECK (hammer_cents >= 0 AND premium_cents >= 0 AND shipping_cents >= 0 AND tax_cents >= 0 AND total_cents = hammer_cents + premium_cents + shipping_cents + tax_cents)`);
+  // One live invoice per sold lot; a cancelled one may be followed by a second-chance invoice to the under-bidder.
+  await qi.sequelize.query(`CREATE UNIQUE INDEX invoices_one_live ON invoices (sale_lot_id) WHERE state <> 'cancelled'`);
+  await qi.addColumn("invoices", "second_chance", { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false });
   await qi.addIndex("invoices", ["state"]);
   await qi.addIndex("invoices", ["buyer_id"]);
   await qi.addIndex("invoices", ["consignor_id"]);

@@ -39,6 +39,8 @@ async function main(): Promise<void> {
 
   await startQueue(e.DATABASE_URL);
   const stopSweeper = await startClosingWorker();
+  const reconcileTimer = setInterval(() => void import("../lib/services/reconcile").then((m) => m.reconcile()).catch((err: Error) => console.error("[reconcile]", err.message)), 10 * 60_000);
+  reconcileTimer.unref();
   const stopDemo = process.env.DEMO_LIVE === "1" ? await (await import("./demo-live")).startDemoLife() : () => undefined;
 
   const upgrade = app.getUpgradeHandler();
@@ -53,7 +55,7 @@ async function main(): Promise<void> {
 
   const stopper = gracefulShutdown(server, {
     closeSockets: () => new Promise<void>((r) => { io.close(() => r()); }),
-    closers: [async () => { stopDemo(); stopSweeper(); }, () => stopQueue(), () => getSequelize().close(), () => pool.end()],
+    closers: [async () => { stopDemo(); stopSweeper(); clearInterval(reconcileTimer); }, () => stopQueue(), () => getSequelize().close(), () => pool.end()],
     log: (m) => console.log(`getterline: ${m}`),
   });
   const shutdown = async (signal: string) => {

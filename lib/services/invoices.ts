@@ -59,7 +59,7 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
     );
     if (!sl || sl.phase !== "sold" || !sl.buyer_id || sl.hammer_cents == null) return null;
     const [existing] = await s.query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t });
-    if (existing) return null;
+    if (existing) return null; // invoiced already (a second-chance invoice is written by offerToUnderbidder)
     const tubes = Number(sl.tubes);
     const shippingCents = shippingFor(tubes);
     const inv = invoiceFor({ hammerCents: sl.hammer_cents, shippingCents }, DEFAULT_FEE_SCHEDULE);
@@ -127,4 +127,27 @@ export async function listInvoices(viewer: Viewer) {
     { replacements: { me: viewer.id }, type: QueryTypes.SELECT },
   );
   return rows.map((r) => presentInvoice(r, viewer));
+}
+
+/**
+ * Reminders for unpaid invoices: one two days before the due date, one when
+ * it is overdue. Each is sent once (the count is kept on the invoice).
+ */
+export async function sendReminders(): Promise<number> {
+  const due = await db().query<{ id: string; number: string; buyer_id: string; total_cents: number; due_at: Date; reminders_sent: number }>(
+    `UPDATE invoices SET reminders_sent = reminders_sent + 1, updated_at = now()
+      WHERE state = 'awaiting-payment' AND ((reminders_sent = 0 AND due_at - interval '2 days' <= now()) OR (reminders_sent = 1 AND due_at <= now()))
+      RETURNING id, number, buyer_id, total_cents, due_at, reminders_sent`,
+    { type: QueryTypes.SELECT },
+  );
+  for (const inv of due) {
+    const u = await User.findByPk(inv.buyer_id, { attributes: ["email", "displayName"] });
+    if (!u) continue;
+    const overdue = inv.reminders_sent >= 2;
+    await sendMail({
+      to: u.email, subject: overdue ? `Overdue: invoice ${inv.number}` : `Reminder: invoice ${inv.number} is due soon`,
+      text: `Hello ${u.displayName},\n\nInvoice ${inv.number} for ${formatCents(inv.total_cents)} ${overdue ? "is now overdue; the house may cancel it and offer the lot to the under-bidder" : `is due on ${inv.due_at.toUTCString()}`}.\n\nPay: ${env().NEXTAUTH_URL}/invoices/${inv.id}\n\nGetterline Exchange`,
+    }).catch((e: Error) => console.error("[mail] reminder failed", e.message));
+  }
+  return due.length;
 }

@@ -10,7 +10,7 @@ import { lotRoom, saleRoom } from "../realtime/events";
 import { db, User } from "../../models";
 import { liveFrom } from "./bidding";
 import { releaseDue } from "./escrow";
-import { invoiceSoldLot } from "./invoices";
+import { invoiceSoldLot, sendReminders } from "./invoices";
 import { notify } from "./notices";
 import { paddlesOf } from "./paddles";
 
@@ -116,6 +116,7 @@ export async function startClosingWorker(): Promise<() => void> {
   const timer = setInterval(() => {
     void sweepDueLots().catch((e: Error) => console.error("[close] sweep failed", e.message));
     void releaseDue().catch((e: Error) => console.error("[escrow] sweep failed", e.message));
+    void sendReminders().catch((e: Error) => console.error("[invoice] reminders failed", e.message));
   }, 10_000);
   timer.unref();
   return () => clearInterval(timer);

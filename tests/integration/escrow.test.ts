@@ -132,3 +132,26 @@ describe("escrow through the Stripe SDK against the local fake", () => {
     }
   });
 });
+
+describe("unpaid invoices", () => {
+  it("reminds twice, then the house cancels and offers the lot to the under-bidder at their last bid", async () => {
+    const { sendReminders } = await import("../../lib/services/invoices");
+    const { cancelUnpaid } = await import("../../lib/services/second-chance");
+    const { invoiceId } = await soldLot([3_000, 2_500]);
+    await expect(cancelUnpaid(invoiceId, true)).rejects.toThrow(/not yet past its due date/);
+    await db().query(`UPDATE invoices SET due_at = now() - interval '1 minute' WHERE id = :id`, { replacements: { id: invoiceId } });
+    expect(await sendReminders()).toBeGreaterThanOrEqual(1); // due soon
+    expect(await sendReminders()).toBeGreaterThanOrEqual(1); // overdue
+    const [{ reminders_sent }] = await db().query<{ reminders_sent: number }>(`SELECT reminders_sent FROM invoices WHERE id = :id`, { replacements: { id: invoiceId }, type: QueryTypes.SELECT }) as [{ reminders_sent: number }];
+    expect(reminders_sent).toBe(2);
+    const r = await cancelUnpaid(invoiceId, true);
+    expect(r.newInvoiceId).toBeTruthy();
+    expect((await invoice(invoiceId)).state).toBe("cancelled");
+    const offer = await invoice(r.newInvoiceId!);
+    expect(offer.state).toBe("awaiting-payment");
+    expect(offer.hammer_cents).toBe(2_500); // the under-bidder's own maximum [brief §8 practice: offer at their last bid]
+    expect(await trialBalance()).toBe(0);
+    const b = await balances(invoiceId);
+    expect(b["buyer-receivable"]).toBe(0); // the cancelled invoice's posting is reversed
+  }, 30_000);
+});

@@ -12,6 +12,7 @@ export default async function HouseHome() {
       actions={[
         { href: "/house/review", title: "Review queue", text: "Submitted lots waiting for a decision: ask for changes, approve with an agreed reserve, or decline." },
         { href: "/house/sales/new", title: "Schedule a sale", text: "Offer approved lots in a live sale with staggered closing times." },
+        { href: "/house/finance", title: "Finance", text: "Invoices, escrow, the ledger and its reconciliation with the payment processor." },
         { href: "/house/users", title: "Accounts and roles", text: "Grant mediator and house roles; see who has joined." },
         { href: "/house/reference", title: "Reference data", text: "Correct the published figures readings are graded against; every change is kept." },
         { href: "/house/makers", title: "Maker registry", text: "Source codes and their makers; import from CSV with a preview." },

@@ -1,0 +1,15 @@
+import { notFound } from "next/navigation";
+import { InvoiceView } from "@/components/invoices/InvoiceView";
+import { ApiError } from "@/lib/api/errors";
+import { requirePageViewer } from "@/lib/auth/guards";
+import { getInvoice } from "@/lib/services/invoices";
+
+export const metadata = { title: "Invoice" };
+
+export default async function InvoicePage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const viewer = await requirePageViewer("account.read", `/invoices/${id}`);
+  if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
+  const inv = await getInvoice(viewer, id).catch((e) => { if (e instanceof ApiError && e.code === "not_found") notFound(); throw e; });
+  return <InvoiceView initial={inv} house={viewer.roles.includes("admin")} />;
+}

@@ -1,0 +1,91 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { FormAlert } from "@/components/forms/Field";
+import { apiFetch } from "@/lib/client/api";
+import { formatCents } from "@/lib/money/cents";
+import type { presentInvoice } from "@/lib/services/invoices";
+import { PayForm } from "./PayForm";
+import { INVOICE_STATE_WORDS } from "./words";
+
+type Invoice = ReturnType<typeof presentInvoice>;
+
+/** An invoice as its buyer, its consignor or the house sees it, refreshing while a payment is being confirmed. */
+export function InvoiceView({ initial, house }: { initial: Invoice; house: boolean }) {
+  const router = useRouter();
+  const { data: inv } = useQuery({
+    queryKey: ["invoice", initial.id],
+    queryFn: () => apiFetch<Invoice>(`/api/invoices/${initial.id}`),
+    initialData: initial,
+    refetchInterval: (q) => (q.state.data?.state === "awaiting-payment" ? 1500 : false),
+  });
+  const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
+  const [carrier, setCarrier] = useState("");
+  const [tracking, setTracking] = useState("");
+
+  async function act(path: string, json?: unknown) {
+    setMessage(null);
+    try {
+      await apiFetch(path, { method: "POST", json: json ?? {} });
+      router.refresh();
+      setMessage({ tone: "sound", text: "Done." });
+    } catch (e) {
+      setMessage({ tone: "fault", text: (e as Error).message });
+    }
+  }
+
+  const rows: [string, number][] = [
+    ["Hammer price", inv.hammerCents],
+    [`Buyer's premium (${inv.premiumBp / 100} %)`, inv.premiumCents],
+    ["Shipping", inv.shippingCents],
+    ...(inv.taxCents ? [["Sales tax", inv.taxCents] as [string, number]] : []),
+  ];
+  return (
+    <div className="space-y-5">
+      <header className="flex flex-wrap items-center gap-3">
+        <h1 className="text-2xl font-semibold">Invoice <span className="code">{inv.number}</span></h1>
+        <span data-testid="invoice-state" className="rounded-full border border-flash-300 bg-flash-100 px-2.5 py-0.5 text-xs font-medium">{INVOICE_STATE_WORDS[inv.state] ?? inv.state}</span>
+      </header>
+      <p className="text-flash-700">{inv.title} · {inv.tubeCount} tubes · due {inv.dueAt.slice(0, 10)}</p>
+      {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
+      <table className="card w-full max-w-lg text-sm">
+        <tbody>
+          {rows.map(([k, v]) => <tr key={k}><td className="py-1">{k}</td><td className="code py-1 text-right">{formatCents(v)}</td></tr>)}
+          <tr className="border-t border-flash-300 font-semibold"><td className="py-1">Total</td><td data-testid="invoice-total" className="code py-1 text-right">{formatCents(inv.totalCents)}</td></tr>
+          {inv.commissionCents != null ? <tr className="text-flash-600"><td className="py-1">Seller&apos;s commission (from the consignor&apos;s side)</td><td className="code py-1 text-right">{formatCents(inv.commissionCents)}</td></tr> : null}
+        </tbody>
+      </table>
+      {inv.lastPaymentError && inv.state === "awaiting-payment" ? <FormAlert>Last attempt: {inv.lastPaymentError}</FormAlert> : null}
+      {inv.isBuyer && inv.state === "awaiting-payment" ? <PayForm invoiceId={inv.id} totalText={formatCents(inv.totalCents)} /> : null}
+      <ol className="card space-y-1 text-sm">
+        <li>Paid: {inv.paidAt ? inv.paidAt.slice(0, 16).replace("T", " ") + " UTC" : "not yet"}</li>
+        <li>Shipped: {inv.shippedAt ? `${inv.shippedAt.slice(0, 10)} with ${inv.carrier}, tracking ${inv.tracking}` : "not yet"}</li>
+        <li>Delivered: {inv.deliveredAt ? inv.deliveredAt.slice(0, 10) : "not yet"}{inv.inspectionEndsAt ? ` · inspection window ends ${inv.inspectionEndsAt.slice(0, 16).replace("T", " ")} UTC` : ""}</li>
+        <li>Released to the consignor: {inv.releasedAt ? inv.releasedAt.slice(0, 10) : "not yet"}</li>
+      </ol>
+      {inv.isBuyer && inv.state === "delivered" ? (
+        <button type="button" className="btn-primary" onClick={() => void act(`/api/invoices/${inv.id}/accept`)}>I have inspected the tubes: release payment now</button>
+      ) : null}
+      {house && inv.state === "paid-held" ? (
+        <form className="card flex flex-wrap items-end gap-2" onSubmit={(e) => { e.preventDefault(); void act(`/api/house/invoices/${inv.id}/ship`, { carrier, tracking }); }} aria-label="Record the shipment">
+          <label className="text-sm"><span className="label">Carrier</span><input className="input mt-1" value={carrier} onChange={(e) => setCarrier(e.target.value)} /></label>
+          <label className="text-sm"><span className="label">Tracking number</span><input className="input mt-1" value={tracking} onChange={(e) => setTracking(e.target.value)} /></label>
+          <button type="submit" className="btn-primary">Mark shipped</button>
+        </form>
+      ) : null}
+      {house && inv.state === "awaiting-payment" && Date.parse(inv.dueAt) < Date.now() ? (
+        <div className="card flex flex-wrap items-center gap-2 text-sm">
+          <span>Unpaid past its due date.</span>
+          <button type="button" className="btn-quiet" onClick={() => void act(`/api/house/invoices/${inv.id}/cancel`, { offerToUnderbidder: false })}>Cancel the invoice</button>
+          <button type="button" className="btn-primary" onClick={() => void act(`/api/house/invoices/${inv.id}/cancel`, { offerToUnderbidder: true })}>Cancel and offer to the under-bidder</button>
+        </div>
+      ) : null}
+      {house && inv.state === "shipped" ? <button type="button" className="btn-primary" onClick={() => void act(`/api/house/invoices/${inv.id}/deliver`)}>Mark delivered</button> : null}
+      {(inv.isConsignor || house) && inv.saleId ? (
+        <p className="text-sm">Settlement statement for this sale: <a className="underline" href={`/api/statements/${inv.saleId}?format=pdf`}>PDF</a> · <a className="underline" href={`/api/statements/${inv.saleId}?format=csv`}>CSV</a></p>
+      ) : null}
+    </div>
+  );
+}

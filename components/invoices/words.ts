@@ -1,0 +1,11 @@
+/** Our own words for an invoice's way through escrow. */
+export const INVOICE_STATE_WORDS: Record<string, string> = {
+  "awaiting-payment": "Awaiting payment",
+  "paid-held": "Paid, held by the house",
+  shipped: "Shipped",
+  delivered: "Delivered, inspection open",
+  released: "Released to the consignor",
+  disputed: "In dispute",
+  refunded: "Refunded",
+  cancelled: "Cancelled",
+};
