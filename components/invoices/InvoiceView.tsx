@@ -1,6 +1,6 @@
 "use client";
 
-import { useQuery } from "@tanstack/react-query";
+import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
@@ -15,6 +15,7 @@ type Invoice = ReturnType<typeof presentInvoice>;
 /** An invoice as its buyer, its consignor or the house sees it, refreshing while a payment is being confirmed. */
 export function InvoiceView({ initial, house }: { initial: Invoice; house: boolean }) {
   const router = useRouter();
+  const qc = useQueryClient();
   const { data: inv } = useQuery({
     queryKey: ["invoice", initial.id],
     queryFn: () => apiFetch<Invoice>(`/api/invoices/${initial.id}`),
@@ -29,6 +30,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
     setMessage(null);
     try {
       await apiFetch(path, { method: "POST", json: json ?? {} });
+      await qc.invalidateQueries({ queryKey: ["invoice", initial.id] });
       router.refresh();
       setMessage({ tone: "sound", text: "Done." });
     } catch (e) {
