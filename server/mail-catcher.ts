@@ -13,7 +13,10 @@ const HTTP_PORT = Number(process.env.MAIL_CATCHER_HTTP_PORT ?? 1080);
 const DIR = path.resolve(process.env.MAIL_CATCHER_DIR ?? ".data/mail");
 mkdirSync(DIR, { recursive: true });
 
-type Stored = { id: string; to: string[]; from: string; subject: string; text: string; html: string | null; receivedAt: string };
+type Stored = {
+  id: string; to: string[]; from: string; subject: string; text: string; html: string | null; receivedAt: string;
+  attachments: { filename: string; contentType: string; size: number }[];
+};
 
 const smtp = new SMTPServer({
   authOptional: true,
@@ -31,6 +34,7 @@ const smtp = new SMTPServer({
           subject: mail.subject ?? "",
           text: mail.text ?? "",
           html: typeof mail.html === "string" ? mail.html : null,
+          attachments: mail.attachments.map((a) => ({ filename: a.filename ?? "", contentType: a.contentType, size: a.size })),
           receivedAt: new Date().toISOString(),
         };
         writeFileSync(path.join(DIR, `${id}.json`), JSON.stringify(rec));
@@ -72,7 +76,7 @@ const web = http.createServer((req, res) => {
   }
   if (url.pathname === "/") {
     const rows = all()
-      .map((m) => `<article><h2>${esc(m.subject)}</h2><p class="meta">To ${esc(m.to.join(", "))} · ${esc(m.receivedAt)}</p><pre>${linkify(m.text)}</pre></article>`)
+      .map((m) => `<article><h2>${esc(m.subject)}</h2><p class="meta">To ${esc(m.to.join(", "))} · ${esc(m.receivedAt)}${(m.attachments ?? []).length ? ` · attached: ${esc(m.attachments.map((a) => a.filename).join(", "))}` : ""}</p><pre>${linkify(m.text)}</pre></article>`)
       .join("");
     res.writeHead(200, { "content-type": "text/html; charset=utf-8" });
     return res.end(`<!doctype html><html lang="en"><meta charset="utf-8"><title>Getterline local inbox</title>

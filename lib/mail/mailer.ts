@@ -19,7 +19,13 @@ function transporter(): Transporter {
   return g.__getterlineMailer;
 }
 
-export type Mail = { to: string; subject: string; text: string; html?: string };
+export type Mail = {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+  attachments?: { filename: string; content: Buffer | string; contentType: string }[];
+};
 
 export async function sendMail(mail: Mail): Promise<void> {
   await transporter().sendMail({ from: env().MAIL_FROM, ...mail });

@@ -10,6 +10,7 @@ import { stripe, stripeConfig } from "../stripe/client";
 import { db, User } from "../../models";
 import type { InvoiceRow } from "./invoices";
 import { post } from "./ledger";
+import { statementCsv, statementFor, statementPdf } from "./statements";
 
 /** Move an invoice from one state to the next under its row lock; 409 from any other state. */
 async function step(invoiceId: string, from: string, fn: (inv: InvoiceRow, t: import("sequelize").Transaction) => Promise<void>) {
@@ -88,10 +89,7 @@ export async function release(invoiceId: string, why: string): Promise<boolean> 
     await db().query(`UPDATE invoices SET state = 'released', released_at = now(), transfer_id = :tr, updated_at = now() WHERE id = :invoiceId`, { replacements: { tr: transfer.id, invoiceId }, transaction: t });
     return true;
   });
-  if (released) {
-    await mailParty(inv.consignor_id, "You have been paid",
-      `Escrow for invoice ${inv.number} is released (${why}). ${formatCents(payout)} is on its way to your payout account: hammer ${formatCents(inv.hammer_cents)} less commission ${formatCents(inv.commission_cents)}.\nStatement: ${env().NEXTAUTH_URL}/statements/${inv.id}`);
-  }
+  if (released) await mailStatement(inv, payout, why).catch((e: Error) => console.error("[mail] statement failed", e.message));
   return released;
 }
 
@@ -101,6 +99,24 @@ export async function releaseDue(): Promise<number> {
   let n = 0;
   for (const d of due) if (await release(d.id, "inspection window ended").catch((e: Error) => { console.error("[escrow] release failed", e.message); return false; })) n++;
   return n;
+}
+
+/** The consignor's statement for the sale, attached as PDF and CSV, with the release explained. */
+async function mailStatement(inv: InvoiceRow, payout: number, why: string): Promise<void> {
+  const u = await User.findByPk(inv.consignor_id, { attributes: ["id", "email", "displayName", "roles"] });
+  if (!u) return;
+  const [sl] = await db().query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :id`, { replacements: { id: inv.sale_lot_id }, type: QueryTypes.SELECT });
+  const viewer = { id: u.id, email: u.email, name: u.displayName, roles: [...u.roles] };
+  const st = await statementFor(viewer, sl!.sale_id);
+  await sendMail({
+    to: u.email,
+    subject: "You have been paid: settlement statement",
+    text: `Hello ${u.displayName},\n\nEscrow for invoice ${inv.number} is released (${why}). ${formatCents(payout)} is on its way to your payout account: hammer ${formatCents(inv.hammer_cents)} less commission ${formatCents(inv.commission_cents)}.\n\nYour statement for the sale is attached (PDF and CSV), and downloadable any time from ${env().NEXTAUTH_URL}/invoices/${inv.id}.\n\nGetterline Exchange`,
+    attachments: [
+      { filename: "statement.pdf", content: await statementPdf(st), contentType: "application/pdf" },
+      { filename: "statement.csv", content: statementCsv(st), contentType: "text/csv" },
+    ],
+  });
 }
 
 async function mailParty(userId: string, subject: string, body: string): Promise<void> {

@@ -12,7 +12,7 @@ import { createSale } from "../../lib/services/sales";
 import { statementCsv, statementFor } from "../../lib/services/statements";
 import { db } from "../../models";
 import { startTestStripe, type TestStripe } from "../setup/stripe";
-import { approvedLot, makeUser, viewerOf } from "../support/factories";
+import { approvedLot, inbox, makeUser, viewerOf } from "../support/factories";
 
 let fake: TestStripe;
 const logged: string[] = [];
@@ -99,6 +99,8 @@ describe("escrow through the Stripe SDK against the local fake", () => {
     expect(b["house-revenue-commission"]).toBe(-540);
     expect(await trialBalance()).toBe(0);
 
+    const mail = (await inbox(consignor.email)).find((m) => m.subject.includes("settlement statement"));
+    expect(mail?.attachments?.map((a) => a.contentType).sort()).toEqual(["application/pdf", "text/csv"]);
     const st = await statementFor(viewerOf(consignor), saleId);
     expect(st.totals.payoutCents).toBe(2_700 - 540);
     expect(st.totals.paidOutCents).toBe(2_160);
@@ -154,4 +156,16 @@ describe("unpaid invoices", () => {
     const b = await balances(invoiceId);
     expect(b["buyer-receivable"]).toBe(0); // the cancelled invoice's posting is reversed
   }, 30_000);
+});
+
+describe("the webhook route", () => {
+  it("refuses a bad signature with 400 in the error shape and logs it", async () => {
+    const { POST } = await import("../../app/api/webhooks/stripe/route");
+    const { NextRequest } = await import("next/server");
+    const body = JSON.stringify({ id: "evt_forged", type: "payment_intent.succeeded", data: { object: { metadata: { invoice_id: "x" } } } });
+    const r = await POST(new NextRequest("http://localhost:3000/api/webhooks/stripe", { method: "POST", body, headers: { "stripe-signature": "t=1,v1=deadbeef" } }));
+    expect(r.status).toBe(400);
+    expect(((await r.json()) as { error: { code: string } }).error.code).toBe("bad_request");
+    expect(logged.some((l) => l.includes("[webhook] refused: bad signature"))).toBe(true);
+  });
 });

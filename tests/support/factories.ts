@@ -40,12 +40,14 @@ export function request(url: string, init: { method?: string; json?: unknown; bo
 export const noParams = { params: Promise.resolve({}) };
 
 /** Messages the local mail catcher holds for an address, newest first. */
-export async function inbox(to: string): Promise<{ subject: string; text: string }[]> {
+type CaughtMail = { subject: string; text: string; attachments?: { filename: string; contentType: string; size: number }[] };
+
+export async function inbox(to: string): Promise<CaughtMail[]> {
   const res = await fetch(`${process.env.MAIL_CATCHER_URL}/api/messages?to=${encodeURIComponent(to)}`);
-  return (await res.json()) as { subject: string; text: string }[];
+  return (await res.json()) as CaughtMail[];
 }
 
-export async function waitForMail(to: string, timeoutMs = 5000): Promise<{ subject: string; text: string }> {
+export async function waitForMail(to: string, timeoutMs = 5000): Promise<CaughtMail> {
   const end = Date.now() + timeoutMs;
   while (Date.now() < end) {
     const m = await inbox(to);
