@@ -7,35 +7,30 @@ import { env } from "../lib/config/env";
 import { migrator, seeder } from "../lib/db/migrator";
 import { sequelizeFor } from "../lib/db/sequelize";
 
-async function ensureDatabase(url: string): Promise<void> {
+/** Run `fn` on a connection to the server's maintenance database, with the target database's quoted name. */
+async function onServer(url: string, fn: (c: pg.Client, name: string, quoted: string) => Promise<void>): Promise<void> {
   const u = new URL(url);
   const name = u.pathname.replace(/^\//, "");
   u.pathname = "/postgres";
   const c = new pg.Client({ connectionString: u.toString() });
   await c.connect();
   try {
-    const r = await c.query("SELECT 1 FROM pg_database WHERE datname = $1", [name]);
-    if (r.rowCount === 0) {
-      await c.query(`CREATE DATABASE "${name.replace(/"/g, '""')}"`);
-      console.log(`migrate: created database ${name}`);
-    }
+    await fn(c, name, `"${name.replace(/"/g, '""')}"`);
   } finally {
     await c.end();
   }
 }
 
-async function dropDatabase(url: string): Promise<void> {
-  const u = new URL(url);
-  const name = u.pathname.replace(/^\//, "");
-  u.pathname = "/postgres";
-  const c = new pg.Client({ connectionString: u.toString() });
-  await c.connect();
-  try {
-    await c.query(`DROP DATABASE IF EXISTS "${name.replace(/"/g, '""')}" WITH (FORCE)`);
-  } finally {
-    await c.end();
-  }
-}
+const ensureDatabase = (url: string) =>
+  onServer(url, async (c, name, quoted) => {
+    const r = await c.query("SELECT 1 FROM pg_database WHERE datname = $1", [name]);
+    if (r.rowCount === 0) {
+      await c.query(`CREATE DATABASE ${quoted}`);
+      console.log(`migrate: created database ${name}`);
+    }
+  });
+
+const dropDatabase = (url: string) => onServer(url, async (c, _name, quoted) => { await c.query(`DROP DATABASE IF EXISTS ${quoted} WITH (FORCE)`); });
 
 async function main(): Promise<void> {
   const cmd = process.argv[2] ?? "up";

@@ -30,7 +30,9 @@ async function main(): Promise<void> {
     void handle(req, res);
   });
 
-  const pool = new pg.Pool({ connectionString: e.DATABASE_URL, max: 3 });
+  // Two connections: one held for LISTEN, one that publishes, so a lot's broadcasts leave in the order
+  // they were emitted; a NOTIFY needs no durable commit.
+  const pool = new pg.Pool({ connectionString: e.DATABASE_URL, max: 2, options: "-c synchronous_commit=off" });
   pool.on("error", (err) => console.error("[socket pool]", err.message));
   // The adapter keeps one client checked out for LISTEN without an error
   // listener; without this a database restart would be an uncaught exception.

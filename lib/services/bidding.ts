@@ -1,4 +1,4 @@
-import { QueryTypes, Transaction } from "sequelize";
+import { QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
 import { minimumBidFor, placeBid, type BidOutcome, type BidRefusal, type ProxyState } from "../auction/proxy";
@@ -59,19 +59,32 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
   }
   const paddle = await paddleFor(saleId, viewer.id);
 
-  const done = await s.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (t) => {
-    const [row] = await s.query<Row>(
+  // Most refusals need no lock: the minimum only rises between bids (a house retraction bumps the
+  // lot's seq, and every bid is checked again under the lock), so a maximum below the minimum read
+  // without locking is below it now. Retries of an accepted bid are answered from the log below.
+  const [peek] = await s.query<Row & { prior_seq: number | null }>(
+    `SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.seq, sl.state, sl.hammer_cents,
+            (SELECT seq FROM bids WHERE sale_lot_id = sl.id AND bidder_id = :bidder AND idempotency_key = :key) AS prior_seq
+       FROM sale_lots sl WHERE sl.id = :saleLotId`,
+    { replacements: { saleLotId, bidder: viewer.id, key: idempotencyKey }, type: QueryTypes.SELECT },
+  );
+  if (peek && peek.prior_seq == null && peek.phase === "open" && peek.state.leader?.bidderId !== viewer.id && maxCents < minimumBidFor(peek.state)) {
+    const leader = peek.state.leader ? (await paddlesOf(saleId, [peek.state.leader.bidderId])).get(peek.state.leader.bidderId) ?? null : null;
+    return { accepted: false, reason: "below-minimum", message: REFUSAL_WORDS["below-minimum"], minimumCents: minimumBidFor(peek.state), live: liveFrom(peek, leader) };
+  }
+
+  const done = await s.transaction(async (t) => {
+    // One round trip: the lot's row lock, the sale's clock and any earlier bid with this key.
+    const [row] = await s.query<Row & { prior_seq: number | null; prior_outcome: BidOutcome | null; prior_max: number | null }>(
       `SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.extension_count, sl.seq, sl.state, sl.hammer_cents,
-              s.starts_at, s.soft_close_seconds, now() AS db_now
-         FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.id = :saleLotId FOR UPDATE OF sl`,
-      { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
-    );
-    if (!row) throw new ApiError("not_found", "No such lot in a sale");
-    const [prior] = await s.query<{ seq: number; outcome: BidOutcome; max_cents: number }>(
-      `SELECT seq, outcome, max_cents FROM bids WHERE sale_lot_id = :saleLotId AND bidder_id = :bidder AND idempotency_key = :key`,
+              s.starts_at, s.soft_close_seconds, now() AS db_now, b.seq AS prior_seq, b.outcome AS prior_outcome, b.max_cents AS prior_max
+         FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id
+         LEFT JOIN bids b ON b.sale_lot_id = sl.id AND b.bidder_id = :bidder AND b.idempotency_key = :key
+        WHERE sl.id = :saleLotId FOR UPDATE OF sl`,
       { replacements: { saleLotId, bidder: viewer.id, key: idempotencyKey }, type: QueryTypes.SELECT, transaction: t },
     );
-    if (prior) return { kind: "replayed" as const, row, prior };
+    if (!row) throw new ApiError("not_found", "No such lot in a sale");
+    if (row.prior_seq != null) return { kind: "replayed" as const, row, prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! } };
     const nowMs = row.db_now.getTime();
     if (nowMs < row.starts_at.getTime()) return { kind: "refused" as const, row, reason: "not-started" as const, minimumCents: minimumBidFor(row.state) };
     const previousLeader = row.state.leader?.bidderId ?? null;
