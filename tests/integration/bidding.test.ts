@@ -6,7 +6,7 @@ import { placeMaxBid } from "../../lib/services/bidding";
 import { closeSaleLot, startClosingWorker } from "../../lib/services/lot-closing";
 import { createSale } from "../../lib/services/sales";
 import { db, User } from "../../models";
-import { approvedLot, makeUser, viewerOf, waitForMail } from "../support/factories";
+import { approvedLot, makeUser, viewerOf, waitForSubject } from "../support/factories";
 
 async function saleWith(closeInMs: number, reserveCents = 5_000, softCloseSeconds = 120) {
   const admin = await makeUser(["admin"]);
@@ -93,8 +93,9 @@ describe("closing", () => {
     const [row] = await db().query<{ phase: string; buyer_id: string; hammer_cents: number }>(`SELECT phase, buyer_id, hammer_cents FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT });
     expect(row).toMatchObject({ phase: "sold", buyer_id: a.id, hammer_cents: 2_700 });
     const winner = await User.findByPk(a.id);
-    expect((await waitForMail(winner!.email)).subject).toMatch(/You won/);
-    expect((await waitForMail(consignor.email)).subject).toMatch(/Sold/);
+    expect((await waitForSubject(winner!.email, /You won/)).text).toContain("$27.00");
+    expect((await waitForSubject(winner!.email, /invoice/i)).text).toContain("/invoices/");
+    expect((await waitForSubject(consignor.email, /^Sold/)).text).toContain("$27.00");
   });
 
   it("the job queue closes a lot at its time without anyone asking; no bids means unsold", async () => {

@@ -47,6 +47,17 @@ export async function inbox(to: string): Promise<CaughtMail[]> {
   return (await res.json()) as CaughtMail[];
 }
 
+/** The newest message for an address whose subject matches, waiting for it to arrive. */
+export async function waitForSubject(to: string, subject: RegExp, timeoutMs = 8000): Promise<CaughtMail> {
+  const end = Date.now() + timeoutMs;
+  while (Date.now() < end) {
+    const hit = (await inbox(to)).find((m) => subject.test(m.subject));
+    if (hit) return hit;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no mail matching ${subject} for ${to}`);
+}
+
 export async function waitForMail(to: string, timeoutMs = 5000): Promise<CaughtMail> {
   const end = Date.now() + timeoutMs;
   while (Date.now() < end) {
