@@ -86,9 +86,10 @@ function record(ledger: Ledger, phase: string, dealer: number, key: string, sent
 }
 
 /**
- * Closed loop: each of M dealers bids at the current minimum (the highest
- * minimum any answer has shown), with a fresh key, as fast as answers come
- * back, until the deadline. Returns when every request has been answered.
+ * Closed loop: each of M dealers enters a maximum a little above the current
+ * minimum (the highest minimum any answer has shown, plus 0–20 increments, as
+ * dealers do when they bid in earnest), with a fresh key, as fast as answers
+ * come back, until the deadline. Returns when every request has been answered.
  */
 export async function saturate(client: BidClient, ledger: Ledger, dealers: number, seconds: number, phase = "saturation", abort: () => boolean = () => false): Promise<{ elapsedMs: number; sent: number }> {
   const start = now();
@@ -98,7 +99,7 @@ export async function saturate(client: BidClient, ledger: Ledger, dealers: numbe
   const loop = async (dealer: number) => {
     while (now() < deadline && !abort()) {
       const key = `bench-${randomUUID()}`;
-      const amount = ledger.minimumCents;
+      const amount = ledger.minimumCents + 100 * Math.floor(Math.random() * 21);
       ledger.sent.set(key, { bidder: dealer, answered: false });
       sent++;
       const sentAt = now();
