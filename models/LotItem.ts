@@ -1,3 +1,4 @@
+import type { TubeReading } from "../lib/lots/item";
 import {
   DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
 } from "sequelize";
@@ -5,17 +6,8 @@ import {
 export type ItemCondition = "new-in-box" | "new-old-stock" | "used";
 export type MakerBasis = "source-code-confirmed" | "construction-matched" | "unconfirmed";
 
-/** One tester run on one tube of an item. */
-export type StoredReading = {
-  tubeNo: number;
-  measure: "gm" | "emission" | "plate-current";
-  sections: number[];
-  chartNewValue?: number;
-  plateCurrentMa?: number;
-  shorts?: boolean;
-  leakage?: boolean;
-  gas?: boolean;
-};
+/** One tester run on one tube of an item (the domain's own shape). */
+export type StoredReading = TubeReading;
 
 /** A line of a lot: one type, label and maker, with its quantity, codes, condition and readings. */
 export class LotItem extends Model<InferAttributes<LotItem>, InferCreationAttributes<LotItem>> {
