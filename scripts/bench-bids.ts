@@ -1,5 +1,5 @@
 // Benchmark: live-sale bids on one hot lot, through the real app (production build, socket.io watchers).
-// Run: node --import tsx scripts/bench-bids.ts [--watchers 200 --bidders 20 --seconds 20 --rate 50]
+// Run: node --import tsx scripts/bench-bids.ts [--watchers 200 --bidders 20 --seconds 20 --rate 50 --over socket|http]
 //        [--profile (CPU profile of the app, summarised)] [--keep-logs] [--wait-idle <s> (wait for a quiet machine first)]
 //
 // Phase 1 (saturation): W watchers in the lot's room; M dealers bid at the current minimum as fast as answers
@@ -17,7 +17,7 @@ import path from "node:path";
 import { parseArgs } from "node:util";
 import { audit, percentile, round, type Audit } from "./bench-bids/checks";
 import { CpuMeter, cpuLine, machineBusyCores } from "./bench-bids/cpu";
-import { BidClient, Ledger, now, openLoop, saturate, type Accepted } from "./bench-bids/bidders";
+import { BidClient, Ledger, now, openLoop, saturate, SocketBidClient, type Accepted, type BidSender } from "./bench-bids/bidders";
 import { runPgbench } from "./bench-bids/pgbench";
 import { monotonicUs, summarise, type Window } from "./bench-bids/profile-summary";
 import type { Receipts } from "./bench-bids/protocol";
@@ -38,6 +38,7 @@ const { values: argv } = parseArgs({
     profile: { type: "boolean", default: false },
     "keep-logs": { type: "boolean", default: false },
     "wait-idle": { type: "string", default: "0" },
+    over: { type: "string", default: "socket" },
   },
 });
 const int = (name: string, v: string | undefined, min: number, max: number) => {
@@ -60,7 +61,8 @@ if (!secret) { console.error("NEXTAUTH_SECRET is not set (scripts/ensure-env.sh 
 const tmp = fs.mkdtempSync(path.join(os.tmpdir(), "getterline-bench-bids-"));
 let server: AppServer | undefined;
 let watchers: Watchers | undefined;
-let client: BidClient | undefined;
+let client: BidSender | undefined;
+if (argv.over !== "socket" && argv.over !== "http") { console.error("--over must be socket or http"); process.exit(2); }
 let meter: CpuMeter | undefined;
 let dbCreated = false;
 let failed = false;
@@ -149,7 +151,8 @@ async function main(): Promise<number> {
   meter.pids.watchers = w.pid;
   log(`${W} watchers connected (websocket) and joined lot:${seeded.saleLotId} in ${(w.joinMs / 1000).toFixed(1)} s (pid ${w.pid})`);
 
-  client = new BidClient(port, seeded.saleLotId, dealerCookies, Math.max(M, 256));
+  client = argv.over === "http" ? new BidClient(port, seeded.saleLotId, dealerCookies, Math.max(M, 256)) : await SocketBidClient.open(port, seeded.saleLotId, dealerCookies);
+  log(`dealers bid over ${argv.over === "http" ? "HTTP (POST /api/sale-lots/:id/bids)" : "their sockets (bid.place with an ack)"}`);
   const app = server;
   const appGone = () => app.exited() !== null;
   const assertAppUp = (phase: string) => {

@@ -27,7 +27,14 @@ export interface ServerToClientEvents {
   "lot.closed": (p: LotLive) => void;
 }
 
+/** The answer to a bid placed over the socket: the same result as POST /api/sale-lots/:id/bids. */
+export type BidAck =
+  | { ok: true; result: { accepted: true; outcome: string; seq: number; live: LotLive; yourMaxCents: number; leading: boolean; replayed: boolean } }
+  | { ok: false; error: { code: string; message: string; fields?: Record<string, string>; details?: Record<string, unknown> } };
+
 export interface ClientToServerEvents {
+  /** Place a maximum bid over the already-authenticated socket (the HTTP route does the same). */
+  "bid.place": (p: { saleLotId: string; maxCents: number; idempotencyKey: string }, ack: (r: BidAck) => void) => void;
   "room.join": (p: { room: string }, ack: (r: { ok: boolean; error?: string }) => void) => void;
   "room.leave": (p: { room: string }) => void;
 }

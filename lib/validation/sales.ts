@@ -22,3 +22,6 @@ export type BidInput = z.infer<typeof BidSchema>;
 
 /** POST /api/sale-lots/:id/bids/:bidId/retract (house only). */
 export const RetractSchema = z.object({ reason: z.string().trim().min(5, "Give the reason for the record").max(500) });
+
+/** A bid sent over the socket: the lot named in the message. */
+export const SocketBidSchema = BidSchema.extend({ saleLotId: z.uuid("No such lot") });

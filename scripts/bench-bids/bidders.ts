@@ -1,5 +1,6 @@
-// Bid benchmark: dealers placing bids over HTTP (closed loop for saturation, open loop for latency).
+// Bid benchmark: dealers placing bids over the socket (default) or HTTP (closed loop for saturation, open loop for latency).
 import http from "node:http";
+import { io as connect, type Socket } from "socket.io-client";
 import { randomUUID } from "node:crypto";
 import { performance } from "node:perf_hooks";
 
@@ -29,8 +30,47 @@ export class Ledger {
   }
 }
 
+/** What the loops need from a way of sending bids. */
+export interface BidSender {
+  bid(dealer: number, maxCents: number, key: string, timeoutMs?: number): Promise<BidAnswer>;
+  close(): void;
+}
+
+/** Each dealer's own authenticated socket, bidding with "bid.place" and its ack (as the lot page does). */
+export class SocketBidClient implements BidSender {
+  private sockets: Socket[] = [];
+  private constructor(private saleLotId: string) {}
+
+  static async open(port: number, saleLotId: string, cookies: string[]): Promise<SocketBidClient> {
+    const c = new SocketBidClient(saleLotId);
+    c.sockets = await Promise.all(cookies.map((cookie) => new Promise<Socket>((resolve, reject) => {
+      const s = connect(`http://127.0.0.1:${port}`, { path: "/socket.io", transports: ["websocket"], forceNew: true, extraHeaders: { cookie } });
+      s.once("session.ready", () => resolve(s));
+      s.once("connect_error", reject);
+    })));
+    return c;
+  }
+
+  async bid(dealer: number, maxCents: number, key: string, timeoutMs = 30_000): Promise<BidAnswer> {
+    try {
+      const ack = (await this.sockets[dealer]!.timeout(timeoutMs).emitWithAck("bid.place", { saleLotId: this.saleLotId, maxCents, idempotencyKey: key })) as Record<string, any>;
+      if (ack.ok) return { kind: "accepted", seq: Number(ack.result.seq), minimumCents: Number(ack.result.live?.minimumCents ?? 0), replayed: Boolean(ack.result.replayed) };
+      if (ack.error?.code === "conflict" && ack.error.details?.reason) {
+        return { kind: "refused", reason: String(ack.error.details.reason), minimumCents: Number(ack.error.details.minimumCents ?? 0) };
+      }
+      return { kind: "error", status: 0, message: String(ack.error?.code ?? "unexpected answer") };
+    } catch (e) {
+      return { kind: "error", status: 0, message: (e as Error).message };
+    }
+  }
+
+  close(): void {
+    for (const s of this.sockets) s.disconnect();
+  }
+}
+
 /** A keep-alive HTTP client for the bid route, one cookie per dealer. */
-export class BidClient {
+export class BidClient implements BidSender {
   private agent: http.Agent;
   constructor(private port: number, private saleLotId: string, private cookies: string[], maxSockets: number) {
     this.agent = new http.Agent({ keepAlive: true, maxSockets, maxFreeSockets: maxSockets });
@@ -91,7 +131,7 @@ function record(ledger: Ledger, phase: string, dealer: number, key: string, sent
  * dealers do when they bid in earnest), with a fresh key, as fast as answers
  * come back, until the deadline. Returns when every request has been answered.
  */
-export async function saturate(client: BidClient, ledger: Ledger, dealers: number, seconds: number, phase = "saturation", abort: () => boolean = () => false): Promise<{ elapsedMs: number; sent: number }> {
+export async function saturate(client: BidSender, ledger: Ledger, dealers: number, seconds: number, phase = "saturation", abort: () => boolean = () => false): Promise<{ elapsedMs: number; sent: number }> {
   const start = now();
   const deadline = start + seconds * 1000;
   let sent = 0;
@@ -123,7 +163,7 @@ export async function saturate(client: BidClient, ledger: Ledger, dealers: numbe
  * the minimum and accepted (outbid by proxy) instead of refused. Records how
  * late each send was against its schedule.
  */
-export async function openLoop(client: BidClient, ledger: Ledger, dealers: number, seconds: number, rate: number, incrementCents: number, abort: () => boolean = () => false): Promise<{ sent: number; sendLagMs: number[] }> {
+export async function openLoop(client: BidSender, ledger: Ledger, dealers: number, seconds: number, rate: number, incrementCents: number, abort: () => boolean = () => false): Promise<{ sent: number; sendLagMs: number[] }> {
   const interval = 1000 / rate;
   const total = Math.max(1, Math.round(seconds * rate));
   const start = now() + 20;

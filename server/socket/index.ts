@@ -4,7 +4,35 @@ import type pg from "pg";
 import { Server } from "socket.io";
 import { viewerFromCookieHeader } from "../../lib/auth/guards";
 import type { ClientToServerEvents, ServerToClientEvents, SocketData } from "../../lib/realtime/events";
-import { joinableRoom, userRoom } from "../../lib/realtime/events";
+import { joinableRoom, userRoom, type BidAck } from "../../lib/realtime/events";
+import { ApiError, fieldsFromIssues } from "../../lib/api/errors";
+import { can } from "../../lib/auth/roles";
+import { currentRoles } from "../../lib/services/accounts";
+import { placeMaxBid } from "../../lib/services/bidding";
+import { SocketBidSchema } from "../../lib/validation/sales";
+
+/**
+ * A bid over the socket: validated with the route's schema, roles re-read
+ * from the database (as every guard does), then the same service as the
+ * HTTP route. The answer comes back on the ack, in the one error shape.
+ */
+async function placeBidOverSocket(userId: string, raw: unknown): Promise<BidAck> {
+  const parsed = SocketBidSchema.safeParse(raw);
+  if (!parsed.success) return { ok: false, error: { code: "validation_failed", message: "Some fields need attention", fields: fieldsFromIssues(parsed.error.issues) } };
+  try {
+    const roles = await currentRoles(userId);
+    if (!roles) return { ok: false, error: { code: "unauthenticated", message: "Sign in first" } };
+    if (!can(roles, "lots.bid")) return { ok: false, error: { code: "forbidden", message: "Your account's roles do not allow this" } };
+    const { saleLotId, maxCents, idempotencyKey } = parsed.data;
+    const r = await placeMaxBid({ id: userId, email: "", name: "", roles }, saleLotId, maxCents, idempotencyKey);
+    if (!r.accepted) return { ok: false, error: { code: "conflict", message: r.message, details: { reason: r.reason, minimumCents: r.minimumCents, live: r.live } } };
+    return { ok: true, result: r };
+  } catch (e) {
+    if (e instanceof ApiError) return { ok: false, error: { code: e.code, message: e.message } };
+    console.error("[socket] bid failed", e);
+    return { ok: false, error: { code: "internal", message: "Something went wrong on our side" } };
+  }
+}
 
 export type GetterlineIo = Server<ClientToServerEvents, ServerToClientEvents, Record<string, never>, SocketData>;
 
@@ -49,6 +77,10 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
       if (typeof room !== "string" || !joinableRoom(room)) return ack?.({ ok: false, error: "That room cannot be joined" });
       void socket.join(room);
       ack?.({ ok: true });
+    });
+    socket.on("bid.place", (p, ack) => {
+      if (typeof ack !== "function") return;
+      void placeBidOverSocket(socket.data.userId, p).then(ack);
     });
     socket.on("room.leave", ({ room }) => {
       if (typeof room === "string" && joinableRoom(room)) void socket.leave(room);

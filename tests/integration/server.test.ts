@@ -5,7 +5,8 @@ import { io as connect, type Socket } from "socket.io-client";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { gracefulShutdown } from "../../server/shutdown";
 import { attachSockets, type GetterlineIo } from "../../server/socket";
-import { makeUser, sessionCookie } from "../support/factories";
+import { createSale, getSale } from "../../lib/services/sales";
+import { approvedLot, makeUser, sessionCookie, viewerOf } from "../support/factories";
 
 describe("socket.io handshake uses the same guard as the routes", () => {
   let server: http.Server;
@@ -43,6 +44,53 @@ describe("socket.io handshake uses the same guard as the routes", () => {
     expect(await s.emitWithAck("room.join", { room: "lot:42" })).toEqual({ ok: true });
     expect((await s.emitWithAck("room.join", { room: `user:${dealer.id}x` })).ok).toBe(false);
     s.close();
+  });
+});
+
+describe("bids over the socket", () => {
+  let server: http.Server;
+  let io: GetterlineIo;
+  let pool: pg.Pool;
+  let url: string;
+  beforeAll(async () => {
+    server = http.createServer();
+    pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
+    io = await attachSockets(server, pool);
+    await new Promise<void>((r) => server.listen(0, "127.0.0.1", () => r()));
+    url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  });
+  afterAll(async () => {
+    await new Promise<void>((r) => io.close(() => r()));
+    await pool.end();
+  });
+
+  it("places a bid with the same rules and answers as the route; a consignor and a bad payload are refused", async () => {
+    const admin = await makeUser(["admin"]);
+    const consignor = await makeUser(["consignor"]);
+    const lot = await approvedLot(consignor, admin, 2_000);
+    const sale = await createSale(viewerOf(admin), { title: "Socket sale", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 3_600_000).toISOString(), gapSeconds: 30, softCloseSeconds: 120, lots: [{ lotId: lot.id, openingCents: 1_000 }] });
+    const { lots } = await getSale(sale.id);
+    const saleLotId = lots[0]!.saleLotId;
+    const open = async (cookie: string) => {
+      const s = connect(url, { path: "/socket.io", transports: ["websocket"], extraHeaders: { cookie }, reconnection: false });
+      await new Promise((r) => s.on("session.ready", r));
+      return s;
+    };
+    const dealer = await makeUser(["dealer"]);
+    const ds = await open(await sessionCookie(dealer));
+    const ok = await ds.emitWithAck("bid.place", { saleLotId, maxCents: 3_000, idempotencyKey: "socket-bid-1" });
+    expect(ok).toMatchObject({ ok: true, result: { accepted: true, seq: 1, leading: true } });
+    expect(ok.ok && ok.result.live.priceCents).toBe(2_000); // the maximum reaches the $20 reserve: price = reserve [CTP]
+    const again = await ds.emitWithAck("bid.place", { saleLotId, maxCents: 3_000, idempotencyKey: "socket-bid-1" });
+    expect(again).toMatchObject({ ok: true, result: { seq: 1, replayed: true } });
+    const low = await ds.emitWithAck("bid.place", { saleLotId, maxCents: 3_000, idempotencyKey: "socket-bid-2" });
+    expect(low).toMatchObject({ ok: false, error: { code: "conflict", details: { reason: "max-not-raised" } } });
+    const bad = await ds.emitWithAck("bid.place", { saleLotId: "nope", maxCents: -5, idempotencyKey: "x" } as never);
+    expect(bad).toMatchObject({ ok: false, error: { code: "validation_failed" } });
+    ds.close();
+    const cs = await open(await sessionCookie(consignor));
+    expect(await cs.emitWithAck("bid.place", { saleLotId, maxCents: 9_000, idempotencyKey: "own-bid-1" })).toMatchObject({ ok: false, error: { code: "forbidden" } });
+    cs.close();
   });
 });
 
