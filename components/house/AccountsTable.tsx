@@ -28,17 +28,23 @@ export function AccountsTable({ selfId }: { selfId: string }) {
   const qc = useQueryClient();
   const [filter, setFilter] = useState("");
   const [message, setMessage] = useState<string | null>(null);
+  // The boxes show a change at once; the server's answer then confirms or reverts it.
+  const [pending, setPending] = useState<Record<string, Role[]>>({});
   const { data, isLoading, error } = useQuery({
     queryKey: ["admin-users"],
     queryFn: () => apiFetch<{ accounts: Account[] }>("/api/admin/users"),
   });
   const save = useMutation({
     mutationFn: (v: { id: string; roles: Role[] }) => apiFetch<{ account: Account }>(`/api/admin/users/${v.id}`, { method: "PATCH", json: { roles: v.roles } }),
-    onSuccess: (r) => {
+    onSuccess: async (r) => {
       setMessage(`Roles saved for ${r.account.displayName}.`);
-      void qc.invalidateQueries({ queryKey: ["admin-users"] });
+      await qc.invalidateQueries({ queryKey: ["admin-users"] });
+      setPending((p) => { const n = { ...p }; delete n[r.account.id]; return n; });
     },
-    onError: (e) => setMessage(e instanceof Error ? e.message : "Could not save"),
+    onError: (e, v) => {
+      setMessage(e instanceof Error ? e.message : "Could not save");
+      setPending((p) => { const n = { ...p }; delete n[v.id]; return n; });
+    },
   });
 
   const columns = helper.columns([
@@ -51,7 +57,8 @@ export function AccountsTable({ selfId }: { selfId: string }) {
       cell: ({ row }) => (
         <div className="flex flex-wrap gap-3">
           {ROLES.map((r) => {
-            const checked = row.original.roles.includes(r);
+            const current = pending[row.original.id] ?? row.original.roles;
+            const checked = current.includes(r);
             const locked = row.original.id === selfId && r === "admin";
             return (
               <label key={r} className="inline-flex items-center gap-1.5 text-sm">
@@ -61,7 +68,8 @@ export function AccountsTable({ selfId }: { selfId: string }) {
                   disabled={locked || save.isPending}
                   aria-label={`${ROLE_LABEL[r]} role for ${row.original.displayName}`}
                   onChange={() => {
-                    const roles = checked ? row.original.roles.filter((x) => x !== r) : [...row.original.roles, r];
+                    const roles = checked ? current.filter((x) => x !== r) : [...current, r];
+                    setPending((p) => ({ ...p, [row.original.id]: roles }));
                     save.mutate({ id: row.original.id, roles });
                   }}
                 />

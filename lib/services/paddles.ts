@@ -9,23 +9,21 @@ const key = (saleId: string, userId: string) => `${saleId}:${userId}`;
 export async function paddleFor(saleId: string, userId: string): Promise<number> {
   const hit = cache.get(key(saleId, userId));
   if (hit) return hit;
-  for (let attempt = 0; attempt < 5; attempt++) {
-    try {
-      const rows = await db().query<{ number: number }>(
-        `INSERT INTO paddles (sale_id, user_id, number, created_at)
-         VALUES (:saleId, :userId, (SELECT coalesce(max(number), 100) + 1 FROM paddles WHERE sale_id = :saleId), now())
-         ON CONFLICT (sale_id, user_id) DO UPDATE SET number = paddles.number
-         RETURNING number`,
-        { replacements: { saleId, userId }, type: QueryTypes.SELECT },
-      );
-      cache.set(key(saleId, userId), rows[0]!.number);
-      return rows[0]!.number;
-    } catch (e) {
-      // Two new bidders took the same next number at once: try again.
-      if ((e as { parent?: { code?: string } }).parent?.code !== "23505") throw e;
-    }
-  }
-  throw new Error("could not give a paddle number");
+  // New bidders in one sale take their numbers one at a time (a transaction-scoped advisory lock
+  // per sale), so two first bids at the same moment never reach for the same number.
+  const number = await db().transaction(async (t) => {
+    await db().query(`SELECT pg_advisory_xact_lock(hashtext(:saleId))`, { replacements: { saleId }, transaction: t });
+    const rows = await db().query<{ number: number }>(
+      `INSERT INTO paddles (sale_id, user_id, number, created_at)
+       VALUES (:saleId, :userId, (SELECT coalesce(max(number), 100) + 1 FROM paddles WHERE sale_id = :saleId), now())
+       ON CONFLICT (sale_id, user_id) DO UPDATE SET number = paddles.number
+       RETURNING number`,
+      { replacements: { saleId, userId }, type: QueryTypes.SELECT, transaction: t },
+    );
+    return rows[0]!.number;
+  });
+  cache.set(key(saleId, userId), number);
+  return number;
 }
 
 /** Paddle numbers of several bidders in a sale. */

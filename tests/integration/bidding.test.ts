@@ -57,6 +57,17 @@ describe("bidding under load (real PostgreSQL, row lock per lot)", () => {
     expect(row!.seq).toBe(bids.length);
   }, 120_000);
 
+  it("gives 30 first-time bidders arriving at once 30 different paddle numbers", async () => {
+    const { saleLotId } = await saleWith(3_600_000);
+    const [{ sale_id: saleId }] = await db().query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT }) as [{ sale_id: string }];
+    const { paddleFor } = await import("../../lib/services/paddles");
+    const dealers = await Promise.all(Array.from({ length: 30 }, () => makeUser(["dealer"])));
+    const numbers = await Promise.all(dealers.map((d) => paddleFor(saleId, d.id)));
+    expect(new Set(numbers).size).toBe(30);
+    expect(Math.min(...numbers)).toBe(101);
+    expect(Math.max(...numbers)).toBe(130);
+  });
+
   it("refuses the consignor's own bid and a bid below the minimum, with the reason", async () => {
     const { saleLotId, consignor } = await saleWith(3_600_000);
     const own = await placeMaxBid(viewerOf(consignor), saleLotId, 5_000, "own-1");
