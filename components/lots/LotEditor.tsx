@@ -2,7 +2,10 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useCallback, useState } from "react";
+import { CautionStrip } from "@/components/CautionStrip";
 import { FormAlert } from "@/components/forms/Field";
+import type { HazardKind } from "@/lib/valves/index-types";
+import { hazardsForType } from "@/lib/valves/hazards";
 import { apiFetch } from "@/lib/client/api";
 import { formatCents } from "@/lib/money/cents";
 import type { getLot, ItemView } from "@/lib/services/lots";
@@ -51,6 +54,16 @@ export function LotEditor({ initial }: { initial: LotData }) {
   const onRemove = useCallback((item: ItemView) => { if (window.confirm(`Remove line ${item.position} (${item.designation})?`)) remove.mutate(item); }, [remove]);
 
   const lastAsk = [...data.events].reverse().find((e) => e.kind === "changes-requested");
+  // Handling and shipping cautions for every hazard the items carry (from our type data or declared).
+  const cautions = new Map<string, { title: string; caution: string; kind: string; types: string[] }>();
+  for (const i of data.items) {
+    for (const n of hazardsForType(i.designation, i.hazards as HazardKind[]).notices) {
+      if (n.certainty === "always") continue;
+      const c = cautions.get(n.kind) ?? { title: n.title, caution: n.caution, kind: n.kind, types: [] };
+      if (!c.types.includes(i.designation)) c.types.push(i.designation);
+      cautions.set(n.kind, c);
+    }
+  }
   return (
     <div className="space-y-6">
       <header className="flex flex-wrap items-center gap-3">
@@ -63,6 +76,11 @@ export function LotEditor({ initial }: { initial: LotData }) {
         ) : null}
       </header>
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
+      {[...cautions.values()].map((c) => (
+        <CautionStrip key={c.kind} anchor={c.kind === "mercury-vapour" ? "mercury" : c.kind}>
+          <strong>{c.title}</strong> ({c.types.join(", ")}). {c.caution}
+        </CautionStrip>
+      ))}
       {data.lot.state === "needs-changes" && lastAsk ? (
         <FormAlert>The house asked for changes: {lastAsk.comment}</FormAlert>
       ) : null}

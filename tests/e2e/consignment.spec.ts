@@ -37,8 +37,8 @@ test("a consignor lists a box, the house asks for a change and approves, a deale
   await expect(consignor).toHaveURL(/\/consignor\/lots\/[0-9a-f-]{36}$/);
   const lotId = consignor.url().split("/").pop()!;
 
-  // Two items by hand.
-  for (const [designation, qty] of [["6sn7gt", "1"], ["EL84", "1"]] as const) {
+  // Two items by hand; an 866A (mercury-vapour rectifier) brings its handling caution onto the page.
+  for (const [designation, qty] of [["6sn7gt", "1"], ["866A", "1"]] as const) {
     await consignor.getByRole("button", { name: "Add an item" }).click();
     await consignor.getByLabel("Designation as printed").fill(designation);
     await consignor.getByLabel("Quantity", { exact: true }).fill(qty);
@@ -47,6 +47,7 @@ test("a consignor lists a box, the house asks for a change and approves, a deale
     await expect(consignor.getByRole("button", { name: "Add an item" })).toBeVisible();
   }
   await expect(consignor.getByText("2 lines · 2 tubes")).toBeVisible();
+  await expect(consignor.getByRole("note").filter({ hasText: "866A" })).toContainText("Mercury");
 
   // Thirty from a CSV with two bad rows: reported by line, fixed, imported.
   await consignor.getByLabel("CSV file", { exact: true }).setInputFiles({ name: "box.csv", mimeType: "text/csv", buffer: Buffer.from(withTwoBad) });
