@@ -40,13 +40,13 @@ export async function signUp(input: SignUpInput): Promise<AccountView> {
 }
 
 /**
- * Check a password, throttled per account and per address. Throws
- * rate_limited (429) before looking at the password when either is over its
- * limit, invalid_credentials (401) on a wrong e-mail or password.
+ * Refuse (429, with Retry-After) while an account or an address is over its
+ * failed sign-in limit. Used before next-auth sees the request and again
+ * inside the password check, so both paths answer the same.
  */
-export async function authenticate(input: SignInInput, ip: string): Promise<AccountView> {
+export async function assertNotThrottled(emailRaw: string, ip: string): Promise<void> {
   db();
-  const email = input.email.trim().toLowerCase();
+  const email = emailRaw.trim().toLowerCase().slice(0, 254);
   const since = new Date(Date.now() - SIGN_IN_WINDOW_MS);
   const decision = throttleDecision(await SignInAttempt.recentFailures(email, ip, since));
   if (!decision.allowed) {
@@ -57,6 +57,17 @@ export async function authenticate(input: SignInInput, ip: string): Promise<Acco
       { "Retry-After": String(decision.retryAfterSeconds) },
     );
   }
+}
+
+/**
+ * Check a password, throttled per account and per address. Throws
+ * rate_limited (429) before looking at the password when either is over its
+ * limit, invalid_credentials (401) on a wrong e-mail or password.
+ */
+export async function authenticate(input: SignInInput, ip: string): Promise<AccountView> {
+  db();
+  const email = input.email.trim().toLowerCase();
+  await assertNotThrottled(email, ip);
   const user = await User.findOne({ where: { email } });
   // Compare against a dummy hash when the account is missing so timing does not reveal it.
   const ok = await bcrypt.compare(input.password, user?.passwordHash ?? (await dummyHash()));

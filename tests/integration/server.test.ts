@@ -8,26 +8,30 @@ import { attachSockets, type GetterlineIo } from "../../server/socket";
 import { createSale, getSale } from "../../lib/services/sales";
 import { approvedLot, makeUser, sessionCookie, viewerOf } from "../support/factories";
 
-describe("socket.io handshake uses the same guard as the routes", () => {
-  let server: http.Server;
+/** Our socket.io server on a plain HTTP server and a real pool, for the describe block that calls it. */
+function socketServer(): { readonly url: string } {
   let io: GetterlineIo;
   let pool: pg.Pool;
-  let url: string;
-
+  const state = { url: "" };
   beforeAll(async () => {
-    server = http.createServer();
+    const server = http.createServer();
     pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
     io = await attachSockets(server, pool);
     await new Promise<void>((r) => server.listen(0, "127.0.0.1", () => r()));
-    url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+    state.url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   });
   afterAll(async () => {
     await new Promise<void>((r) => io.close(() => r()));
     await pool.end();
   });
+  return state;
+}
+
+describe("socket.io handshake uses the same guard as the routes", () => {
+  const live = socketServer();
 
   const open = (cookie?: string): Socket =>
-    connect(url, { path: "/socket.io", transports: ["websocket"], extraHeaders: cookie ? { cookie } : {}, reconnection: false });
+    connect(live.url, { path: "/socket.io", transports: ["websocket"], extraHeaders: cookie ? { cookie } : {}, reconnection: false });
 
   it("refuses a connection without a session", async () => {
     const s = open();
@@ -48,21 +52,7 @@ describe("socket.io handshake uses the same guard as the routes", () => {
 });
 
 describe("bids over the socket", () => {
-  let server: http.Server;
-  let io: GetterlineIo;
-  let pool: pg.Pool;
-  let url: string;
-  beforeAll(async () => {
-    server = http.createServer();
-    pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
-    io = await attachSockets(server, pool);
-    await new Promise<void>((r) => server.listen(0, "127.0.0.1", () => r()));
-    url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  });
-  afterAll(async () => {
-    await new Promise<void>((r) => io.close(() => r()));
-    await pool.end();
-  });
+  const live = socketServer();
 
   it("places a bid with the same rules and answers as the route; a consignor and a bad payload are refused", async () => {
     const admin = await makeUser(["admin"]);
@@ -72,7 +62,7 @@ describe("bids over the socket", () => {
     const { lots } = await getSale(sale.id);
     const saleLotId = lots[0]!.saleLotId;
     const open = async (cookie: string) => {
-      const s = connect(url, { path: "/socket.io", transports: ["websocket"], extraHeaders: { cookie }, reconnection: false });
+      const s = connect(live.url, { path: "/socket.io", transports: ["websocket"], extraHeaders: { cookie }, reconnection: false });
       await new Promise((r) => s.on("session.ready", r));
       return s;
     };
