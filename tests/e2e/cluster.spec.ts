@@ -104,7 +104,11 @@ test("two instances: broadcasts cross, a killed instance loses no committed bid,
       expect(c.phase).toBe("sold");
       expect(c.seq).toBe(c.last_bid + 1); // the close itself took exactly one sequence number
     }
-    const mails = (await (await fetch("http://127.0.0.1:2580/api/messages")).json()) as { subject: string }[];
+    // The consignor's e-mail follows the close's commit: wait for all three, then check none came twice.
+    const sold = async () => ((await (await fetch("http://127.0.0.1:2580/api/messages")).json()) as { subject: string }[]).filter((m) => m.subject.startsWith("Sold: Cluster lot") && m.subject.endsWith(run));
+    await expect.poll(async () => (await sold()).length, { timeout: 20_000 }).toBeGreaterThanOrEqual(3);
+    await new Promise((r) => setTimeout(r, 2_000));
+    const mails = await sold();
     for (let i = 1; i <= 3; i++) expect(mails.filter((m) => m.subject === `Sold: Cluster lot ${i} ${run}`)).toHaveLength(1);
   } finally {
     a.kill("SIGKILL");
