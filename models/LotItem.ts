@@ -26,6 +26,7 @@ export class LotItem extends Model<InferAttributes<LotItem>, InferCreationAttrib
   declare features: CreationOptional<Record<string, string>>;
   declare condition: ItemCondition;
   declare vacuumLoss: CreationOptional<boolean>;
+  declare soldAsSet: CreationOptional<boolean>;
   declare defects: CreationOptional<string[]>;
   declare hazards: CreationOptional<string[]>;
   declare readings: CreationOptional<StoredReading[]>;
@@ -52,6 +53,7 @@ export class LotItem extends Model<InferAttributes<LotItem>, InferCreationAttrib
         features: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         condition: { type: DataTypes.STRING(16), allowNull: false },
         vacuumLoss: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        soldAsSet: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         defects: { type: DataTypes.ARRAY(DataTypes.STRING(200)), allowNull: false, defaultValue: [] },
         hazards: { type: DataTypes.ARRAY(DataTypes.STRING(24)), allowNull: false, defaultValue: [] },
         readings: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },

@@ -21,7 +21,7 @@ const EMPTY: ItemInput = {
 export function toInput(i: ItemView): ItemInput {
   return {
     designation: i.designationTyped, quantity: i.quantity, labelBrand: i.labelBrand, makerName: i.makerName, makerBasis: i.makerBasis,
-    sourceCode: i.sourceCode, dateCode: i.dateCode, features: i.features, condition: i.condition, vacuumLoss: i.vacuumLoss,
+    sourceCode: i.sourceCode, dateCode: i.dateCode, features: i.features, condition: i.condition, vacuumLoss: i.vacuumLoss, soldAsSet: i.soldAsSet,
     defects: i.defects, hazards: i.hazards as ItemInput["hazards"], readings: i.readings, notes: i.notes,
   };
 }
@@ -95,6 +95,9 @@ export function ItemForm({ lotId, item, onDone }: { lotId: string; item?: ItemVi
         <div className="flex items-end pb-2">
           <label className="inline-flex items-center gap-2 text-sm">
             <input type="checkbox" {...register("vacuumLoss")} /> White getter flash (vacuum lost)
+          </label>
+          <label className="ml-4 inline-flex items-center gap-2 text-sm">
+            <input type="checkbox" {...register("soldAsSet")} /> Sold as one matched set
           </label>
         </div>
       </div>

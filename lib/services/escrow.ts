@@ -65,32 +65,49 @@ async function payoutAccount(userId: string): Promise<string> {
 }
 
 /**
- * Release escrow: transfer the consignor's payout (hammer − commission) to
- * their connected account with a key tied to the invoice, then, in one
- * transaction, post the release and the payout and mark the invoice released.
- * A retry finds the same transfer and posts nothing twice.
+ * Release escrow: transfer the consignor's payout (what is left of the hammer
+ * after refunds, less the commission still charged) to their connected
+ * account with a key tied to the invoice, then, in one transaction, post the
+ * release and the payout and mark the invoice released. A retry finds the
+ * same transfer and posts nothing twice. A disputed invoice is released only
+ * by its case's decision (`fromDispute`).
  */
-export async function release(invoiceId: string, why: string): Promise<boolean> {
+export async function release(invoiceId: string, why: string, opts: { fromDispute?: boolean } = {}): Promise<boolean> {
   const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
   if (!inv) throw new ApiError("not_found", "No such invoice");
   if (inv.state === "released") return false;
-  if (inv.state !== "delivered") throw new ApiError("conflict", `The invoice is ${inv.state}; escrow is released only after delivery`);
-  const payout = inv.hammer_cents - inv.commission_cents;
-  const account = await payoutAccount(inv.consignor_id);
-  const transfer = await stripe().transfers.create(
-    { amount: payout, currency: stripeConfig().CURRENCY, destination: account, transfer_group: `invoice:${inv.id}`, metadata: { invoice_id: inv.id } },
-    { idempotencyKey: `invoice:${inv.id}:release` },
-  );
+  const releasable = (state: string) => state === "delivered" || (opts.fromDispute === true && state === "disputed");
+  if (!releasable(inv.state)) {
+    throw new ApiError("conflict", inv.state === "disputed" ? "A claim is open on this lot: payment stays held until it is decided" : `The invoice is ${inv.state}; escrow is released only after delivery`);
+  }
+  const left = remainingFigures(inv);
+  const payout = left.hammerCents - left.commissionCents;
+  const account = payout > 0 ? await payoutAccount(inv.consignor_id) : null;
+  const transfer = account
+    ? await stripe().transfers.create(
+      { amount: payout, currency: stripeConfig().CURRENCY, destination: account, transfer_group: `invoice:${inv.id}`, metadata: { invoice_id: inv.id } },
+      { idempotencyKey: `invoice:${inv.id}:release` },
+    )
+    : null;
   const released = await db().transaction(async (t) => {
     const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
-    if (!locked || locked.state !== "delivered") return false;
-    await post(t, "escrow-released", invoiceId, escrowReleasedEntries({ hammerCents: inv.hammer_cents, premiumCents: inv.premium_cents, commissionCents: inv.commission_cents }));
-    await post(t, "payout-sent", invoiceId, payoutSentEntries(payout), transfer.id);
-    await db().query(`UPDATE invoices SET state = 'released', released_at = now(), transfer_id = :tr, updated_at = now() WHERE id = :invoiceId`, { replacements: { tr: transfer.id, invoiceId }, transaction: t });
+    if (!locked || !releasable(locked.state)) return false;
+    if (left.hammerCents + left.premiumCents > 0) await post(t, "escrow-released", invoiceId, escrowReleasedEntries(left));
+    if (transfer) await post(t, "payout-sent", invoiceId, payoutSentEntries(payout), transfer.id);
+    await db().query(`UPDATE invoices SET state = 'released', released_at = now(), transfer_id = :tr, updated_at = now() WHERE id = :invoiceId`, { replacements: { tr: transfer?.id ?? null, invoiceId }, transaction: t });
     return true;
   });
-  if (released) await mailStatement(inv, payout, why).catch((e: Error) => console.error("[mail] statement failed", e.message));
+  if (released) await mailStatement(inv, left, payout, why).catch((e: Error) => console.error("[mail] statement failed", e.message));
   return released;
+}
+
+/** What is left of a sale to release after the refunds already paid on it. */
+export function remainingFigures(inv: Pick<InvoiceRow, "hammer_cents" | "premium_cents" | "commission_cents" | "hammer_refunded_cents" | "premium_refunded_cents" | "commission_returned_cents">) {
+  return {
+    hammerCents: inv.hammer_cents - inv.hammer_refunded_cents,
+    premiumCents: inv.premium_cents - inv.premium_refunded_cents,
+    commissionCents: inv.commission_cents - inv.commission_returned_cents,
+  };
 }
 
 /** Release every delivered invoice whose inspection window has ended without a claim. */
@@ -102,7 +119,7 @@ export async function releaseDue(): Promise<number> {
 }
 
 /** The consignor's statement for the sale, attached as PDF and CSV, with the release explained. */
-async function mailStatement(inv: InvoiceRow, payout: number, why: string): Promise<void> {
+async function mailStatement(inv: InvoiceRow, left: ReturnType<typeof remainingFigures>, payout: number, why: string): Promise<void> {
   const u = await User.findByPk(inv.consignor_id, { attributes: ["id", "email", "displayName", "roles"] });
   if (!u) return;
   const [sl] = await db().query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :id`, { replacements: { id: inv.sale_lot_id }, type: QueryTypes.SELECT });
@@ -111,7 +128,7 @@ async function mailStatement(inv: InvoiceRow, payout: number, why: string): Prom
   await sendMail({
     to: u.email,
     subject: "You have been paid: settlement statement",
-    text: `Hello ${u.displayName},\n\nEscrow for invoice ${inv.number} is released (${why}). ${formatCents(payout)} is on its way to your payout account: hammer ${formatCents(inv.hammer_cents)} less commission ${formatCents(inv.commission_cents)}.\n\nYour statement for the sale is attached (PDF and CSV), and downloadable any time from ${env().NEXTAUTH_URL}/invoices/${inv.id}.\n\nGetterline Exchange`,
+    text: `Hello ${u.displayName},\n\nEscrow for invoice ${inv.number} is released (${why}). ${formatCents(payout)} is on its way to your payout account: hammer ${formatCents(left.hammerCents)} less commission ${formatCents(left.commissionCents)}${left.hammerCents !== inv.hammer_cents ? ` (after a refund to the buyer of ${formatCents(inv.hammer_cents - left.hammerCents)} of the hammer price, with the commission on it given back)` : ""}.\n\nYour statement for the sale is attached (PDF and CSV), and downloadable any time from ${env().NEXTAUTH_URL}/invoices/${inv.id}.\n\nGetterline Exchange`,
     attachments: [
       { filename: "statement.pdf", content: await statementPdf(st), contentType: "application/pdf" },
       { filename: "statement.csv", content: statementCsv(st), contentType: "text/csv" },

@@ -40,6 +40,7 @@ export type InvoiceRow = {
   commission_cents: number; processor_fee_cents: number | null; tube_count: number; due_at: Date; payment_intent_id: string | null;
   last_payment_error: string | null; paid_at: Date | null; carrier: string | null; tracking: string | null; shipped_at: Date | null;
   delivered_at: Date | null; inspection_ends_at: Date | null; released_at: Date | null; transfer_id: string | null; created_at: Date;
+  hammer_refunded_cents: number; premium_refunded_cents: number; commission_returned_cents: number;
 };
 
 /**
@@ -97,7 +98,7 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
 /** One invoice, for its buyer, its consignor (without buyer details) or the house. */
 export async function getInvoice(viewer: Viewer, invoiceId: string) {
   const [inv] = await db().query<InvoiceRow & { title: string; sale_id: string }>(
-    `SELECT i.*, l.title, sl.sale_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id WHERE i.id = :invoiceId`,
+    `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id WHERE i.id = :invoiceId`,
     { replacements: { invoiceId }, type: QueryTypes.SELECT },
   );
   const house = viewer.roles.includes("admin");
@@ -105,7 +106,7 @@ export async function getInvoice(viewer: Viewer, invoiceId: string) {
   return presentInvoice(inv, viewer);
 }
 
-export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: string }, viewer: Viewer) {
+export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: string; dispute_id?: string | null }, viewer: Viewer) {
   const buyerView = viewer.roles.includes("admin") || inv.buyer_id === viewer.id;
   return {
     id: inv.id, number: inv.number, title: inv.title ?? "", saleId: inv.sale_id, saleLotId: inv.sale_lot_id, lotId: inv.lot_id, state: inv.state,
@@ -115,6 +116,9 @@ export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: str
     inspectionEndsAt: inv.inspection_ends_at?.toISOString() ?? null, releasedAt: inv.released_at?.toISOString() ?? null,
     lastPaymentError: buyerView ? inv.last_payment_error : null, isBuyer: inv.buyer_id === viewer.id, isConsignor: inv.consignor_id === viewer.id,
     commissionCents: buyerView && !viewer.roles.includes("admin") ? undefined : inv.commission_cents,
+    refundedCents: inv.hammer_refunded_cents + inv.premium_refunded_cents,
+    commissionReturnedCents: buyerView && !viewer.roles.includes("admin") ? undefined : inv.commission_returned_cents,
+    disputeId: inv.dispute_id ?? null,
   };
 }
 
@@ -122,7 +126,7 @@ export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: str
 export async function listInvoices(viewer: Viewer) {
   const house = viewer.roles.includes("admin");
   const rows = await db().query<InvoiceRow & { title: string; sale_id: string }>(
-    `SELECT i.*, l.title, sl.sale_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id
+    `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id
       ${house ? "" : "WHERE i.buyer_id = :me OR i.consignor_id = :me"} ORDER BY i.created_at DESC LIMIT 500`,
     { replacements: { me: viewer.id }, type: QueryTypes.SELECT },
   );

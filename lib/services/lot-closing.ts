@@ -9,6 +9,7 @@ import { emitTo } from "../realtime/emit";
 import { lotRoom, saleRoom } from "../realtime/events";
 import { db, User } from "../../models";
 import { liveFrom } from "./bidding";
+import { disputeSweep } from "./disputes";
 import { releaseDue } from "./escrow";
 import { invoiceSoldLot, sendReminders } from "./invoices";
 import { notify } from "./notices";
@@ -117,6 +118,7 @@ export async function startClosingWorker(): Promise<() => void> {
     void sweepDueLots().catch((e: Error) => console.error("[close] sweep failed", e.message));
     void releaseDue().catch((e: Error) => console.error("[escrow] sweep failed", e.message));
     void sendReminders().catch((e: Error) => console.error("[invoice] reminders failed", e.message));
+    void disputeSweep().catch((e: Error) => console.error("[disputes] sweep failed", e.message));
   }, 10_000);
   timer.unref();
   return () => clearInterval(timer);

@@ -4,6 +4,8 @@ import { env } from "../config/env";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
 import type { AmendmentInput, ReviewDecision } from "../validation/lots";
+import { needsExtraReview } from "../disputes/rules";
+import { consignorRecord } from "./track-record";
 import { db, Lot, LotEvent, LotItem, User } from "../../models";
 import type { LotState } from "../../models/Lot";
 import { assertConsignorCanEdit } from "./lot-access";
@@ -35,8 +37,12 @@ export async function submitLot(viewer: Viewer, lotId: string): Promise<LotView>
     const items = await LotItem.count({ where: { lotId }, transaction: t });
     if (items === 0) throw new ApiError("conflict", "Add at least one item before submitting the lot");
     const resubmission = lot!.state === "needs-changes";
-    await lot!.update({ state: "in-review", submittedAt: new Date() }, { transaction: t });
-    await LotEvent.create({ lotId, actorId: viewer.id, kind: "submitted", comment: resubmission ? "Resubmitted after changes" : "" }, { transaction: t });
+    // A consignor with repeated upheld misattribution claims has their next lots reviewed more closely.
+    const record = await consignorRecord(viewer.id);
+    const extra = lot!.extraReview || needsExtraReview(record.upheldMisattributionClaims);
+    await lot!.update({ state: "in-review", submittedAt: new Date(), extraReview: extra }, { transaction: t });
+    const note = extra ? `Extra review: ${record.upheldMisattributionClaims} upheld misattribution claim(s) on earlier lots` : "";
+    await LotEvent.create({ lotId, actorId: viewer.id, kind: "submitted", comment: [resubmission ? "Resubmitted after changes" : "", note].filter(Boolean).join(". ") }, { transaction: t });
     return presentLot(lot!, viewer);
   });
 }
@@ -55,6 +61,9 @@ export async function decideLot(admin: Viewer, lotId: string, d: ReviewDecision)
     if (lot.state !== "in-review") throw new ApiError("conflict", `The lot is ${lot.state}, not in review`);
     const now = new Date();
     if (d.action === "approve") {
+      if (lot.extraReview && d.comment.trim().length < 20) {
+        throw new ApiError("validation_failed", "This lot is under extra review: say what you checked of its attributions before approving", { comment: "Record the attribution checks (at least 20 characters)" });
+      }
       await lot.update({
         state: "approved", estimateLowCents: d.estimateLowCents, estimateHighCents: d.estimateHighCents,
         reserveCents: d.reserveCents, reserveAgreedAt: now, approvedAt: now, approvedBy: admin.id,

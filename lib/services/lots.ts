@@ -28,7 +28,7 @@ export function presentItem(i: LotItem) {
   return {
     id: i.id, position: i.position, designationTyped: i.designationTyped, designation: i.designation, designationKnown: i.designationKnown,
     quantity: i.quantity, labelBrand: i.labelBrand, makerName: i.makerName, makerBasis: i.makerBasis, sourceCode: i.sourceCode,
-    dateCode: i.dateCode, features: i.features, condition: i.condition, vacuumLoss: i.vacuumLoss, defects: i.defects,
+    dateCode: i.dateCode, features: i.features, condition: i.condition, vacuumLoss: i.vacuumLoss, soldAsSet: i.soldAsSet, defects: i.defects,
     hazards: i.hazards, readings: i.readings, notes: i.notes,
   };
 }
@@ -114,7 +114,7 @@ function itemValues(input: ItemInput) {
   return {
     designationTyped: input.designation, designation, designationKnown: known, quantity: input.quantity, labelBrand: input.labelBrand,
     makerName: input.makerName || null, makerBasis: input.makerBasis, sourceCode: input.sourceCode || null, dateCode: input.dateCode || null,
-    features: normaliseFeatures(input.features), condition: input.condition, vacuumLoss: input.vacuumLoss, defects: input.defects,
+    features: normaliseFeatures(input.features), condition: input.condition, vacuumLoss: input.vacuumLoss, soldAsSet: input.soldAsSet ?? false, defects: input.defects,
     hazards: input.hazards, readings: input.readings, notes: input.notes,
   };
 }

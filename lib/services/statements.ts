@@ -21,8 +21,8 @@ export type Statement = {
  */
 export async function statementFor(viewer: Viewer, saleId: string, consignorId?: string): Promise<Statement> {
   const who = consignorId && viewer.roles.includes("admin") ? consignorId : viewer.id;
-  const rows = await db().query<{ number: string; title: string; state: string; hammer_cents: number; commission_cents: number; released_at: Date | null; transfer_id: string | null; consignor: string; sale_title: string }>(
-    `SELECT i.number, l.title, i.state, i.hammer_cents, i.commission_cents, i.released_at, i.transfer_id, u.display_name AS consignor, s.title AS sale_title
+  const rows = await db().query<{ number: string; title: string; state: string; hammer_cents: number; commission_cents: number; hammer_refunded_cents: number; commission_returned_cents: number; released_at: Date | null; transfer_id: string | null; consignor: string; sale_title: string }>(
+    `SELECT i.number, l.title, i.state, i.hammer_cents, i.commission_cents, i.hammer_refunded_cents, i.commission_returned_cents, i.released_at, i.transfer_id, u.display_name AS consignor, s.title AS sale_title
        FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id JOIN sales s ON s.id = sl.sale_id JOIN users u ON u.id = i.consignor_id
       WHERE sl.sale_id = :saleId AND i.consignor_id = :who ORDER BY sl.position`,
     { replacements: { saleId, who }, type: QueryTypes.SELECT },
@@ -30,7 +30,8 @@ export async function statementFor(viewer: Viewer, saleId: string, consignorId?:
   if (!rows.length) throw new ApiError("not_found", "No sold lots of yours in this sale");
   const lines: StatementLine[] = rows.map((r) => {
     const fees = 0;
-    const refunds = 0;
+    // A refund to the buyer takes its share of the hammer from the consignor, who gets that share's commission back.
+    const refunds = r.hammer_refunded_cents - r.commission_returned_cents;
     return {
       invoiceNumber: r.number, lotTitle: r.title, state: r.state, hammerCents: r.hammer_cents, commissionCents: r.commission_cents, feesCents: fees,
       refundsCents: refunds, payoutCents: r.hammer_cents - r.commission_cents - fees - refunds, releasedAt: r.released_at?.toISOString() ?? null, transferId: r.transfer_id,

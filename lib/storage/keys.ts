@@ -35,3 +35,9 @@ export function assertObjectKey(key: string): string {
   if (Buffer.byteLength(key, "utf8") > 1024) throw new Error("object key longer than 1,024 bytes");
   return key;
 }
+
+/** claims/<disputeId>/<evidenceId>/<rendition>.jpg — a photo posted as evidence in a claim. */
+export function claimPhotoObjectKeys(disputeId: string, evidenceId: string): Record<PhotoRendition, string> {
+  const base = `claims/${segment(disputeId, "claim id")}/${segment(evidenceId, "evidence id")}`;
+  return { full: `${base}/full.jpg`, thumb: `${base}/thumb.jpg` };
+}

@@ -44,12 +44,15 @@ export const ItemSchema = z.object({
   features: z.record(z.string().max(40), z.string().max(80)).refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
   condition: z.enum(CONDITION_VALUES, { message: "Choose the condition" }),
   vacuumLoss: z.boolean(),
+  /** Listed as one matched set (pair, quad…): refunds treat it as one line. */
+  soldAsSet: z.boolean().optional(),
   defects: z.array(text(200)).max(10),
   hazards: z.array(z.enum(HAZARD_VALUES)).max(4),
   readings: z.array(ReadingSchema).max(500),
   notes: text(1000),
 }).refine((i) => i.readings.every((r) => r.sections.length > 0 || r.shorts || r.leakage || r.gas), { message: "Each reading needs a section value, or a short, leakage or gas failure", path: ["readings"] })
   .refine((i) => i.readings.every((r) => r.tubeNo <= i.quantity), { message: "A reading names a tube number above the quantity", path: ["readings"] })
+  .refine((i) => !i.soldAsSet || i.quantity >= 2, { message: "A matched set has at least 2 tubes", path: ["soldAsSet"] })
   .refine((i) => i.makerBasis === "unconfirmed" || Boolean(i.makerName), { message: "Name the maker, or mark it unconfirmed", path: ["makerName"] })
   .refine((i) => i.makerBasis !== "source-code-confirmed" || Boolean(i.sourceCode), { message: "A source-code confirmation needs the source code", path: ["sourceCode"] });
 export type ItemInput = z.infer<typeof ItemSchema>;

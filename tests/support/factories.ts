@@ -82,12 +82,12 @@ export function itemInput(over: Partial<import("../../lib/validation/lots").Item
   };
 }
 
-/** An approved lot with one item, ready to be offered in a sale. */
-export async function approvedLot(consignor: User, admin: User, reserveCents = 5_000) {
+/** An approved lot (one plain item unless others are given), ready to be offered in a sale. */
+export async function approvedLot(consignor: User, admin: User, reserveCents = 5_000, items: import("../../lib/validation/lots").ItemInput[] = [itemInput()]) {
   const { createLot, addItem } = await import("../../lib/services/lots");
   const { submitLot, decideLot } = await import("../../lib/services/lot-review");
   const lot = await createLot(viewerOf(consignor), { title: `Test lot ${Date.now()}`, provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" });
-  await addItem(viewerOf(consignor), lot.id, itemInput());
+  for (const item of items) await addItem(viewerOf(consignor), lot.id, item);
   await submitLot(viewerOf(consignor), lot.id);
   await decideLot(viewerOf(admin), lot.id, { action: "approve", comment: "", estimateLowCents: reserveCents, estimateHighCents: reserveCents * 2, reserveCents, reserveAgreed: true });
   return lot;

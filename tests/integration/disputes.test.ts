@@ -1,0 +1,224 @@
+import { QueryTypes } from "sequelize";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ApiError } from "../../lib/api/errors";
+import type { User } from "../../models";
+import { placeMaxBid } from "../../lib/services/bidding";
+import {
+  addDisputePhoto, confirmReturnReceived, decide, getCase, mediationQueue, myCases, openDispute, postMessage, readDisputePhoto, recordReturn,
+  takeCase, workspace,
+} from "../../lib/services/disputes";
+import { markDelivered, markShipped, releaseDue } from "../../lib/services/escrow";
+import { balances, trialBalance } from "../../lib/services/ledger";
+import { closeSaleLot } from "../../lib/services/lot-closing";
+import { createLot, addItem } from "../../lib/services/lots";
+import { submitLot } from "../../lib/services/lot-review";
+import { payInvoice } from "../../lib/services/payments";
+import { reconcile } from "../../lib/services/reconcile";
+import { createSale } from "../../lib/services/sales";
+import { statementFor } from "../../lib/services/statements";
+import { consignorRecord } from "../../lib/services/track-record";
+import type { OpenDisputeInput } from "../../lib/validation/disputes";
+import { db, Lot } from "../../models";
+import { startTestS3, type TestS3 } from "../setup/s3";
+import { startTestStripe, type TestStripe } from "../setup/stripe";
+import { approvedLot, inbox, itemInput, makeUser, viewerOf } from "../support/factories";
+import sharp from "sharp";
+import { stripe } from "../../lib/stripe/client";
+
+let fake: TestStripe;
+let s3: TestS3;
+beforeAll(async () => { fake = await startTestStripe(); s3 = await startTestS3(); });
+afterAll(async () => { await fake.stop(); await s3.stop(); });
+
+const one = async <T extends object>(sql: string, r: Record<string, unknown>) => (await db().query<T>(sql, { replacements: r, type: QueryTypes.SELECT }))[0]!;
+const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000): Promise<T> => {
+  const end = Date.now() + ms;
+  let v = await fn();
+  while (!ok(v) && Date.now() < end) { await new Promise((r) => setTimeout(r, 100)); v = await fn(); }
+  return v;
+};
+const refused = async (p: Promise<unknown>) => { const e = await p.then(() => null, (x: unknown) => x); expect(e).toBeInstanceOf(ApiError); return e as ApiError; };
+
+/** Three lines: four tubes attributed to a maker, two sold by label alone, and a matched quad. */
+const LINES = [
+  itemInput({ designation: "12AX7", quantity: 4, labelBrand: "Carrow Instruments", makerName: "Kestrel Valve Company", makerBasis: "construction-matched", features: { plateColour: "black", getterShape: "d-shape" } }),
+  itemInput({ designation: "6SN7GT", quantity: 2, labelBrand: "Fairmont Home Radio" }),
+  itemInput({ designation: "EL84", quantity: 4, labelBrand: "Tri-County Parts", makerName: "Vireo Lamp & Valve", makerBasis: "construction-matched", soldAsSet: true }),
+];
+
+/** A lot sold for a hammer of $27.00, paid, shipped and delivered (inspection window open). */
+async function deliveredLot(consignor?: User) {
+  const admin = await makeUser(["admin"]);
+  const seller = consignor ?? await makeUser(["consignor"]);
+  const lot = await approvedLot(seller, admin, 2_000, LINES);
+  const sale = await createSale(viewerOf(admin), { title: "Claims test", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 2_500).toISOString(), gapSeconds: 30, softCloseSeconds: 1, lots: [{ lotId: lot.id, openingCents: 1_000 }] });
+  const sl = await one<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, { id: sale.id });
+  const buyer = await makeUser(["dealer"]);
+  const under = await makeUser(["dealer"]);
+  await placeMaxBid(viewerOf(buyer), sl.id, 3_000, "c-1");
+  await placeMaxBid(viewerOf(under), sl.id, 2_500, "c-2");
+  await new Promise((r) => setTimeout(r, 2_700));
+  expect(await closeSaleLot(sl.id)).toBe("closed");
+  const inv = await one<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, { id: sl.id });
+  await payInvoice(viewerOf(buyer), inv.id, { number: "4242424242424242", expMonth: 12, expYear: 2030, cvc: "123", attemptKey: `pay-${inv.id}` });
+  await until(() => one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: inv.id }), (i) => i.state === "paid-held");
+  await markShipped(inv.id, "Demo Parcel Co.", "DP55501");
+  await markDelivered(inv.id);
+  const items = await db().query<{ id: string; position: number }>(`SELECT id, position FROM lot_items WHERE lot_id = :id ORDER BY position`, { replacements: { id: lot.id }, type: QueryTypes.SELECT });
+  return { invoiceId: inv.id, buyer, consignor: seller, admin, saleId: sale.id, lotId: lot.id, items: items.map((i) => i.id) };
+}
+
+const claim = (itemId: string, over: Partial<OpenDisputeInput> = {}): OpenDisputeInput => ({
+  reason: "maker-misattributed", remedy: "refund-affected-items",
+  statement: "Two of the four carry another maker's source code and square getters.",
+  items: [{ itemId, tubes: 2, sourceCode: "946", dateCode: "6231", features: { getterShape: "square", plateSurface: "dimpled" }, readings: [], designationSeen: null, tubesReceived: null, vacuumLoss: false, note: "" }],
+  ...over,
+});
+
+describe("claims and mediation", () => {
+  it("a misattribution claim from opening to a partial refund that agrees to the cent with the statement and the ledger", async () => {
+    const f = await deliveredLot();
+    const buyer = viewerOf(f.buyer);
+    const consignor = viewerOf(f.consignor);
+
+    // Line 2 was sold by its label alone: no maker claim to be wrong about [CTP: label ≠ maker].
+    const labelOnly = await refused(openDispute(buyer, f.invoiceId, claim(f.items[1]!)));
+    expect(labelOnly.status).toBe(400);
+    expect(labelOnly.message).toMatch(/label .*alone/);
+
+    const { id } = await openDispute(buyer, f.invoiceId, claim(f.items[0]!));
+    expect((await openDispute(buyer, f.invoiceId, claim(f.items[0]!))).id).toBe(id); // a retry finds the open claim
+    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: f.invoiceId })).state).toBe("disputed");
+    expect((await inbox(f.consignor.email)).some((m) => m.subject.includes("opened a claim"))).toBe(true);
+
+    // Escrow stays held even after the window ends while the claim is open.
+    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: f.invoiceId } });
+    expect(await releaseDue()).toBe(0);
+
+    // Evidence: a photo, re-encoded and kept; it cannot be edited or deleted afterwards.
+    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#777" } }).jpeg().toBuffer();
+    const photo = await addDisputePhoto(buyer, id, { name: "getter.jpg", bytes: jpeg }, { itemId: f.items[0]!, caption: "Square getter, code 946" });
+    expect((await readDisputePhoto(consignor, photo.id, "thumb")).contentType).toBe("image/jpeg");
+    await expect(db().query(`UPDATE dispute_messages SET body = 'changed' WHERE dispute_id = :id`, { replacements: { id } })).rejects.toThrow(/cannot be changed/);
+    await expect(db().query(`DELETE FROM dispute_evidence WHERE id = :id`, { replacements: { id: photo.id } })).rejects.toThrow(/cannot be changed/);
+
+    // Nobody else reads the case: another dealer, another consignor; the queue is for mediators only.
+    const stranger = viewerOf(await makeUser(["dealer"]));
+    const otherConsignor = viewerOf(await makeUser(["consignor"]));
+    expect((await refused(getCase(stranger, id))).status).toBe(404);
+    expect((await refused(getCase(otherConsignor, id))).status).toBe(404);
+    expect((await refused(readDisputePhoto(stranger, photo.id, "full"))).status).toBe(404);
+    expect((await refused(mediationQueue(stranger))).status).toBe(403);
+    expect(await myCases(stranger)).toEqual([]);
+    expect((await myCases(consignor)).map((c) => c.id)).toEqual([id]);
+
+    // Two mediators: the first takes it, the second is refused.
+    const m1 = viewerOf(await makeUser(["mediator"]));
+    const m2 = viewerOf(await makeUser(["mediator"]));
+    expect((await mediationQueue(m1)).waiting.map((c) => c.id)).toContain(id);
+    await takeCase(m1, id);
+    expect((await refused(takeCase(m2, id))).status).toBe(409);
+    expect((await mediationQueue(m2)).waiting.map((c) => c.id)).not.toContain(id);
+
+    // Before the consignor answers (and before the deadline) the mediator cannot decide.
+    const lines = [{ itemId: f.items[0]!, valueCents: 1_000 }, { itemId: f.items[1]!, valueCents: 500 }, { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 }];
+    const decision = { outcome: "partial-refund" as const, reasons: "Code 946 and the square getter point to another maker on two tubes.", lines, rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }] };
+    expect((await refused(decide(m1, id, decision))).message).toMatch(/has until/);
+    expect((await refused(postMessage(consignor, id, { body: "I bought them as they are." }))).status).toBe(400); // the answer needs a stance
+    await postMessage(consignor, id, { body: "They came from the estate as listed; I matched them by construction.", stance: "contests" });
+    await postMessage(m1, id, { body: "Thank you both; I am comparing the codes and construction." });
+    const view = await getCase(buyer, id);
+    expect(view.messages.map((m) => m.role)).toEqual(["buyer", "consignor", "mediator"]);
+    expect(view.sale.commissionCents).toBeNull(); // the buyer does not see the consignor's commission
+
+    const ws = await workspace(m1, id);
+    expect(ws.weighings).toHaveLength(1);
+    expect(ws.weighings[0]!.buyer.ranking.candidates).toBeDefined();
+    expect(ws.summary.items).toBe(1);
+
+    // The decision is taken once: the same mediator twice at once, and the other mediator, get 409.
+    const [a, b] = await Promise.allSettled([decide(m1, id, decision), decide(m1, id, decision)]);
+    expect([a.status, b.status].sort()).toEqual(["fulfilled", "rejected"]);
+    const lost = (a.status === "rejected" ? a.reason : (b as PromiseRejectedResult).reason) as ApiError;
+    expect(lost.status).toBe(409);
+    expect((await refused(decide(m2, id, decision))).status).toBe(409);
+
+    // Hand-worked from the partial-refund formula (brief §8): V_lot = 4×$10 + 2×$5 + $50 set = $100;
+    // W = 2 × ($10 − $3) = $14; hammer $27.00 × 14 % = $3.78; premium $2.70 × 14 % = $0.378 → $0.38;
+    // commission $5.40 × 14 % = $0.756 → $0.76 (half-up). Buyer gets $4.16; consignor bears −$3.78 + $0.76 = −$3.02.
+    const closed = await getCase(consignor, id);
+    expect(closed.state).toBe("closed");
+    expect(closed.outcome).toBe("partial-refund");
+    expect(closed.decidedBy).toBe(m1.name);
+    expect(closed.decision?.buyerRefundCents).toBe(416);
+    expect(closed.decision?.consignorChangeCents).toBe(-302);
+    const inv = await one<{ state: string; hammer_refunded_cents: number; premium_refunded_cents: number; commission_returned_cents: number; payment_intent_id: string; transfer_id: string }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+    expect(inv.state).toBe("released");
+    expect([inv.hammer_refunded_cents, inv.premium_refunded_cents, inv.commission_returned_cents]).toEqual([378, 38, 76]);
+
+    // The processor agrees: one refund of $4.16 on the payment, one transfer of what is left.
+    const refunds = await stripe().refunds.list({ payment_intent: inv.payment_intent_id });
+    expect(refunds.data.map((r) => r.amount)).toEqual([416]);
+    const transfer = await stripe().transfers.retrieve(inv.transfer_id);
+    expect(transfer.amount).toBe(2_700 - 540 - 302); // $18.58
+
+    // The statement and the ledger agree with both.
+    const st = await statementFor(consignor, f.saleId);
+    expect(st.lines[0]!.refundsCents).toBe(302);
+    expect(st.totals.payoutCents).toBe(transfer.amount);
+    const led = await balances(f.invoiceId);
+    expect(led["escrow-held"]).toBe(0);
+    expect(led["consignor-payable"]).toBe(0);
+    expect(led["house-revenue-premium"]).toBe(-(270 - 38));
+    expect(led["house-revenue-commission"]).toBe(-(540 - 76));
+    expect(await trialBalance()).toBe(0);
+    expect((await reconcile()).differences).toEqual([]);
+
+    const decisionMails = [...await inbox(f.buyer.email), ...await inbox(f.consignor.email)].filter((m) => m.subject.includes("Decision on"));
+    expect(decisionMails).toHaveLength(2);
+    expect(decisionMails.every((m) => m.text.includes("Code 946 and the square getter"))).toBe(true);
+
+    // The record dealers see on this consignor's next lots.
+    const record = await consignorRecord(f.consignor.id);
+    expect(record).toMatchObject({ tubesSold: 10, tubesDisputed: 2, tubesUpheld: 2, upheldMisattributionClaims: 1 });
+  }, 90_000);
+
+  it("refuses a claim after the inspection window with the date it closed", async () => {
+    const f = await deliveredLot();
+    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 minute' WHERE id = :id`, { replacements: { id: f.invoiceId } });
+    const e = await refused(openDispute(viewerOf(f.buyer), f.invoiceId, claim(f.items[0]!)));
+    expect(e.status).toBe(409);
+    expect(e.message).toMatch(/inspection window closed on \d{4}-\d{2}-\d{2}/);
+    expect(await releaseDue()).toBeGreaterThanOrEqual(1); // and the sweeper pays the consignor as usual
+  }, 60_000);
+
+  it("a refund on return pays the buyer the hammer and premium once the consignor confirms receipt; two upheld misattributions send the next lot to extra review", async () => {
+    const seller = await makeUser(["consignor"]);
+    for (let round = 0; round < 2; round++) {
+      const f = await deliveredLot(seller);
+      const { id } = await openDispute(viewerOf(f.buyer), f.invoiceId, claim(f.items[0]!, { remedy: "return-whole-lot" }));
+      await postMessage(viewerOf(f.consignor), id, { body: "Send them back, then.", stance: "accepts" });
+      const m = viewerOf(await makeUser(["mediator"]));
+      await takeCase(m, id);
+      await decide(m, id, { outcome: "refund-on-return", reasons: "The consignor accepts the claim; the whole lot goes back for a refund." });
+      expect((await getCase(viewerOf(f.buyer), id)).state).toBe("awaiting-return");
+      expect((await refused(confirmReturnReceived(viewerOf(f.consignor), id))).status).toBe(409); // nothing shipped yet
+      await recordReturn(viewerOf(f.buyer), id, { carrier: "Demo Parcel Co.", tracking: "RT 000111" });
+      await confirmReturnReceived(viewerOf(f.consignor), id);
+      const inv = await one<{ state: string; payment_intent_id: string; hammer_cents: number; premium_cents: number }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+      expect(inv.state).toBe("refunded");
+      const refunds = await stripe().refunds.list({ payment_intent: inv.payment_intent_id });
+      expect(refunds.data.map((r) => r.amount)).toEqual([inv.hammer_cents + inv.premium_cents]);
+      expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.payoutCents).toBe(0);
+      const led = await balances(f.invoiceId);
+      expect(led["escrow-held"]).toBe(0);
+      expect(led["house-revenue-commission"]).toBe(0);
+    }
+    expect(await trialBalance()).toBe(0);
+    // House setting: two upheld misattribution claims [SUG] → the next lot is reviewed more closely.
+    const lot = await createLot(viewerOf(seller), { title: "After two upheld claims", provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" });
+    await addItem(viewerOf(seller), lot.id, itemInput());
+    await submitLot(viewerOf(seller), lot.id);
+    expect((await Lot.findByPk(lot.id))!.extraReview).toBe(true);
+  }, 120_000);
+});
