@@ -14,6 +14,7 @@ export function navFor(viewer: Viewer | null): NavItem[] {
   items.push({ href: "/sales", label: "Sales" });
   items.push({ href: "/lots", label: "Lots" });
   items.push({ href: "/invoices", label: "Invoices" });
+  if (can(viewer.roles, "lots.consign") || can(viewer.roles, "lots.bid")) items.push({ href: "/disputes", label: "Claims" });
   if (can(viewer.roles, "lots.consign")) items.push({ href: "/consignor", label: "My consignments" });
   if (can(viewer.roles, "lots.bid")) items.push({ href: "/dealer", label: "Dealer desk" });
   if (can(viewer.roles, "shelf.use")) items.push({ href: "/shelf", label: "Unconfirmed shelf" });

@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
@@ -56,6 +57,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
         <tbody>
           {rows.map(([k, v]) => <tr key={k}><td className="py-1">{k}</td><td className="code py-1 text-right">{formatCents(v)}</td></tr>)}
           <tr className="border-t border-flash-300 font-semibold"><td className="py-1">Total</td><td data-testid="invoice-total" className="code py-1 text-right">{formatCents(inv.totalCents)}</td></tr>
+          {inv.refundedCents ? <tr className="text-sound-700"><td className="py-1">Refunded to the buyer after a claim</td><td data-testid="invoice-refunded" className="code py-1 text-right">−{formatCents(inv.refundedCents)}</td></tr> : null}
           {inv.commissionCents != null ? <tr className="text-flash-600"><td className="py-1">Seller&apos;s commission (from the consignor&apos;s side)</td><td className="code py-1 text-right">{formatCents(inv.commissionCents)}</td></tr> : null}
         </tbody>
       </table>
@@ -67,8 +69,14 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
         <li>Delivered: {inv.deliveredAt ? inv.deliveredAt.slice(0, 10) : "not yet"}{inv.inspectionEndsAt ? ` · inspection window ends ${inv.inspectionEndsAt.slice(0, 16).replace("T", " ")} UTC` : ""}</li>
         <li>Released to the consignor: {inv.releasedAt ? inv.releasedAt.slice(0, 10) : "not yet"}</li>
       </ol>
-      {inv.isBuyer && inv.state === "delivered" ? (
-        <button type="button" className="btn-primary" onClick={() => void act(`/api/invoices/${inv.id}/accept`)}>I have inspected the tubes: release payment now</button>
+      {inv.isBuyer && inv.state === "delivered" && inv.inspectionEndsAt && Date.parse(inv.inspectionEndsAt) > Date.now() ? (
+        <div className="flex flex-wrap items-center gap-3">
+          <button type="button" className="btn-primary" onClick={() => void act(`/api/invoices/${inv.id}/accept`)}>I have inspected the tubes: release payment now</button>
+          <Link href={`/invoices/${inv.id}/claim`} className="btn-quiet">Something is not as listed: open a claim</Link>
+        </div>
+      ) : null}
+      {inv.disputeId ? (
+        <p className="card text-sm">A claim is {inv.state === "disputed" ? "open" : "recorded"} on this lot: <Link href={`/disputes/${inv.disputeId}`} className="font-medium underline">read the claim</Link>{inv.state === "disputed" ? ". Payment stays held until it is decided." : "."}</p>
       ) : null}
       {house && inv.state === "paid-held" ? (
         <form className="card flex flex-wrap items-end gap-2" onSubmit={(e) => { e.preventDefault(); void act(`/api/house/invoices/${inv.id}/ship`, { carrier, tracking }); }} aria-label="Record the shipment">

@@ -5,7 +5,7 @@ export const INVOICE_STATE_WORDS: Record<string, string> = {
   shipped: "Shipped",
   delivered: "Delivered, inspection open",
   released: "Released to the consignor",
-  disputed: "In dispute",
+  disputed: "Claim open: payment held",
   refunded: "Refunded",
   cancelled: "Cancelled",
 };

@@ -1,4 +1,6 @@
 import { CautionStrip } from "@/components/CautionStrip";
+import { ConsignorRecord } from "@/components/disputes/ConsignorRecord";
+import type { TrackRecord } from "@/lib/disputes/rules";
 import type { LotSummary, NominalPoint } from "@/lib/lots/summary";
 import { formatCents } from "@/lib/money/cents";
 import type { getLot } from "@/lib/services/lots";
@@ -12,7 +14,7 @@ import { TESTER_WORDS } from "./words";
 type Data = Awaited<ReturnType<typeof getLot>>;
 
 /** A lot as a reader sees it: summary first, then items, photos, provenance and the trail. */
-export function LotView({ data, summary, chart, actions }: { data: Data; summary: LotSummary; chart: NominalPoint[]; actions?: React.ReactNode }) {
+export function LotView({ data, summary, chart, actions, record }: { data: Data; summary: LotSummary; chart: NominalPoint[]; actions?: React.ReactNode; record?: TrackRecord }) {
   const { lot } = data;
   return (
     <article className="space-y-6">
@@ -26,6 +28,7 @@ export function LotView({ data, summary, chart, actions }: { data: Data; summary
           {lot.estimateLowCents != null && lot.estimateHighCents != null ? <> · house estimate <strong>{formatCents(lot.estimateLowCents)}–{formatCents(lot.estimateHighCents)}</strong></> : null}
           {lot.reserveCents != null ? <> · reserve {formatCents(lot.reserveCents)} <span className="text-flash-500">(not shown to bidders)</span></> : null}
         </p>
+        {record ? <ConsignorRecord record={record} /> : null}
       </header>
       {actions}
       <CautionStrip anchor="high-voltage">Testing these tubes puts lethal voltages on the tester; handle glass by the base and pack each tube on its own.</CautionStrip>

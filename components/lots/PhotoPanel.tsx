@@ -4,13 +4,13 @@ import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
 import { ACCEPTED_PHOTO_LABELS, MAX_PHOTO_BYTES, PHOTO_ACCEPT_ATTRIBUTE } from "@/lib/photos/formats";
 
-type Photo = { id: string; itemId: string | null; caption: string; width: number; height: number };
+type Photo = { id: string; itemId: string | null; caption: string; width: number; height: number; byline?: string };
 type Upload = { name: string; progress: number; error?: string };
 
-function send(lotId: string, file: File, itemId: string, onProgress: (p: number) => void): Promise<void> {
+function send(path: string, file: File, itemId: string, caption: string, onProgress: (p: number) => void): Promise<void> {
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
-    xhr.open("POST", `/api/lots/${lotId}/photos`);
+    xhr.open("POST", path);
     xhr.upload.onprogress = (e) => { if (e.lengthComputable) onProgress(Math.round((e.loaded / e.total) * 100)); };
     xhr.onload = () => {
       if (xhr.status < 300) return resolve();
@@ -20,14 +20,21 @@ function send(lotId: string, file: File, itemId: string, onProgress: (p: number)
     const form = new FormData();
     form.append("file", file);
     if (itemId) form.append("itemId", itemId);
+    if (caption) form.append("caption", caption);
     xhr.send(form);
   });
 }
 
-/** Photos of a lot: a gallery for everyone who may see it; uploads with progress while the consignor may edit. */
-export function PhotoPanel({ lotId, photos, items, editable, onChange }: {
+/**
+ * Photos of a lot (or of a claim's evidence): a gallery for everyone who may
+ * see it; uploads with progress while `editable`. Claim evidence passes its
+ * own upload and image paths, takes captions, and cannot be removed.
+ */
+export function PhotoPanel({ lotId, photos, items, editable, onChange, uploadPath, srcBase = "/api/photos", removable = editable, withCaption = false, heading = "Photos" }: {
   lotId: string; photos: Photo[]; items: { id: string; label: string }[]; editable: boolean; onChange?: () => void;
+  uploadPath?: string; srcBase?: string; removable?: boolean; withCaption?: boolean; heading?: string;
 }) {
+  const [caption, setCaption] = useState("");
   const [uploads, setUploads] = useState<Upload[]>([]);
   const [itemId, setItemId] = useState("");
   const [problem, setProblem] = useState<string | null>(null);
@@ -39,7 +46,7 @@ export function PhotoPanel({ lotId, photos, items, editable, onChange }: {
     for (const [i, f] of list.entries()) {
       if (f.size > MAX_PHOTO_BYTES) continue;
       try {
-        await send(lotId, f, itemId, (p) => setUploads((u) => u.map((x, j) => (j === i ? { ...x, progress: p } : x))));
+        await send(uploadPath ?? `/api/lots/${lotId}/photos`, f, itemId, caption, (p) => setUploads((u) => u.map((x, j) => (j === i ? { ...x, progress: p } : x))));
         setUploads((u) => u.map((x, j) => (j === i ? { ...x, progress: 100 } : x)));
       } catch (e) {
         setUploads((u) => u.map((x, j) => (j === i ? { ...x, error: (e as Error).message } : x)));
@@ -58,7 +65,7 @@ export function PhotoPanel({ lotId, photos, items, editable, onChange }: {
   const itemLabel = (id: string | null) => (id ? items.find((i) => i.id === id)?.label ?? "an item" : "the lot");
   return (
     <section aria-labelledby="photos-h" className="space-y-3">
-      <h2 id="photos-h" className="text-lg font-semibold">Photos <span className="text-sm font-normal text-flash-600">({photos.length})</span></h2>
+      <h2 id="photos-h" className="text-lg font-semibold">{heading} <span className="text-sm font-normal text-flash-600">({photos.length})</span></h2>
       {problem ? <FormAlert>{problem}</FormAlert> : null}
       {editable ? (
         <div className="card space-y-3">
@@ -74,6 +81,12 @@ export function PhotoPanel({ lotId, photos, items, editable, onChange }: {
                 {items.map((i) => <option key={i.id} value={i.id}>{i.label}</option>)}
               </select>
             </label>
+            {withCaption ? (
+              <label className="text-sm">
+                <span className="label">Caption</span>
+                <input className="input mt-1" maxLength={200} value={caption} onChange={(e) => setCaption(e.target.value)} />
+              </label>
+            ) : null}
             <label className="text-sm">
               <span className="label">Choose photos</span>
               <input type="file" multiple accept={PHOTO_ACCEPT_ATTRIBUTE} className="mt-1 block text-sm" onChange={(e) => void onFiles(e.target.files)} />
@@ -97,12 +110,12 @@ export function PhotoPanel({ lotId, photos, items, editable, onChange }: {
         <ul className="grid grid-cols-2 gap-3 sm:grid-cols-4 lg:grid-cols-6">
           {photos.map((p) => (
             <li key={p.id} className="space-y-1">
-              <a href={`/api/photos/${p.id}?size=full`} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-md border border-flash-200 bg-white">
+              <a href={`${srcBase}/${p.id}?size=full`} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-md border border-flash-200 bg-white">
                 {/* eslint-disable-next-line @next/next/no-img-element -- permission-checked route, not a static asset */}
-                <img src={`/api/photos/${p.id}?size=thumb`} alt={`Photo of ${itemLabel(p.itemId)}${p.caption ? `: ${p.caption}` : ""}`} className="aspect-square w-full object-cover" loading="lazy" />
+                <img src={`${srcBase}/${p.id}?size=thumb`} alt={`Photo of ${itemLabel(p.itemId)}${p.caption ? `: ${p.caption}` : ""}`} className="aspect-square w-full object-cover" loading="lazy" />
               </a>
-              <p className="text-xs text-flash-600">{itemLabel(p.itemId)}</p>
-              {editable ? <button type="button" className="text-xs underline" onClick={() => void remove(p.id)}>Remove</button> : null}
+              <p className="text-xs text-flash-600">{itemLabel(p.itemId)}{p.caption && withCaption ? `: ${p.caption}` : ""}{p.byline ? ` · ${p.byline}` : ""}</p>
+              {removable ? <button type="button" className="text-xs underline" onClick={() => void remove(p.id)}>Remove</button> : null}
             </li>
           ))}
         </ul>

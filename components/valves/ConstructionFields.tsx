@@ -27,7 +27,7 @@ export function ConstructionFields({ register, prefix = "features" }: { register
           <div className="grid gap-2 sm:grid-cols-3 lg:grid-cols-4">
             {g.keys.map((k) => {
               const f = FEATURE_FIELDS[k];
-              const id = `feat-${k}`;
+              const id = prefix === "features" ? `feat-${k}` : `${prefix.replace(/\W/g, "-")}-feat-${k}`;
               const options =
                 f.choice.kind === "enum" ? f.choice.values
                 : f.choice.kind === "count" ? Array.from({ length: f.choice.max - f.choice.min + 1 }, (_, i) => String(f.choice.kind === "count" ? f.choice.min + i : i))

@@ -71,8 +71,10 @@ export const STANCE_WORDS: Record<Stance, string> = {
 
 /** The house's dispute settings [SUG: our own figures]. */
 export const DISPUTE_SETTINGS = Object.freeze({
-  /** Days the consignor has to answer a claim. */
-  answerDays: 5,
+  /** Business days the consignor has to accept or contest a claim [brief §8: "~3 business days"]. */
+  answerBusinessDays: 3,
+  /** Hours after delivery within which a breakage claim must be opened [CTP, brief §8: 48 h, with packaging photos]. */
+  breakageClaimHours: 48,
   /** Days the buyer has to ship a lot back after a refund-on-return decision. */
   returnShipDays: 14,
   /** Days after the return ships within which the consignor confirms receipt; after that the refund is paid anyway. */
@@ -83,9 +85,20 @@ export const DISPUTE_SETTINGS = Object.freeze({
 
 const DAY_MS = 86_400_000;
 
-/** When the consignor's answer is due for a claim opened at `openedAtMs`. */
-export function answerDueAt(openedAtMs: number, days = DISPUTE_SETTINGS.answerDays): number {
-  return openedAtMs + days * DAY_MS;
+/**
+ * When the consignor's answer is due for a claim opened at `openedAtMs`: the
+ * same time of day `days` business days later, skipping Saturdays and Sundays
+ * (UTC; public holidays are not known to us).
+ */
+export function answerDueAt(openedAtMs: number, days: number = DISPUTE_SETTINGS.answerBusinessDays): number {
+  let t = openedAtMs;
+  let left = days;
+  while (left > 0) {
+    t += DAY_MS;
+    const wd = new Date(t).getUTCDay();
+    if (wd !== 0 && wd !== 6) left--;
+  }
+  return t;
 }
 
 /** The invoice facts that decide whether a claim may be opened. */
@@ -97,14 +110,18 @@ export interface ClaimableInvoice {
 
 /**
  * Why a claim cannot be opened now, or null when it can: only on a
- * delivered lot, and only before its inspection window ends.
+ * delivered lot, and only before its inspection window ends; breakage in
+ * transit only within 48 hours of delivery [CTP, brief §8].
  */
-export function openingRefusal(inv: ClaimableInvoice, nowMs: number): string | null {
+export function openingRefusal(inv: ClaimableInvoice, nowMs: number, reason?: DisputeReason): string | null {
   if (inv.state === "disputed") return "A claim is already open on this lot.";
   if (inv.state === "released") return "The payment has been released to the consignor: the inspection window is over, so a claim can no longer be opened.";
   if (inv.state === "refunded" || inv.state === "cancelled") return "This invoice is closed.";
   if (inv.state !== "delivered" || inv.deliveredAtMs == null || inv.inspectionEndsAtMs == null) {
     return "A claim can be opened once the lot is delivered, during its inspection window.";
+  }
+  if (reason === "transit-damage" && nowMs > inv.deliveredAtMs + DISPUTE_SETTINGS.breakageClaimHours * 3_600_000) {
+    return `Breakage in transit must be claimed within ${DISPUTE_SETTINGS.breakageClaimHours} hours of delivery, with photos of the packaging; this lot was delivered on ${new Date(inv.deliveredAtMs).toISOString().slice(0, 16).replace("T", " ")} UTC.`;
   }
   if (nowMs >= inv.inspectionEndsAtMs) {
     return `The inspection window closed on ${new Date(inv.inspectionEndsAtMs).toISOString().slice(0, 16).replace("T", " ")} UTC; claims must be opened before it ends.`;
@@ -146,18 +163,20 @@ export interface TrackRecord {
   words: string;
 }
 
+const n = (x: number) => x.toLocaleString("en-US");
+
 /** A consignor's record from their counts. */
 export function trackRecord(c: { tubesSold: number; tubesDisputed: number; tubesUpheld: number; upheldMisattributionClaims: number }): TrackRecord {
   const per = c.tubesSold > 0 ? Math.round((c.tubesUpheld * 1000) / c.tubesSold) : null;
   const words = c.tubesSold === 0
     ? "No tubes sold here yet: no record."
     : c.tubesDisputed === 0
-      ? `${c.tubesSold} tubes sold; none disputed.`
-      : `${c.tubesSold} tubes sold; ${c.tubesDisputed} disputed, ${c.tubesUpheld} of them upheld against the listing.`;
+      ? `${n(c.tubesSold)} tubes sold; none disputed.`
+      : `${n(c.tubesSold)} tubes sold; ${n(c.tubesDisputed)} disputed, ${n(c.tubesUpheld)} of them upheld against the listing.`;
   return { ...c, upheldPerThousand: per, words };
 }
 
 /** True when a consignor's next lots should go to extra review. */
-export function needsExtraReview(upheldMisattributionClaims: number, threshold = DISPUTE_SETTINGS.extraReviewAfterUpheld): boolean {
+export function needsExtraReview(upheldMisattributionClaims: number, threshold: number = DISPUTE_SETTINGS.extraReviewAfterUpheld): boolean {
   return upheldMisattributionClaims >= threshold;
 }

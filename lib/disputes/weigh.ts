@@ -11,7 +11,8 @@ import { typeFamily } from "../lots/type-family";
 import { rankMakers, type MakerCandidate, type ReferenceProfile } from "../valves/attribution";
 import { featuresFromText } from "../valves/construction-text";
 import { decodeDesignation } from "../valves/designation";
-import { gradeReading, type Grade } from "../valves/grading";
+import { findEquivalents } from "../valves/equivalents";
+import { gradeReading, HOUSE_DEFAULT_THRESHOLDS, type Grade } from "../valves/grading";
 import type { DisputeReason } from "./rules";
 
 /** The listing's side of an item. */
@@ -51,9 +52,13 @@ export interface GradedReading {
   tubeNo: number;
   measure: string;
   sections: number[];
+  /** The tester chart's "new" value the grade rests on (null: not graded). */
   chartNewValue: number | null;
   grade: Grade | "not-graded";
   worstPercentOfNew: number | null;
+  /** Weakest section as % of the data sheet's nominal Gm: illustrative only, never a grade. */
+  percentOfNominal: number | null;
+  hardFail: boolean;
   reasons: string[];
 }
 
@@ -77,23 +82,44 @@ export interface ItemWeighing {
   buyer: { ranking: SideRanking; readings: GradedReading[] };
 }
 
-const GRADE_ORDER: Record<string, number> = { strong: 4, good: 3, fair: 2, "emission-ok": 2, weak: 1, reject: 0 };
+/**
+ * Tester-to-tester variation allowed before a lower reading counts against
+ * the listing [CTP, brief §8: roughly ±10–15 %; we take the generous end].
+ */
+export const TESTER_VARIATION_PCT = 15;
 
-/** Grade each reading against its chart value, or the type's nominal Gm from our reference data for Gm runs. */
-export function gradeAgainstNominal(designation: string, readings: readonly TubeReading[], vacuumLoss = false): GradedReading[] {
+/** The lowest % of new inside each band (house thresholds). */
+const BAND_FLOOR: Record<string, number> = {
+  strong: HOUSE_DEFAULT_THRESHOLDS.strongMinPct, good: HOUSE_DEFAULT_THRESHOLDS.goodMinPct, fair: HOUSE_DEFAULT_THRESHOLDS.fairMinPct, weak: 0,
+};
+
+/**
+ * Grade each reading against the tester chart's "new" value: the reading's
+ * own, else `fallbackChart` (the listing's chart for the same type, so both
+ * sides are graded on one basis). Grades never rest on data-sheet figures
+ * [CTP, brief §4]; the weakest section as % of the nominal Gm is shown beside
+ * them for orientation only.
+ */
+export function gradeAgainstNominal(designation: string, readings: readonly TubeReading[], vacuumLoss = false, fallbackChart?: number): GradedReading[] {
   const nominal = nominalGmFromReference(designation);
   return readings.map((r) => {
-    const chart = r.chartNewValue ?? (r.measure === "gm" ? nominal : undefined);
+    const chart = r.chartNewValue ?? (r.measure === "gm" ? fallbackChart : undefined);
     const failed = Boolean(r.shorts || r.leakage || r.gas || vacuumLoss);
+    const ofNominal = r.measure === "gm" && nominal && r.sections.length ? Math.round((Math.min(...r.sections) / nominal) * 1000) / 10 : null;
     if (chart === undefined && !failed) {
-      return { tubeNo: r.tubeNo, measure: r.measure, sections: r.sections, chartNewValue: null, grade: "not-graded", worstPercentOfNew: null, reasons: ["No chart or nominal figure for this type and test"] };
+      return { tubeNo: r.tubeNo, measure: r.measure, sections: r.sections, chartNewValue: null, grade: "not-graded", worstPercentOfNew: null, percentOfNominal: ofNominal, hardFail: false, reasons: ["No tester chart value: not graded (data-sheet figures are not a test limit)"] };
     }
     const g = gradeReading({
       measure: r.measure, sections: chart === undefined ? [] : r.sections, chartNewValue: chart ?? 1,
       shorts: r.shorts, leakage: r.leakage, gas: r.gas, vacuumLoss,
     });
-    return { tubeNo: r.tubeNo, measure: r.measure, sections: r.sections, chartNewValue: chart ?? null, grade: g.grade, worstPercentOfNew: g.worstPercentOfNew, reasons: g.reasons };
+    return { tubeNo: r.tubeNo, measure: r.measure, sections: r.sections, chartNewValue: chart ?? null, grade: g.grade, worstPercentOfNew: g.worstPercentOfNew, percentOfNominal: ofNominal, hardFail: g.hardFails.length > 0, reasons: g.reasons };
   });
+}
+
+/** The chart "new" value the listing used for this line, if its readings carry one. */
+function listingChart(readings: readonly TubeReading[]): number | undefined {
+  return readings.find((r) => r.measure === "gm" && r.chartNewValue !== undefined)?.chartNewValue;
 }
 
 function rank(features: Record<string, string>, sourceCodeMaker: string | null, profiles: readonly ReferenceProfile[], family: string | undefined): SideRanking {
@@ -118,8 +144,9 @@ export function weighItem(
   const family = d.ok ? typeFamily(d.normalised).key : undefined;
   const listingRanking = rank(listing.features, sourceMakers.listing, profiles, family);
   const buyerRanking = rank(report.features, sourceMakers.buyer, profiles, family);
+  const chart = listingChart(listing.readings);
   const listingReadings = gradeAgainstNominal(listing.designation, listing.readings, listing.vacuumLoss);
-  const buyerReadings = gradeAgainstNominal(listing.designation, report.readings, Boolean(report.vacuumLoss));
+  const buyerReadings = gradeAgainstNominal(listing.designation, report.readings, Boolean(report.vacuumLoss), chart);
   const findings: string[] = [];
   let verdict: Verdict = "inconclusive";
 
@@ -127,17 +154,21 @@ export function weighItem(
     const claimed = listing.makerName;
     const top = buyerRanking.candidates[0];
     const listedInBuyer = buyerRanking.candidates.find((c) => same(c.makerName, claimed));
+    let codeDecided = false;
     if (!claimed) {
       verdict = "does-not-support";
       findings.push("The listing named no maker for this line, so there is no attribution to be wrong.");
     } else if (buyerRanking.sourceCodeMaker && !same(buyerRanking.sourceCodeMaker, claimed)) {
-      verdict = "supports";
-      findings.push(`The source code the buyer read (${report.sourceCode}) belongs to ${buyerRanking.sourceCodeMaker}, not ${claimed}. A source code is evidence, not proof: it may name the brand owner.`);
+      const backsListing = top && same(top.makerName, claimed) && top.confidence === "high";
+      verdict = backsListing ? "inconclusive" : "supports";
+      codeDecided = true;
+      findings.push(`The source code the buyer read (${report.sourceCode ?? "as reported"}) belongs to ${buyerRanking.sourceCodeMaker}, not ${claimed}. A source code is evidence, not proof: it may name the brand owner.`);
+      if (backsListing) findings.push(`But the buyer's own construction ranks ${claimed} first with high confidence: the code may name the brand owner rather than the factory. Weigh the photos.`);
     } else if (buyerRanking.sourceCodeMaker && same(buyerRanking.sourceCodeMaker, claimed)) {
       verdict = "does-not-support";
-      findings.push(`The buyer's source code (${report.sourceCode}) points to ${claimed}, as listed.`);
+      findings.push(`The buyer's source code (${report.sourceCode ?? "as reported"}) points to ${claimed}, as listed.`);
     }
-    if (verdict === "inconclusive" && top) {
+    if (!codeDecided && verdict === "inconclusive" && top) {
       if (!same(top.makerName, claimed) && top.confidence !== "low" && (!listedInBuyer || listedInBuyer.conflicting.length > 0)) {
         verdict = "supports";
         findings.push(`The buyer's construction ranks ${top.makerName} first (${top.confidence} confidence, ${top.matching.length} matching features)${listedInBuyer ? `; ${claimed} conflicts on ${listedInBuyer.conflicting.join(", ")}` : `; ${claimed} does not fit at all`}.`);
@@ -147,7 +178,7 @@ export function weighItem(
       } else {
         findings.push(`The buyer's construction is not decisive: best fit ${top.makerName} at ${top.confidence} confidence.`);
       }
-    } else if (verdict === "inconclusive") {
+    } else if (!codeDecided && verdict === "inconclusive") {
       findings.push("The buyer recorded no construction features or codes that the reference profiles can compare.");
     }
     const lt = listingRanking.candidates[0];
@@ -160,32 +191,45 @@ export function weighItem(
     } else if (report.vacuumLoss) {
       verdict = "supports";
       findings.push("The buyer reports a white getter flash that the listing did not disclose; photos should show it.");
-    } else findings.push("The buyer does not report a white getter on this line.");
+    } else { verdict = "does-not-support"; findings.push("The buyer does not report a white getter on this line."); }
   } else if (reason === "readings-not-as-listed") {
-    const listedByTube = new Map(listingReadings.map((r) => [r.tubeNo, r]));
+    // Like with like: same tube, same measure, both graded on a chart value [CTP, brief §6].
+    const listedByTube = new Map(listingReadings.map((r) => [`${r.tubeNo}:${r.measure}`, r]));
     let worse = 0;
     let compared = 0;
     for (const b of buyerReadings) {
-      const l = listedByTube.get(b.tubeNo);
+      const l = listedByTube.get(`${b.tubeNo}:${b.measure}`);
       if (!l || l.grade === "not-graded" || b.grade === "not-graded") continue;
       compared++;
-      const drop = GRADE_ORDER[l.grade]! - GRADE_ORDER[b.grade]!;
-      if (b.grade === "reject" || drop >= 2) {
+      if (b.hardFail && !l.hardFail) {
         worse++;
-        findings.push(`Tube ${b.tubeNo}: listed ${l.grade}${l.worstPercentOfNew != null ? ` (${l.worstPercentOfNew.toFixed(0)} % of new)` : ""}, buyer reads ${b.grade}${b.worstPercentOfNew != null ? ` (${b.worstPercentOfNew.toFixed(0)} %)` : ""}.`);
+        findings.push(`Tube ${b.tubeNo}: listed ${l.grade}, the buyer finds an absolute failure (${b.reasons.join("; ")}).`);
+        continue;
+      }
+      if (l.hardFail || l.grade === "reject") continue; // a failure the listing disclosed is not a claim
+      const floor = BAND_FLOOR[l.grade];
+      if (floor !== undefined && floor > 0 && b.worstPercentOfNew != null && b.worstPercentOfNew < floor - TESTER_VARIATION_PCT) {
+        worse++;
+        findings.push(`Tube ${b.tubeNo}: listed ${l.grade} (${floor} % of new or more); the buyer reads ${b.worstPercentOfNew.toFixed(0)} %, more than ${TESTER_VARIATION_PCT} points below the band.`);
       }
     }
-    if (compared === 0) findings.push("No tube has graded readings on both sides to compare (tester charts differ; compare like with like).");
+    if (compared === 0) findings.push("No tube has readings of the same measure, graded on a chart value, on both sides: nothing to compare like with like.");
     else if (worse > 0) verdict = "supports";
-    else { verdict = "does-not-support"; findings.push(`${compared} tube(s) compared: within a grade of the listing, which different testers explain.`); }
+    else { verdict = "does-not-support"; findings.push(`${compared} tube reading(s) compared: none falls below its listed band by more than the ${TESTER_VARIATION_PCT} % testers differ by.`); }
   } else if (reason === "wrong-type") {
     const seen = report.designationSeen ? decodeDesignation(report.designationSeen) : null;
     const seenNorm = seen?.ok ? seen.normalised : report.designationSeen;
-    if (seenNorm && d.ok && seenNorm !== d.normalised) { verdict = "supports"; findings.push(`Listed as ${d.normalised}; the buyer reads ${seenNorm}.`); }
-    else if (seenNorm) { verdict = "does-not-support"; findings.push(`The buyer reads ${seenNorm}, as listed.`); }
+    const link = seen?.ok && d.ok ? findEquivalents(d.normalised).matches.find((m) => m.designation === seenNorm)?.link : undefined;
+    if (!seenNorm) findings.push("The buyer did not say what type is printed on the tubes.");
+    else if (seen && !seen.ok) findings.push(`"${report.designationSeen}" could not be read as a designation; compare the print with the photos.`);
+    else if (!d.ok) findings.push(`The listed designation "${listing.designation}" could not be read; compare the print with the photos.`);
+    else if (seenNorm === d.normalised) { verdict = "does-not-support"; findings.push(`The buyer reads ${seenNorm}, as listed.`); }
+    else if (link === "exact") { verdict = "does-not-support"; findings.push(`${seenNorm} is listed as an exact equivalent of ${d.normalised} [brief §3].`); }
+    else { verdict = "supports"; findings.push(`Listed as ${d.normalised}; the buyer reads ${seenNorm}${link ? ` (a ${link.replace(/-/g, " ")} equivalent, not the type listed)` : ""}.`); }
   } else if (reason === "short-count") {
     if (report.tubesReceived != null && report.tubesReceived < listing.quantity) { verdict = "supports"; findings.push(`Listed ${listing.quantity}, received ${report.tubesReceived}. Check the packing list and the carrier's weight.`); }
     else if (report.tubesReceived != null) { verdict = "does-not-support"; findings.push(`Received ${report.tubesReceived} of ${listing.quantity}.`); }
+    else findings.push("The buyer did not say how many tubes arrived.");
   } else {
     findings.push("Judge this from the photos and the carrier's record: the engine has nothing to compute here.");
   }

@@ -102,7 +102,7 @@ export async function openDispute(viewer: Viewer, invoiceId: string, input: Open
     if (!inv || inv.buyer_id !== viewer.id) throw new ApiError("not_found", "No such invoice");
     const [existing] = await q<{ id: string; number: string; buyer_id: string }>(`SELECT id, number, buyer_id FROM disputes WHERE invoice_id = :invoiceId`, { invoiceId }, t);
     if (existing) return { ...existing, fresh: false };
-    const refusal = openingRefusal({ state: inv.state, deliveredAtMs: inv.delivered_at?.getTime() ?? null, inspectionEndsAtMs: inv.inspection_ends_at?.getTime() ?? null }, Date.now());
+    const refusal = openingRefusal({ state: inv.state, deliveredAtMs: inv.delivered_at?.getTime() ?? null, inspectionEndsAtMs: inv.inspection_ends_at?.getTime() ?? null }, Date.now(), input.reason);
     if (refusal) throw new ApiError("conflict", refusal);
 
     const items = new Map((await lotItems(inv.lot_id, t)).map((i) => [i.id, i]));

@@ -20,3 +20,9 @@ export async function flagExtraReview(consignorId: string): Promise<void> {
   if (!needsExtraReview(record.upheldMisattributionClaims)) return;
   await db().query(`UPDATE lots SET extra_review = true, updated_at = now() WHERE consignor_id = :c AND state IN ('draft','in-review','needs-changes') AND extra_review = false`, { replacements: { c: consignorId } });
 }
+
+/** The record of the consignor of a lot, for the dealers reading it. */
+export async function recordForLot(lotId: string): Promise<TrackRecord | null> {
+  const [row] = await db().query<{ consignor_id: string }>(`SELECT consignor_id FROM lots WHERE id = :lotId`, { replacements: { lotId }, type: QueryTypes.SELECT });
+  return row ? consignorRecord(row.consignor_id) : null;
+}

@@ -4,6 +4,7 @@ import { ApiError } from "@/lib/api/errors";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { summaryFor } from "@/lib/services/lot-summary";
 import { getLot } from "@/lib/services/lots";
+import { consignorRecord } from "@/lib/services/track-record";
 
 export const metadata = { title: "Lot" };
 
@@ -14,6 +15,6 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
     if (e instanceof ApiError && e.code === "not_found") notFound();
     throw e;
   });
-  const { summary, chart } = await summaryFor(data.items);
-  return <LotView data={data} summary={summary} chart={chart} />;
+  const [{ summary, chart }, record] = await Promise.all([summaryFor(data.items), consignorRecord(data.lot.consignorId)]);
+  return <LotView data={data} summary={summary} chart={chart} record={record} />;
 }

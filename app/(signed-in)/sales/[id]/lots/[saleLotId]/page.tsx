@@ -5,6 +5,8 @@ import { ApiError } from "@/lib/api/errors";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { can } from "@/lib/auth/roles";
 import { getSaleLot } from "@/lib/services/sales";
+import { recordForLot } from "@/lib/services/track-record";
+import { ConsignorRecord } from "@/components/disputes/ConsignorRecord";
 
 export const metadata = { title: "Live lot" };
 
@@ -14,11 +16,13 @@ export default async function LiveLotPage({ params }: { params: Promise<{ id: st
   if (!/^[0-9a-f-]{36}$/i.test(saleLotId)) notFound();
   const data = await getSaleLot(viewer, saleLotId).catch((e) => { if (e instanceof ApiError && e.code === "not_found") notFound(); throw e; });
   if (data.live.saleId !== id) notFound();
+  const record = await recordForLot(data.live.lotId);
   return (
     <div className="space-y-4">
       <p className="text-sm"><Link href={`/sales/${id}`} className="underline">{data.sale.title}</Link> / lot {data.live.position}</p>
       <h1 className="text-2xl font-semibold">{data.live.title}</h1>
       <p className="text-sm text-flash-700">Consigned by {data.live.consignor}</p>
+      {record ? <ConsignorRecord record={record} /> : null}
       <LiveLot initial={data} canBid={can(viewer.roles, "lots.bid")} lotHref={`/lots/${data.live.lotId}`} />
     </div>
   );
