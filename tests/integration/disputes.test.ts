@@ -21,7 +21,12 @@ import type { OpenDisputeInput } from "../../lib/validation/disputes";
 import { db, Lot } from "../../models";
 import { startTestS3, type TestS3 } from "../setup/s3";
 import { startTestStripe, type TestStripe } from "../setup/stripe";
-import { approvedLot, inbox, itemInput, makeUser, viewerOf } from "../support/factories";
+import { approvedLot, inbox, itemInput, makeUser, request, sessionCookie, viewerOf } from "../support/factories";
+import { disputeSweep } from "../../lib/services/disputes";
+import { GET as queueRoute } from "../../app/api/mediation/queue/route";
+import { GET as caseRoute } from "../../app/api/disputes/[id]/route";
+import { POST as decisionRoute } from "../../app/api/disputes/[id]/decision/route";
+import { POST as openRoute } from "../../app/api/invoices/[id]/dispute/route";
 import sharp from "sharp";
 import { stripe } from "../../lib/stripe/client";
 
@@ -220,5 +225,78 @@ describe("claims and mediation", () => {
     await addItem(viewerOf(seller), lot.id, itemInput());
     await submitLot(viewerOf(seller), lot.id);
     expect((await Lot.findByPk(lot.id))!.extraReview).toBe(true);
+  }, 120_000);
+
+  it("routes: role checks on the server, one error shape, bad input refused with field messages", async () => {
+    const f = await deliveredLot();
+    const buyerCookie = await sessionCookie(f.buyer);
+    const params = (id: string) => ({ params: Promise.resolve({ id }) });
+    // Bad input: no reason, a statement too short, no items → 400 with fields; nothing opened.
+    const bad = await openRoute(request(`/api/invoices/${f.invoiceId}/dispute`, { json: { statement: "bad", items: [] }, headers: { cookie: buyerCookie } }), params(f.invoiceId));
+    expect(bad.status).toBe(400);
+    const badBody = await bad.json() as { error: { code: string; fields: Record<string, string> } };
+    expect(badBody.error.code).toBe("validation_failed");
+    expect(Object.keys(badBody.error.fields)).toEqual(expect.arrayContaining(["reason", "remedy", "statement", "items"]));
+    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: f.invoiceId })).state).toBe("delivered");
+    // The consignor cannot open a claim on their own sale (dealers only), and a stranger dealer gets 404.
+    expect((await openRoute(request(`/api/invoices/${f.invoiceId}/dispute`, { json: claim(f.items[0]!), headers: { cookie: await sessionCookie(f.consignor) } }), params(f.invoiceId))).status).toBe(403);
+    expect((await openRoute(request(`/api/invoices/${f.invoiceId}/dispute`, { json: claim(f.items[0]!), headers: { cookie: await sessionCookie(await makeUser(["dealer"])) } }), params(f.invoiceId))).status).toBe(404);
+    const opened = await openRoute(request(`/api/invoices/${f.invoiceId}/dispute`, { json: claim(f.items[0]!), headers: { cookie: buyerCookie } }), params(f.invoiceId));
+    expect(opened.status).toBe(201);
+    const { dispute } = await opened.json() as { dispute: { id: string } };
+    // Only mediators see the queue or decide; the house reads the case; a buyer cannot decide their own claim.
+    expect((await queueRoute(request("/api/mediation/queue", { headers: { cookie: buyerCookie } }), params("x"))).status).toBe(403);
+    expect((await queueRoute(request("/api/mediation/queue", { headers: { cookie: await sessionCookie(f.admin) } }), params("x"))).status).toBe(403);
+    expect((await caseRoute(request(`/api/disputes/${dispute.id}`, { headers: { cookie: await sessionCookie(f.admin) } }), params(dispute.id))).status).toBe(200);
+    const decisionBody = { outcome: "dismissed", reasons: "The buyer's evidence does not show another maker's work." };
+    expect((await decisionRoute(request(`/api/disputes/${dispute.id}/decision`, { json: decisionBody, headers: { cookie: buyerCookie } }), params(dispute.id))).status).toBe(403);
+    const m = await makeUser(["mediator"]);
+    const notTaken = await decisionRoute(request(`/api/disputes/${dispute.id}/decision`, { json: decisionBody, headers: { cookie: await sessionCookie(m) } }), params(dispute.id));
+    expect(notTaken.status).toBe(409);
+    expect(((await notTaken.json()) as { error: { message: string } }).error.message).toMatch(/Take the case/);
+    const tooShort = await decisionRoute(request(`/api/disputes/${dispute.id}/decision`, { json: { outcome: "dismissed", reasons: "no" }, headers: { cookie: await sessionCookie(m) } }), params(dispute.id));
+    expect(tooShort.status).toBe(400);
+    expect((await caseRoute(request(`/api/disputes/not-a-uuid`, { headers: { cookie: buyerCookie } }), params("not-a-uuid"))).status).toBe(404);
+  }, 60_000);
+
+  it("deadlines: past the answer deadline the mediator decides on the buyer's evidence; a dismissal releases escrow; an unconfirmed return is refunded, an unsent one released", async () => {
+    // No answer by the deadline: decide on the buyer's evidence alone (dismissed here).
+    const a = await deliveredLot();
+    const c1 = await openDispute(viewerOf(a.buyer), a.invoiceId, claim(a.items[0]!));
+    const m = viewerOf(await makeUser(["mediator"]));
+    await takeCase(m, c1.id);
+    await db().query(`UPDATE disputes SET answer_due_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: c1.id } });
+    expect((await getCase(m, c1.id)).deadlinePassed).toBe(true);
+    await decide(m, c1.id, { outcome: "dismissed", reasons: "The code the buyer read is registered to the listed maker's brand owner; not misdescribed." });
+    const inv1 = await one<{ state: string; hammer_cents: number; commission_cents: number; transfer_id: string }>(`SELECT * FROM invoices WHERE id = :id`, { id: a.invoiceId });
+    expect(inv1.state).toBe("released");
+    expect((await stripe().transfers.retrieve(inv1.transfer_id)).amount).toBe(inv1.hammer_cents - inv1.commission_cents);
+    expect(await consignorRecord(a.consignor.id)).toMatchObject({ tubesDisputed: 2, tubesUpheld: 0 });
+
+    // Refund on return: shipped back, the consignor never confirms; after the house's days the buyer is refunded anyway.
+    const b = await deliveredLot();
+    const c2 = await openDispute(viewerOf(b.buyer), b.invoiceId, claim(b.items[0]!, { remedy: "return-whole-lot" }));
+    await takeCase(m, c2.id);
+    await db().query(`UPDATE disputes SET answer_due_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: c2.id } });
+    await decide(m, c2.id, { outcome: "refund-on-return", reasons: "No answer from the consignor; the evidence supports a return of the whole lot." });
+    await recordReturn(viewerOf(b.buyer), c2.id, { carrier: "Demo Parcel Co.", tracking: "RT 222333" });
+    expect(await disputeSweep()).toBe(0); // not yet due
+    await db().query(`UPDATE disputes SET return_shipped_at = now() - interval '11 days' WHERE id = :id`, { replacements: { id: c2.id } });
+    expect(await disputeSweep()).toBeGreaterThanOrEqual(1);
+    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: b.invoiceId })).state).toBe("refunded");
+    expect((await getCase(m, c2.id)).decision?.closingNote).toMatch(/not confirmed in time/);
+
+    // Refund on return, never sent back by the deadline: the consignor is paid.
+    const c = await deliveredLot();
+    const c3 = await openDispute(viewerOf(c.buyer), c.invoiceId, claim(c.items[0]!, { remedy: "return-whole-lot" }));
+    await postMessage(viewerOf(c.consignor), c3.id, { body: "Return them if you must.", stance: "accepts" });
+    await takeCase(m, c3.id);
+    await decide(m, c3.id, { outcome: "refund-on-return", reasons: "The consignor accepts a return of the whole lot for a refund." });
+    await db().query(`UPDATE disputes SET return_due_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: c3.id } });
+    expect(await disputeSweep()).toBeGreaterThanOrEqual(1);
+    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: c.invoiceId })).state).toBe("released");
+    expect((await getCase(m, c3.id)).state).toBe("closed");
+    expect(await trialBalance()).toBe(0);
+    expect((await reconcile()).differences).toEqual([]);
   }, 120_000);
 });
