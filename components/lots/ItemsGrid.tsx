@@ -66,7 +66,7 @@ export function ItemsGrid({ items, editable, onEdit, onRemove, onQuickChange }: 
       cell: ({ row }) => editable && onQuickChange ? (
         <input type="number" min={1} defaultValue={row.original.quantity} className="input w-20 py-1" aria-label={`Quantity of ${row.original.designation}, line ${row.original.position}`}
           onBlur={(e) => { const q = Number(e.target.value); if (q >= 1 && q !== row.original.quantity) onQuickChange(row.original, { quantity: q }); }} />
-      ) : row.original.quantity,
+      ) : <>{row.original.quantity}{row.original.soldAsSet ? <span className="ml-1 text-xs text-glow-700">matched set</span> : null}</>,
     }),
     helper.accessor("labelBrand", { header: "Label", sortFn: "alphanumeric" }),
     helper.accessor("makerName", {
