@@ -25,11 +25,16 @@ const dollars = (c: number | undefined) => (c === undefined ? "" : (c / 100).toF
  * ruling per claimed line; the refund is worked out to the cent before it is
  * recorded. Recording is final: the money moves and both parties are e-mailed.
  */
-export function DecisionForm({ caseId, lines, claimed, defaults, canDecide, why }: {
+export function DecisionForm({ caseId, lines, claimed, defaults, canDecide, why, heldLines, wholeLotAsked, releasedEarly }: {
   caseId: string; lines: DecisionLine[]; claimed: Claimed[]; defaults: { itemId: string; valueCents: number; singleValueCents?: number }[]; canDecide: boolean; why: string | null;
+  /** Line values fixed by an early release of the undisputed share (null: none yet). */
+  heldLines: { itemId: string; valueCents: number; singleValueCents?: number }[] | null;
+  wholeLotAsked: boolean;
+  releasedEarly: { payoutCents: number; hammerCents: number } | null;
 }) {
   const router = useRouter();
-  const byItem = new Map(defaults.map((d) => [d.itemId, d]));
+  const byItem = new Map((heldLines ?? defaults).map((d) => [d.itemId, d]));
+  const locked = heldLines !== null;
   const { register, handleSubmit, watch, setError, formState, getValues } = useForm<Values>({
     defaultValues: {
       outcome: "partial-refund", reasons: "",
@@ -66,6 +71,15 @@ export function DecisionForm({ caseId, lines, claimed, defaults, canDecide, why 
     await run(async () => { setPreview((await apiFetch<{ settlement: Preview }>(`/api/disputes/${caseId}/refund-preview`, { json: checked.data })).settlement); });
   }
 
+  async function releaseShare() {
+    const p = payload(getValues());
+    if (!p.ok) return;
+    if (await run(async () => {
+      const { release } = await apiFetch<{ release: { payoutCents: number } }>(`/api/disputes/${caseId}/release-undisputed`, { json: { lines: p.lines } });
+      return `Released ${formatCents(release.payoutCents)} to the consignor; the claimed lines' share stays held.`;
+    })) router.refresh();
+  }
+
   async function onSubmit(v: Values) {
     const p = v.outcome === "partial-refund" ? payload(v) : { ok: true as const, lines: [], rulings: [] };
     if (!p.ok) return;
@@ -88,7 +102,10 @@ export function DecisionForm({ caseId, lines, claimed, defaults, canDecide, why 
       <fieldset className="space-y-1">
         <legend className="label">Outcome</legend>
         {OUTCOMES.map((o) => (
-          <label key={o} className="flex items-center gap-2 text-sm"><input type="radio" value={o} {...register("outcome")} /> {OUTCOME_WORDS[o]}</label>
+          <label key={o} className="flex items-center gap-2 text-sm">
+            <input type="radio" value={o} disabled={locked && o === "refund-on-return"} {...register("outcome")} /> {OUTCOME_WORDS[o]}
+            {locked && o === "refund-on-return" ? <span className="text-flash-500">(not after the undisputed share was released)</span> : null}
+          </label>
         ))}
       </fieldset>
       {outcome === "partial-refund" ? (
@@ -105,15 +122,23 @@ export function DecisionForm({ caseId, lines, claimed, defaults, canDecide, why 
                     <td><span className="code">{l.designation}</span> × {l.quantity} · {l.makerName ?? `label ${l.labelBrand || "none"}`}{l.soldAsSet ? " · matched set" : ""}</td>
                     <td>
                       <label className="sr-only" htmlFor={`line-${l.position}-value`}>Line {l.position} value {l.soldAsSet ? "of the set" : "per tube"}</label>
-                      <input id={`line-${l.position}-value`} className="input code w-28 py-1" inputMode="decimal" {...register(`lines.${i}.value`)} />
+                      <input id={`line-${l.position}-value`} className="input code w-28 py-1" inputMode="decimal" readOnly={locked} {...register(`lines.${i}.value`)} />
                       <span className="ml-1 text-xs text-flash-500">{l.soldAsSet && l.quantity >= 2 ? "the set" : "per tube"}</span>
                       {e.lines?.[i]?.value ? <p role="alert" className="field-error">{e.lines[i]!.value!.message}</p> : null}
                     </td>
-                    <td>{l.soldAsSet && l.quantity >= 2 ? <><label className="sr-only" htmlFor={`line-${l.position}-single`}>Line {l.position} one tube alone</label><input id={`line-${l.position}-single`} className="input code w-28 py-1" inputMode="decimal" {...register(`lines.${i}.single`)} /></> : "—"}</td>
+                    <td>{l.soldAsSet && l.quantity >= 2 ? <><label className="sr-only" htmlFor={`line-${l.position}-single`}>Line {l.position} one tube alone</label><input id={`line-${l.position}-single`} className="input code w-28 py-1" inputMode="decimal" readOnly={locked} {...register(`lines.${i}.single`)} /></> : "—"}</td>
                   </tr>
                 ))}
               </tbody>
             </table>
+            {releasedEarly ? (
+              <p className="text-sm text-sound-700">The undisputed share is released: {formatCents(releasedEarly.payoutCents)} paid to the consignor ({formatCents(releasedEarly.hammerCents)} of the hammer). These line values are now fixed for the decision.</p>
+            ) : !wholeLotAsked ? (
+              <div className="flex flex-wrap items-center gap-3 text-sm">
+                <button type="button" className="btn-quiet" onClick={() => void releaseShare()}>Release the undisputed share now</button>
+                <span className="text-flash-600">Pays the consignor for the lines and tubes the claim does not cover, on these values; the claimed share stays held.</span>
+              </div>
+            ) : null}
           </fieldset>
           <fieldset className="space-y-2">
             <legend className="label">Ruling on each claimed line</legend>

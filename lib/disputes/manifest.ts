@@ -4,6 +4,7 @@
  * claim item per upheld ruling. Pure.
  */
 import { setDefectClaim, type ClaimItem, type ManifestLine } from "../money/refund-claims";
+import { settlePartialRefund } from "../money/refunds";
 
 /** A lot item as the manifest needs it. */
 export interface ManifestItem {
@@ -86,4 +87,34 @@ export function claimsFromRulings(items: readonly ManifestItem[], lines: readonl
     }
   }
   return claims;
+}
+
+/** The three amounts of a sale (cents). */
+export interface SaleAmounts {
+  hammerCents: number;
+  premiumCents: number;
+  commissionCents: number;
+}
+
+/**
+ * The share of a sale a claim cannot touch, for release while it is open
+ * [SUG, brief §8: "release the undisputed share and hold the rest"]. The held
+ * part is what refunding every claimed tube in full would cost (the claimed
+ * lines' value, a matched set whole, rounded as the refund itself would be);
+ * the rest is undisputed. A later partial refund on the same line values can
+ * never exceed what is held, because it values the same tubes at most in full.
+ */
+export function undisputedShare(sale: SaleAmounts, items: readonly ManifestItem[], lines: readonly LineValue[], claimed: readonly { itemId: string; tubes: number }[]): { held: SaleAmounts; undisputed: SaleAmounts } {
+  const manifest = buildManifest(items, lines);
+  const asFull = claimsFromRulings(items, manifest, claimed.map((c) => {
+    const item = items.find((i) => i.id === c.itemId);
+    const isSet = Boolean(item?.soldAsSet && item.quantity >= 2);
+    return { itemId: c.itemId, upheld: true, tubes: isSet ? item!.quantity : c.tubes, worthCents: 0 };
+  }));
+  const s = settlePartialRefund(sale, manifest, asFull);
+  const held = { hammerCents: s.hammerRefundCents, premiumCents: s.premiumRefundCents, commissionCents: s.commissionReductionCents };
+  return {
+    held,
+    undisputed: { hammerCents: sale.hammerCents - held.hammerCents, premiumCents: sale.premiumCents - held.premiumCents, commissionCents: sale.commissionCents - held.commissionCents },
+  };
 }

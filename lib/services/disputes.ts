@@ -4,7 +4,7 @@ import type { Viewer } from "../auth/guards";
 import { can } from "../auth/roles";
 import { ApiError } from "../api/errors";
 import { env } from "../config/env";
-import { buildManifest, claimsFromRulings, defaultLineValues, type LineValue, type ManifestItem, type Ruling } from "../disputes/manifest";
+import { buildManifest, claimsFromRulings, defaultLineValues, undisputedShare, type LineValue, type ManifestItem, type Ruling } from "../disputes/manifest";
 import {
   answerDueAt, DISPUTE_SETTINGS, misattributionRefusal, openingRefusal, OUTCOME_WORDS, REASON_WORDS, REMEDY_WORDS,
   STANCE_WORDS, type DisputeReason, type DisputeState, type Outcome, type Stance,
@@ -20,9 +20,9 @@ import { PhotoRejected, processPhoto } from "../photos/process";
 import { claimPhotoObjectKeys } from "../storage/keys";
 import { deleteObject, getObject, putObject } from "../storage/objects";
 import { stripe } from "../stripe/client";
-import type { DecisionInput, DisputeMessageInput, OpenDisputeInput, RefundPreviewInput, ReturnShipmentInput } from "../validation/disputes";
+import type { DecisionInput, DisputeMessageInput, LineValuesInput, OpenDisputeInput, RefundPreviewInput, ReturnShipmentInput } from "../validation/disputes";
 import { db, User } from "../../models";
-import { release } from "./escrow";
+import { release, releaseUndisputed } from "./escrow";
 import type { InvoiceRow } from "./invoices";
 import { post } from "./ledger";
 import { lookupRegisteredCode } from "./makers";
@@ -39,6 +39,7 @@ type DisputeRow = {
   outcome: Outcome | null; decided_by: string | null; decided_at: Date | null; decision: StoredDecision | null; buyer_refund_cents: number; refund_id: string | null;
   upheld_tubes: number; return_due_at: Date | null; return_carrier: string | null; return_tracking: string | null; return_shipped_at: Date | null;
   return_received_at: Date | null; closed_at: Date | null; created_at: Date; updated_at: Date;
+  held_lines: LineValue[] | null; undisputed_released_at: Date | null;
 };
 
 type ItemRow = {
@@ -276,8 +277,9 @@ export async function mediationQueue(viewer: Viewer): Promise<{ waiting: CaseSum
 export async function getCase(viewer: Viewer, id: string) {
   const { d, role } = await loadCase(viewer, id);
   const [[head], items, messages, photos, users] = await Promise.all([
-    q<{ lot_title: string; invoice_number: string; hammer_cents: number; premium_cents: number; commission_cents: number; tube_count: number; inspection_ends_at: Date | null; invoice_state: string }>(
-      `SELECT l.title AS lot_title, i.number AS invoice_number, i.hammer_cents, i.premium_cents, i.commission_cents, i.tube_count, i.inspection_ends_at, i.state AS invoice_state
+    q<{ lot_title: string; invoice_number: string; hammer_cents: number; premium_cents: number; commission_cents: number; tube_count: number; inspection_ends_at: Date | null; invoice_state: string; released_hammer_cents: number; released_premium_cents: number; released_commission_cents: number }>(
+      `SELECT l.title AS lot_title, i.number AS invoice_number, i.hammer_cents, i.premium_cents, i.commission_cents, i.tube_count, i.inspection_ends_at, i.state AS invoice_state,
+              i.released_hammer_cents, i.released_premium_cents, i.released_commission_cents
          FROM disputes d JOIN lots l ON l.id = d.lot_id JOIN invoices i ON i.id = d.invoice_id WHERE d.id = :id`, { id }),
     q<ItemRow & { tubes: number; report: BuyerReport }>(
       `SELECT li.id, li.position, li.designation, li.quantity, li.label_brand, li.maker_name, li.maker_basis, li.source_code, li.date_code, li.features, li.vacuum_loss,
@@ -309,8 +311,12 @@ export async function getCase(viewer: Viewer, id: string) {
     } : null,
     buyerRefundCents: d.buyer_refund_cents, refundId: role === "house" || role === "mediator" ? d.refund_id : null,
     returnDueAt: d.return_due_at?.toISOString() ?? null, returnCarrier: d.return_carrier, returnTracking: d.return_tracking,
+    heldLines: d.held_lines, undisputedReleasedAt: d.undisputed_released_at?.toISOString() ?? null,
     returnShippedAt: d.return_shipped_at?.toISOString() ?? null, returnReceivedAt: d.return_received_at?.toISOString() ?? null, closedAt: d.closed_at?.toISOString() ?? null,
     sale: { hammerCents: head!.hammer_cents, premiumCents: head!.premium_cents, commissionCents: moneyView ? head!.commission_cents : null, tubeCount: head!.tube_count },
+    releasedEarly: moneyView && head!.released_hammer_cents + head!.released_premium_cents > 0
+      ? { hammerCents: head!.released_hammer_cents, premiumCents: head!.released_premium_cents, commissionCents: head!.released_commission_cents, payoutCents: head!.released_hammer_cents - head!.released_commission_cents }
+      : null,
     items: items.map((i) => ({
       id: i.id, position: i.position, designation: i.designation, quantity: i.quantity, soldAsSet: i.sold_as_set, tubes: i.tubes,
       listing: { labelBrand: i.label_brand, makerName: i.maker_name, makerBasis: i.maker_basis, sourceCode: i.source_code, dateCode: i.date_code, features: i.features, vacuumLoss: i.vacuum_loss, readings: i.readings },
@@ -397,6 +403,12 @@ export async function decide(viewer: Viewer, id: string, input: DecisionInput) {
   if (d.mediator_id !== viewer.id) throw new ApiError("conflict", d.mediator_id ? "Another mediator has this case" : "Take the case from the queue first");
   if (!d.answered_at && d.answer_due_at.getTime() > Date.now()) throw new ApiError("conflict", `The consignor has until ${utc(d.answer_due_at)} to answer; decide after they answer or the deadline passes`);
 
+  if (d.held_lines && input.outcome === "refund-on-return") {
+    throw new ApiError("conflict", "The undisputed share has been released, so the buyer keeps those tubes: refund the claimed ones with a partial refund (worth nothing, for a full refund of them), or dismiss");
+  }
+  if (d.held_lines && input.outcome === "partial-refund" && !sameLines(d.held_lines, input.lines)) {
+    throw new ApiError("validation_failed", "Use the line values the undisputed share was released on", { lines: "The line values are fixed since the early release" });
+  }
   const [inv] = await q<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { invoiceId: d.invoice_id });
   const claimed = await q<{ lot_item_id: string; tubes: number }>(`SELECT lot_item_id, tubes FROM dispute_items WHERE dispute_id = :id`, { id });
   const decision: StoredDecision = { outcome: input.outcome, reasons: input.reasons };
@@ -431,10 +443,55 @@ export async function decide(viewer: Viewer, id: string, input: DecisionInput) {
   return getCase(viewer, id);
 }
 
+const lineKey = (l: LineValue) => `${l.itemId}:${l.valueCents}:${l.singleValueCents ?? ""}`;
+function sameLines(a: readonly LineValue[], b: readonly LineValue[]): boolean {
+  const x = a.map(lineKey).sort();
+  const y = b.map(lineKey).sort();
+  return x.length === y.length && x.every((k, i) => k === y[i]);
+}
+
+/**
+ * The case's mediator releases the share of the lot the claim does not touch
+ * [SUG, brief §8], on line values they set now and keep for the decision. Not
+ * when the buyer asks to return the whole lot. Once per case; a retry
+ * finishes an interrupted release.
+ */
+export async function releaseUndisputedShare(viewer: Viewer, id: string, input: LineValuesInput) {
+  const { d } = await loadCase(viewer, id);
+  if (d.mediator_id !== viewer.id) throw new ApiError("forbidden", "Only the case's mediator releases part of the payment");
+  if (d.decided_at) throw new ApiError("conflict", "The case is decided; the decision released what was due");
+  if (d.remedy === "return-whole-lot") throw new ApiError("conflict", "The buyer asks to return the whole lot: no share of it is undisputed");
+  const [claimedLine] = await db().query<{ id: string }>(
+    `UPDATE disputes SET held_lines = :lines::jsonb, updated_at = now() WHERE id = :id AND held_lines IS NULL AND decided_at IS NULL RETURNING id`,
+    { replacements: { lines: JSON.stringify(input.lines), id }, type: QueryTypes.SELECT },
+  );
+  const [fresh] = await q<DisputeRow>(`SELECT * FROM disputes WHERE id = :id`, { id });
+  if (!claimedLine && !sameLines(fresh!.held_lines ?? [], input.lines)) throw new ApiError("conflict", "The undisputed share was already released on other line values");
+  const [inv] = await q<InvoiceRow>(`SELECT * FROM invoices WHERE id = :id`, { id: d.invoice_id });
+  const items = await lotItems(d.lot_id);
+  const claimed = await q<{ lot_item_id: string; tubes: number }>(`SELECT lot_item_id, tubes FROM dispute_items WHERE dispute_id = :id`, { id });
+  let share;
+  try {
+    share = undisputedShare({ hammerCents: inv!.hammer_cents, premiumCents: inv!.premium_cents, commissionCents: inv!.commission_cents },
+      items.map((i) => ({ id: i.id, position: i.position, quantity: i.quantity, soldAsSet: i.sold_as_set })), fresh!.held_lines!, claimed.map((c) => ({ itemId: c.lot_item_id, tubes: c.tubes })));
+  } catch (e) {
+    if (claimedLine) await db().query(`UPDATE disputes SET held_lines = NULL WHERE id = :id AND undisputed_released_at IS NULL`, { replacements: { id } });
+    if (e instanceof RangeError) throw new ApiError("validation_failed", `The share cannot be worked out: ${e.message}`);
+    throw e;
+  }
+  const payout = await releaseUndisputed(inv!.id, share.undisputed, `claim ${d.number} covers only part of the lot`);
+  await db().query(`UPDATE disputes SET undisputed_released_at = COALESCE(undisputed_released_at, now()), updated_at = now() WHERE id = :id`, { replacements: { id } });
+  await notify(d.buyer_id, `Claim ${d.number}: the share of the lot the claim does not cover has been paid to the consignor; the rest stays held`, `/disputes/${d.id}`).catch(() => undefined);
+  return { payoutCents: payout, held: share.held, undisputed: share.undisputed };
+}
+
 /** Pay a refund out of held escrow through the processor and post it, once per case. */
 async function payRefund(d: DisputeRow, inv: InvoiceRow, s: Pick<RefundSettlement, "buyerRefundCents" | "hammerRefundCents" | "premiumRefundCents" | "commissionReductionCents" | "consignorChangeCents" | "houseChangeCents">): Promise<void> {
   if (s.buyerRefundCents <= 0) return;
   if (!inv.payment_intent_id) throw new Error(`invoice ${inv.number} has no payment to refund`);
+  const heldHammer = inv.hammer_cents - inv.hammer_refunded_cents - inv.released_hammer_cents;
+  const heldPremium = inv.premium_cents - inv.premium_refunded_cents - inv.released_premium_cents;
+  if (s.hammerRefundCents > heldHammer || s.premiumRefundCents > heldPremium) throw new Error(`invoice ${inv.number}: the refund exceeds what is held`);
   const refund = await stripe().refunds.create(
     { payment_intent: inv.payment_intent_id, amount: s.buyerRefundCents, reason: "requested_by_customer", metadata: { invoice_id: inv.id, dispute_id: d.id } },
     { idempotencyKey: `dispute:${d.id}:refund` },

@@ -101,13 +101,49 @@ export async function release(invoiceId: string, why: string, opts: { fromDisput
   return released;
 }
 
-/** What is left of a sale to release after the refunds already paid on it. */
-export function remainingFigures(inv: Pick<InvoiceRow, "hammer_cents" | "premium_cents" | "commission_cents" | "hammer_refunded_cents" | "premium_refunded_cents" | "commission_returned_cents">) {
+/** What is left of a sale to release after the refunds already paid on it and any undisputed share released early. */
+export function remainingFigures(inv: Pick<InvoiceRow, "hammer_cents" | "premium_cents" | "commission_cents" | "hammer_refunded_cents" | "premium_refunded_cents" | "commission_returned_cents" | "released_hammer_cents" | "released_premium_cents" | "released_commission_cents">) {
   return {
-    hammerCents: inv.hammer_cents - inv.hammer_refunded_cents,
-    premiumCents: inv.premium_cents - inv.premium_refunded_cents,
-    commissionCents: inv.commission_cents - inv.commission_returned_cents,
+    hammerCents: inv.hammer_cents - inv.hammer_refunded_cents - inv.released_hammer_cents,
+    premiumCents: inv.premium_cents - inv.premium_refunded_cents - inv.released_premium_cents,
+    commissionCents: inv.commission_cents - inv.commission_returned_cents - inv.released_commission_cents,
   };
+}
+
+/**
+ * Release the undisputed share of a disputed invoice early [SUG, brief §8]:
+ * once per invoice, the consignor is paid that share's hammer less its
+ * commission, and the premium and commission on it become house revenue; the
+ * rest stays held for the claim. Returns the payout in cents.
+ */
+export async function releaseUndisputed(invoiceId: string, share: { hammerCents: number; premiumCents: number; commissionCents: number }, why: string): Promise<number> {
+  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+  if (!inv) throw new ApiError("not_found", "No such invoice");
+  if (inv.state !== "disputed") throw new ApiError("conflict", "Only a lot under a claim has an undisputed share to release early");
+  const payout = share.hammerCents - share.commissionCents;
+  if (inv.released_hammer_cents > 0 || inv.released_premium_cents > 0) return inv.released_hammer_cents - inv.released_commission_cents; // done already
+  if (share.hammerCents + share.premiumCents === 0) return 0;
+  const account = payout > 0 ? await payoutAccount(inv.consignor_id) : null;
+  const transfer = account
+    ? await stripe().transfers.create(
+      { amount: payout, currency: stripeConfig().CURRENCY, destination: account, transfer_group: `invoice:${inv.id}`, metadata: { invoice_id: inv.id, share: "undisputed" } },
+      { idempotencyKey: `invoice:${inv.id}:release-undisputed` },
+    )
+    : null;
+  const done = await db().transaction(async (t) => {
+    const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
+    if (!locked || locked.state !== "disputed" || locked.released_hammer_cents > 0 || locked.released_premium_cents > 0) return false;
+    await post(t, "escrow-released-undisputed", invoiceId, escrowReleasedEntries(share));
+    if (transfer) await post(t, "payout-sent-undisputed", invoiceId, payoutSentEntries(payout), transfer.id);
+    await db().query(`UPDATE invoices SET released_hammer_cents = :h, released_premium_cents = :p, released_commission_cents = :c, updated_at = now() WHERE id = :invoiceId`,
+      { replacements: { h: share.hammerCents, p: share.premiumCents, c: share.commissionCents, invoiceId }, transaction: t });
+    return true;
+  });
+  if (done) {
+    await mailParty(inv.consignor_id, "Part of your payment is released",
+      `A claim is open on invoice ${inv.number}. The share of the lot it does not touch is released now (${why}): ${formatCents(payout)} is on its way to your payout account (hammer ${formatCents(share.hammerCents)} less commission ${formatCents(share.commissionCents)}). The rest stays held until the claim is decided.`);
+  }
+  return payout;
 }
 
 /** Release every delivered invoice whose inspection window has ended without a claim. */

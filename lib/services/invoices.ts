@@ -41,6 +41,7 @@ export type InvoiceRow = {
   last_payment_error: string | null; paid_at: Date | null; carrier: string | null; tracking: string | null; shipped_at: Date | null;
   delivered_at: Date | null; inspection_ends_at: Date | null; released_at: Date | null; transfer_id: string | null; created_at: Date;
   hammer_refunded_cents: number; premium_refunded_cents: number; commission_returned_cents: number;
+  released_hammer_cents: number; released_premium_cents: number; released_commission_cents: number;
 };
 
 /**

@@ -7,7 +7,7 @@ import { db } from "../../models";
 
 export type StatementLine = {
   invoiceNumber: string; lotTitle: string; state: string; hammerCents: number; commissionCents: number; feesCents: number;
-  refundsCents: number; payoutCents: number; releasedAt: string | null; transferId: string | null;
+  refundsCents: number; payoutCents: number; paidOutCents: number; releasedAt: string | null; transferId: string | null;
 };
 export type Statement = {
   consignor: string; saleTitle: string; saleId: string; generatedAt: string; lines: StatementLine[];
@@ -21,8 +21,8 @@ export type Statement = {
  */
 export async function statementFor(viewer: Viewer, saleId: string, consignorId?: string): Promise<Statement> {
   const who = consignorId && viewer.roles.includes("admin") ? consignorId : viewer.id;
-  const rows = await db().query<{ number: string; title: string; state: string; hammer_cents: number; commission_cents: number; hammer_refunded_cents: number; commission_returned_cents: number; released_at: Date | null; transfer_id: string | null; consignor: string; sale_title: string }>(
-    `SELECT i.number, l.title, i.state, i.hammer_cents, i.commission_cents, i.hammer_refunded_cents, i.commission_returned_cents, i.released_at, i.transfer_id, u.display_name AS consignor, s.title AS sale_title
+  const rows = await db().query<{ number: string; title: string; state: string; hammer_cents: number; commission_cents: number; hammer_refunded_cents: number; commission_returned_cents: number; released_hammer_cents: number; released_commission_cents: number; released_at: Date | null; transfer_id: string | null; consignor: string; sale_title: string }>(
+    `SELECT i.number, l.title, i.state, i.hammer_cents, i.commission_cents, i.hammer_refunded_cents, i.commission_returned_cents, i.released_hammer_cents, i.released_commission_cents, i.released_at, i.transfer_id, u.display_name AS consignor, s.title AS sale_title
        FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id JOIN sales s ON s.id = sl.sale_id JOIN users u ON u.id = i.consignor_id
       WHERE sl.sale_id = :saleId AND i.consignor_id = :who ORDER BY sl.position`,
     { replacements: { saleId, who }, type: QueryTypes.SELECT },
@@ -34,7 +34,9 @@ export async function statementFor(viewer: Viewer, saleId: string, consignorId?:
     const refunds = r.hammer_refunded_cents - r.commission_returned_cents;
     return {
       invoiceNumber: r.number, lotTitle: r.title, state: r.state, hammerCents: r.hammer_cents, commissionCents: r.commission_cents, feesCents: fees,
-      refundsCents: refunds, payoutCents: r.hammer_cents - r.commission_cents - fees - refunds, releasedAt: r.released_at?.toISOString() ?? null, transferId: r.transfer_id,
+      refundsCents: refunds, payoutCents: r.hammer_cents - r.commission_cents - fees - refunds,
+      // Paid so far: everything once released; before that, any undisputed share released early under a claim.
+      paidOutCents: r.state === "released" ? r.hammer_cents - r.commission_cents - fees - refunds : r.released_hammer_cents - r.released_commission_cents, releasedAt: r.released_at?.toISOString() ?? null, transferId: r.transfer_id,
     };
   });
   const sum = (k: keyof StatementLine) => lines.reduce((n, l) => n + (l[k] as number), 0);
@@ -42,7 +44,7 @@ export async function statementFor(viewer: Viewer, saleId: string, consignorId?:
     consignor: rows[0]!.consignor, saleTitle: rows[0]!.sale_title, saleId, generatedAt: new Date().toISOString(), lines,
     totals: {
       hammerCents: sum("hammerCents"), commissionCents: sum("commissionCents"), feesCents: sum("feesCents"), refundsCents: sum("refundsCents"),
-      payoutCents: sum("payoutCents"), paidOutCents: lines.filter((l) => l.state === "released").reduce((n, l) => n + l.payoutCents, 0),
+      payoutCents: sum("payoutCents"), paidOutCents: lines.reduce((n, l) => n + l.paidOutCents, 0),
     },
   };
 }

@@ -69,3 +69,7 @@ export const RefundPreviewSchema = z.object({
   rulings: z.array(RulingSchema).min(1).max(200),
 });
 export type RefundPreviewInput = z.infer<typeof RefundPreviewSchema>;
+
+/** The mediator's line values, for releasing the undisputed share while a claim is open. */
+export const LineValuesSchema = z.object({ lines: z.array(LineValueSchema).min(1).max(500) });
+export type LineValuesInput = z.infer<typeof LineValuesSchema>;

@@ -22,7 +22,7 @@ import { db, Lot } from "../../models";
 import { startTestS3, type TestS3 } from "../setup/s3";
 import { startTestStripe, type TestStripe } from "../setup/stripe";
 import { approvedLot, inbox, itemInput, makeUser, request, sessionCookie, viewerOf } from "../support/factories";
-import { disputeSweep } from "../../lib/services/disputes";
+import { disputeSweep, releaseUndisputedShare } from "../../lib/services/disputes";
 import { GET as queueRoute } from "../../app/api/mediation/queue/route";
 import { GET as caseRoute } from "../../app/api/disputes/[id]/route";
 import { POST as decisionRoute } from "../../app/api/disputes/[id]/decision/route";
@@ -299,4 +299,45 @@ describe("claims and mediation", () => {
     expect(await trialBalance()).toBe(0);
     expect((await reconcile()).differences).toEqual([]);
   }, 120_000);
+
+  it("releases the undisputed share early, then settles the claimed share: payouts, refund and ledger agree to the cent", async () => {
+    const f = await deliveredLot();
+    const { id } = await openDispute(viewerOf(f.buyer), f.invoiceId, claim(f.items[0]!));
+    const m = viewerOf(await makeUser(["mediator"]));
+    await takeCase(m, id);
+    const lines = [{ itemId: f.items[0]!, valueCents: 1_000 }, { itemId: f.items[1]!, valueCents: 500 }, { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 }];
+    // Hand-worked [brief §8, SUG]: the claim covers 2 × $10 of V_lot $100 = 20 % held; hammer $27.00 → $5.40 held, $21.60 released;
+    // premium $2.70 → $0.54 / $2.16; commission $5.40 → $1.08 / $4.32; the consignor is paid $21.60 − $4.32 = $17.28 now.
+    const r = await releaseUndisputedShare(m, id, { lines });
+    expect(r.payoutCents).toBe(1_728);
+    expect(r.held).toEqual({ hammerCents: 540, premiumCents: 54, commissionCents: 108 });
+    expect(await releaseDue()).toBe(0);
+    const early = await one<{ state: string; released_hammer_cents: number }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+    expect(early.state).toBe("disputed");
+    expect(early.released_hammer_cents).toBe(2_160);
+    expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.paidOutCents).toBe(1_728);
+    expect((await releaseUndisputedShare(m, id, { lines })).payoutCents).toBe(1_728); // a retry pays nothing twice
+    expect((await refused(releaseUndisputedShare(m, id, { lines: lines.map((l) => ({ ...l, valueCents: l.valueCents + 1 })) }))).status).toBe(409);
+
+    await postMessage(viewerOf(f.consignor), id, { body: "We accept that two were mislabelled by the maker's carton.", stance: "accepts-in-part" });
+    expect((await refused(decide(m, id, { outcome: "refund-on-return", reasons: "Return the lot for a refund of everything paid for it." }))).status).toBe(409);
+    const other = [{ ...lines[0]!, valueCents: 2_000 }, lines[1]!, lines[2]!];
+    expect((await refused(decide(m, id, { outcome: "partial-refund", reasons: "Two tubes are another maker's work.", lines: other, rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }] }))).status).toBe(400);
+    await decide(m, id, { outcome: "partial-refund", reasons: "Two tubes are another maker's work; each is worth $3 as such.", lines, rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }] });
+    // Refund as in the first test ($4.16); what is left, $1.62 − $0.32 = $1.30, goes to the consignor: $17.28 + $1.30 = $18.58 in all.
+    const inv = await one<{ state: string; payment_intent_id: string; transfer_id: string }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+    expect(inv.state).toBe("released");
+    expect((await stripe().refunds.list({ payment_intent: inv.payment_intent_id })).data.map((x) => x.amount)).toEqual([416]);
+    expect((await stripe().transfers.retrieve(inv.transfer_id)).amount).toBe(130);
+    const st = await statementFor(viewerOf(f.consignor), f.saleId);
+    expect(st.totals.payoutCents).toBe(1_858);
+    expect(st.totals.paidOutCents).toBe(1_858);
+    const led = await balances(f.invoiceId);
+    expect(led["escrow-held"]).toBe(0);
+    expect(led["consignor-payable"]).toBe(0);
+    expect(led["house-revenue-premium"]).toBe(-(270 - 38));
+    expect(led["house-revenue-commission"]).toBe(-(540 - 76));
+    expect(await trialBalance()).toBe(0);
+    expect((await reconcile()).differences).toEqual([]);
+  }, 60_000);
 });

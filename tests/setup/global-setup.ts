@@ -1,5 +1,8 @@
 // vitest global setup for integration tests: a database of this run's own
 // (created, migrated, dropped afterwards) and the mail catcher on test ports.
+import { mkdtemp, rm } from "node:fs/promises";
+import os from "node:os";
+import path from "node:path";
 import pg from "pg";
 import type { TestProject } from "vitest/node";
 import { startDatabase, startMailCatcher, TEST_INBOX_PORT, TEST_SMTP_PORT, withDatabase } from "./services";
@@ -27,9 +30,14 @@ export default async function setup(project: TestProject) {
 
   const catcher = await startMailCatcher();
   project.provide("databaseUrl", url);
+  // One payment processor for the whole run, as the one ledger is: each file's fake loads the state the
+  // previous file left, so a reconciliation in any file compares like with like.
+  const stripeDir = await mkdtemp(path.join(os.tmpdir(), "getterline-stripe-run-"));
+  project.provide("stripeDir", stripeDir);
 
   return async () => {
     catcher?.kill();
+    await rm(stripeDir, { recursive: true, force: true });
     const c = new pg.Client({ connectionString: withDatabase(base, "postgres") });
     await c.connect();
     await c.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
@@ -38,5 +46,5 @@ export default async function setup(project: TestProject) {
 }
 
 declare module "vitest" {
-  export interface ProvidedContext { databaseUrl: string }
+  export interface ProvidedContext { databaseUrl: string; stripeDir: string }
 }

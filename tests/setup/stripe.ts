@@ -27,7 +27,9 @@ export async function startTestStripe(): Promise<TestStripe> {
   });
   await new Promise<void>((r) => receiver.listen(0, "127.0.0.1", () => r()));
   const hook = `http://127.0.0.1:${(receiver.address() as AddressInfo).port}/hook`;
-  const dir = await mkdtemp(path.join(os.tmpdir(), "getterline-stripe-"));
+  // The run's shared processor state (tests/setup/global-setup.ts), or a private one outside the integration project.
+  const shared = process.env.STRIPE_TEST_DIR;
+  const dir = shared ?? await mkdtemp(path.join(os.tmpdir(), "getterline-stripe-"));
   const fake = await startStripeFake({ port: 0, dataDir: dir, webhookUrl: hook, webhookSecret: secret, webhookRetry: { baseMs: 100, maxAttempts: 5 } });
   Object.assign(process.env, {
     STRIPE_SECRET_KEY: "sk_test_integration_key_not_secret", STRIPE_WEBHOOK_SECRET: secret,
@@ -40,7 +42,7 @@ export async function startTestStripe(): Promise<TestStripe> {
     async stop() {
       await fake.close();
       await new Promise<void>((r) => receiver.close(() => r()));
-      await rm(dir, { recursive: true, force: true });
+      if (!shared) await rm(dir, { recursive: true, force: true });
       resetStripe();
     },
   };

@@ -9,6 +9,7 @@ import {
   buildManifest,
   claimsFromRulings,
   defaultLineValues,
+  undisputedShare,
   type LineValue,
   type ManifestItem,
   type Ruling,
@@ -202,3 +203,33 @@ describe("settling the rulings with lib/money [SUG] brief §8 partial refunds", 
     expectReconciles(s);
   });
 });
+
+describe("undisputedShare: release what a claim cannot touch, hold the rest [SUG] brief §8 'release the undisputed share and hold the rest'", () => {
+  it("a claim on 3 of the 8 line-1 tubes holds 3 × $50 = $150 of V_lot $2,000 (7.5 %) and releases the rest", () => {
+    const { held, undisputed } = undisputedShare(SALE, ITEMS, VALUES, [{ itemId: "item-kestrel", tubes: 3 }]);
+    // hammer $1,000 × 7.5 % = $75; premium $150 × 7.5 % = $11.25; commission $200 × 7.5 % = $15 (brief §9.22 inputs).
+    expect(held).toEqual({ hammerCents: 7_500, premiumCents: 1_125, commissionCents: 1_500 });
+    expect(undisputed).toEqual({ hammerCents: 92_500, premiumCents: 13_875, commissionCents: 18_500 });
+  });
+
+  it("one tube claimed in the matched quad holds the whole set's value, $200 (a set is one line)", () => {
+    const { held } = undisputedShare(SALE, ITEMS, VALUES, [{ itemId: "item-quad", tubes: 1 }]);
+    expect(held.hammerCents).toBe(10_000); // $1,000 × 200/2,000
+  });
+
+  it("any later partial refund on the same values fits inside what is held", () => {
+    const claimed = [{ itemId: "item-kestrel", tubes: 3 }, { itemId: "item-quad", tubes: 1 }];
+    const { held } = undisputedShare(SALE, ITEMS, VALUES, claimed);
+    const lines = buildManifest(ITEMS, VALUES);
+    for (const worth of [0, 1, 999, 2_500, 4_999]) {
+      const s = settlePartialRefund(SALE, lines, claimsFromRulings(ITEMS, lines, [
+        { itemId: "item-kestrel", upheld: true, tubes: 3, worthCents: worth },
+        { itemId: "item-quad", upheld: true, tubes: 1 },
+      ]));
+      expect(s.hammerRefundCents).toBeLessThanOrEqual(held.hammerCents);
+      expect(s.premiumRefundCents).toBeLessThanOrEqual(held.premiumCents);
+      expect(s.commissionReductionCents).toBeLessThanOrEqual(held.commissionCents);
+    }
+  });
+});
+

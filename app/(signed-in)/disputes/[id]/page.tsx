@@ -43,7 +43,11 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           {" "}· {c.takenAt ? "with a mediator" : "waiting for a mediator"}
         </p>
         {c.role === "mediator" ? <p><Link href={`/mediation/cases/${c.id}`} className="btn-primary inline-block">Open the mediator&apos;s workspace</Link></p> : null}
-        {c.invoiceState === "disputed" ? <p className="text-sm text-flash-600">The payment for the lot stays held by the house until the claim is decided.</p> : null}
+        {c.invoiceState === "disputed" ? (
+          <p className="text-sm text-flash-600">
+            {c.undisputedReleasedAt ? `The share of the lot the claim does not cover was paid to the consignor on ${utcText(c.undisputedReleasedAt)}; the rest` : "The payment for the lot"} stays held by the house until the claim is decided.
+          </p>
+        ) : null}
       </header>
       {c.decision ? <DecisionSummary c={c} /> : null}
       {c.state === "awaiting-return" ? (

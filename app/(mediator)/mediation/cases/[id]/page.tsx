@@ -52,6 +52,7 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
         items={c.items.map((i) => ({ id: i.id, label: `Line ${i.position}: ${i.designation}` }))} />
       {!c.decision ? (
         <DecisionForm caseId={c.id} canDecide={canDecide} why={why} lines={ws.lines} defaults={ws.defaults}
+          heldLines={c.heldLines} wholeLotAsked={c.remedy === "return-whole-lot"} releasedEarly={c.releasedEarly}
           claimed={ws.weighings.map((w) => ({ itemId: w.itemId, position: w.position, tubes: w.tubes, supported: w.verdict === "supports", soldAsSet: itemById.get(w.itemId)!.soldAsSet }))} />
       ) : null}
       <CaseThread caseId={c.id} messages={c.messages} canWrite={mine} asksStance={false} closed={c.state === "closed"} />
