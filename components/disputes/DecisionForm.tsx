@@ -122,11 +122,11 @@ export function DecisionForm({ caseId, lines, claimed, defaults, canDecide, why,
                     <td><span className="code">{l.designation}</span> × {l.quantity} · {l.makerName ?? `label ${l.labelBrand || "none"}`}{l.soldAsSet ? " · matched set" : ""}</td>
                     <td>
                       <label className="sr-only" htmlFor={`line-${l.position}-value`}>Line {l.position} value {l.soldAsSet ? "of the set" : "per tube"}</label>
-                      <input id={`line-${l.position}-value`} className="input code w-28 py-1" inputMode="decimal" readOnly={locked} {...register(`lines.${i}.value`)} />
+                      <input id={`line-${l.position}-value`} className="input code w-28 py-1 read-only:bg-flash-100 read-only:text-flash-600" inputMode="decimal" readOnly={locked} {...register(`lines.${i}.value`)} />
                       <span className="ml-1 text-xs text-flash-500">{l.soldAsSet && l.quantity >= 2 ? "the set" : "per tube"}</span>
                       {e.lines?.[i]?.value ? <p role="alert" className="field-error">{e.lines[i]!.value!.message}</p> : null}
                     </td>
-                    <td>{l.soldAsSet && l.quantity >= 2 ? <><label className="sr-only" htmlFor={`line-${l.position}-single`}>Line {l.position} one tube alone</label><input id={`line-${l.position}-single`} className="input code w-28 py-1" inputMode="decimal" readOnly={locked} {...register(`lines.${i}.single`)} /></> : "—"}</td>
+                    <td>{l.soldAsSet && l.quantity >= 2 ? <><label className="sr-only" htmlFor={`line-${l.position}-single`}>Line {l.position} one tube alone</label><input id={`line-${l.position}-single`} className="input code w-28 py-1 read-only:bg-flash-100 read-only:text-flash-600" inputMode="decimal" readOnly={locked} {...register(`lines.${i}.single`)} /></> : "—"}</td>
                   </tr>
                 ))}
               </tbody>

@@ -144,6 +144,11 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await mediator.getByLabel("Line 1 value per tube").fill("10.00");
   await mediator.getByLabel("Line 2 value per tube").fill("5.00");
   await mediator.getByLabel("Line 3 value per tube").fill("10.00");
+  // The claim covers 3 × $10 of V_lot $100: 30 % stays held and the rest is paid now [brief §8, SUG]:
+  // hammer $80 × 70 % = $56.00 less commission $16 × 70 % = $11.20 → $44.80 to the estate.
+  await mediator.getByRole("button", { name: "Release the undisputed share now" }).click();
+  await expect(mediator.getByRole("main")).toContainText("Released $44.80 to the consignor");
+  await expect(mediator.getByLabel("Line 1 value per tube")).toHaveAttribute("readonly", "");
   await mediator.getByLabel("Tubes upheld").fill("3");
   await mediator.getByLabel("Worth per tube as delivered ($)").fill("4.00");
   await mediator.getByRole("button", { name: "Work out the refund" }).click();
@@ -181,15 +186,19 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   const at = (kind: string, account: string) => rows.find((r) => r.txn_kind === kind && r.account === account) as { d: number; c: number } | undefined;
   expect(at("dispute-refund", "cash")?.c).toBe(1_584);
   expect(at("dispute-refund", "escrow-held")?.d).toBe(1_584);
-  expect(at("payout-sent", "cash")?.c).toBe(5_248);
-  expect(at("escrow-released", "house-revenue-premium")?.c).toBe(800 - 144);
-  expect(at("escrow-released", "house-revenue-commission")?.c).toBe(1_600 - 288);
+  // Paid to the estate in two parts: $44.80 early, then what was left after the refund: $80 − $14.40 − $56 = $9.60 hammer
+  // less $16 − $2.88 − $11.20 = $1.92 commission → $7.68; in all $52.48, as on the statement.
+  expect(at("payout-sent-undisputed", "cash")?.c).toBe(4_480);
+  expect(at("payout-sent", "cash")?.c).toBe(768);
+  expect(at("payout-sent-undisputed", "cash")!.c + at("payout-sent", "cash")!.c).toBe(5_248);
+  expect((at("escrow-released-undisputed", "house-revenue-premium")?.c ?? 0) + (at("escrow-released", "house-revenue-premium")?.c ?? 0)).toBe(800 - 144);
+  expect((at("escrow-released-undisputed", "house-revenue-commission")?.c ?? 0) + (at("escrow-released", "house-revenue-commission")?.c ?? 0)).toBe(1_600 - 288);
   expect(Number(trial.diff)).toBe(0);
   expect(claim.buyer_refund_cents).toBe(1_584);
   const fake = `http://127.0.0.1:${process.env.STRIPE_FAKE_PORT ?? "12121"}`;
   const auth = { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}` };
   expect(((await (await fetch(`${fake}/v1/refunds/${claim.refund_id}`, { headers: auth })).json()) as { amount: number }).amount).toBe(1_584);
-  expect(((await (await fetch(`${fake}/v1/transfers/${inv.transfer_id}`, { headers: auth })).json()) as { amount: number }).amount).toBe(5_248);
+  expect(((await (await fetch(`${fake}/v1/transfers/${inv.transfer_id}`, { headers: auth })).json()) as { amount: number }).amount).toBe(768);
 
   // Dealers see the estate's record on its lots from now on.
   await dealer.goto(`/lots/${lotId}`);
