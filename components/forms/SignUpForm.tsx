@@ -2,30 +2,22 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { ApiClientError, apiFetch } from "@/lib/client/api";
+import { apiFetch } from "@/lib/client/api";
 import { SignUpSchema, type SignUpInput } from "@/lib/validation/account";
 import { Field, FormAlert } from "./Field";
+import { useApiSubmit } from "./useApiSubmit";
 
 export function SignUpForm() {
   const router = useRouter();
-  const [problem, setProblem] = useState<string | null>(null);
   const { register, handleSubmit, formState, setError } = useForm<SignUpInput>({
     resolver: zodResolver(SignUpSchema),
     defaultValues: { role: "dealer" },
   });
+  const { message, run } = useApiSubmit<SignUpInput>(setError);
 
   async function onSubmit(values: SignUpInput) {
-    setProblem(null);
-    try {
-      await apiFetch("/api/account/sign-up", { json: values });
-    } catch (err) {
-      if (err instanceof ApiClientError && err.fields) {
-        for (const [k, v] of Object.entries(err.fields)) setError(k as keyof SignUpInput, { message: v });
-      }
-      return setProblem(err instanceof Error ? err.message : "Sign-up failed");
-    }
+    if (!(await run(async () => { await apiFetch("/api/account/sign-up", { json: values }); }))) return;
     const csrf = await fetch("/api/auth/csrf").then((r) => r.json() as Promise<{ csrfToken: string }>);
     await fetch("/api/auth/callback/credentials", {
       method: "POST",
@@ -39,7 +31,7 @@ export function SignUpForm() {
   const e = formState.errors;
   return (
     <form onSubmit={handleSubmit(onSubmit)} className="space-y-4" noValidate>
-      {problem ? <FormAlert>{problem}</FormAlert> : null}
+      {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
       <fieldset>
         <legend className="label">I want to</legend>
         <div className="mt-2 grid gap-2 sm:grid-cols-2">

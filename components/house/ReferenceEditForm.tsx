@@ -2,10 +2,10 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
-import { ApiClientError, apiFetch } from "@/lib/client/api";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
+import { apiFetch } from "@/lib/client/api";
 import { ReferenceEditSchema, type ReferenceEditInput } from "@/lib/validation/valves";
 
 type NumField = Exclude<keyof ReferenceEditInput, "reason" | "source" | "note">;
@@ -28,23 +28,19 @@ const toNumber = (v: unknown) => (v === "" || v === null || v === undefined ? nu
 /** The house corrects one reference row; the server keeps who, when, why, before and after. */
 export function ReferenceEditForm({ designation, revision, initial }: { designation: string; revision: number; initial: ReferenceEditInput }) {
   const router = useRouter();
-  const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
   const { register, handleSubmit, formState, setError, reset } = useForm<ReferenceEditInput>({
     resolver: zodResolver(ReferenceEditSchema),
     defaultValues: { ...initial, reason: "" },
   });
+  const { message, run } = useApiSubmit<ReferenceEditInput>(setError);
 
   async function onSubmit(values: ReferenceEditInput) {
-    setMessage(null);
-    try {
+    await run(async () => {
       await apiFetch(`/api/valves/types/${encodeURIComponent(designation)}`, { method: "PATCH", json: { ...values, expectedRevision: revision } });
-      setMessage({ tone: "sound", text: `Saved as revision ${revision + 1}.` });
       reset({ ...values, reason: "" });
       router.refresh();
-    } catch (e) {
-      if (e instanceof ApiClientError && e.fields) for (const [k, v] of Object.entries(e.fields)) setError(k as keyof ReferenceEditInput, { message: v });
-      setMessage({ tone: "fault", text: e instanceof Error ? e.message : "Could not save" });
-    }
+      return `Saved as revision ${revision + 1}.`;
+    });
   }
 
   const e = formState.errors;

@@ -2,37 +2,32 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
-import { ApiClientError, apiFetch } from "@/lib/client/api";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
+import { apiFetch } from "@/lib/client/api";
 import { LotDetailsSchema, TESTER_KIND_VALUES, type LotDetailsInput } from "@/lib/validation/lots";
 import { TESTER_WORDS } from "./words";
 
 /** Create a lot (no id) or edit its details (with id). */
 export function LotDetailsForm({ lotId, initial, readOnly = false }: { lotId?: string; initial?: LotDetailsInput; readOnly?: boolean }) {
   const router = useRouter();
-  const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
   const { register, handleSubmit, formState, setError } = useForm<LotDetailsInput>({
     resolver: zodResolver(LotDetailsSchema),
     defaultValues: initial ?? { title: "", provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" },
   });
+  const { message, run } = useApiSubmit<LotDetailsInput>(setError);
 
   async function onSubmit(values: LotDetailsInput) {
-    setMessage(null);
-    try {
+    await run(async () => {
       if (lotId) {
         await apiFetch(`/api/lots/${lotId}`, { method: "PATCH", json: values });
-        setMessage({ tone: "sound", text: "Lot details saved." });
         router.refresh();
-      } else {
-        const { lot } = await apiFetch<{ lot: { id: string } }>("/api/lots", { json: values });
-        router.push(`/consignor/lots/${lot.id}`);
+        return "Lot details saved.";
       }
-    } catch (e) {
-      if (e instanceof ApiClientError && e.fields) for (const [k, v] of Object.entries(e.fields)) setError(k as keyof LotDetailsInput, { message: v });
-      setMessage({ tone: "fault", text: e instanceof Error ? e.message : "Could not save" });
-    }
+      const { lot } = await apiFetch<{ lot: { id: string } }>("/api/lots", { json: values });
+      router.push(`/consignor/lots/${lot.id}`);
+    });
   }
 
   const e = formState.errors;

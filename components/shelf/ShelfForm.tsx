@@ -2,11 +2,11 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
 import { ConstructionFields } from "@/components/valves/ConstructionFields";
-import { ApiClientError, apiFetch } from "@/lib/client/api";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
+import { apiFetch } from "@/lib/client/api";
 import { ShelfTubeSchema, type ShelfTubeInput } from "@/lib/validation/shelf";
 
 const fresh = (): ShelfTubeInput => ({ designation: "", labelBrand: "", sourceCode: null, dateCode: null, features: {}, notes: "", clientKey: crypto.randomUUID() });
@@ -14,25 +14,18 @@ const fresh = (): ShelfTubeInput => ({ designation: "", labelBrand: "", sourceCo
 /** Put a tube on the shelf with what can be read off it. */
 export function ShelfForm() {
   const router = useRouter();
-  const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
   const { register, handleSubmit, formState, reset, setError } = useForm<ShelfTubeInput>({ resolver: zodResolver(ShelfTubeSchema), defaultValues: fresh() });
+  const { message, run } = useApiSubmit<ShelfTubeInput>(setError);
 
   async function onSubmit(values: ShelfTubeInput) {
-    setMessage(null);
-    try {
+    await run(async () => {
       const { tube } = await apiFetch<{ tube: { id: string; basis: string; makerName: string | null } }>("/api/shelf", { json: values });
-      setMessage({
-        tone: "sound",
-        text: tube.basis === "source-code-confirmed"
-          ? `Confirmed by its source code as ${tube.makerName}; it now serves as a reference example.`
-          : "On the shelf, unconfirmed. Its best candidates are listed below.",
-      });
       reset(fresh());
       router.refresh();
-    } catch (e) {
-      if (e instanceof ApiClientError && e.fields) for (const [k, v] of Object.entries(e.fields)) setError(k as keyof ShelfTubeInput, { message: v });
-      setMessage({ tone: "fault", text: e instanceof Error ? e.message : "Could not add the tube" });
-    }
+      return tube.basis === "source-code-confirmed"
+        ? `Confirmed by its source code as ${tube.makerName}; it now serves as a reference example.`
+        : "On the shelf, unconfirmed. Its best candidates are listed below.";
+    });
   }
 
   const e = formState.errors;

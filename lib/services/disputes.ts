@@ -11,6 +11,7 @@ import {
 } from "../disputes/rules";
 import { weighItem, weighingSummary, type BuyerReport, type ItemWeighing } from "../disputes/weigh";
 import type { TubeReading } from "../lots/item";
+import { lookupSourceCode } from "../valves/source-code";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
 import { refundEntries } from "../money/ledger";
@@ -25,7 +26,7 @@ import { db, User } from "../../models";
 import { release, releaseUndisputed } from "./escrow";
 import type { InvoiceRow } from "./invoices";
 import { post } from "./ledger";
-import { lookupRegisteredCode } from "./makers";
+import { registryEntries } from "./makers";
 import { notify } from "./notices";
 import { referenceProfiles } from "./shelf";
 import { flagExtraReview } from "./track-record";
@@ -118,9 +119,9 @@ export async function openDispute(viewer: Viewer, invoiceId: string, input: Open
       }
       c.readings.forEach((r, j) => { if (r.tubeNo > item.quantity) fields[`items.${k}.readings.${j}.tubeNo`] = `Line ${item.position} has tubes 1–${item.quantity}`; });
     });
-    if (Object.keys(fields).length) {
-      const first = Object.values(fields)[0]!;
-      throw new ApiError("validation_failed", input.reason === "maker-misattributed" && /label/.test(first) ? first : "Some items cannot be claimed as entered", fields);
+    const problems = Object.values(fields);
+    if (problems.length) {
+      throw new ApiError("validation_failed", problems.length === 1 ? problems[0]! : `${problems[0]} (and ${problems.length - 1} more: see the lines)`, fields);
     }
 
     const id = randomUUID();
@@ -340,14 +341,18 @@ export async function takeCase(viewer: Viewer, id: string): Promise<void> {
   throw new ApiError("conflict", "Another mediator has already taken this case");
 }
 
-/** The mediator's workspace: per claimed item, listing against report, ranked and graded, with default line values for a refund. */
-export async function workspace(viewer: Viewer, id: string) {
-  const c = await getCase(viewer, id);
+/**
+ * The mediator's workspace: per claimed item, listing against report, ranked
+ * and graded, with default line values for a refund. A page that has already
+ * read the case passes it in.
+ */
+export async function workspace(viewer: Viewer, id: string, read?: CaseView) {
+  const c = read ?? await getCase(viewer, id);
   if (c.role !== "mediator" && c.role !== "house") throw new ApiError("not_found", "No such case");
-  const profiles = await referenceProfiles();
-  const makerFor = async (code: string | null | undefined) => {
+  const [profiles, registry] = await Promise.all([referenceProfiles(), registryEntries()]);
+  const makerFor = (code: string | null | undefined) => {
     if (!code) return null;
-    const r = await lookupRegisteredCode(code);
+    const r = lookupSourceCode(code, registry);
     return r.ok && r.found ? r.entries.map((e) => e.makerName).join(" / ") : null;
   };
   const weighings: (ItemWeighing & { itemId: string; tubes: number })[] = [];
@@ -356,7 +361,7 @@ export async function workspace(viewer: Viewer, id: string) {
       position: i.position, designation: i.designation, quantity: i.quantity, labelBrand: i.listing.labelBrand, makerName: i.listing.makerName,
       makerBasis: i.listing.makerBasis, sourceCode: i.listing.sourceCode, dateCode: i.listing.dateCode, features: i.listing.features,
       vacuumLoss: i.listing.vacuumLoss, readings: i.listing.readings,
-    }, i.report, profiles, { listing: await makerFor(i.listing.sourceCode), buyer: await makerFor(i.report.sourceCode) });
+    }, i.report, profiles, { listing: makerFor(i.listing.sourceCode), buyer: makerFor(i.report.sourceCode) });
     weighings.push({ ...w, itemId: i.id, tubes: i.tubes });
   }
   const all = await lotItems(c.lotId);
@@ -371,9 +376,10 @@ export async function workspace(viewer: Viewer, id: string) {
 
 /** The refund a partial-refund decision would pay, for the mediator's screen (no money moves). */
 export async function refundPreview(viewer: Viewer, id: string, input: RefundPreviewInput) {
-  const c = await getCase(viewer, id);
-  if (c.role !== "mediator") throw new ApiError("not_found", "No such case");
-  const s = await previewRefund(c.lotId, { hammerCents: c.sale.hammerCents, premiumCents: c.sale.premiumCents, commissionCents: c.sale.commissionCents! }, input.lines, input.rulings);
+  const { d, role } = await loadCase(viewer, id);
+  if (role !== "mediator") throw new ApiError("not_found", "No such case");
+  const [inv] = await q<InvoiceRow>(`SELECT * FROM invoices WHERE id = :id`, { id: d.invoice_id });
+  const s = await previewRefund(d.lot_id, { hammerCents: inv!.hammer_cents, premiumCents: inv!.premium_cents, commissionCents: inv!.commission_cents }, input.lines, input.rulings);
   return { ...s, items: undefined };
 }
 

@@ -21,7 +21,7 @@ export default async function WorkspacePage({ params }: { params: Promise<{ id: 
   const viewer = await requirePageViewer("disputes.mediate", `/mediation/cases/${id}`);
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
   const c = await getCase(viewer, id).catch((e) => { if (e instanceof ApiError && e.code === "not_found") notFound(); throw e; });
-  const ws = await workspace(viewer, id);
+  const ws = await workspace(viewer, id, c);
   const mine = c.mediatorId === viewer.id;
   const canDecide = mine && !c.decision && (Boolean(c.answeredAt) || c.deadlinePassed);
   const why = c.decision ? null : !c.mediatorId ? "Take the case from the queue to decide it." : !mine ? "Another mediator has this case." : `The consignor has until ${utcText(c.answerDueAt)} to answer; decide once they answer or the deadline passes.`;
