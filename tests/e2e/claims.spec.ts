@@ -1,3 +1,4 @@
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import pg from "pg";
 import sharp from "sharp";
@@ -13,6 +14,8 @@ async function as(browser: Browser, email: string): Promise<Page> {
   return page;
 }
 const shot = async (page: Page, name: string) => { if (SHOTS) await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true }); };
+/** WCAG 2 A/AA problems axe finds on the page as it stands. */
+const axe = async (page: Page) => (await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa"]).analyze()).violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).slice(0, 3).join(", ")}`);
 
 // Invented demo box. Line 1 is attributed to one maker by construction; line 2 is sold by its label alone.
 const CSV = [
@@ -99,6 +102,7 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await dealer.getByLabel("Plate surface").selectOption("dimpled");
   await dealer.getByLabel("Plate colour").selectOption("grey");
   await shot(dealer, "claim-form");
+  expect(await axe(dealer)).toEqual([]);
   // Line 2 was sold by its label alone: a misattribution claim on it is refused with the reason.
   await dealer.getByLabel(/Line 2: 6SN7GT/).check();
   await dealer.getByRole("button", { name: "Open the claim" }).click();
@@ -131,10 +135,12 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await estate.getByRole("button", { name: "Post my answer" }).click();
   await expect(estate.getByTestId("case-state")).toHaveText("Answered: waiting for a mediator");
   await shot(estate, "claim-case");
+  expect(await axe(estate)).toEqual([]);
 
   // A mediator takes the claim, compares the evidence line by line, and works out a partial refund.
   const mediator = await as(browser, DEMO.mediator);
   await mediator.goto("/mediation");
+  expect(await axe(mediator)).toEqual([]);
   const number = (await mediator.getByRole("row", { name: new RegExp(title) }).getByRole("link").textContent())!;
   await mediator.getByRole("button", { name: `Take claim ${number}` }).click();
   await expect(mediator).toHaveURL(new RegExp(`/mediation/cases/${caseId}$`));
@@ -157,6 +163,7 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   // consignor −$14.40 + $2.88 = −$11.52; payout $80 − $16 − $11.52 = $52.48 [house rates: 10 % premium, 20 % commission, SUG].
   await expect(mediator.getByTestId("preview-refund")).toHaveText("$15.84");
   await shot(mediator, "workspace");
+  expect(await axe(mediator)).toEqual([]);
   await mediator.getByLabel("Reasons (both parties receive them)").fill("Code 946 is registered to another maker, and the buyer's construction (square top getter, dimpled grey plates) matches that maker's reference profile, not the listed one. More likely than not, three tubes were misattributed; the refund is the listed value less what they are worth as the other maker's.");
   await mediator.getByRole("button", { name: "Record the decision and move the money" }).click();
   await expect(mediator.getByTestId("decision-refund")).toHaveText("$15.84", { timeout: 20_000 });
