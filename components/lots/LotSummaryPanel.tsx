@@ -68,7 +68,7 @@ export function LotSummaryPanel({ summary: s, chart }: { summary: LotSummary; ch
           </ul>
           <h3 className="font-semibold">Estimate from past sales</h3>
           {s.estimate.kind === "range" ? (
-            <p className="text-sm"><strong>{formatCents(s.estimate.lowCents)}–{formatCents(s.estimate.highCents)}</strong> from comparable sales
+            <p className="text-sm"><strong>{formatCents(s.estimate.lowCents)}–{formatCents(s.estimate.highCents)}</strong> from {s.estimate.parts.reduce((n, p) => n + p.comparablesUsed, 0)} comparable sale(s) of single-type lots here
               {s.estimate.familiesWithoutComparables.length ? ` (not counting ${s.estimate.familiesWithoutComparables.map((f) => f.familyLabel).join(", ")}, which have none)` : ""}.</p>
           ) : <p className="text-sm text-flash-700">No comparables yet.</p>}
           {s.unknownDesignations.length ? (

@@ -1,6 +1,9 @@
-import { describeDesignation, type LotItem as DomainItem } from "../lots/item";
+import { QueryTypes } from "sequelize";
+import { comparablesFromSoldLots } from "../lots/comparables";
+import { describeDesignation, type ItemCondition, type LotItem as DomainItem } from "../lots/item";
 import { readingsVsNominal, summariseLot, type ComparableSale, type LotSummary, type NominalPoint } from "../lots/summary";
 import type { HazardKind } from "../valves/index-types";
+import { db } from "../../models";
 import type { ItemView } from "./lots";
 
 /** A stored item as the pure summary code reads it. */
@@ -21,11 +24,19 @@ export function toDomainItem(i: ItemView): DomainItem {
 }
 
 /**
- * Past sales to estimate from. Until the house has sold lots there are none,
- * and the summary says "no comparables yet" rather than inventing a figure.
+ * Past sales to estimate from: our own sold lots of a single type family and
+ * condition over the last two years (see lib/lots/comparables). Until there
+ * are some the summary says "no comparables yet" rather than inventing a figure.
  */
 export async function comparableSales(): Promise<ComparableSale[]> {
-  return [];
+  const rows = await db().query<{ lot_id: string; net: number; sold_at: Date; designation: string; condition: ItemCondition; quantity: number }>(
+    `SELECT i.lot_id, i.hammer_cents - i.hammer_refunded_cents AS net, i.created_at AS sold_at, li.designation, li.condition, li.quantity
+       FROM invoices i JOIN lot_items li ON li.lot_id = i.lot_id
+      WHERE i.state <> 'cancelled' AND i.state <> 'refunded' AND i.created_at > now() - interval '2 years'
+      ORDER BY i.created_at DESC LIMIT 20000`,
+    { type: QueryTypes.SELECT },
+  );
+  return comparablesFromSoldLots(rows.map((r) => ({ lotId: r.lot_id, netHammerCents: Number(r.net), soldAt: r.sold_at.toISOString(), designation: r.designation, condition: r.condition, quantity: r.quantity })));
 }
 
 /** The summary dealers read first, and the points for the readings-against-nominal chart. */

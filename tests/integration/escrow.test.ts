@@ -7,6 +7,7 @@ import { markDelivered, markShipped, releaseDue } from "../../lib/services/escro
 import { balances, trialBalance } from "../../lib/services/ledger";
 import { closeSaleLot } from "../../lib/services/lot-closing";
 import { payInvoice } from "../../lib/services/payments";
+import { comparableSales } from "../../lib/services/lot-summary";
 import { reconcile } from "../../lib/services/reconcile";
 import { createSale } from "../../lib/services/sales";
 import { statementCsv, statementFor } from "../../lib/services/statements";
@@ -108,6 +109,9 @@ describe("escrow through the Stripe SDK against the local fake", () => {
 
     const rec = await reconcile();
     expect(rec.differences).toEqual([]);
+
+    // The sold lot (one 12AX7, used) is now a comparable for estimates at its hammer per tube [SUG, lib/lots/comparables].
+    expect((await comparableSales()).some((c) => c.typeFamily === "12AX7" && c.condition === "used" && c.pricePerTubeCents === 2_700)).toBe(true);
   }, 60_000);
 
   it("a card that asks for authentication is paid once the buyer authenticates", async () => {
