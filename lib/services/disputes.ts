@@ -88,6 +88,9 @@ async function mail(userId: string, subject: string, body: string): Promise<void
   await sendMail({ to: u.email, subject, text: `Hello ${u.displayName},\n\n${body}\n\nGetterline Exchange` }).catch((e: Error) => console.error("[mail]", e.message));
 }
 
+/** A lot item as the refund arithmetic sees it. */
+const asManifestItem = (i: ItemRow): ManifestItem => ({ id: i.id, position: i.position, quantity: i.quantity, soldAsSet: i.sold_as_set });
+
 const caseUrl = (id: string) => `${env().NEXTAUTH_URL}/disputes/${id}`;
 const utc = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
 
@@ -365,7 +368,7 @@ export async function workspace(viewer: Viewer, id: string, read?: CaseView) {
     weighings.push({ ...w, itemId: i.id, tubes: i.tubes });
   }
   const all = await lotItems(c.lotId);
-  const manifestItems: ManifestItem[] = all.map((i) => ({ id: i.id, position: i.position, quantity: i.quantity, soldAsSet: i.sold_as_set }));
+  const manifestItems = all.map(asManifestItem);
   return {
     weighings,
     summary: weighingSummary(weighings),
@@ -386,7 +389,7 @@ export async function refundPreview(viewer: Viewer, id: string, input: RefundPre
 /** The refund arithmetic for a partial-refund decision (no money moves). */
 async function previewRefund(lotId: string, sale: { hammerCents: number; premiumCents: number; commissionCents: number }, lines: LineValue[], rulings: Ruling[]) {
   const all = await lotItems(lotId);
-  const manifestItems: ManifestItem[] = all.map((i) => ({ id: i.id, position: i.position, quantity: i.quantity, soldAsSet: i.sold_as_set }));
+  const manifestItems = all.map(asManifestItem);
   try {
     const manifest = buildManifest(manifestItems, lines);
     const claims = claimsFromRulings(manifestItems, manifest, rulings);
@@ -479,7 +482,7 @@ export async function releaseUndisputedShare(viewer: Viewer, id: string, input: 
   let share;
   try {
     share = undisputedShare({ hammerCents: inv!.hammer_cents, premiumCents: inv!.premium_cents, commissionCents: inv!.commission_cents },
-      items.map((i) => ({ id: i.id, position: i.position, quantity: i.quantity, soldAsSet: i.sold_as_set })), fresh!.held_lines!, claimed.map((c) => ({ itemId: c.lot_item_id, tubes: c.tubes })));
+      items.map(asManifestItem), fresh!.held_lines!, claimed.map((c) => ({ itemId: c.lot_item_id, tubes: c.tubes })));
   } catch (e) {
     if (claimedLine) await db().query(`UPDATE disputes SET held_lines = NULL WHERE id = :id AND undisputed_released_at IS NULL`, { replacements: { id } });
     if (e instanceof RangeError) throw new ApiError("validation_failed", `The share cannot be worked out: ${e.message}`);
@@ -584,7 +587,7 @@ export async function recordReturn(viewer: Viewer, id: string, input: ReturnShip
 async function refundReturnedLot(d: DisputeRow, why: string): Promise<void> {
   const [inv] = await q<InvoiceRow>(`SELECT * FROM invoices WHERE id = :id`, { id: d.invoice_id });
   const items = await lotItems(d.lot_id);
-  const manifestItems = items.map((i) => ({ id: i.id, position: i.position, quantity: i.quantity, soldAsSet: i.sold_as_set }));
+  const manifestItems = items.map(asManifestItem);
   const s = settleLotRejection({ hammerCents: inv!.hammer_cents, premiumCents: inv!.premium_cents, commissionCents: inv!.commission_cents }, buildManifest(manifestItems, defaultLineValues(manifestItems, inv!.hammer_cents)));
   await payRefund(d, inv!, s);
   await db().transaction(async (t) => {

@@ -1,18 +1,13 @@
 import AxeBuilder from "@axe-core/playwright";
-import { expect, test, type Browser, type Page } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import pg from "pg";
 import sharp from "sharp";
-import { DEMO, signIn } from "./helpers";
+import { DEMO, payWithTestCard, shipAndDeliver, signedInPage } from "./helpers";
 
 const DB = process.env.E2E_DATABASE_URL ?? "postgres://app@127.0.0.1:54329/getterline_e2e";
 const SHOTS = process.env.SHOTS_DIR; // set to keep screenshots of the pages for review
 
-async function as(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await signIn(page, email);
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-  return page;
-}
+const as = signedInPage;
 const shot = async (page: Page, name: string) => { if (SHOTS) await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true }); };
 /** WCAG 2 A/AA problems axe finds on the page as it stands. */
 const axe = async (page: Page) => (await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa"]).analyze()).violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).slice(0, 3).join(", ")}`);
@@ -70,21 +65,10 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   // Pays by card; the house ships and records delivery.
   await dealer.goto("/invoices");
   await dealer.getByRole("row", { name: new RegExp(title) }).getByRole("link").click();
-  await dealer.getByLabel("Card number").fill("4242 4242 4242 4242");
-  await dealer.getByLabel("Expiry month").fill("12");
-  await dealer.getByLabel("Expiry year").fill("2031");
-  await dealer.getByLabel("Security code").fill("123");
-  await dealer.getByRole("button", { name: "Pay now" }).click();
-  await expect(dealer.getByTestId("invoice-state")).toHaveText("Paid, held by the house", { timeout: 15_000 });
+  await payWithTestCard(dealer);
   const invoiceUrl = dealer.url();
   const invoiceId = invoiceUrl.split("/").pop()!;
-  await house.goto(invoiceUrl);
-  await house.getByLabel("Carrier").fill("Demo Parcel Co.");
-  await house.getByLabel("Tracking number").fill("DP000333444");
-  await house.getByRole("button", { name: "Mark shipped" }).click();
-  await expect(house.getByTestId("invoice-state")).toHaveText("Shipped");
-  await house.getByRole("button", { name: "Mark delivered" }).click();
-  await expect(house.getByTestId("invoice-state")).toHaveText("Delivered, inspection open");
+  await shipAndDeliver(house, invoiceUrl, "DP000333444");
 
   // The dealer finds three of the six 12AX7s carry another maker's code and construction, and opens a claim.
   await dealer.reload();

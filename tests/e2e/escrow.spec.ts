@@ -1,15 +1,10 @@
-import { expect, test, type Browser, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import pg from "pg";
-import { DEMO, signIn } from "./helpers";
+import { DEMO, payWithTestCard, shipAndDeliver, signedInPage } from "./helpers";
 
 const DB = process.env.E2E_DATABASE_URL ?? "postgres://app@127.0.0.1:54329/getterline_e2e";
 
-async function as(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await signIn(page, email);
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-  return page;
-}
+const as = signedInPage;
 
 test("a winning dealer pays, the house ships and delivers, the window passes, the consignor's statement matches the invoice", async ({ browser }) => {
   test.setTimeout(180_000);
@@ -34,21 +29,10 @@ test("a winning dealer pays, the house ships and delivers, the window passes, th
   await dealer.goto("/invoices");
   await dealer.getByRole("row", { name: new RegExp(title) }).getByRole("link").click();
   const total = (await dealer.getByTestId("invoice-total").textContent())!;
-  await dealer.getByLabel("Card number").fill("4242 4242 4242 4242");
-  await dealer.getByLabel("Expiry month").fill("12");
-  await dealer.getByLabel("Expiry year").fill("2031");
-  await dealer.getByLabel("Security code").fill("123");
-  await dealer.getByRole("button", { name: "Pay now" }).click();
-  await expect(dealer.getByTestId("invoice-state")).toHaveText("Paid, held by the house", { timeout: 15_000 });
+  await payWithTestCard(dealer);
   const invoiceUrl = dealer.url();
 
-  await house.goto(invoiceUrl);
-  await house.getByLabel("Carrier").fill("Demo Parcel Co.");
-  await house.getByLabel("Tracking number").fill("DP000111222");
-  await house.getByRole("button", { name: "Mark shipped" }).click();
-  await expect(house.getByTestId("invoice-state")).toHaveText("Shipped");
-  await house.getByRole("button", { name: "Mark delivered" }).click();
-  await expect(house.getByTestId("invoice-state")).toHaveText("Delivered, inspection open");
+  await shipAndDeliver(house, invoiceUrl, "DP000111222");
 
   // The clock moves past the inspection window; the house's sweeper releases escrow.
   const db = new pg.Client({ connectionString: DB });

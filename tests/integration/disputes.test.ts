@@ -42,6 +42,16 @@ const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000)
   while (!ok(v) && Date.now() < end) { await new Promise((r) => setTimeout(r, 100)); v = await fn(); }
   return v;
 };
+/** Nothing left in escrow or owed to the consignor; the house keeps what it should; the ledger balances and matches the processor. */
+async function expectSettled(invoiceId: string, kept: { premiumKeptCents: number; commissionKeptCents: number }) {
+  const led = await balances(invoiceId);
+  expect(led["escrow-held"]).toBe(0);
+  expect(led["consignor-payable"]).toBe(0);
+  expect(led["house-revenue-premium"]).toBe(-kept.premiumKeptCents);
+  expect(led["house-revenue-commission"]).toBe(-kept.commissionKeptCents);
+  expect(await trialBalance()).toBe(0);
+  expect((await reconcile()).differences).toEqual([]);
+}
 const refused = async (p: Promise<unknown>) => { const e = await p.then(() => null, (x: unknown) => x); expect(e).toBeInstanceOf(ApiError); return e as ApiError; };
 
 /** Three lines: four tubes attributed to a maker, two sold by label alone, and a matched quad. */
@@ -171,13 +181,7 @@ describe("claims and mediation", () => {
     const st = await statementFor(consignor, f.saleId);
     expect(st.lines[0]!.refundsCents).toBe(302);
     expect(st.totals.payoutCents).toBe(transfer.amount);
-    const led = await balances(f.invoiceId);
-    expect(led["escrow-held"]).toBe(0);
-    expect(led["consignor-payable"]).toBe(0);
-    expect(led["house-revenue-premium"]).toBe(-(270 - 38));
-    expect(led["house-revenue-commission"]).toBe(-(540 - 76));
-    expect(await trialBalance()).toBe(0);
-    expect((await reconcile()).differences).toEqual([]);
+    await expectSettled(f.invoiceId, { premiumKeptCents: 270 - 38, commissionKeptCents: 540 - 76 });
 
     const decisionMails = [...await inbox(f.buyer.email), ...await inbox(f.consignor.email)].filter((m) => m.subject.includes("Decision on"));
     expect(decisionMails).toHaveLength(2);
@@ -332,12 +336,6 @@ describe("claims and mediation", () => {
     const st = await statementFor(viewerOf(f.consignor), f.saleId);
     expect(st.totals.payoutCents).toBe(1_858);
     expect(st.totals.paidOutCents).toBe(1_858);
-    const led = await balances(f.invoiceId);
-    expect(led["escrow-held"]).toBe(0);
-    expect(led["consignor-payable"]).toBe(0);
-    expect(led["house-revenue-premium"]).toBe(-(270 - 38));
-    expect(led["house-revenue-commission"]).toBe(-(540 - 76));
-    expect(await trialBalance()).toBe(0);
-    expect((await reconcile()).differences).toEqual([]);
+    await expectSettled(f.invoiceId, { premiumKeptCents: 270 - 38, commissionKeptCents: 540 - 76 });
   }, 60_000);
 });
