@@ -36,7 +36,7 @@
 // Lists take limit (1–100, default 10), starting_after, ending_before, created[gt|gte|lt|lte]; any endpoint takes
 // expand[] (e.g. latest_charge.balance_transaction, data.source). Unknown parameters are refused (400
 // parameter_unknown), so the app cannot rely on something the fake silently ignores.
-// Test-only endpoints (no key): see test-endpoints.ts — /_fake/health, /_fake/3ds/:pi (authentication page),
+// Test-only endpoints (no key): see test-endpoints.ts — /_fake/health, /_fake/3ds/:pi/:auth (authentication page),
 // POST /_fake/payment_intents/:pi/authenticate outcome=succeed|fail, POST /_fake/events/:evt/redeliver,
 // GET /_fake/deliveries.
 //
@@ -47,9 +47,11 @@
 //
 // Authentication: a requires_action intent carries next_action — redirect_to_url { url, return_url } when a
 // return_url was given, else use_stripe_sdk { stripe_js: url }. The url is this fake's page
-// GET /_fake/3ds/:pi (buttons Complete / Fail; then 303 to return_url?payment_intent=…&redirect_status=…).
+// GET /_fake/3ds/:pi/:auth (buttons Complete / Fail; then 303 to return_url?payment_intent=…&redirect_status=…).
 // Code and tests call POST /_fake/payment_intents/:pi/authenticate with outcome=succeed|fail (form or JSON;
 // also reachable as stripe.rawRequest("POST", "/_fake/payment_intents/<id>/authenticate", { outcome })).
+// Confirming the intent again with another payment method supersedes a pending authentication, as the real
+// processor does: the old page answers 409 and the old check (authentication=:auth) is refused.
 // "succeed" pays (payment_intent.succeeded); "fail" returns the intent to requires_payment_method with
 // last_payment_error.code payment_intent_authentication_failure (payment_intent.payment_failed).
 //

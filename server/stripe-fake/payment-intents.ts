@@ -1,18 +1,18 @@
-// PaymentIntents: create (optionally confirm), update, confirm, capture, cancel, retrieve, list, and the end of
-// a test authentication (see authentication.ts). A successful capture makes a charge and a balance
-// transaction with the fake fee; a decline answers 402 and leaves a failed charge; a card that needs
-// authentication stops at requires_action with next_action pointing at the fake's authentication page.
+// PaymentIntents: create (optionally confirm), update, confirm, capture, cancel, retrieve, list. What a
+// confirmation leads to is in intent-confirm.ts; the end of a test authentication in authentication.ts.
+// A successful capture makes a charge and a balance transaction with the fake fee; a decline answers 402 and
+// leaves a failed charge; a card that needs authentication stops at requires_action with next_action pointing
+// at the fake's authentication page.
 import type Stripe from "stripe";
-import type { CardBehaviour } from "./cards";
-import { makeCharge } from "./charges";
 import type { Ctx, Handler } from "./context";
-import { FakeError, invalid, noSuch } from "./errors";
+import { invalid, noSuch } from "./errors";
 import { processingFee } from "./fees";
 import type { ParamHash } from "./form";
 import { newId, randomText } from "./ids";
+import { confirm, endAuthentication, findIntent, readConfirmOptions, unexpectedState } from "./intent-confirm";
 import { record } from "./ledger";
 import { LIST_PARAMS, page } from "./lists";
-import { applyMetadata, bool, currency, hash, int, onlyParams, oneOf, requiredStr, str } from "./params";
+import { applyMetadata, bool, currency, hash, int, onlyParams, oneOf, str } from "./params";
 
 /** Stripe's largest amount (eight digits) and the fake's smallest (50 minor units, as for usd). */
 const MIN_AMOUNT = 50;
@@ -44,148 +44,9 @@ function readReturnUrl(p: ParamHash): string | undefined {
   return url;
 }
 
-function findIntent(ctx: Ctx, id: string): Stripe.PaymentIntent {
-  const pi = ctx.state.payment_intents[id];
-  if (!pi) throw noSuch("payment_intent", id);
-  return pi;
-}
-
-function unexpectedState(pi: Stripe.PaymentIntent, action: string, allowed: string[]): FakeError {
-  return new FakeError(400, {
-    type: "invalid_request_error",
-    code: "payment_intent_unexpected_state",
-    message: `You cannot ${action} this PaymentIntent because it has a status of ${pi.status}. Only a PaymentIntent with one of the following statuses may be ${action === "confirm" ? "confirmed" : action + "d"}: ${allowed.join(", ")}.`,
-    payment_intent: structuredClone(pi),
-  });
-}
-
 function setPaymentMethod(ctx: Ctx, pi: Stripe.PaymentIntent, id: string): void {
   if (!ctx.state.payment_methods[id]) throw noSuch("PaymentMethod", id, "payment_method", 400);
   pi.payment_method = id;
-}
-
-/** Money moves: a charge (succeeded), its balance transaction when captured, the intent's new status, the event. */
-function succeed(ctx: Ctx, pi: Stripe.PaymentIntent, pm: Stripe.PaymentMethod, authenticated: boolean): void {
-  const captured = pi.capture_method !== "manual";
-  const charge = makeCharge(ctx.state, pi, pm, { ok: true, captured, authenticated }, ctx.now);
-  if (captured) {
-    const txn = record(ctx.state, {
-      amount: charge.amount,
-      fee: processingFee(charge.amount),
-      currency: charge.currency,
-      type: "charge",
-      reportingCategory: "charge",
-      source: charge.id,
-      description: charge.description,
-      created: ctx.now,
-    });
-    charge.balance_transaction = txn.id;
-  }
-  pi.latest_charge = charge.id;
-  pi.next_action = null;
-  pi.last_payment_error = null;
-  if (captured) {
-    pi.status = "succeeded";
-    pi.amount_received = pi.amount;
-    ctx.emit("payment_intent.succeeded", pi);
-  } else {
-    pi.status = "requires_capture";
-    pi.amount_capturable = pi.amount;
-    ctx.emit("payment_intent.amount_capturable_updated", pi);
-  }
-}
-
-/** A decline: failed charge, intent back to requires_payment_method, event, then 402 (changes kept). */
-function decline(ctx: Ctx, pi: Stripe.PaymentIntent, pm: Stripe.PaymentMethod, d: Extract<CardBehaviour, { kind: "decline" }>): never {
-  const charge = makeCharge(ctx.state, pi, pm, { ok: false, code: d.code, declineCode: d.declineCode, message: d.message }, ctx.now);
-  pi.latest_charge = charge.id;
-  pi.status = "requires_payment_method";
-  pi.payment_method = null;
-  pi.next_action = null;
-  pi.last_payment_error = {
-    type: "card_error",
-    code: d.code as Stripe.PaymentIntent.LastPaymentError.Code,
-    decline_code: d.declineCode,
-    message: d.message,
-    charge: charge.id,
-    payment_method: structuredClone(pm),
-  };
-  ctx.emit("payment_intent.payment_failed", pi);
-  throw new FakeError(
-    402,
-    {
-      type: "card_error",
-      code: d.code,
-      decline_code: d.declineCode,
-      message: d.message,
-      charge: charge.id,
-      payment_intent: structuredClone(pi),
-      payment_method: structuredClone(pm),
-    },
-    true,
-  );
-}
-
-/** An off-session payment with a card that needs its holder: fails as Stripe does (authentication_required). */
-function authenticationRequired(ctx: Ctx, pi: Stripe.PaymentIntent, pm: Stripe.PaymentMethod): never {
-  const message = "Your card was declined. This transaction requires authentication.";
-  pi.status = "requires_payment_method";
-  pi.payment_method = null;
-  pi.last_payment_error = {
-    type: "card_error",
-    code: "authentication_required",
-    decline_code: "authentication_required",
-    message,
-    payment_method: structuredClone(pm),
-  };
-  ctx.emit("payment_intent.payment_failed", pi);
-  throw new FakeError(
-    402,
-    {
-      type: "card_error",
-      code: "authentication_required",
-      decline_code: "authentication_required",
-      message,
-      payment_intent: structuredClone(pi),
-      payment_method: structuredClone(pm),
-    },
-    true,
-  );
-}
-
-function nextAction(ctx: Ctx, pi: Stripe.PaymentIntent): Stripe.PaymentIntent.NextAction {
-  const url = `${ctx.baseUrl}/_fake/3ds/${pi.id}`;
-  const returnUrl = ctx.state.return_urls[pi.id];
-  if (returnUrl) return { type: "redirect_to_url", redirect_to_url: { url, return_url: returnUrl } };
-  return { type: "use_stripe_sdk", use_stripe_sdk: { type: "three_d_secure_redirect", stripe_js: url, source: `src_${randomText(24)}` } };
-}
-
-type ConfirmOptions = { offSession: boolean; errorOnRequiresAction: boolean };
-
-function confirm(ctx: Ctx, pi: Stripe.PaymentIntent, o: ConfirmOptions): void {
-  const pmId = typeof pi.payment_method === "string" ? pi.payment_method : pi.payment_method?.id;
-  if (!pmId) {
-    throw invalid(
-      "You cannot confirm this PaymentIntent because it's missing a payment method. Update the PaymentIntent with a payment_method and then confirm it again.",
-      "payment_method",
-      "payment_intent_unexpected_state",
-    );
-  }
-  const pm = ctx.state.payment_methods[pmId];
-  const behaviour = ctx.state.card_behaviour[pmId] ?? { kind: "succeed" };
-  if (behaviour.kind === "decline") decline(ctx, pi, pm, behaviour);
-  if (behaviour.kind === "authenticate") {
-    if (o.offSession || o.errorOnRequiresAction) authenticationRequired(ctx, pi, pm);
-    pi.status = "requires_action";
-    pi.next_action = nextAction(ctx, pi);
-    ctx.emit("payment_intent.requires_action", pi);
-    return;
-  }
-  succeed(ctx, pi, pm, false);
-}
-
-function readConfirmOptions(p: ParamHash): ConfirmOptions {
-  return { offSession: bool(p, "off_session") ?? false, errorOnRequiresAction: bool(p, "error_on_requires_action") ?? false };
 }
 
 /** POST /v1/payment_intents */
@@ -306,6 +167,7 @@ export const updatePaymentIntent: Handler = (ctx, id) => {
   if (amount !== undefined) pi.amount = amount;
   if (cur !== undefined) pi.currency = cur;
   if (amount !== undefined || cur !== undefined || pmId) {
+    endAuthentication(ctx, pi);
     pi.next_action = null;
     pi.status = pi.payment_method ? "requires_confirmation" : "requires_payment_method";
   }
@@ -381,6 +243,7 @@ export const cancelPaymentIntent: Handler = (ctx, id) => {
     charge.amount_refunded = charge.amount;
     charge.refunded = true;
   }
+  endAuthentication(ctx, pi);
   pi.status = "canceled";
   pi.canceled_at = ctx.now;
   pi.cancellation_reason = reason ?? null;
@@ -390,31 +253,3 @@ export const cancelPaymentIntent: Handler = (ctx, id) => {
   return pi;
 };
 
-/** Ends a test authentication: "succeed" pays as a normal confirm would; "fail" returns the intent to the buyer. */
-export function completeAuthentication(ctx: Ctx, id: string, outcome: "succeed" | "fail"): Stripe.PaymentIntent {
-  const pi = findIntent(ctx, id);
-  if (pi.status !== "requires_action") throw unexpectedState(pi, "authenticate", ["requires_action"]);
-  const pm = ctx.state.payment_methods[pi.payment_method as string];
-  if (outcome === "succeed") {
-    succeed(ctx, pi, pm, true);
-    return pi;
-  }
-  pi.status = "requires_payment_method";
-  pi.payment_method = null;
-  pi.next_action = null;
-  pi.last_payment_error = {
-    type: "invalid_request_error",
-    code: "payment_intent_authentication_failure",
-    message:
-      "The provided PaymentMethod has failed authentication. You can provide payment_method_data or a new PaymentMethod to attempt to fulfill this PaymentIntent again.",
-    payment_method: structuredClone(pm),
-  };
-  ctx.emit("payment_intent.payment_failed", pi);
-  return pi;
-}
-
-/** Reads the required `outcome` of the authentication endpoints. */
-export function readOutcome(p: ParamHash): "succeed" | "fail" {
-  requiredStr(p, "outcome");
-  return oneOf(p, "outcome", ["succeed", "fail"] as const)!;
-}

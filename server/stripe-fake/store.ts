@@ -57,6 +57,8 @@ export type State = {
   card_behaviour: Record<string, CardBehaviour>;
   /** Per PaymentIntent: where a finished authentication sends the buyer. */
   return_urls: Record<string, string>;
+  /** Per PaymentIntent in requires_action: the id of its one pending test authentication. */
+  authentications: Record<string, string>;
   idempotency: Record<string, IdempotencyRecord>;
   deliveries: Record<string, Delivery>;
 };
@@ -76,6 +78,7 @@ export function emptyState(): State {
     events: {},
     card_behaviour: {},
     return_urls: {},
+    authentications: {},
     idempotency: {},
     deliveries: {},
   };

@@ -1,14 +1,15 @@
 // The fake's own endpoints under /_fake (no API key; the fake listens on 127.0.0.1 only):
 //   GET  /_fake/health                              liveness, API version, counts
-//   GET  /_fake/3ds/:pi                             test authentication page (next_action URL) for a browser
-//   POST /_fake/3ds/:pi            outcome=succeed|fail   from that page; 303 to the return_url when one was given
-//   POST /_fake/payment_intents/:pi/authenticate  outcome=succeed|fail   the same for code and tests (JSON answer)
+//   GET  /_fake/3ds/:pi/:auth                       test authentication page (next_action URL) for a browser
+//   POST /_fake/3ds/:pi/:auth      outcome=succeed|fail   from that page; 303 to the return_url when one was given
+//   POST /_fake/payment_intents/:pi/authenticate  outcome=succeed|fail [authentication=:auth]   the same for
+//        code and tests (JSON answer); without `authentication`, the intent's current one
 //   POST /_fake/events/:evt/redeliver               send an event again (full retry schedule)
 //   GET  /_fake/deliveries[?event=evt_…]            webhook delivery state, newest first
 import type { Ctx } from "./context";
 import { FakeError, invalid, noSuch } from "./errors";
 import { API_VERSION } from "./events";
-import { completeAuthentication, readOutcome } from "./payment-intents";
+import { completeAuthentication, isCurrentAuthentication, readAuthentication, readOutcome } from "./authentication";
 import { onlyParams, str } from "./params";
 import type { Dispatcher } from "./webhooks";
 
@@ -52,11 +53,11 @@ const health: TestHandler = (ctx, webhooks) => {
   };
 };
 
-const authenticationPage: TestHandler = (ctx, _w, id) => {
+const authenticationPage: TestHandler = (ctx, _w, id, auth) => {
   const pi = ctx.state.payment_intents[id];
   if (!pi) return { status: 404, html: page("Not found", `<p>No payment ${escapeHtml(id)}.</p>`) };
-  if (pi.status !== "requires_action") {
-    return { status: 409, html: page("Nothing to authenticate", `<p>Payment ${escapeHtml(id)} has status ${escapeHtml(pi.status)}.</p>`) };
+  if (pi.status !== "requires_action" || !isCurrentAuthentication(ctx, id, auth)) {
+    return { status: 409, html: page("Nothing to authenticate", `<p>This check is no longer open: payment ${escapeHtml(id)} has status ${escapeHtml(pi.status)}${pi.status === "requires_action" ? " with a newer check" : ""}.</p>`) };
   }
   const amount = `${(pi.amount / 100).toFixed(2)} ${pi.currency.toUpperCase()}`;
   return {
@@ -65,7 +66,7 @@ const authenticationPage: TestHandler = (ctx, _w, id) => {
       "Test payment authentication",
       `<h1>Test payment authentication</h1>
 <p>This page stands in for the card issuer's check in local development. Payment <code>${escapeHtml(id)}</code> of ${escapeHtml(amount)}.</p>
-<form method="post" action="/_fake/3ds/${escapeHtml(id)}">
+<form method="post" action="/_fake/3ds/${escapeHtml(id)}/${escapeHtml(auth)}">
 <button name="outcome" value="succeed" type="submit">Complete authentication</button>
 <button name="outcome" value="fail" type="submit">Fail authentication</button>
 </form>`,
@@ -73,10 +74,10 @@ const authenticationPage: TestHandler = (ctx, _w, id) => {
   };
 };
 
-const authenticationForm: TestHandler = (ctx, _w, id) => {
+const authenticationForm: TestHandler = (ctx, _w, id, auth) => {
   onlyParams(ctx.params, ["outcome"]);
   const outcome = readOutcome(ctx.params);
-  const pi = completeAuthentication(ctx, id, outcome);
+  const pi = completeAuthentication(ctx, id, outcome, auth);
   const returnUrl = ctx.state.return_urls[id];
   if (returnUrl) {
     const u = new URL(returnUrl);
@@ -89,8 +90,8 @@ const authenticationForm: TestHandler = (ctx, _w, id) => {
 };
 
 const authenticateJson: TestHandler = (ctx, _w, id) => {
-  onlyParams(ctx.params, ["outcome"]);
-  return { status: 200, json: completeAuthentication(ctx, id, readOutcome(ctx.params)) };
+  onlyParams(ctx.params, ["outcome", "authentication"]);
+  return { status: 200, json: completeAuthentication(ctx, id, readOutcome(ctx.params), readAuthentication(ctx.params)) };
 };
 
 const redeliver: TestHandler = (ctx, webhooks, id) => {
@@ -129,8 +130,8 @@ const ID = "([A-Za-z0-9_]+)";
 /** The /_fake route table. */
 export const TEST_ROUTES: TestRoute[] = [
   { method: "GET", pattern: /^\/_fake\/health$/, handler: health, writes: false },
-  { method: "GET", pattern: new RegExp(`^/_fake/3ds/${ID}$`), handler: authenticationPage, writes: false },
-  { method: "POST", pattern: new RegExp(`^/_fake/3ds/${ID}$`), handler: authenticationForm, writes: true },
+  { method: "GET", pattern: new RegExp(`^/_fake/3ds/${ID}/${ID}$`), handler: authenticationPage, writes: false },
+  { method: "POST", pattern: new RegExp(`^/_fake/3ds/${ID}/${ID}$`), handler: authenticationForm, writes: true },
   { method: "POST", pattern: new RegExp(`^/_fake/payment_intents/${ID}/authenticate$`), handler: authenticateJson, writes: true },
   { method: "POST", pattern: new RegExp(`^/_fake/events/${ID}/redeliver$`), handler: redeliver, writes: true },
   { method: "GET", pattern: /^\/_fake\/deliveries$/, handler: deliveries, writes: false },

@@ -115,7 +115,7 @@ describe("payments", () => {
     });
     expect(pi.next_action?.type).toBe("redirect_to_url");
     const url = pi.next_action!.redirect_to_url!.url!;
-    expect(url).toBe(`${fake.url}/_fake/3ds/${pi.id}`);
+    expect(url).toMatch(new RegExp(`^${fake.url}/_fake/3ds/${pi.id}/payatt_[A-Za-z0-9]+$`));
     const page = await fetch(url);
     expect(page.status).toBe(200);
     expect(await page.text()).toContain('value="succeed"');
@@ -141,6 +141,28 @@ describe("payments", () => {
     expect(failed.last_payment_error?.code).toBe("payment_intent_authentication_failure");
     const twice = await fetch(`${fake.url}/_fake/payment_intents/${pi.id}/authenticate`, { method: "POST", body: new URLSearchParams({ outcome: "succeed" }) });
     expect(twice.status).toBe(400);
+  });
+
+  it("a confirmation with another card supersedes a pending authentication, which can then never complete", async () => {
+    // The processor's documented practice: confirming a PaymentIntent again with a new payment method replaces
+    // the next_action of the earlier confirmation [Stripe API reference, "Confirm a PaymentIntent"].
+    const pi = await stripe.paymentIntents.create({ amount: 5_000, currency: "usd", payment_method: (await card("4000002500003155")).id, confirm: true, return_url: "http://127.0.0.1:3000/done" });
+    const oldPage = pi.next_action!.redirect_to_url!.url!;
+    const oldAuth = oldPage.split("/").at(-1)!;
+    const second = await stripe.paymentIntents.confirm(pi.id, { payment_method: (await card("4000000000003220")).id });
+    expect(second.status).toBe("requires_action");
+    expect(second.next_action!.redirect_to_url!.url).not.toBe(oldPage);
+    expect((await fetch(oldPage)).status).toBe(409);
+    const stale = await fetch(`${fake.url}/_fake/payment_intents/${pi.id}/authenticate`, { method: "POST", body: new URLSearchParams({ outcome: "succeed", authentication: oldAuth }) });
+    expect(stale.status).toBe(400);
+    expect((await stripe.paymentIntents.retrieve(pi.id)).status).toBe("requires_action");
+    // Paid with a third card: the second check is gone too, and only one charge succeeded.
+    const paidNow = await stripe.paymentIntents.confirm(pi.id, { payment_method: (await card("4242424242424242")).id });
+    expect(paidNow.status).toBe("succeeded");
+    const late = await fetch(second.next_action!.redirect_to_url!.url!, { method: "POST", body: new URLSearchParams({ outcome: "succeed" }), redirect: "manual" });
+    expect(late.status).toBe(400);
+    const charges = await stripe.charges.list({ payment_intent: pi.id });
+    expect(charges.data.filter((c) => c.status === "succeeded")).toHaveLength(1);
   });
 
   it("holds with capture_method=manual and captures part of it", async () => {
