@@ -62,7 +62,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
         </tbody>
       </table>
       {inv.lastPaymentError && inv.state === "awaiting-payment" ? <FormAlert>Last attempt: {inv.lastPaymentError}</FormAlert> : null}
-      {inv.isBuyer && inv.state === "awaiting-payment" ? <PayForm invoiceId={inv.id} totalText={formatCents(inv.totalCents)} /> : null}
+      {inv.isBuyer && inv.state === "awaiting-payment" ? <PayForm invoiceId={inv.id} totalText={formatCents(inv.totalCents)} onPaid={setMessage} /> : null}
       <ol className="card space-y-1 text-sm">
         <li>Paid: {inv.paidAt ? inv.paidAt.slice(0, 16).replace("T", " ") + " UTC" : "not yet"}</li>
         <li>Shipped: {inv.shippedAt ? `${inv.shippedAt.slice(0, 10)} with ${inv.carrier}, tracking ${inv.tracking}` : "not yet"}</li>

@@ -5,7 +5,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useRef, useState } from "react";
 import { useForm } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
-import { apiFetch } from "@/lib/client/api";
+import { ApiClientError, apiFetch } from "@/lib/client/api";
 import type { z } from "zod";
 import { CardPaymentSchema, type CardPayment } from "@/lib/validation/payments";
 
@@ -16,9 +16,10 @@ type Outcome = { status: "succeeded" } | { status: "requires_action"; redirectUr
 /**
  * Card payment for one invoice. The card goes to the payment processor
  * through our server in memory only; the page then waits for the
- * processor's confirmation to arrive.
+ * processor's confirmation to arrive. `onPaid` carries the words for the
+ * invoice to keep once this form has gone (paid here, or elsewhere).
  */
-export function PayForm({ invoiceId, totalText }: { invoiceId: string; totalText: string }) {
+export function PayForm({ invoiceId, totalText, onPaid }: { invoiceId: string; totalText: string; onPaid: (m: { tone: "sound"; text: string }) => void }) {
   const qc = useQueryClient();
   const attempt = useRef<string>(crypto.randomUUID());
   const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
@@ -36,9 +37,17 @@ export function PayForm({ invoiceId, totalText }: { invoiceId: string; totalText
         window.location.assign(r.redirectUrl);
         return;
       }
-      setMessage({ tone: "sound", text: "Payment received. Waiting for the processor's confirmation…" });
+      onPaid({ tone: "sound", text: "Payment received. Waiting for the processor's confirmation…" });
       void qc.invalidateQueries({ queryKey: ["invoice", invoiceId] });
     } catch (e) {
+      const reason = e instanceof ApiClientError ? e.details?.reason : undefined;
+      if (reason === "already-paid" || reason === "in-progress") {
+        // Paid, or being paid, from another tab or device: nothing was charged here. Show the invoice as it stands;
+        // the words stay on the invoice once this form has gone.
+        onPaid({ tone: "sound", text: (e as Error).message });
+        void qc.invalidateQueries({ queryKey: ["invoice", invoiceId] });
+        return;
+      }
       attempt.current = crypto.randomUUID(); // a refused attempt: the next one is new
       reset({ ...values, number: "", cvc: "", attemptKey: attempt.current });
       setMessage({ tone: "fault", text: (e as Error).message });

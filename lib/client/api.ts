@@ -3,7 +3,7 @@
  * shape and are thrown as ApiClientError, so forms can show field messages.
  */
 export class ApiClientError extends Error {
-  constructor(readonly status: number, readonly code: string, message: string, readonly fields?: Record<string, string>) {
+  constructor(readonly status: number, readonly code: string, message: string, readonly fields?: Record<string, string>, readonly details?: Record<string, unknown>) {
     super(message);
   }
 }
@@ -19,7 +19,7 @@ export async function apiFetch<T>(path: string, init: { method?: string; json?: 
   const body = await res.json().catch(() => null);
   if (!res.ok) {
     const err = body?.error;
-    throw new ApiClientError(res.status, err?.code ?? "unknown", err?.message ?? `Request failed (${res.status})`, err?.fields);
+    throw new ApiClientError(res.status, err?.code ?? "unknown", err?.message ?? `Request failed (${res.status})`, err?.fields, err?.details);
   }
   return body as T;
 }

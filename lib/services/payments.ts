@@ -1,30 +1,41 @@
-import { QueryTypes } from "sequelize";
+import { QueryTypes, type Transaction } from "sequelize";
 import type Stripe from "stripe";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
 import { env } from "../config/env";
-import { paymentCapturedEntries } from "../money/ledger";
+import { ATTEMPT_REFUSALS, nextAttemptStep, type IntentStatus } from "../money/payment-attempt";
 import { stripe, stripeConfig } from "../stripe/client";
 import type { CardPayment } from "../validation/payments";
 import { db } from "../../models";
-import type { InvoiceRow } from "./invoices";
-import { post } from "./ledger";
 
 export type PayOutcome =
   | { status: "succeeded" }
   | { status: "requires_action"; redirectUrl: string }
   | { status: "processing" };
 
+type PayableInvoice = { id: string; number: string; buyer_id: string; state: string; total_cents: number; payment_intent_id: string | null };
+
+const PAYABLE_COLUMNS = "id, number, buyer_id, state, total_cents, payment_intent_id";
+
+function notPayable(state: string): ApiError {
+  const paid = state !== "cancelled";
+  return new ApiError("conflict", paid ? ATTEMPT_REFUSALS.paid : "This invoice was cancelled and can no longer be paid.", undefined, undefined, { state, reason: paid ? "already-paid" : "cancelled" });
+}
+
 /**
- * The buyer pays an invoice: a PaymentMethod is created from the card (the
- * card data passes through memory only), then a PaymentIntent is created and
- * confirmed with business idempotency keys. Payment state itself changes only
- * when the processor's webhook arrives.
+ * The buyer pays an invoice by card. The card becomes a PaymentMethod (the card data passes through memory
+ * only; the key is the attempt's, so a retried request makes one method). Then, under the invoice's row
+ * lock, the invoice's one PaymentIntent (created once, with a key derived from the invoice) is read fresh
+ * from the processor and the attempt takes the step `nextAttemptStep` gives: confirm the intent with this
+ * method (which supersedes an authentication another attempt left pending), send the buyer back to their
+ * own pending check, answer from a charge already made, or refuse in words. Two tabs, two devices or a
+ * retry can therefore never charge one invoice twice. Payment state itself changes only when the
+ * processor's webhook arrives.
  */
 export async function payInvoice(viewer: Viewer, invoiceId: string, card: CardPayment): Promise<PayOutcome> {
-  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+  const [inv] = await db().query<PayableInvoice>(`SELECT ${PAYABLE_COLUMNS} FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
   if (!inv || inv.buyer_id !== viewer.id) throw new ApiError("not_found", "No such invoice");
-  if (inv.state !== "awaiting-payment") throw new ApiError("conflict", "This invoice is already paid or closed");
+  if (inv.state !== "awaiting-payment") throw notPayable(inv.state);
   const sdk = stripe();
   let pm: Stripe.PaymentMethod;
   try {
@@ -35,65 +46,74 @@ export async function payInvoice(viewer: Viewer, invoiceId: string, card: CardPa
   } catch (e) {
     throw new ApiError("validation_failed", (e as Stripe.errors.StripeError).message ?? "The card was not accepted", { number: "Check the card details" });
   }
+  const s = db();
+  const result = await s.transaction(async (t): Promise<PayOutcome | { refusal: ApiError }> => {
+    const [locked] = await s.query<PayableInvoice>(`SELECT ${PAYABLE_COLUMNS} FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
+    if (!locked || locked.state !== "awaiting-payment") throw notPayable(locked?.state ?? "cancelled");
+    const current = locked.payment_intent_id ? await sdk.paymentIntents.retrieve(locked.payment_intent_id) : null;
+    const step = nextAttemptStep(current && { status: current.status as IntentStatus, paymentMethodId: methodId(current) }, pm.id);
+    switch (step.kind) {
+      case "paid":
+        return { status: "succeeded" as const };
+      case "paid-by-other-attempt":
+        throw new ApiError("conflict", ATTEMPT_REFUSALS.paid, undefined, undefined, { state: locked.state, reason: "already-paid" });
+      case "in-progress":
+        throw new ApiError("conflict", ATTEMPT_REFUSALS.inProgress, undefined, undefined, { state: locked.state, reason: "in-progress" });
+      case "authenticate":
+        return answer(current!);
+      case "confirm":
+        return confirmIntent(t, locked, current!, pm.id);
+      case "create-and-confirm":
+        return confirmIntent(t, locked, await createIntent(t, locked, current), pm.id);
+    }
+  });
+  if ("refusal" in result) throw result.refusal; // after the commit, which keeps the decline on the invoice
+  return result;
+}
+
+function methodId(pi: Stripe.PaymentIntent): string | null {
+  return typeof pi.payment_method === "string" ? pi.payment_method : pi.payment_method?.id ?? null;
+}
+
+function returnUrl(invoiceId: string): string {
+  return `${env().NEXTAUTH_URL}/invoices/${invoiceId}?returned=1`;
+}
+
+/** The invoice's intent, made once: the key is the invoice's (and the cancelled intent's, should one be replaced). */
+async function createIntent(t: Transaction, inv: PayableInvoice, replaced: Stripe.PaymentIntent | null): Promise<Stripe.PaymentIntent> {
+  const pi = await stripe().paymentIntents.create(
+    {
+      amount: inv.total_cents, currency: stripeConfig().CURRENCY, return_url: returnUrl(inv.id),
+      metadata: { invoice_id: inv.id, invoice_number: inv.number }, transfer_group: `invoice:${inv.id}`,
+    },
+    { idempotencyKey: replaced ? `invoice:${inv.id}:intent:after:${replaced.id}` : `invoice:${inv.id}:intent` },
+  );
+  await db().query(`UPDATE invoices SET payment_intent_id = :pi, updated_at = now() WHERE id = :id`, { replacements: { pi: pi.id, id: inv.id }, transaction: t });
+  return pi;
+}
+
+/** Confirm the invoice's intent with this attempt's method; a decline is kept on the invoice for the buyer. */
+async function confirmIntent(t: Transaction, inv: PayableInvoice, pi: Stripe.PaymentIntent, pmId: string): Promise<PayOutcome | { refusal: ApiError }> {
   try {
-    const pi = await sdk.paymentIntents.create(
-      {
-        amount: inv.total_cents, currency: stripeConfig().CURRENCY, payment_method: pm.id, confirm: true,
-        return_url: `${env().NEXTAUTH_URL}/invoices/${inv.id}?returned=1`,
-        metadata: { invoice_id: inv.id, invoice_number: inv.number }, transfer_group: `invoice:${inv.id}`,
-      },
-      { idempotencyKey: `invoice:${inv.id}:pay:${card.attemptKey}` },
-    );
-    await db().query(`UPDATE invoices SET payment_intent_id = :pi, last_payment_error = NULL, updated_at = now() WHERE id = :id AND state = 'awaiting-payment'`, { replacements: { pi: pi.id, id: inv.id } });
-    if (pi.status === "succeeded") return { status: "succeeded" };
-    if (pi.status === "requires_action") {
-      const next = pi.next_action;
-      const url = next?.redirect_to_url?.url ?? (next as { use_stripe_sdk?: { stripe_js?: string } } | null)?.use_stripe_sdk?.stripe_js;
-      if (!url) throw new ApiError("internal", "The card asks for authentication we cannot show");
-      return { status: "requires_action", redirectUrl: url };
-    }
-    return { status: "processing" };
+    const confirmed = await stripe().paymentIntents.confirm(pi.id, { payment_method: pmId, return_url: returnUrl(inv.id) }, { idempotencyKey: `invoice:${inv.id}:confirm:${pmId}` });
+    await db().query(`UPDATE invoices SET last_payment_error = NULL, updated_at = now() WHERE id = :id`, { replacements: { id: inv.id }, transaction: t });
+    return answer(confirmed);
   } catch (e) {
-    if (e instanceof ApiError) throw e;
     const err = e as Stripe.errors.StripeError;
-    if (err.type === "StripeCardError") {
-      await db().query(`UPDATE invoices SET last_payment_error = :msg, updated_at = now() WHERE id = :id`, { replacements: { msg: (err.message ?? "Declined").slice(0, 300), id: inv.id } });
-      throw new ApiError("conflict", `The card was declined: ${err.message ?? "no reason given"}. Try another card.`, undefined, undefined, { declineCode: err.decline_code ?? err.code ?? null });
-    }
-    throw e;
+    if (err.type !== "StripeCardError") throw e;
+    await db().query(`UPDATE invoices SET last_payment_error = :msg, updated_at = now() WHERE id = :id`, { replacements: { msg: (err.message ?? "Declined").slice(0, 300), id: inv.id }, transaction: t });
+    return { refusal: new ApiError("conflict", `The card was declined: ${err.message ?? "no reason given"}. Try another card.`, undefined, undefined, { reason: "declined", declineCode: err.decline_code ?? err.code ?? null }) };
   }
 }
 
-/** The processor says the payment succeeded: the invoice is paid and the money held. Idempotent. */
-export async function recordPaymentSucceeded(pi: Stripe.PaymentIntent): Promise<boolean> {
-  const invoiceId = pi.metadata?.invoice_id;
-  if (!invoiceId) return false;
-  const fee = await processorFee(pi).catch(() => 0);
-  const s = db();
-  return s.transaction(async (t) => {
-    const [inv] = await s.query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
-    if (!inv || inv.total_cents !== pi.amount) return false;
-    if (inv.state !== "awaiting-payment" && inv.state !== "cancelled") return false; // already moved on: a redelivery or a late event
-    await s.query(`UPDATE invoices SET state = 'paid-held', paid_at = now(), payment_intent_id = :pi, processor_fee_cents = :fee, last_payment_error = NULL, updated_at = now() WHERE id = :invoiceId`,
-      { replacements: { pi: pi.id, fee, invoiceId }, transaction: t });
-    return post(t, "payment-captured", invoiceId, paymentCapturedEntries({
-      hammerCents: inv.hammer_cents, premiumCents: inv.premium_cents, shippingCents: inv.shipping_cents, taxableCents: 0, taxCents: inv.tax_cents, totalCents: inv.total_cents,
-    }, fee), pi.id);
-  });
-}
-
-/** A failed attempt is noted for the buyer; the invoice stays payable. */
-export async function recordPaymentFailed(pi: Stripe.PaymentIntent): Promise<void> {
-  const invoiceId = pi.metadata?.invoice_id;
-  if (!invoiceId) return;
-  await db().query(`UPDATE invoices SET last_payment_error = :msg, updated_at = now() WHERE id = :invoiceId AND state = 'awaiting-payment'`,
-    { replacements: { msg: (pi.last_payment_error?.message ?? "The payment failed").slice(0, 300), invoiceId } });
-}
-
-async function processorFee(pi: Stripe.PaymentIntent): Promise<number> {
-  const chargeId = typeof pi.latest_charge === "string" ? pi.latest_charge : pi.latest_charge?.id;
-  if (!chargeId) return 0;
-  const charge = await stripe().charges.retrieve(chargeId, { expand: ["balance_transaction"] });
-  const bt = charge.balance_transaction;
-  return bt && typeof bt !== "string" ? bt.fee : 0;
+/** What the buyer's page does next, from the intent as it stands now. */
+function answer(pi: Stripe.PaymentIntent): PayOutcome {
+  if (pi.status === "succeeded" || pi.status === "requires_capture") return { status: "succeeded" };
+  if (pi.status === "requires_action") {
+    const next = pi.next_action;
+    const url = next?.redirect_to_url?.url ?? (next as { use_stripe_sdk?: { stripe_js?: string } } | null)?.use_stripe_sdk?.stripe_js;
+    if (!url) throw new ApiError("internal", "The card asks for authentication we cannot show");
+    return { status: "requires_action", redirectUrl: url };
+  }
+  return { status: "processing" };
 }
