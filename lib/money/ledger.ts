@@ -24,6 +24,7 @@ export const ACCOUNTS = [
   "house-revenue-fees", // revenue: lot and other consignor fees
   "processor-fees", // expense: card/payment processor charges
   "refunds-paid", // contra-revenue: premium and commission given back after release
+  "unexpected-charges-payable", // liability: a charge the buyer did not owe (a second payment), until refunded
 ] as const;
 
 /** One of {@link ACCOUNTS}. */
@@ -151,5 +152,28 @@ export function refundEntries(refund: RefundSettlement, phase: "held" | "release
     ["consignor-payable", -refund.consignorChangeCents],
     ["refunds-paid", -refund.houseChangeCents],
     ["cash", -refund.buyerRefundCents],
+  ]);
+}
+
+/**
+ * A charge the buyer did not owe (a second payment for one invoice, or one of the wrong amount) arrived:
+ * the cash is in, less the processor's fee, and the whole amount is owed back to the buyer.
+ */
+export function unexpectedChargeReceivedEntries(amountCents: number, processorFeeCents: number): LedgerEntry[] {
+  const amount = assertCents(amountCents, "amountCents");
+  const fee = assertCents(processorFeeCents, "processorFeeCents");
+  return entriesFrom([
+    ["cash", amount - fee],
+    ["processor-fees", fee],
+    ["unexpected-charges-payable", -amount],
+  ]);
+}
+
+/** That charge refunded in full: the debt to the buyer is paid. The processor keeps its fee, a house expense. */
+export function unexpectedChargeRefundedEntries(amountCents: number): LedgerEntry[] {
+  const amount = assertCents(amountCents, "amountCents");
+  return entriesFrom([
+    ["unexpected-charges-payable", amount],
+    ["cash", -amount],
   ]);
 }

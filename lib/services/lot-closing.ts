@@ -11,6 +11,7 @@ import { db, User } from "../../models";
 import { liveFrom } from "./bidding";
 import { disputeSweep } from "./disputes";
 import { releaseDue } from "./escrow";
+import { refundDueUnexpectedCharges } from "./unexpected-charges";
 import { invoiceSoldLot, sendReminders } from "./invoices";
 import { notify } from "./notices";
 import { paddlesOf } from "./paddles";
@@ -119,6 +120,7 @@ export async function startClosingWorker(): Promise<() => void> {
     void releaseDue().catch((e: Error) => console.error("[escrow] sweep failed", e.message));
     void sendReminders().catch((e: Error) => console.error("[invoice] reminders failed", e.message));
     void disputeSweep().catch((e: Error) => console.error("[disputes] sweep failed", e.message));
+    void refundDueUnexpectedCharges().catch((e: Error) => console.error("[payments] unexpected-charge sweep failed", e.message));
   }, 10_000);
   timer.unref();
   return () => clearInterval(timer);

@@ -10,15 +10,22 @@ import { NextRequest } from "next/server";
 import { resetStripe } from "../../lib/stripe/client";
 import { startStripeFake } from "../../server/stripe-fake";
 
-export type TestStripe = { url: string; received: string[]; stop(): Promise<void> };
+/** `hold(true)` makes our end answer 503 to every webhook (as if down), so a payment stays in flight. */
+export type TestStripe = { url: string; received: string[]; hold(on: boolean): void; stop(): Promise<void> };
 
 export async function startTestStripe(): Promise<TestStripe> {
   const { POST } = await import("../../app/api/webhooks/stripe/route");
   const secret = "whsec_test_integration_secret";
   const received: string[] = [];
+  let held = false;
   const receiver = http.createServer(async (req, res) => {
     const chunks: Buffer[] = [];
     for await (const c of req) chunks.push(c as Buffer);
+    if (held) {
+      res.writeHead(503, { "content-type": "application/json" });
+      res.end(JSON.stringify({ error: { code: "unavailable", message: "held by the test" } }));
+      return;
+    }
     const body = Buffer.concat(chunks).toString("utf8");
     const r = await POST(new NextRequest("http://localhost:3000/api/webhooks/stripe", { method: "POST", body, headers: { "stripe-signature": String(req.headers["stripe-signature"] ?? ""), "content-type": "application/json" } }));
     if (r.ok) received.push(JSON.parse(body).id);
@@ -39,6 +46,7 @@ export async function startTestStripe(): Promise<TestStripe> {
   return {
     url: fake.url,
     received,
+    hold(on: boolean) { held = on; },
     async stop() {
       await fake.close();
       await new Promise<void>((r) => receiver.close(() => r()));

@@ -92,3 +92,29 @@ export async function approvedLot(consignor: User, admin: User, reserveCents = 5
   await decideLot(viewerOf(admin), lot.id, { action: "approve", comment: "", estimateLowCents: reserveCents, estimateHighCents: reserveCents * 2, reserveCents, reserveAgreed: true });
   return lot;
 }
+
+/**
+ * A lot sold in a one-lot sale that closes within seconds: `maxes` are the winner's and the under-bidder's
+ * maximum bids. Returns the unpaid invoice with its parties.
+ */
+export async function invoicedLot(maxes: [number, number] = [3_000, 2_500], items: import("../../lib/validation/lots").ItemInput[] = [itemInput()]) {
+  const { QueryTypes } = await import("sequelize");
+  const { db } = await import("../../models");
+  const { createSale } = await import("../../lib/services/sales");
+  const { placeMaxBid } = await import("../../lib/services/bidding");
+  const { closeSaleLot } = await import("../../lib/services/lot-closing");
+  const admin = await makeUser(["admin"]);
+  const consignor = await makeUser(["consignor"]);
+  const lot = await approvedLot(consignor, admin, 2_000, items);
+  const sale = await createSale(viewerOf(admin), { title: "Test sale", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 2_500).toISOString(), gapSeconds: 30, softCloseSeconds: 1, lots: [{ lotId: lot.id, openingCents: 1_000 }] });
+  const one = async <T extends object>(sql: string, id: string) => (await db().query<T>(sql, { replacements: { id }, type: QueryTypes.SELECT }))[0]!;
+  const sl = await one<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, sale.id);
+  const buyer = await makeUser(["dealer"]);
+  const under = await makeUser(["dealer"]);
+  await placeMaxBid(viewerOf(buyer), sl.id, maxes[0], `win-${sl.id}`);
+  await placeMaxBid(viewerOf(under), sl.id, maxes[1], `under-${sl.id}`);
+  await new Promise((r) => setTimeout(r, 2_700)); // the sale's first close, with its one-second soft close
+  if ((await closeSaleLot(sl.id)) !== "closed") throw new Error("the test lot did not close");
+  const inv = await one<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, sl.id);
+  return { invoiceId: inv.id, saleId: sale.id, saleLotId: sl.id, lotId: lot.id, admin, consignor, buyer, under };
+}

@@ -10,6 +10,8 @@ import {
   paymentCapturedEntries,
   payoutSentEntries,
   refundEntries,
+  unexpectedChargeReceivedEntries,
+  unexpectedChargeRefundedEntries,
   type LedgerEntry,
 } from "@/lib/money/ledger";
 import { figuresAfterRefunds, settlePartialRefund, type SaleFigures } from "@/lib/money/refunds";
@@ -57,8 +59,21 @@ describe("builders each return a balanced set", () => {
     ["payout sent", () => payoutSentEntries(68_000), 68_000],
     ["refund while held", () => refundEntries(refund, "held"), 17_250],
     ["refund after release", () => refundEntries(refund, "released"), 17_250],
+    ["unexpected charge received", () => unexpectedChargeReceivedEntries(119_000, 3_481), 119_000],
+    ["unexpected charge refunded", () => unexpectedChargeRefundedEntries(119_000), 119_000],
   ] as const)("%s", (_name, build, total) => {
     expect(assertBalanced(build())).toBe(total);
+  });
+});
+
+describe("a charge the buyer did not owe, through the books [SUG]", () => {
+  it("received then refunded in full: the buyer is owed nothing, and cash is down by exactly the processor's kept fee", () => {
+    // Processor practice (its published refund terms, from memory): a refund does not return the processing fee.
+    const b = accountBalances([unexpectedChargeReceivedEntries(5_000, 175), unexpectedChargeRefundedEntries(5_000)]);
+    expect(b["unexpected-charges-payable"]).toBe(0);
+    expect(b.cash).toBe(-175);
+    expect(b["processor-fees"]).toBe(175);
+    expect(b["escrow-held"]).toBe(0);
   });
 });
 

@@ -7,6 +7,8 @@ import { ACCOUNTS } from "@/lib/money/ledger";
 import { listInvoices } from "@/lib/services/invoices";
 import { balances, trialBalance } from "@/lib/services/ledger";
 import { recentReconciliations } from "@/lib/services/reconcile";
+import { listUnexpectedCharges, UNEXPECTED_WHY_WORDS } from "@/lib/services/unexpected-charges";
+import { recentIgnoredEvents } from "@/lib/services/webhooks";
 
 export const metadata = { title: "Finance" };
 
@@ -14,7 +16,7 @@ const signed = (c: number) => (c < 0 ? `(${formatCents(-c)})` : formatCents(c));
 
 export default async function FinancePage() {
   const viewer = await requirePageViewer("house.manage", "/house/finance");
-  const [b, tb, runs, invoices] = await Promise.all([balances(), trialBalance(), recentReconciliations(5), listInvoices(viewer)]);
+  const [b, tb, runs, invoices, unexpected, ignored] = await Promise.all([balances(), trialBalance(), recentReconciliations(5), listInvoices(viewer), listUnexpectedCharges(), recentIgnoredEvents(10)]);
   const last = runs[0];
   return (
     <div className="space-y-6">
@@ -43,10 +45,46 @@ export default async function FinancePage() {
                 </tbody>
               </table>
               {last.differences.length ? <ul className="list-disc pl-5 text-sm text-fault-700">{last.differences.map((d) => <li key={d}>{d}</li>)}</ul> : null}
+              {last.inFlight?.length ? (
+                <p className="text-sm text-flash-700">In flight, not yet confirmed by the processor&apos;s message and left out of the comparison: {last.inFlight.map((c) => `${c.chargeId} (${formatCents(c.amountCents)})`).join(", ")}.</p>
+              ) : null}
             </>
           ) : <p className="text-sm text-flash-600">No reconciliation has run yet.</p>}
         </section>
       </div>
+      <section aria-labelledby="unexpected-h" className="space-y-2">
+        <h2 id="unexpected-h" className="text-lg font-semibold">Charges refunded automatically</h2>
+        <p className="text-sm text-flash-600">A charge an invoice did not owe (a second payment, or one of the wrong amount) is refunded in full as soon as the processor reports it; the buyer and the house are told. The processor keeps its fee.</p>
+        {unexpected.length ? (
+          <div className="overflow-x-auto rounded-lg border border-flash-200 bg-white">
+            <table className="min-w-full text-sm" data-testid="unexpected-charges">
+              <thead className="bg-flash-100 text-left text-flash-700"><tr>{["Invoice", "Payment", "Amount", "Fee kept", "Why", "Refund", "Seen"].map((h) => <th key={h} scope="col" className="px-3 py-2 font-medium">{h}</th>)}</tr></thead>
+              <tbody>
+                {unexpected.map((u) => (
+                  <tr key={u.id} className="border-t border-flash-200">
+                    <td className="px-3 py-2"><Link href={`/invoices/${u.invoiceId}`} className="code underline">{u.invoiceNumber}</Link></td>
+                    <td className="code px-3 py-2">{u.paymentIntentId}</td>
+                    <td className="code px-3 py-2">{formatCents(u.amountCents)}</td>
+                    <td className="code px-3 py-2">{formatCents(u.feeCents)}</td>
+                    <td className="px-3 py-2">{UNEXPECTED_WHY_WORDS[u.why]}</td>
+                    <td className="px-3 py-2">{u.state === "refunded" ? <span className="code">{u.refundId}</span> : <span className="text-fault-700">due{u.lastError ? `: ${u.lastError}` : ""}</span>}</td>
+                    <td className="px-3 py-2">{u.detectedAt.slice(0, 16).replace("T", " ")} UTC</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        ) : <p className="text-sm text-flash-600">None so far.</p>}
+      </section>
+      {ignored.length ? (
+        <section aria-labelledby="ignored-h" className="space-y-2">
+          <h2 id="ignored-h" className="text-lg font-semibold">Processor messages set aside</h2>
+          <p className="text-sm text-flash-600">Signed messages that were not ours to act on, kept with the reason.</p>
+          <ul className="card space-y-1 text-sm">
+            {ignored.map((e) => <li key={e.eventId}><span className="code">{e.eventId}</span> · {e.type} · {e.reason ?? "no reason kept"} · {e.receivedAt.slice(0, 16).replace("T", " ")} UTC</li>)}
+          </ul>
+        </section>
+      ) : null}
       <section aria-labelledby="inv-h" className="space-y-2">
         <h2 id="inv-h" className="text-lg font-semibold">Invoices</h2>
         <div className="overflow-x-auto rounded-lg border border-flash-200 bg-white">
