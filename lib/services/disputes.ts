@@ -488,7 +488,10 @@ export async function releaseUndisputedShare(viewer: Viewer, id: string, input: 
     if (e instanceof RangeError) throw new ApiError("validation_failed", `The share cannot be worked out: ${e.message}`);
     throw e;
   }
-  const payout = await releaseUndisputed(inv!.id, share.undisputed, `claim ${d.number} covers only part of the lot`);
+  const { payoutCents: payout, done } = await releaseUndisputed(inv!.id, share.undisputed, `claim ${d.number} covers only part of the lot`);
+  if (!done && !claimedLine) {
+    throw new ApiError("conflict", `The undisputed share was already released${fresh!.undisputed_released_at ? ` on ${fresh!.undisputed_released_at.toISOString().slice(0, 10)}` : ""}: ${formatCents(payout)} to the consignor`, undefined, undefined, { state: d.state, payoutCents: payout });
+  }
   await db().query(`UPDATE disputes SET undisputed_released_at = COALESCE(undisputed_released_at, now()), updated_at = now() WHERE id = :id`, { replacements: { id } });
   await notify(d.buyer_id, `Claim ${d.number}: the share of the lot the claim does not cover has been paid to the consignor; the rest stays held`, `/disputes/${d.id}`).catch(() => undefined);
   return { payoutCents: payout, held: share.held, undisputed: share.undisputed };
@@ -498,9 +501,13 @@ export async function releaseUndisputedShare(viewer: Viewer, id: string, input: 
 async function payRefund(d: DisputeRow, inv: InvoiceRow, s: Pick<RefundSettlement, "buyerRefundCents" | "hammerRefundCents" | "premiumRefundCents" | "commissionReductionCents" | "consignorChangeCents" | "houseChangeCents">): Promise<void> {
   if (s.buyerRefundCents <= 0) return;
   if (!inv.payment_intent_id) throw new Error(`invoice ${inv.number} has no payment to refund`);
+  const [paid] = await q<{ n: number }>(`SELECT 1 AS n FROM ledger_entries WHERE invoice_id = :id AND txn_kind = 'dispute-refund' LIMIT 1`, { id: inv.id });
+  if (paid) return; // paid before: a retry, or a second click that raced the first
   const heldHammer = inv.hammer_cents - inv.hammer_refunded_cents - inv.released_hammer_cents;
   const heldPremium = inv.premium_cents - inv.premium_refunded_cents - inv.released_premium_cents;
-  if (s.hammerRefundCents > heldHammer || s.premiumRefundCents > heldPremium) throw new Error(`invoice ${inv.number}: the refund exceeds what is held`);
+  if (s.hammerRefundCents > heldHammer || s.premiumRefundCents > heldPremium) {
+    throw new ApiError("conflict", `Invoice ${inv.number}: the refund exceeds what is still held`, undefined, undefined, { state: inv.state });
+  }
   const refund = await stripe().refunds.create(
     { payment_intent: inv.payment_intent_id, amount: s.buyerRefundCents, reason: "requested_by_customer", metadata: { invoice_id: inv.id, dispute_id: d.id } },
     { idempotencyKey: `dispute:${d.id}:refund` },
@@ -605,10 +612,21 @@ async function refundReturnedLot(d: DisputeRow, why: string): Promise<void> {
 export async function confirmReturnReceived(viewer: Viewer, id: string): Promise<void> {
   const { d, role } = await loadCase(viewer, id);
   if (role !== "consignor") throw new ApiError("forbidden", "Only the consignor confirms receipt");
-  if (d.state === "closed" && d.return_received_at) return; // a retry
-  if (d.state !== "awaiting-return" || !d.return_shipped_at) throw new ApiError("conflict", "The buyer has not recorded a return shipment yet");
-  await db().query(`UPDATE disputes SET return_received_at = now(), updated_at = now() WHERE id = :id AND return_received_at IS NULL`, { replacements: { id } });
+  if (d.state !== "awaiting-return" || !d.return_shipped_at || d.return_received_at) throw returnConflict(d);
+  const [claimed] = await q<{ id: string }>(`UPDATE disputes SET return_received_at = now(), updated_at = now() WHERE id = :id AND return_received_at IS NULL AND state = 'awaiting-return' RETURNING id`, { id });
+  if (!claimed) {
+    const [now] = await q<DisputeRow>(`SELECT * FROM disputes WHERE id = :id`, { id });
+    throw returnConflict(now ?? d);
+  }
   await refundReturnedLot(d, "the consignor confirmed receipt");
+}
+
+/** A second confirmation of a return (a double click, or two tabs): 409 with the case as it stands. */
+function returnConflict(d: DisputeRow): ApiError {
+  const message = d.return_received_at
+    ? `Receipt of the return was already confirmed on ${d.return_received_at.toISOString().slice(0, 10)}; the refund ${d.state === "closed" ? "has been paid" : "is being paid"}`
+    : "The buyer has not recorded a return shipment yet";
+  return new ApiError("conflict", message, undefined, undefined, { state: d.state, returnReceivedAt: d.return_received_at?.toISOString() ?? null });
 }
 
 /**

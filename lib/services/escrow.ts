@@ -18,7 +18,7 @@ async function step(invoiceId: string, from: string, fn: (inv: InvoiceRow, t: im
   return s.transaction(async (t) => {
     const [inv] = await s.query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
     if (!inv) throw new ApiError("not_found", "No such invoice");
-    if (inv.state !== from) throw new ApiError("conflict", `The invoice is ${inv.state}, not ${from}`);
+    if (inv.state !== from) throw new ApiError("conflict", `The invoice is ${inv.state}, not ${from}`, undefined, undefined, { state: inv.state });
     await fn(inv, t);
     return inv;
   });
@@ -48,7 +48,10 @@ export async function markDelivered(invoiceId: string): Promise<Date> {
 export async function acceptDelivery(viewer: Viewer, invoiceId: string): Promise<void> {
   const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
   if (!inv || inv.buyer_id !== viewer.id) throw new ApiError("not_found", "No such invoice");
-  await release(invoiceId, "accepted by the buyer");
+  if (!(await release(invoiceId, "accepted by the buyer"))) {
+    const [now] = await db().query<{ state: string; released_at: Date | null }>(`SELECT state, released_at FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+    throw new ApiError("conflict", now?.released_at ? `You accepted this lot already: payment was released to the consignor on ${now.released_at.toISOString().slice(0, 10)}` : "This lot cannot be accepted now", undefined, undefined, { state: now?.state ?? inv.state });
+  }
 }
 
 async function payoutAccount(userId: string): Promise<string> {
@@ -114,15 +117,16 @@ export function remainingFigures(inv: Pick<InvoiceRow, "hammer_cents" | "premium
  * Release the undisputed share of a disputed invoice early [SUG, brief §8]:
  * once per invoice, the consignor is paid that share's hammer less its
  * commission, and the premium and commission on it become house revenue; the
- * rest stays held for the claim. Returns the payout in cents.
+ * rest stays held for the claim. Returns the payout in cents, and whether this
+ * call released it (false when it was released before).
  */
-export async function releaseUndisputed(invoiceId: string, share: { hammerCents: number; premiumCents: number; commissionCents: number }, why: string): Promise<number> {
+export async function releaseUndisputed(invoiceId: string, share: { hammerCents: number; premiumCents: number; commissionCents: number }, why: string): Promise<{ payoutCents: number; done: boolean }> {
   const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
   if (!inv) throw new ApiError("not_found", "No such invoice");
   if (inv.state !== "disputed") throw new ApiError("conflict", "Only a lot under a claim has an undisputed share to release early");
   const payout = share.hammerCents - share.commissionCents;
-  if (inv.released_hammer_cents > 0 || inv.released_premium_cents > 0) return inv.released_hammer_cents - inv.released_commission_cents; // done already
-  if (share.hammerCents + share.premiumCents === 0) return 0;
+  if (inv.released_hammer_cents > 0 || inv.released_premium_cents > 0) return { payoutCents: inv.released_hammer_cents - inv.released_commission_cents, done: false }; // done already
+  if (share.hammerCents + share.premiumCents === 0) return { payoutCents: 0, done: true };
   const account = payout > 0 ? await payoutAccount(inv.consignor_id) : null;
   const transfer = account
     ? await stripe().transfers.create(
@@ -143,7 +147,7 @@ export async function releaseUndisputed(invoiceId: string, share: { hammerCents:
     await mailParty(inv.consignor_id, "Part of your payment is released",
       `A claim is open on invoice ${inv.number}. The share of the lot it does not touch is released now (${why}): ${formatCents(payout)} is on its way to your payout account (hammer ${formatCents(share.hammerCents)} less commission ${formatCents(share.commissionCents)}). The rest stays held until the claim is decided.`);
   }
-  return payout;
+  return { payoutCents: payout, done };
 }
 
 /** Release every delivered invoice whose inspection window has ended without a claim. */

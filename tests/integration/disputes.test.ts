@@ -213,7 +213,14 @@ describe("claims and mediation", () => {
       expect((await getCase(viewerOf(f.buyer), id)).state).toBe("awaiting-return");
       expect((await refused(confirmReturnReceived(viewerOf(f.consignor), id))).status).toBe(409); // nothing shipped yet
       await recordReturn(viewerOf(f.buyer), id, { carrier: "Demo Parcel Co.", tracking: "RT 000111" });
-      await confirmReturnReceived(viewerOf(f.consignor), id);
+      // Two clicks at once: one pays the refund; the other answers 409 with the case as it stands, never a 500.
+      const clicks = await Promise.allSettled([confirmReturnReceived(viewerOf(f.consignor), id), confirmReturnReceived(viewerOf(f.consignor), id)]);
+      expect(clicks.filter((c) => c.status === "fulfilled")).toHaveLength(1);
+      const second = (clicks.find((c) => c.status === "rejected") as PromiseRejectedResult).reason as ApiError;
+      expect(second).toBeInstanceOf(ApiError);
+      expect(second.status).toBe(409);
+      expect(second.details?.returnReceivedAt).toEqual(expect.any(String));
+      expect((await refused(confirmReturnReceived(viewerOf(f.consignor), id))).details?.state).toBe("closed");
       const inv = await one<{ state: string; payment_intent_id: string; hammer_cents: number; premium_cents: number }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
       expect(inv.state).toBe("refunded");
       const refunds = await stripe().refunds.list({ payment_intent: inv.payment_intent_id });
@@ -320,7 +327,10 @@ describe("claims and mediation", () => {
     expect(early.state).toBe("disputed");
     expect(early.released_hammer_cents).toBe(2_160);
     expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.paidOutCents).toBe(1_728);
-    expect((await releaseUndisputedShare(m, id, { lines })).payoutCents).toBe(1_728); // a retry pays nothing twice
+    const again = await refused(releaseUndisputedShare(m, id, { lines })); // a second click pays nothing twice, and says so
+    expect(again.status).toBe(409);
+    expect(again.details).toMatchObject({ state: expect.any(String), payoutCents: 1_728 });
+    expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.paidOutCents).toBe(1_728);
     expect((await refused(releaseUndisputedShare(m, id, { lines: lines.map((l) => ({ ...l, valueCents: l.valueCents + 1 })) }))).status).toBe(409);
 
     await postMessage(viewerOf(f.consignor), id, { body: "We accept that two were mislabelled by the maker's carton.", stance: "accepts-in-part" });
