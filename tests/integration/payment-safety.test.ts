@@ -5,6 +5,7 @@ import { QueryTypes } from "sequelize";
 import type Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { ApiError } from "../../lib/api/errors";
+import { acceptDelivery, markDelivered, markShipped } from "../../lib/services/escrow";
 import { payInvoice } from "../../lib/services/payments";
 import { balances, trialBalance } from "../../lib/services/ledger";
 import { reconcile } from "../../lib/services/reconcile";
@@ -183,5 +184,26 @@ describe("reconciliation", () => {
     const after = await reconcile();
     expect(after.inFlight).toEqual([]);
     expect(after.differences).toEqual([]);
+  }, 30_000);
+});
+
+describe("double clicks", () => {
+  it("accepting a delivered lot twice at once releases once; the other click gets 409 with the invoice as it stands", async () => {
+    const f = await invoicedLot();
+    await payInvoice(viewerOf(f.buyer), f.invoiceId, card(PAYS, "pay-before-accepting"));
+    await paidHeld(f.invoiceId);
+    await markShipped(f.invoiceId, "Demo Parcel Co.", "DP777000111");
+    const twice = await Promise.allSettled([markDelivered(f.invoiceId), markDelivered(f.invoiceId)]);
+    expect(twice.map((t) => t.status).sort()).toEqual(["fulfilled", "rejected"]);
+    expect(((twice.find((t) => t.status === "rejected") as PromiseRejectedResult).reason as ApiError).details).toEqual({ state: "delivered" });
+    const clicks = await Promise.allSettled([acceptDelivery(viewerOf(f.buyer), f.invoiceId), acceptDelivery(viewerOf(f.buyer), f.invoiceId)]);
+    expect(clicks.filter((c) => c.status === "fulfilled")).toHaveLength(1);
+    const second = (clicks.find((c) => c.status === "rejected") as PromiseRejectedResult).reason as ApiError;
+    expect(second).toBeInstanceOf(ApiError);
+    expect(second.status).toBe(409);
+    expect(second.details).toEqual({ state: "released" });
+    const transfers = await stripe().transfers.list({ transfer_group: `invoice:${f.invoiceId}` });
+    expect(transfers.data).toHaveLength(1);
+    expect(await trialBalance()).toBe(0);
   }, 30_000);
 });
