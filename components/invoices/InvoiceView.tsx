@@ -61,6 +61,12 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
           {inv.commissionCents != null ? <tr className="text-flash-600"><td className="py-1">Seller&apos;s commission (from the consignor&apos;s side)</td><td className="code py-1 text-right">{formatCents(inv.commissionCents)}</td></tr> : null}
         </tbody>
       </table>
+      {inv.unexpectedCharges.map((u, i) => (
+        <p key={i} data-testid="unexpected-refund" className="card text-sm">
+          A further payment of <span className="code">{formatCents(u.amountCents)}</span> was not owed on this invoice.{" "}
+          {u.state === "refunded" ? `It was refunded to the card in full on ${u.refundedAt?.slice(0, 10)}.` : "Its refund to the card is under way."}
+        </p>
+      ))}
       {inv.lastPaymentError && inv.state === "awaiting-payment" ? <FormAlert>Last attempt: {inv.lastPaymentError}</FormAlert> : null}
       {inv.isBuyer && inv.state === "awaiting-payment" ? <PayForm invoiceId={inv.id} totalText={formatCents(inv.totalCents)} onPaid={setMessage} /> : null}
       <ol className="card space-y-1 text-sm">

@@ -99,7 +99,10 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
 /** One invoice, for its buyer, its consignor (without buyer details) or the house. */
 export async function getInvoice(viewer: Viewer, invoiceId: string) {
   const [inv] = await db().query<InvoiceRow & { title: string; sale_id: string }>(
-    `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id WHERE i.id = :invoiceId`,
+    `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id,
+            (SELECT COALESCE(jsonb_agg(jsonb_build_object('amountCents', u.amount_cents, 'state', u.state, 'refundedAt', u.refunded_at) ORDER BY u.detected_at), '[]'::jsonb)
+               FROM unexpected_charges u WHERE u.invoice_id = i.id) AS unexpected
+       FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id WHERE i.id = :invoiceId`,
     { replacements: { invoiceId }, type: QueryTypes.SELECT },
   );
   const house = viewer.roles.includes("admin");
@@ -107,7 +110,10 @@ export async function getInvoice(viewer: Viewer, invoiceId: string) {
   return presentInvoice(inv, viewer);
 }
 
-export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: string; dispute_id?: string | null }, viewer: Viewer) {
+/** A charge this invoice did not owe, refunded automatically (lib/services/unexpected-charges.ts). */
+type UnexpectedOnInvoice = { amountCents: number; state: "refund-due" | "refunded"; refundedAt: string | null };
+
+export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: string; dispute_id?: string | null; unexpected?: UnexpectedOnInvoice[] }, viewer: Viewer) {
   const buyerView = viewer.roles.includes("admin") || inv.buyer_id === viewer.id;
   return {
     id: inv.id, number: inv.number, title: inv.title ?? "", saleId: inv.sale_id, saleLotId: inv.sale_lot_id, lotId: inv.lot_id, state: inv.state,
@@ -120,6 +126,7 @@ export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: str
     refundedCents: inv.hammer_refunded_cents + inv.premium_refunded_cents,
     commissionReturnedCents: buyerView && !viewer.roles.includes("admin") ? undefined : inv.commission_returned_cents,
     disputeId: inv.dispute_id ?? null,
+    unexpectedCharges: buyerView ? inv.unexpected ?? [] : [],
   };
 }
 

@@ -4,7 +4,8 @@ import { stripe } from "../stripe/client";
 import type { ProcessorIntent } from "../validation/payments";
 import { db } from "../../models";
 import { post } from "./ledger";
-import { recordUnexpectedCharge, refundUnexpectedCharge, type UnexpectedWhy } from "./unexpected-charges";
+import type { UnexpectedWhy } from "../money/unexpected";
+import { recordUnexpectedCharge, refundUnexpectedCharge } from "./unexpected-charges";
 
 /** What we did with one processor event: kept for audit on the event's row. */
 export type EventOutcome = { outcome: "handled" | "ignored"; reason?: string };

@@ -4,6 +4,7 @@ import { env } from "../config/env";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
 import { unexpectedChargeReceivedEntries, unexpectedChargeRefundedEntries } from "../money/ledger";
+import { UNEXPECTED_WHY_WORDS, type UnexpectedWhy } from "../money/unexpected";
 import { stripe } from "../stripe/client";
 import { db } from "../../models";
 import { post } from "./ledger";
@@ -15,14 +16,6 @@ import { notify } from "./notices";
  * an intent made before that rule, a wrong amount), it is recorded here, posted, refunded in full through
  * the processor with a key tied to the charge, and the house and the buyer are told.
  */
-export type UnexpectedWhy = "second-payment" | "wrong-amount" | "invoice-closed";
-
-export const UNEXPECTED_WHY_WORDS: Record<UnexpectedWhy, string> = {
-  "second-payment": "a second payment for an invoice already paid",
-  "wrong-amount": "a payment of another amount than the invoice's",
-  "invoice-closed": "a payment for an invoice that was closed and replaced",
-};
-
 export type UnexpectedCharge = {
   id: string; invoiceId: string; invoiceNumber: string; paymentIntentId: string; chargeId: string | null; amountCents: number; feeCents: number;
   why: UnexpectedWhy; state: "refund-due" | "refunded"; refundId: string | null; lastError: string | null; detectedAt: string; refundedAt: string | null;

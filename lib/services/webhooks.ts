@@ -53,10 +53,10 @@ export async function handleStripeEvent(raw: unknown): Promise<"handled" | "dupl
 
 export type StoredEvent = { eventId: string; type: string; outcome: string; reason: string | null; objectId: string | null; receivedAt: string };
 
-/** The latest events we ignored, with the reason (finance page). */
+/** The latest payment events we set aside (not ours, or unreadable), with the reason (finance page). */
 export async function recentIgnoredEvents(limit = 20): Promise<StoredEvent[]> {
   const rows = await db().query<{ event_id: string; type: string; outcome: string; reason: string | null; object_id: string | null; received_at: Date }>(
-    `SELECT event_id, type, outcome, reason, object_id, received_at FROM payment_events WHERE outcome = 'ignored' ORDER BY received_at DESC LIMIT :limit`,
+    `SELECT event_id, type, outcome, reason, object_id, received_at FROM payment_events WHERE outcome = 'ignored' AND type LIKE 'payment_intent.%' ORDER BY received_at DESC LIMIT :limit`,
     { replacements: { limit }, type: QueryTypes.SELECT },
   );
   return rows.map((r) => ({ eventId: r.event_id, type: r.type, outcome: r.outcome, reason: r.reason, objectId: r.object_id, receivedAt: r.received_at.toISOString() }));

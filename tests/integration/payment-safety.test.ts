@@ -6,6 +6,7 @@ import type Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { ApiError } from "../../lib/api/errors";
 import { acceptDelivery, markDelivered, markShipped } from "../../lib/services/escrow";
+import { getInvoice } from "../../lib/services/invoices";
 import { payInvoice } from "../../lib/services/payments";
 import { balances, trialBalance } from "../../lib/services/ledger";
 import { reconcile } from "../../lib/services/reconcile";
@@ -125,6 +126,8 @@ describe("defence in depth", () => {
     await waitForSubject(f.admin.email, /Unexpected charge refunded on invoice/);
     const notices = await db().query<{ user_id: string; text: string }>(`SELECT user_id, text FROM notices WHERE text LIKE :t`, { replacements: { t: `%${inv.number}%not owed%` }, type: QueryTypes.SELECT });
     expect(notices.map((n) => n.user_id)).toContain(f.buyer.id);
+    expect((await getInvoice(viewerOf(f.buyer), f.invoiceId)).unexpectedCharges).toEqual([{ amountCents: inv.total_cents, state: "refunded", refundedAt: expect.any(String) }]);
+    expect((await getInvoice(viewerOf(f.consignor), f.invoiceId)).unexpectedCharges).toEqual([]);
     // A redelivery of the stray event changes nothing.
     const before = await balances();
     const evt = (await stripe().events.list({ type: "payment_intent.succeeded", limit: 100 })).data.find((e) => (e.data.object as { id: string }).id === stray.id)!;

@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { ReconcileButton } from "@/components/house/ReconcileButton";
+import { UnexpectedCharges } from "@/components/house/UnexpectedCharges";
 import { INVOICE_STATE_WORDS } from "@/components/invoices/words";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { formatCents } from "@/lib/money/cents";
@@ -7,7 +8,7 @@ import { ACCOUNTS } from "@/lib/money/ledger";
 import { listInvoices } from "@/lib/services/invoices";
 import { balances, trialBalance } from "@/lib/services/ledger";
 import { recentReconciliations } from "@/lib/services/reconcile";
-import { listUnexpectedCharges, UNEXPECTED_WHY_WORDS } from "@/lib/services/unexpected-charges";
+import { listUnexpectedCharges } from "@/lib/services/unexpected-charges";
 import { recentIgnoredEvents } from "@/lib/services/webhooks";
 
 export const metadata = { title: "Finance" };
@@ -52,30 +53,7 @@ export default async function FinancePage() {
           ) : <p className="text-sm text-flash-600">No reconciliation has run yet.</p>}
         </section>
       </div>
-      <section aria-labelledby="unexpected-h" className="space-y-2">
-        <h2 id="unexpected-h" className="text-lg font-semibold">Charges refunded automatically</h2>
-        <p className="text-sm text-flash-600">A charge an invoice did not owe (a second payment, or one of the wrong amount) is refunded in full as soon as the processor reports it; the buyer and the house are told. The processor keeps its fee.</p>
-        {unexpected.length ? (
-          <div className="overflow-x-auto rounded-lg border border-flash-200 bg-white">
-            <table className="min-w-full text-sm" data-testid="unexpected-charges">
-              <thead className="bg-flash-100 text-left text-flash-700"><tr>{["Invoice", "Payment", "Amount", "Fee kept", "Why", "Refund", "Seen"].map((h) => <th key={h} scope="col" className="px-3 py-2 font-medium">{h}</th>)}</tr></thead>
-              <tbody>
-                {unexpected.map((u) => (
-                  <tr key={u.id} className="border-t border-flash-200">
-                    <td className="px-3 py-2"><Link href={`/invoices/${u.invoiceId}`} className="code underline">{u.invoiceNumber}</Link></td>
-                    <td className="code px-3 py-2">{u.paymentIntentId}</td>
-                    <td className="code px-3 py-2">{formatCents(u.amountCents)}</td>
-                    <td className="code px-3 py-2">{formatCents(u.feeCents)}</td>
-                    <td className="px-3 py-2">{UNEXPECTED_WHY_WORDS[u.why]}</td>
-                    <td className="px-3 py-2">{u.state === "refunded" ? <span className="code">{u.refundId}</span> : <span className="text-fault-700">due{u.lastError ? `: ${u.lastError}` : ""}</span>}</td>
-                    <td className="px-3 py-2">{u.detectedAt.slice(0, 16).replace("T", " ")} UTC</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        ) : <p className="text-sm text-flash-600">None so far.</p>}
-      </section>
+      <UnexpectedCharges charges={unexpected} />
       {ignored.length ? (
         <section aria-labelledby="ignored-h" className="space-y-2">
           <h2 id="ignored-h" className="text-lg font-semibold">Processor messages set aside</h2>
