@@ -12,6 +12,7 @@ import { liveFrom } from "./bidding";
 import { disputeSweep } from "./disputes";
 import { releaseDue } from "./escrow";
 import { refundDueUnexpectedCharges } from "./unexpected-charges";
+import { lotChanged } from "./catalogue/events";
 import { invoiceSoldLot, sendReminders } from "./invoices";
 import { notify } from "./notices";
 import { paddlesOf } from "./paddles";
@@ -66,6 +67,7 @@ export async function closeSaleLot(saleLotId: string): Promise<"closed" | "alrea
   const leaderId = row.state.leader?.bidderId;
   const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId])).get(leaderId) ?? null : null;
   emitTo([lotRoom(row.id), saleRoom(row.sale_id)], "lot.closed", liveFrom(row, paddle));
+  await lotChanged(row.lot_id, "closed");
   if (outcome.phase === "sold") await invoiceSoldLot(row.id).catch((e: Error) => console.error("[invoice] failed; the sweeper retries", e.message));
   await closingMail(row, outcome).catch((e: Error) => console.error("[mail] closing notice failed", e.message));
   return "closed";

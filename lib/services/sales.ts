@@ -9,6 +9,7 @@ import { lotRoom, saleRoom, type LotLive } from "../realtime/events";
 import type { SaleCreateInput } from "../validation/sales";
 import { db, Lot, Sale, SaleLot } from "../../models";
 import { liveFrom } from "./bidding";
+import { lotChanged } from "./catalogue/events";
 import { scheduleClose } from "./lot-closing";
 import { paddlesOf } from "./paddles";
 
@@ -45,6 +46,7 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
   });
   const saleLots = await SaleLot.findAll({ where: { saleId: sale.id }, attributes: ["id", "closesAt"] });
   for (const sl of saleLots) await scheduleClose(sl.id, sl.closesAt);
+  for (const l of input.lots) await lotChanged(l.lotId, "scheduled");
   return { id: sale.id, lots: saleLots.length };
 }
 

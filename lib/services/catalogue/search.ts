@@ -1,0 +1,146 @@
+import { QueryTypes } from "sequelize";
+import { ApiError } from "../../api/errors";
+import { decodeCursor, encodeCursor, type CatalogueSort, type Cursor } from "../../catalogue/cursor";
+import { designationTerm, RELATION_ORDER, relationRank, type DesignationTerm, type Relation } from "../../catalogue/relations";
+import type { CatalogueQuery, CatalogueStatus } from "../../validation/catalogue";
+import { db } from "../../../models";
+import { catalogueFacets, type CatalogueFacets } from "./facets";
+import { filterSql, type SqlPart } from "./filters";
+
+export type CatalogueMatch = { designation: string; relation: Relation; quantity: number };
+export type CatalogueLot = {
+  id: string; title: string; status: CatalogueStatus; closesAt: string | null; startsAt: string | null; soldAt: string | null;
+  estimateLowCents: number | null; estimateHighCents: number | null; priceCents: number | null; bids: number | null; tubes: number;
+  families: string[]; grades: string[]; hazards: string[]; vacuumLossTubes: number; pairs: number; quads: number;
+  thumbnail: string | null; saleLotId: string | null; saleId: string | null; matches: CatalogueMatch[];
+};
+export type CatalogueResult = { lots: CatalogueLot[]; facets: CatalogueFacets; nextCursor: string | null; term: { designation: string; typed: string } | null };
+
+type Row = {
+  lot_id: string; title: string; stage: string; sale_lot_id: string | null; sale_starts_at: Date | null; closes_at: Date | null; sold_at: Date | null;
+  hammer_cents: number | null; listed_at: Date; estimate_low_cents: number | null; estimate_high_cents: number | null; tubes: number; families: string[]; grades: string[];
+  hazards: string[]; vacuum_loss_tubes: number; pairs: number; quads: number; thumb_photo_id: string | null; rank: number; listed_us: string; closes_us: string | null;
+  live_price: number | null; live_bids: number | null; live_closes_at: Date | null; sale_id: string | null;
+};
+
+/** Relevance: the closest relation any item has to the searched type; words alone come after every type match. */
+function rankSql(term: DesignationTerm | null, p: SqlPart): string {
+  if (!term) return "0";
+  const cases: string[] = [];
+  for (const r of RELATION_ORDER) {
+    const names = [...term.related].filter(([, rel]) => rel === r).map(([d]) => d);
+    if (!names.length) continue;
+    cases.push(`WHEN e.designations && ARRAY[${p.bind(names)}]::varchar[] THEN ${relationRank(r)}`);
+  }
+  return cases.length ? `CASE ${cases.join(" ")} ELSE 9 END` : "9";
+}
+
+const US = (col: string) => `(extract(epoch from ${col}) * 1000000)::bigint`;
+const AT = (param: string) => `('epoch'::timestamptz + (${param} || ' microseconds')::interval)`;
+
+/** ORDER BY and the keyset condition after a cursor, per sort. */
+function order(sort: CatalogueSort, cursor: Cursor | null, p: SqlPart): { orderBy: string; after: string } {
+  const id = cursor ? p.bind(cursor.id) : "";
+  const [k0, k1] = cursor?.k ?? [];
+  switch (sort) {
+    case "relevance":
+      return {
+        orderBy: "rank, listed_at DESC, lot_id DESC",
+        after: cursor ? `(rank > ${p.bind(k0)} OR (rank = ${p.bind(k0)} AND (listed_at, lot_id) < (${AT(p.bind(String(k1)))}, ${id}::uuid)))` : "",
+      };
+    case "newest":
+      return { orderBy: "listed_at DESC, lot_id DESC", after: cursor ? `(listed_at, lot_id) < (${AT(p.bind(String(k0)))}, ${id}::uuid)` : "" };
+    case "closing":
+      return {
+        orderBy: "closes_at ASC NULLS LAST, lot_id ASC",
+        after: !cursor ? "" : k0 === null || k0 === undefined ? `(closes_at IS NULL AND lot_id > ${id}::uuid)`
+          : `(closes_at > ${AT(p.bind(String(k0)))} OR (closes_at = ${AT(p.bind(String(k0)))} AND lot_id > ${id}::uuid) OR closes_at IS NULL)`,
+      };
+    case "estimate":
+      return {
+        orderBy: "estimate_low_cents ASC NULLS LAST, lot_id ASC",
+        after: !cursor ? "" : k0 === null || k0 === undefined ? `(estimate_low_cents IS NULL AND lot_id > ${id}::uuid)`
+          : `(estimate_low_cents > ${p.bind(k0)} OR (estimate_low_cents = ${p.bind(k0)} AND lot_id > ${id}::uuid) OR estimate_low_cents IS NULL)`,
+      };
+  }
+}
+
+function keyOf(sort: CatalogueSort, r: Row): Cursor["k"] {
+  switch (sort) {
+    case "relevance": return [r.rank, Number(r.listed_us)];
+    case "newest": return [Number(r.listed_us)];
+    case "closing": return [r.closes_us === null ? null : Number(r.closes_us)];
+    case "estimate": return [r.estimate_low_cents];
+  }
+}
+
+function statusOf(r: Pick<Row, "stage" | "sale_starts_at">, now: number): CatalogueStatus {
+  if (r.stage === "sold") return "sold";
+  if (r.stage === "in-sale") return r.sale_starts_at && r.sale_starts_at.getTime() > now ? "upcoming" : "live";
+  return "approved";
+}
+
+/**
+ * Search the public catalogue: approved lots, lots in upcoming and live sales, and lots sold in the last 90
+ * days. A typed designation finds every lot with an item of that type or a related one, best relation first,
+ * and says which item matched and how; words search titles, provenance and origin. Keyset paging; facet
+ * counts over the whole result. Reserves, maximum bids and consignors' details are never read here.
+ */
+export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueResult> {
+  const term = query.q ? designationTerm(query.q) : null;
+  const sort: CatalogueSort = query.sort ?? (query.q ? "relevance" : "newest");
+  const cursor = query.cursor ? decodeCursor(query.cursor, sort) : null;
+  if (query.cursor && !cursor) throw new ApiError("bad_request", "That page link is not valid (the cursor is malformed or for another sort): start the search again", { cursor: "Not a valid cursor" });
+  const p = filterSql(query, term);
+  const rank = rankSql(term, p);
+  const { orderBy, after } = order(sort, cursor, p);
+  const limit = p.bind(query.limit + 1);
+  const rows = await db().query<Row>(
+    `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
+       FROM (SELECT * FROM (SELECT e.lot_id, e.title, e.stage, e.sale_lot_id, e.sale_starts_at, e.closes_at, e.sold_at, e.hammer_cents, e.listed_at,
+                                   e.estimate_low_cents, e.estimate_high_cents, e.tubes, e.families, e.grades, e.hazards, e.vacuum_loss_tubes, e.pairs, e.quads,
+                                   e.thumb_photo_id, ${rank} AS rank, ${US("e.listed_at")} AS listed_us, ${US("e.closes_at")} AS closes_us
+                              FROM catalogue_entries e WHERE ${p.where()}) x
+              ${after ? `WHERE ${after}` : ""} ORDER BY ${orderBy} LIMIT ${limit}) y
+       LEFT JOIN sale_lots sl ON sl.id = y.sale_lot_id
+      ORDER BY ${orderBy.split(", ").map((o) => `y.${o}`).join(", ")}`,
+    { replacements: p.values, type: QueryTypes.SELECT },
+  );
+  const page = rows.slice(0, query.limit);
+  const [matches, facets] = await Promise.all([matchesFor(page.map((r) => r.lot_id), term), catalogueFacets(query, term)]);
+  const now = Date.now();
+  return {
+    lots: page.map((r) => {
+      const status = statusOf(r, now);
+      return {
+        id: r.lot_id, title: r.title, status, startsAt: r.sale_starts_at?.toISOString() ?? null,
+        closesAt: status === "live" || status === "upcoming" ? (r.live_closes_at ?? r.closes_at)?.toISOString() ?? null : null, soldAt: r.sold_at?.toISOString() ?? null,
+        estimateLowCents: r.estimate_low_cents, estimateHighCents: r.estimate_high_cents,
+        priceCents: status === "sold" ? r.hammer_cents : status === "live" ? r.live_price : null, bids: status === "live" ? r.live_bids : null,
+        tubes: r.tubes, families: r.families, grades: r.grades, hazards: r.hazards, vacuumLossTubes: r.vacuum_loss_tubes, pairs: r.pairs, quads: r.quads,
+        thumbnail: r.thumb_photo_id ? `/api/photos/${r.thumb_photo_id}?size=thumb` : null,
+        saleLotId: status === "live" || status === "upcoming" ? r.sale_lot_id : null, saleId: status === "live" || status === "upcoming" ? r.sale_id : null,
+        matches: matches.get(r.lot_id) ?? [],
+      };
+    }),
+    facets,
+    nextCursor: rows.length > query.limit ? encodeCursor({ s: sort, k: keyOf(sort, page.at(-1)!), id: page.at(-1)!.lot_id }) : null,
+    term: term ? { designation: term.designation, typed: term.typed } : null,
+  };
+}
+
+/** Which items of each lot matched the searched type, and how: best relation first, then most tubes. */
+async function matchesFor(lotIds: string[], term: DesignationTerm | null): Promise<Map<string, CatalogueMatch[]>> {
+  const out = new Map<string, CatalogueMatch[]>();
+  if (!term || !lotIds.length) return out;
+  const rows = await db().query<{ lot_id: string; designation: string; quantity: string }>(
+    `SELECT lot_id, designation, SUM(quantity) AS quantity FROM lot_items WHERE lot_id IN (:lotIds) AND designation IN (:names) GROUP BY lot_id, designation`,
+    { replacements: { lotIds, names: [...term.related.keys()] }, type: QueryTypes.SELECT },
+  );
+  for (const r of rows) {
+    const m = { designation: r.designation, relation: term.related.get(r.designation)!, quantity: Number(r.quantity) };
+    out.set(r.lot_id, [...(out.get(r.lot_id) ?? []), m]);
+  }
+  for (const ms of out.values()) ms.sort((a, b) => relationRank(a.relation) - relationRank(b.relation) || b.quantity - a.quantity);
+  return out;
+}
