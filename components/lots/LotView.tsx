@@ -24,7 +24,7 @@ export function LotView({ data, summary, chart, actions, record }: { data: Data;
           <StateBadge state={lot.state} />
         </div>
         <p className="text-sm text-flash-700">
-          Consigned by <strong>{lot.consignorName}</strong>{lot.shippingOrigin ? ` · ships from ${lot.shippingOrigin}` : ""} · {TESTER_WORDS[lot.testerKind] ?? lot.testerKind}
+          {lot.consignorName ? <>Consigned by <strong>{lot.consignorName}</strong> · </> : null}{lot.shippingOrigin ? `Ships from ${lot.shippingOrigin} · ` : ""}{TESTER_WORDS[lot.testerKind] ?? lot.testerKind}
           {lot.estimateLowCents != null && lot.estimateHighCents != null ? <> · house estimate <strong>{formatCents(lot.estimateLowCents)}–{formatCents(lot.estimateHighCents)}</strong></> : null}
           {lot.reserveCents != null ? <> · reserve {formatCents(lot.reserveCents)} <span className="text-flash-500">(not shown to bidders)</span></> : null}
         </p>

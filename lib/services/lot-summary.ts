@@ -28,7 +28,25 @@ export function toDomainItem(i: ItemView): DomainItem {
  * condition over the last two years (see lib/lots/comparables). Until there
  * are some the summary says "no comparables yet" rather than inventing a figure.
  */
-export async function comparableSales(): Promise<ComparableSale[]> {
+const COMPARABLES_TTL_MS = 30_000;
+let comparablesCache: { at: number; sales: Promise<ComparableSale[]> } | null = null;
+
+/** The comparables, read at most every 30 s per process: every lot page and estimate uses them. */
+export function comparableSales(): Promise<ComparableSale[]> {
+  if (!comparablesCache || Date.now() - comparablesCache.at > COMPARABLES_TTL_MS) {
+    const sales = readComparableSales();
+    comparablesCache = { at: Date.now(), sales };
+    sales.catch(() => { comparablesCache = null; });
+  }
+  return comparablesCache.sales;
+}
+
+/** Forget the cached comparables (a sale was invoiced or refunded; tests). */
+export function forgetComparables(): void {
+  comparablesCache = null;
+}
+
+async function readComparableSales(): Promise<ComparableSale[]> {
   const rows = await db().query<{ lot_id: string; net: number; sold_at: Date; designation: string; condition: ItemCondition; quantity: number }>(
     `SELECT i.lot_id, i.hammer_cents - i.hammer_refunded_cents AS net, i.created_at AS sold_at, li.designation, li.condition, li.quantity
        FROM invoices i JOIN lot_items li ON li.lot_id = i.lot_id

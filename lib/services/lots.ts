@@ -41,7 +41,7 @@ export function presentLot(lot: Lot, viewer: Viewer | null) {
   return {
     id: lot.id, title: lot.title, provenance: lot.provenance, shippingOrigin: lot.shippingOrigin, testerKind: lot.testerKind,
     testerNotes: lot.testerNotes, state: lot.state as LotState, consignorId: lot.consignorId,
-    consignorName: lot.consignor?.displayName ?? null,
+    consignorName: viewer ? lot.consignor?.displayName ?? null : null, // the public reads the evidence, not who consigned it
     estimateLowCents: lot.estimateLowCents, estimateHighCents: lot.estimateHighCents,
     reserveCents: reserve ? lot.reserveCents : undefined,
     submittedAt: lot.submittedAt?.toISOString() ?? null, approvedAt: lot.approvedAt?.toISOString() ?? null,
@@ -86,7 +86,7 @@ export async function getLot(viewer: Viewer | null, lotId: string) {
     lot: presentLot(lot, viewer),
     items: items.map(presentItem),
     photos: photos.map((p) => ({ id: p.id, itemId: p.itemId, caption: p.caption, width: p.width, height: p.height })),
-    events: events.map((e) => ({ id: e.id, kind: e.kind, comment: e.comment, details: e.details, at: e.createdAt.toISOString(), actor: e.actor?.displayName ?? null })),
+    events: events.map((e) => ({ id: e.id, kind: e.kind, comment: e.comment, details: e.details, at: e.createdAt.toISOString(), actor: viewer ? e.actor?.displayName ?? null : null })),
   };
 }
 
@@ -148,4 +148,13 @@ export async function removeItem(viewer: Viewer, lotId: string, itemId: string):
     const n = await LotItem.destroy({ where: { id: itemId, lotId }, transaction: t });
     if (!n) throw new ApiError("not_found", "No such item in this lot");
   });
+}
+
+/** The sale a lot is (or was) offered in, if any: for the lot page's way to bidding. */
+export async function saleLotOf(lotId: string): Promise<{ saleLotId: string; saleId: string; saleTitle: string; phase: string } | null> {
+  const [row] = await db().query<{ id: string; sale_id: string; title: string; phase: string }>(
+    `SELECT sl.id, sl.sale_id, s.title, sl.phase FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.lot_id = :lotId`,
+    { replacements: { lotId }, type: QueryTypes.SELECT },
+  );
+  return row ? { saleLotId: row.id, saleId: row.sale_id, saleTitle: row.title, phase: row.phase } : null;
 }
