@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import type { QueryInterface } from "sequelize";
 import { decodeDesignation } from "../lib/valves/designation";
+import { seedReferenceTable } from "../lib/valves/seed";
 
 type Ctx = { context: QueryInterface };
 
@@ -36,7 +37,8 @@ async function makerId(qi: QueryInterface, name: string): Promise<number> {
   return rows[0]!.id;
 }
 
-const norm = (d: string) => { const r = decodeDesignation(d); return { designation: r.ok ? r.normalised : d, known: r.ok && r.knownType }; };
+// Demo items are read against the seed rows, which the migrations have just loaded into valve_types.
+const norm = (d: string) => { const r = decodeDesignation(seedReferenceTable(), d); return { designation: r.ok ? r.normalised : d, known: r.ok }; };
 
 type ItemSpec = {
   designation: string; quantity: number; label: string; maker?: string; basis?: string; source?: string; date?: string;

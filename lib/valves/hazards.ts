@@ -4,7 +4,7 @@
 
 import { normaliseDesignation } from "./designation/normalise";
 import type { HazardCertainty, HazardKind, TypeHazard } from "./index-types";
-import { findReferenceType } from "./reference-data";
+import { findReferenceType, type ReferenceTable } from "./reference-table";
 
 /** Title, caution text and source for each hazard kind. */
 export interface HazardCaution {
@@ -92,10 +92,10 @@ function notice(kind: HazardKind, certainty: HazardNotice["certainty"], note?: s
  * source...) that our data does not list. Unknown types get the general
  * notices and advice to check the data sheet.
  */
-export function hazardsForType(designation: string, declared: readonly HazardKind[] = []): HazardReport {
+export function hazardsForType(table: ReferenceTable, designation: string, declared: readonly HazardKind[] = []): HazardReport {
   const n = normaliseDesignation(designation);
   const key = n.ok ? n.value : designation;
-  const found = n.ok ? findReferenceType(key) : undefined;
+  const found = n.ok ? findReferenceType(table, key) : undefined;
   const row = found?.row;
   const typeHazards: readonly TypeHazard[] = row?.hazards ?? EXTRA_TYPE_HAZARDS[key] ?? [];
   const notices: HazardNotice[] = [notice("high-voltage", "always")];

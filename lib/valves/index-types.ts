@@ -24,6 +24,7 @@ export type BaseFamily =
   | "b9g"
   | "subminiature"
   | "four-pin"
+  | "pre-octal"
   | "older-european";
 
 /**

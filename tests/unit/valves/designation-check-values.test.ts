@@ -1,11 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { decodeDesignation, type DecodedDesignation } from "@/lib/valves/designation";
 import { findEquivalents } from "@/lib/valves/equivalents";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Brief section 9, items 1-10: designation check values, each with its source.
 
 function decoded(input: string): DecodedDesignation {
-  const r = decodeDesignation(input);
+  const r = decodeDesignation(SEED, input);
   if (!r.ok) throw new Error(`expected ${input} to decode: ${r.message}`);
   return r;
 }

@@ -1,18 +1,16 @@
 import { describe, expect, it } from "vitest";
 import { decodeDesignation, normaliseDesignation } from "@/lib/valves/designation";
-import {
-  REFERENCE_TYPES,
-  findReferenceType,
-  getReferenceType,
-  type NominalCharacteristics,
-  type ReferenceType,
-} from "@/lib/valves/reference-data";
+import { findReferenceType, getReferenceType } from "@/lib/valves/reference-table";
+import type { NominalCharacteristics, ReferenceType } from "@/lib/valves/reference-row";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Brief section 4 (published nominal characteristics, class A1, per section)
 // and section 9 items 8, 11, 12 and 13.
 
 function row(designation: string): ReferenceType {
-  const r = getReferenceType(designation);
+  const r = getReferenceType(SEED, designation);
   if (!r) throw new Error(`no reference row for ${designation}`);
   return r;
 }
@@ -48,7 +46,7 @@ describe("brief 9 check values", () => {
 
   it("9.13 triodes with rp listed obey |µ - Gm·rp| / µ <= 5 %", () => {
     // [LS53] µ ≈ Gm × rp; 12AX7: 0.0016 × 62,500 = 100
-    const triodes = REFERENCE_TYPES.filter((r) => r.characteristics?.kind === "amplifier" && r.characteristics.rpOhms !== undefined);
+    const triodes = SEED_REFERENCE_TYPES.filter((r) => r.characteristics?.kind === "amplifier" && r.characteristics.rpOhms !== undefined);
     expect(triodes.length).toBeGreaterThanOrEqual(15);
     for (const r of triodes) {
       const c = amp(r);
@@ -104,7 +102,7 @@ describe("brief section 4 table", () => {
 
   it.each(table)("%s", (name, e) => {
     const r = row(name);
-    expect(r.heater === null ? null : [r.heater.volts, r.heater.amps]).toEqual(e.heater);
+    expect(r.heater == null ? null : [r.heater.volts, r.heater.amps]).toEqual(e.heater);
     expect(r.base).toBe(e.base);
     if (e.plate === undefined) return;
     const c = amp(r);
@@ -146,21 +144,21 @@ describe("brief section 4 table", () => {
 
 describe("structure", () => {
   it("has at least 45 types across receiving, audio, rectifier and regulator kinds", () => {
-    expect(REFERENCE_TYPES.length).toBeGreaterThanOrEqual(45);
-    const kinds = new Set(REFERENCE_TYPES.map((r) => r.kind));
+    expect(SEED_REFERENCE_TYPES.length).toBeGreaterThanOrEqual(45);
+    const kinds = new Set(SEED_REFERENCE_TYPES.map((r) => r.kind));
     for (const k of ["dual-triode", "pentode", "beam-tetrode", "power-pentode", "full-wave-rectifier", "voltage-regulator"]) {
       expect(kinds.has(k as ReferenceType["kind"])).toBe(true);
     }
   });
 
   it("every row has an honest source tag", () => {
-    for (const r of REFERENCE_TYPES) {
+    for (const r of SEED_REFERENCE_TYPES) {
       expect(r.source, r.designation).toMatch(/^((REG|EU-DS|MIL-E-1\/REG) )?(✓|MEM\??)$/);
     }
   });
 
   it("designations and aliases are unique and already normalised", () => {
-    const names = REFERENCE_TYPES.flatMap((r) => [r.designation, ...r.aliases]);
+    const names = SEED_REFERENCE_TYPES.flatMap((r) => [r.designation, ...r.aliases]);
     expect(new Set(names).size).toBe(names.length);
     for (const n of names) {
       const res = normaliseDesignation(n);
@@ -169,7 +167,7 @@ describe("structure", () => {
   });
 
   it("every row has a heater unless it is a cold-cathode regulator", () => {
-    for (const r of REFERENCE_TYPES) {
+    for (const r of SEED_REFERENCE_TYPES) {
       if (r.kind === "voltage-regulator") expect(r.heater, r.designation).toBeNull();
       else {
         expect(r.heater, r.designation).not.toBeNull();
@@ -180,7 +178,7 @@ describe("structure", () => {
   });
 
   it("tapped heaters: halves in parallel at half the voltage and twice the current", () => {
-    for (const r of REFERENCE_TYPES) {
+    for (const r of SEED_REFERENCE_TYPES) {
       const t = r.heater?.tapped;
       if (!t) continue;
       expect(t.volts * 2).toBeCloseTo(r.heater!.volts, 5);
@@ -190,8 +188,8 @@ describe("structure", () => {
 
   it("every row decodes, and US heater classes agree with the data", () => {
     // [LS53] 5 = 4.6-5.6 V, 6 = 5.6-6.6 V, 12 = 12.6 V; 0 = no heater
-    for (const r of REFERENCE_TYPES) {
-      const d = decodeDesignation(r.designation);
+    for (const r of SEED_REFERENCE_TYPES) {
+      const d = decodeDesignation(SEED, r.designation);
       expect(d.ok, r.designation).toBe(true);
       if (!d.ok) continue;
       expect(d.knownType).toBe(true);
@@ -208,7 +206,7 @@ describe("structure", () => {
 
   it("European heater letters agree with the data", () => {
     // [PE] E = 6.3 V (either wiring of a tapped heater), G = 5 V, P = 300 mA
-    for (const r of REFERENCE_TYPES) {
+    for (const r of SEED_REFERENCE_TYPES) {
       for (const name of [r.designation, ...r.aliases]) {
         const first = name[0];
         if (!/^[A-Z]{2}/.test(name) || name.startsWith("KT") || name.startsWith("VR")) continue;
@@ -230,17 +228,17 @@ describe("structure", () => {
 
 describe("lookup", () => {
   it("resolves aliases and normalisation", () => {
-    expect(getReferenceType("ecc 83")?.designation).toBe("12AX7");
-    expect(getReferenceType("gz-34")?.designation).toBe("5AR4");
-    expect(getReferenceType("E88CC")?.designation).toBe("6922");
-    expect(getReferenceType("12AX8")).toBeUndefined();
-    expect(getReferenceType("")).toBeUndefined();
+    expect(getReferenceType(SEED, "ecc 83")?.designation).toBe("12AX7");
+    expect(getReferenceType(SEED, "gz-34")?.designation).toBe("5AR4");
+    expect(getReferenceType(SEED, "E88CC")?.designation).toBe("6922");
+    expect(getReferenceType(SEED, "12AX8")).toBeUndefined();
+    expect(getReferenceType(SEED, "")).toBeUndefined();
   });
 
   it("matches unlisted suffix variants by stem only through findReferenceType", () => {
-    expect(getReferenceType("6L6GB")).toBeUndefined();
-    expect(findReferenceType("6L6GB")).toMatchObject({ row: { designation: "6L6" }, match: "stem" });
-    expect(findReferenceType("ECC83")?.match).toBe("alias");
-    expect(findReferenceType("12AX7")?.match).toBe("exact");
+    expect(getReferenceType(SEED, "6L6GB")).toBeUndefined();
+    expect(findReferenceType(SEED, "6L6GB")).toMatchObject({ row: { designation: "6L6" }, match: "stem" });
+    expect(findReferenceType(SEED, "ECC83")?.match).toBe("alias");
+    expect(findReferenceType(SEED, "12AX7")?.match).toBe("exact");
   });
 });
