@@ -20,12 +20,29 @@ describe("GET /api/valves/types/:designation", () => {
     expect(b.reference.characteristics).toMatchObject({ mu: 100, gmMicromho: 1600, plateCurrentMa: 1.2 });
   });
 
-  it("answers an unknown designation with 404 and the closest candidates", async () => {
-    const r = await typeOf("12AX8");
+  it("answers what is not a designation with 404 and the closest candidates", async () => {
+    // A final number of 77 cannot occur on a US receiving type (1 to 12 elements brought out) [MEM].
+    const r = await typeOf("12AX77");
     expect(r.status).toBe(404);
     const b = await json(r);
     expect(b.error!.code).toBe("not_found");
     expect(b.error!.details!.candidates).toContain("12AX7");
+  });
+
+  it("answers a designation that decodes by its scheme but has no figures with 200 and onFile false", async () => {
+    // 12AX8 reads as a 12-class US number [LS53]; not on file, so the house may add it.
+    const r = await typeOf("12AX8");
+    expect(r.status).toBe(200);
+    const b = (await json(r)) as unknown as { onFile: boolean; canAdd: boolean; reference: unknown; decode: { heater: { volts: number }; candidates: string[] } };
+    expect(b).toMatchObject({ onFile: false, canAdd: true, reference: null });
+    expect(b.decode.heater.volts).toBe(12.6);
+    expect(b.decode.candidates).toContain("12AX7");
+  });
+
+  it("answers 5814 as on file (the unsuffixed 5814A) [MEM]", async () => {
+    const r = await typeOf("5814");
+    expect(r.status).toBe(200);
+    expect(await json(r)).toMatchObject({ onFile: true, reference: { designation: "5814A", matchedBy: "stem" } });
   });
 
   it("answers bad input with 400, never 500: empty, 10 KB, control characters, odd unicode", async () => {
