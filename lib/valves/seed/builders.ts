@@ -68,3 +68,9 @@ export const T = (
   base: ReferenceType["base"],
   extra: Partial<Row> = {},
 ): ReferenceType => row({ designation, kind, heater, base, source: "REG MEM", ...extra });
+
+/** 1.4 V battery filament with a centre tap: `amps` at 2.8 V (halves in series), twice that at 1.4 V. */
+export const B28 = (amps: number): ReferenceHeater => ({ volts: 2.8, amps, filament: true, tapped: { volts: 1.4, amps: Math.round(amps * 2000) / 1000 } });
+/** European seed row: figures from European data books, recalled from memory. */
+export const EU = (designation: string, kind: ReferenceType["kind"], heater: ReferenceHeater | null | undefined, base: ReferenceType["base"], extra: Partial<Row> = {}): ReferenceType =>
+  row({ designation, kind, ...(heater !== undefined ? { heater } : {}), base, source: "EU-DS MEM", ...extra });

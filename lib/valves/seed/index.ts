@@ -5,10 +5,26 @@
 
 import { referenceTable, type ReferenceTable } from "../reference-table";
 import type { ReferenceType } from "../reference-row";
+import { BATTERY_AND_EARLY_ROWS } from "./battery-and-early";
 import { CORE_ROWS } from "./core";
+import { EUROPEAN_ROWS } from "./european";
+import { RECTIFIER_REGULATOR_ROWS } from "./rectifiers-regulators";
+import { SERIES_STRING_ROWS } from "./series-string";
+import { SPECIAL_QUALITY_ROWS } from "./special-quality";
+import { US_MINIATURE_ROWS } from "./us-miniature";
+import { US_OCTAL_ROWS } from "./us-octal";
 
 /** Every seed row, core rows first. Designations and aliases are unique across the list. */
-export const SEED_REFERENCE_TYPES: readonly ReferenceType[] = [...CORE_ROWS];
+export const SEED_REFERENCE_TYPES: readonly ReferenceType[] = [
+  ...CORE_ROWS,
+  ...US_MINIATURE_ROWS,
+  ...US_OCTAL_ROWS,
+  ...SERIES_STRING_ROWS,
+  ...BATTERY_AND_EARLY_ROWS,
+  ...EUROPEAN_ROWS,
+  ...SPECIAL_QUALITY_ROWS,
+  ...RECTIFIER_REGULATOR_ROWS,
+];
 
 let seedTable: ReferenceTable | undefined;
 
