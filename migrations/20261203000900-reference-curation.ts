@@ -39,6 +39,8 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     );
   }
   await q(`UPDATE valve_types SET aliases = '{}' WHERE aliases = ARRAY['']::varchar[]`);
+  // Demo source codes move out of the registers' three-digit space into the invented "X" form.
+  await q(`UPDATE maker_codes SET code = 'X' || right(code, 2) WHERE is_demo AND code IN ('917', '931', '946', '958')`);
   for (const fix of FIXES) {
     const seed = SEED_REFERENCE_TYPES.find((r) => r.designation === fix.designation);
     if (!seed) continue;

@@ -132,10 +132,10 @@ describe("reference corrections and the maker registry", () => {
     const cookie = await sessionCookie(admin);
     const send = (csv: string, mode: string) =>
       importRegistry(request(`/api/valves/makers/import?mode=${mode}`, { method: "POST", body: csv, headers: { cookie, "content-type": "text/csv" } }), noParams);
-    const bad = "code,maker_name,is_demo,notes\n917,Aldergrove Electron Works,true,demo\nabc,,maybe,\n";
+    const bad = "code,maker_name,is_demo,notes\nX17,Aldergrove Electron Works,true,demo\nabc,,maybe,\n";
     const refused = await send(bad, "apply");
     expect(refused.status).toBe(400);
-    const good = "code,maker_name,is_demo,notes\n917,Aldergrove Electron Works,true,demo\n931,Kestrel Valve Company,true,demo\n";
+    const good = "code,maker_name,is_demo,notes\nX17,Aldergrove Electron Works,true,demo\nX31,Kestrel Valve Company,true,demo\n";
     const first = (await (await send(good, "apply")).json()) as { counts: Record<string, number> };
     expect(first.counts).toEqual({ new: 2, changed: 0, unchanged: 0 });
     const again = (await (await send(good, "apply")).json()) as { counts: Record<string, number> };

@@ -62,7 +62,7 @@ export default async function ReferencePage({ searchParams }: { searchParams: Pr
           <div className="grid grid-cols-[1fr_9rem] gap-2">
             <div>
               <label htmlFor="code" className="label">Code off the glass</label>
-              <input id="code" name="code" defaultValue={code} className="input code mt-1" placeholder="e.g. 5943 or 931-5943" autoComplete="off" maxLength={100} />
+              <input id="code" name="code" defaultValue={code} className="input code mt-1" placeholder="e.g. 5943 or X31-5943" autoComplete="off" maxLength={100} />
             </div>
             <div>
               <label htmlFor="type" className="label">On type (optional)</label>

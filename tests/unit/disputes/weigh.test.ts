@@ -65,7 +65,7 @@ const ALDERGROVE: ReferenceProfile = {
 };
 const PROFILES: ReferenceProfile[] = [fromHabit("kestrel", KESTREL), fromHabit("pellham", PELLHAM), fromHabit("vireo", VIREO), ALDERGROVE];
 // Invented demo source codes (as in the demo seeder, marked demo there).
-const CODE = { [KESTREL]: "931", [PELLHAM]: "946" };
+const CODE = { [KESTREL]: "X31", [PELLHAM]: "X46" };
 
 // ── A listed line and the buyer's report ────────────────────────────────────────
 // Tester chart "new" value 1,600 for a 12AX7 section, as brief §9.20.

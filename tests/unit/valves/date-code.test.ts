@@ -43,9 +43,9 @@ describe("readDateCode: four digits (YYWW)", () => {
   });
 
   it("reads the date out of a joined source code sss-YYWW [CTP, brief §5]", () => {
-    const result = readDateCode("946-5943", TWELVE_AX7);
+    const result = readDateCode("X46-5943", TWELVE_AX7);
     if (!result.ok) throw new Error("expected a reading");
-    expect(result.sourceCode).toBe("946");
+    expect(result.sourceCode).toBe("X46");
     expect(result.flags).toContain("joined-source-code");
     expect(years(result)).toEqual([1959]);
   });
@@ -106,8 +106,9 @@ describe("readDateCode: three digits (YWW)", () => {
     expect(years(ruled)).toEqual([1955]);
   });
 
-  it("warns that three digits may be a source code instead (946 is an invented demo code)", () => {
-    const result = readDateCode("946", TWELVE_AX7);
+  it("warns that three digits may be a source code instead", () => {
+    // [CTP] a bare three-digit number on the glass may be a source code rather than a YWW date
+    const result = readDateCode("943", TWELVE_AX7);
     if (!result.ok) throw new Error("expected a reading");
     expect(result.flags).toContain("may-be-source-code");
   });
@@ -129,10 +130,10 @@ describe("readDateCode: not a date code", () => {
 });
 
 describe("parseEuropeanDateLine [CTP/MEM: factory symbol + year digit + month letter + week digit]", () => {
-  it("splits factory symbol, year digit, month letter and week digit", () => {
-    const result = parseEuropeanDateLine("Δ7C2", { introducedYear: 1953 });
+  it("splits factory symbol, year digit, month letter and week digit (\"¤\" is an invented factory symbol)", () => {
+    const result = parseEuropeanDateLine("¤7C2", { introducedYear: 1953 });
     if (!result.ok) throw new Error(result.error.message);
-    expect(result).toMatchObject({ factorySymbol: "Δ", yearDigit: 7, monthLetter: "C", weekDigit: 2 });
+    expect(result).toMatchObject({ factorySymbol: "¤", yearDigit: 7, monthLetter: "C", weekDigit: 2 });
     // EL84 introduced 1953 [MEM]; house end of production 1990 by default.
     expect(result.readings.map((r) => [r.year, r.month])).toEqual([
       [1957, 3],
