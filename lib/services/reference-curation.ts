@@ -88,10 +88,14 @@ export interface ImportLine {
   action: "add" | "change" | "unchanged";
 }
 
-/** Keeps what the CSV does not carry (hazards, large envelope, year, cathode-resistor bias, non-amplifier figures). */
-function merge(prior: ReferenceType, next: ReferenceType): ReferenceType {
+/**
+ * Keeps what the CSV does not carry (hazards, large envelope, year, cathode-resistor bias, non-amplifier
+ * figures), and whatever a file leaves out by omitting its columns (heater, figures, check, note).
+ */
+function merge(prior: ReferenceType, next: ReferenceType, columns: readonly string[]): ReferenceType {
+  const has = (c: string) => columns.includes(c);
   const pc = prior.characteristics;
-  let characteristics: NominalCharacteristics | undefined = next.characteristics;
+  let characteristics: NominalCharacteristics | undefined = has("plate_volts") ? next.characteristics : prior.characteristics;
   if (!characteristics && pc && pc.kind !== "amplifier") characteristics = pc;
   if (characteristics?.kind === "amplifier" && pc?.kind === "amplifier") {
     characteristics = {
@@ -103,7 +107,14 @@ function merge(prior: ReferenceType, next: ReferenceType): ReferenceType {
   const out: Mutable<ReferenceType> = { ...prior, ...next, hazards: prior.hazards };
   if (characteristics) out.characteristics = characteristics;
   else delete out.characteristics;
-  for (const k of ["heater", "verification", "note"] as const) if (!(k in next)) delete out[k];
+  const kept = { heater: has("heater_volts") || has("cold_cathode"), verification: has("verified_against"), note: has("note") };
+  for (const k of ["heater", "verification", "note"] as const) {
+    if (!kept[k]) {
+      if (k in prior) (out as Record<string, unknown>)[k] = prior[k];
+      else delete out[k];
+    } else if (!(k in next)) delete out[k];
+  }
+  if (!has("aliases")) out.aliases = prior.aliases;
   return out;
 }
 
@@ -136,7 +147,7 @@ export async function importReferenceCsv(actorId: string, csv: string, apply: bo
         const other = await ValveType.findByName(row.designation);
         if (other) errors.push({ line, column: "designation", message: `${row.designation} is an alias of ${other.designation}` });
       }
-      const next = existing ? merge(existing.toReference(), row) : row;
+      const next = existing ? merge(existing.toReference(), row, parsed.columns) : row;
       const action: ImportLine["action"] = !existing ? "add" : same(existing.toReference(), next) ? "unchanged" : "change";
       lines.push({ line, designation: row.designation, action });
       if (!apply || errors.length || action === "unchanged") continue;

@@ -104,23 +104,24 @@ function toRow(l: z.infer<typeof ReferenceCsvLine>, line: number, errors: Refere
  * Reads a reference CSV: a header naming the columns (any order; designation,
  * kind, base and source required), one type per line. Returns the rows, or
  * every error with its line number (line 1 is the header). A designation or
- * alias may appear once in a file.
+ * alias may appear once in a file. `columns` lists the header, so that an
+ * import can keep what a file leaves out.
  */
-export function parseReferenceCsv(csv: string, maxRows = 5000): { rows: ReferenceCsvRow[]; errors: ReferenceCsvError[] } {
+export function parseReferenceCsv(csv: string, maxRows = 5000): { rows: ReferenceCsvRow[]; errors: ReferenceCsvError[]; columns: string[] } {
   const errors: ReferenceCsvError[] = [];
   let records: string[][];
   try {
     records = parse(csv, { bom: true, skip_empty_lines: true, relax_column_count: true, trim: true }) as string[][];
   } catch (e) {
-    return { rows: [], errors: [{ line: (e as { lines?: number }).lines ?? 1, message: `Not readable as CSV: ${(e as Error).message.slice(0, 200)}` }] };
+    return { rows: [], columns: [], errors: [{ line: (e as { lines?: number }).lines ?? 1, message: `Not readable as CSV: ${(e as Error).message.slice(0, 200)}` }] };
   }
-  if (records.length === 0) return { rows: [], errors: [{ line: 1, message: "The file is empty" }] };
+  if (records.length === 0) return { rows: [], columns: [], errors: [{ line: 1, message: "The file is empty" }] };
   const header = records[0]!.map((h) => h.toLowerCase());
   const unknown = header.filter((h) => !(REFERENCE_CSV_COLUMNS as readonly string[]).includes(h));
   if (unknown.length) errors.push({ line: 1, message: `Unknown column(s): ${unknown.join(", ")}` });
   for (const need of ["designation", "kind", "base", "source"]) if (!header.includes(need)) errors.push({ line: 1, column: need, message: "column is missing" });
   if (records.length - 1 > maxRows) errors.push({ line: 1, message: `At most ${maxRows} rows per file` });
-  if (errors.length) return { rows: [], errors };
+  if (errors.length) return { rows: [], errors, columns: header };
   const rows: ReferenceCsvRow[] = [];
   const seen = new Map<string, number>();
   records.slice(1).forEach((cells, i) => {
@@ -140,7 +141,7 @@ export function parseReferenceCsv(csv: string, maxRows = 5000): { rows: Referenc
     }
     rows.push({ line, row });
   });
-  return { rows: errors.length ? [] : rows, errors };
+  return { rows: errors.length ? [] : rows, errors, columns: header };
 }
 
 const csvCell = (v: string | number | undefined | null): string => {
