@@ -85,7 +85,7 @@ export interface ItemWeighing {
 
 /**
  * Tester-to-tester variation allowed before a lower reading counts against
- * the listing [CTP, brief §8: roughly ±10–15 %; we take the generous end].
+ * the listing [CTP: roughly ±10–15 %; we take the generous end].
  */
 export const TESTER_VARIATION_PCT = 15;
 
@@ -98,7 +98,7 @@ const BAND_FLOOR: Record<string, number> = {
  * Grade each reading against the tester chart's "new" value: the reading's
  * own, else `fallbackChart` (the listing's chart for the same type, so both
  * sides are graded on one basis). Grades never rest on data-sheet figures
- * [CTP, brief §4]; the weakest section as % of the nominal Gm is shown beside
+ * [CTP]; the weakest section as % of the nominal Gm is shown beside
  * them for orientation only.
  */
 export function gradeAgainstNominal(table: ReferenceTable, designation: string, readings: readonly TubeReading[], vacuumLoss = false, fallbackChart?: number): GradedReading[] {
@@ -195,7 +195,7 @@ export function weighItem(
       findings.push("The buyer reports a white getter flash that the listing did not disclose; photos should show it.");
     } else { verdict = "does-not-support"; findings.push("The buyer does not report a white getter on this line."); }
   } else if (reason === "readings-not-as-listed") {
-    // Like with like: same tube, same measure, both graded on a chart value [CTP, brief §6].
+    // Like with like: same tube, same measure, both graded on a chart value [CTP].
     const listedByTube = new Map(listingReadings.map((r) => [`${r.tubeNo}:${r.measure}`, r]));
     let worse = 0;
     let compared = 0;
@@ -226,7 +226,7 @@ export function weighItem(
     else if (seen && !seen.ok) findings.push(`"${report.designationSeen}" could not be read as a designation; compare the print with the photos.`);
     else if (!d.ok) findings.push(`The listed designation "${listing.designation}" could not be read; compare the print with the photos.`);
     else if (seenNorm === d.normalised) { verdict = "does-not-support"; findings.push(`The buyer reads ${seenNorm}, as listed.`); }
-    else if (link === "exact") { verdict = "does-not-support"; findings.push(`${seenNorm} is listed as an exact equivalent of ${d.normalised} [brief §3].`); }
+    else if (link === "exact") { verdict = "does-not-support"; findings.push(`${seenNorm} is listed as an exact equivalent of ${d.normalised} [MEM].`); }
     else { verdict = "supports"; findings.push(`Listed as ${d.normalised}; the buyer reads ${seenNorm}${link ? ` (a ${link.replace(/-/g, " ")} equivalent, not the type listed)` : ""}.`); }
   } else if (reason === "short-count") {
     if (report.tubesReceived != null && report.tubesReceived < listing.quantity) { verdict = "supports"; findings.push(`Listed ${listing.quantity}, received ${report.tubesReceived}. Check the packing list and the carrier's weight.`); }

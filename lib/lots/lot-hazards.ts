@@ -3,7 +3,7 @@
  * hazardsForType: mercury vapour, radioactive sources, beryllium oxide) and
  * the hazards consignors declared, with the types that carry each. High
  * voltage and glass apply to every valve, so they are shown once by the
- * caution strip rather than flagged per lot (brief section 7).
+ * caution strip rather than flagged per lot.
  */
 import { hazardsForType, type HazardNotice } from "../valves/hazards";
 import type { ReferenceTable } from "../valves/reference-table";

@@ -1,7 +1,7 @@
 /**
  * The lot summary dealers read first: tube count, families, test results,
  * vacuum loss, matched sets, attribution mix, hazards, designations to
- * review and an estimate range from comparable sales (brief §1, §6) [SUG].
+ * review and an estimate range from comparable sales [CTP; SUG].
  */
 import { gradeBatch, type BatchTube } from "../valves/grade-batch";
 import type { TestMeasure } from "../valves/grading";

@@ -463,7 +463,7 @@ function sameLines(a: readonly LineValue[], b: readonly LineValue[]): boolean {
 
 /**
  * The case's mediator releases the share of the lot the claim does not touch
- * [SUG, brief §8], on line values they set now and keep for the decision. Not
+ * [SUG], on line values they set now and keep for the decision. Not
  * when the buyer asks to return the whole lot. Once per case; a retry
  * finishes an interrupted release.
  */

@@ -1,4 +1,4 @@
-// Hazards a listing must show (brief section 7), with short cautions in our
+// Hazards a listing must show, with short cautions in our
 // own words. Cautions defer to local codes, carriers and licensed practice:
 // they are reminders for buyers and sellers, not safety instructions.
 
@@ -72,7 +72,7 @@ export interface HazardReport {
 
 /**
  * Hazards of types outside the reference table that sellers commonly meet.
- * 872A is a mercury-vapour rectifier like 866A (brief section 7).
+ * 872A is a mercury-vapour rectifier like 866A.
  */
 export const EXTRA_TYPE_HAZARDS: Readonly<Record<string, readonly TypeHazard[]>> = {
   "872A": [

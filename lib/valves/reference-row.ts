@@ -69,7 +69,7 @@ export type NominalCharacteristics =
       readonly gmMicromho?: number;
       readonly plateCurrentMa?: number;
       readonly rpOhms?: number;
-      /** Figures marked "≈" or "?" in the brief. */
+      /** Figures marked "≈" or "?" (approximate) in our sources. */
       readonly approximate?: boolean;
     }
   | { readonly kind: "rectifier"; readonly maxDcOutputMa?: number; readonly approximate?: boolean }

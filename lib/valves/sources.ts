@@ -56,6 +56,12 @@ export const SOURCES: readonly SourceEntry[] = [
     kind: "publication",
   },
   {
+    tag: "RFC-4180",
+    title: "CSV format",
+    publication: "IETF RFC 4180, Common Format and MIME Type for Comma-Separated Values (CSV) Files, 2005.",
+    kind: "publication",
+  },
+  {
     tag: "CTP",
     title: "Common trade practice",
     publication: "Common practice among dealers and service technicians; a rule of thumb with no single published source.",

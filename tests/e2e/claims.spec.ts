@@ -134,7 +134,7 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await mediator.getByLabel("Line 1 value per tube").fill("10.00");
   await mediator.getByLabel("Line 2 value per tube").fill("5.00");
   await mediator.getByLabel("Line 3 value per tube").fill("10.00");
-  // The claim covers 3 × $10 of V_lot $100: 30 % stays held and the rest is paid now [brief §8, SUG]:
+  // The claim covers 3 × $10 of V_lot $100: 30 % stays held and the rest is paid now [CTP/SUG]:
   // hammer $80 × 70 % = $56.00 less commission $16 × 70 % = $11.20 → $44.80 to the estate.
   await mediator.getByRole("button", { name: "Release the undisputed share now" }).click();
   await expect(mediator.getByRole("main")).toContainText("Released $44.80 to the consignor");
@@ -142,7 +142,7 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await mediator.getByLabel("Tubes upheld").fill("3");
   await mediator.getByLabel("Worth per tube as delivered ($)").fill("4.00");
   await mediator.getByRole("button", { name: "Work out the refund" }).click();
-  // Hand-worked from the partial-refund formula [brief §8]: V_lot = 6×$10 + 4×$5 + 2×$10 = $100; W = 3 × ($10 − $4) = $18;
+  // Hand-worked from the partial-refund formula [CTP/SUG]: V_lot = 6×$10 + 4×$5 + 2×$10 = $100; W = 3 × ($10 − $4) = $18;
   // hammer $80 × 18 % = $14.40, premium $8 × 18 % = $1.44 → buyer $15.84; commission $16 × 18 % = $2.88 given back;
   // consignor −$14.40 + $2.88 = −$11.52; payout $80 − $16 − $11.52 = $52.48 [house rates: 10 % premium, 20 % commission, SUG].
   await expect(mediator.getByTestId("preview-refund")).toHaveText("$15.84");

@@ -158,7 +158,7 @@ describe("claims and mediation", () => {
     expect(lost.status).toBe(409);
     expect((await refused(decide(m2, id, decision))).status).toBe(409);
 
-    // Hand-worked from the partial-refund formula (brief §8): V_lot = 4×$10 + 2×$5 + $50 set = $100;
+    // Hand-worked from the partial-refund formula: V_lot = 4×$10 + 2×$5 + $50 set = $100;
     // W = 2 × ($10 − $3) = $14; hammer $27.00 × 14 % = $3.78; premium $2.70 × 14 % = $0.378 → $0.38;
     // commission $5.40 × 14 % = $0.756 → $0.76 (half-up). Buyer gets $4.16; consignor bears −$3.78 + $0.76 = −$3.02.
     const closed = await getCase(consignor, id);
@@ -310,7 +310,7 @@ describe("claims and mediation", () => {
     const m = viewerOf(await makeUser(["mediator"]));
     await takeCase(m, id);
     const lines = [{ itemId: f.items[0]!, valueCents: 1_000 }, { itemId: f.items[1]!, valueCents: 500 }, { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 }];
-    // Hand-worked [brief §8, SUG]: the claim covers 2 × $10 of V_lot $100 = 20 % held; hammer $27.00 → $5.40 held, $21.60 released;
+    // Hand-worked [CTP/SUG]: the claim covers 2 × $10 of V_lot $100 = 20 % held; hammer $27.00 → $5.40 held, $21.60 released;
     // premium $2.70 → $0.54 / $2.16; commission $5.40 → $1.08 / $4.32; the consignor is paid $21.60 − $4.32 = $17.28 now.
     const r = await releaseUndisputedShare(m, id, { lines });
     expect(r.payoutCents).toBe(1_728);

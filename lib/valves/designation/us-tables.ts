@@ -1,4 +1,4 @@
-// Tables for US RMA/RETMA/EIA receiving-tube numbers (brief section 2.1).
+// Tables for US RMA/RETMA/EIA receiving-tube numbers.
 
 import type { EnvelopeInfo, HeaterInfo } from "./types";
 

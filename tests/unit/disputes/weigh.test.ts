@@ -1,20 +1,20 @@
 // Check values:
-// - [CTP] brief §6: % of new = reading ÷ chart "new" × 100; bands ≥100 strong, 80–99 good,
+// - [CTP]: % of new = reading ÷ chart "new" × 100; bands ≥100 strong, 80–99 good,
 //   60–79 fair, <60 weak; any short, leakage or gas → reject; white getter = air leak, dead;
 //   never compare emission readings with Gm readings.
-// - [CTP] brief §4: testers use their own test points: compute "% of new" from the tester
+// - [CTP]: testers use their own test points: compute "% of new" from the tester
 //   model's own chart, never from data-sheet figures (so no grade rests on the nominal Gm).
-// - brief §9.20: Gm 1,200 against chart 1,600 → 75 % → "fair".
+// -: Gm 1,200 against chart 1,600 → 75 % → "fair".
 // - 12AX7 nominal Gm 1,600 µmho at 250 V, −2 V: our reference data row (lib/valves/reference-data.ts)
 //   is tagged "REG ✓" (registered characteristics checked against a published data-sheet
-//   transcription), as brief §4 and §9.11.
-// - [CTP] brief §8 "Test disputes": allow roughly ±10–15 % tester-to-tester variation; a valid
+//   transcription), as.
+// - [CTP] "Test disputes": allow roughly ±10–15 % tester-to-tester variation; a valid
 //   claim falls below the listed band by more than that or shows an absolute failure.
 //   [SUG] we take the generous end, 15 points below the floor of the listed band.
-// - [MEM] brief §3: 12AX7 = ECC83 exact; 7025 premium; 5751 a substitute with caveats;
-//   6922 ↔ 6DJ8 "near"; PCC88 a different-heater sibling of 6DJ8 (brief §9.2, §9.14).
-// - [SUG, CTP-informed] brief §8 "Misattribution disputes"; [EIA-476] brief §5: a source code
-//   may name the brand owner, so it is evidence, not proof; [CTP] brief §1: high confidence
+// - [MEM]: 12AX7 = ECC83 exact; 7025 premium; 5751 a substitute with caveats;
+//   6922 ↔ 6DJ8 "near"; PCC88 a different-heater sibling of 6DJ8 [PE; MEM].
+// - [SUG, CTP-informed] "Misattribution disputes"; [EIA-476]: a source code
+//   may name the brand owner, so it is evidence, not proof; [CTP]: high confidence
 //   only when several independent features match a reference.
 // Makers, labels and source codes are invented demo data (scenario.md; same habits and
 // codes as the demo seeders). Nothing here describes a real factory.
@@ -68,7 +68,7 @@ const PROFILES: ReferenceProfile[] = [fromHabit("kestrel", KESTREL), fromHabit("
 const CODE = { [KESTREL]: "X31", [PELLHAM]: "X46" };
 
 // ── A listed line and the buyer's report ────────────────────────────────────────
-// Tester chart "new" value 1,600 for a 12AX7 section, as brief §9.20.
+// Tester chart "new" value 1,600 for a 12AX7 section, as.
 const CHART = 1_600;
 const gm = (tubeNo: number, sections: number[], extra: Partial<TubeReading> = {}): TubeReading => ({ tubeNo, measure: "gm", sections, chartNewValue: CHART, ...extra });
 
@@ -91,14 +91,14 @@ function listing(over: Partial<ListingSide> = {}): ListingSide {
 const report = (over: Partial<BuyerReport> = {}): BuyerReport => ({ tubes: 8, features: {}, readings: [], ...over });
 const noCodes = { listing: null, buyer: null };
 
-describe("gradeAgainstNominal: grades rest on the tester chart only [CTP] brief §4, §6", () => {
-  it("our reference nominal Gm for a 12AX7 is 1,600 µmho, tagged REG ✓ [brief §4; §9.11]", () => {
+describe("gradeAgainstNominal: grades rest on the tester chart only [CTP]", () => {
+  it("our reference nominal Gm for a 12AX7 is 1,600 µmho, tagged REG ✓ [REG ✓]", () => {
     expect(nominalGmFromReference(SEED, "12AX7")).toBe(1_600);
-    expect(nominalGmFromReference(SEED, "ECC83")).toBe(1_600); // exact equivalent [brief §3]
+    expect(nominalGmFromReference(SEED, "ECC83")).toBe(1_600); // exact equivalent [MEM]
     expect(getReferenceType(SEED, "12AX7")?.source).toBe("REG ✓");
   });
 
-  it("a Gm run with no chart value is NOT graded against the data sheet's nominal [CTP] brief §4", () => {
+  it("a Gm run with no chart value is NOT graded against the data sheet's nominal [CTP]", () => {
     const [g] = gradeAgainstNominal(SEED, "12AX7", [{ tubeNo: 1, measure: "gm", sections: [1_200, 1_300] }]);
     expect(g.grade).toBe("not-graded");
     expect(g.chartNewValue).toBeNull();
@@ -108,14 +108,14 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP] brief 
     expect(g.reasons[0]).toMatch(/data-sheet figures are not a test limit/);
   });
 
-  it("…but shows the weakest section as % of the nominal Gm, for orientation: 1,200 of 1,600 → 75 [brief §4]", () => {
+  it("…but shows the weakest section as % of the nominal Gm, for orientation: 1,200 of 1,600 → 75 [REG]", () => {
     const [g] = gradeAgainstNominal(SEED, "12AX7", [{ tubeNo: 1, measure: "gm", sections: [1_300, 1_200] }]);
     expect(g.percentOfNominal).toBe(75); // weakest section, not the first
     const [odd] = gradeAgainstNominal(SEED, "ECC83", [{ tubeNo: 2, measure: "gm", sections: [1_234] }]);
     expect(odd.percentOfNominal).toBe(77.1); // 1,234 / 1,600 = 77.125 % → one decimal
   });
 
-  it("the fallback chart grades a reading that carries none: 1,200 of 1,600 → 75 % → fair [brief §9.20]", () => {
+  it("the fallback chart grades a reading that carries none: 1,200 of 1,600 → 75 % → fair [CTP]", () => {
     const [g] = gradeAgainstNominal(SEED, "12AX7", [{ tubeNo: 1, measure: "gm", sections: [1_200, 1_300] }], false, CHART);
     expect(g.chartNewValue).toBe(1_600);
     expect(g.worstPercentOfNew).toBe(75); // weakest section decides [CTP]
@@ -123,16 +123,16 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP] brief 
     expect(g.hardFail).toBe(false);
   });
 
-  it("the reading's own chart value wins over the fallback; the nominal never enters the grade [CTP] brief §4/§6", () => {
+  it("the reading's own chart value wins over the fallback; the nominal never enters the grade [CTP]", () => {
     const [g] = gradeAgainstNominal(SEED, "12AX7", [{ tubeNo: 1, measure: "gm", sections: [1_300], chartNewValue: 1_300 }], false, CHART);
     expect(g.chartNewValue).toBe(1_300);
     expect(g.worstPercentOfNew).toBe(100);
-    expect(g.grade).toBe("strong"); // ≥ 100 % of its own chart [CTP] brief §6
+    expect(g.grade).toBe("strong"); // ≥ 100 % of its own chart [CTP]
     expect(g.percentOfNominal).toBe(81.3); // 1,300 / 1,600 = 81.25 %: shown, but not a grade
   });
 
   it("no % of nominal where it means nothing: emission runs, types without a nominal Gm, empty sections", () => {
-    // An emission run never borrows a Gm figure [CTP] brief §6.
+    // An emission run never borrows a Gm figure [CTP].
     const [emission] = gradeAgainstNominal(SEED, "12AX7", [{ tubeNo: 1, measure: "emission", sections: [70] }]);
     expect(emission.grade).toBe("not-graded");
     expect(emission.chartNewValue).toBeNull();
@@ -147,7 +147,7 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP] brief 
     expect(gassy.percentOfNominal).toBeNull();
   });
 
-  it("a short or gas is a reject and a hard failure whatever the reading, chart or not [CTP] brief §6", () => {
+  it("a short or gas is a reject and a hard failure whatever the reading, chart or not [CTP]", () => {
     const graded = gradeAgainstNominal(SEED, "12AX7", [
       { tubeNo: 1, measure: "gm", sections: [1_700, 1_650], shorts: true },
       { tubeNo: 2, measure: "gm", sections: [], gas: true },
@@ -163,13 +163,13 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP] brief 
     expect(noChart.hardFail).toBe(true);
   });
 
-  it("a weak reading is not a hard failure: only shorts, leakage, gas and a white getter are [CTP] brief §6", () => {
+  it("a weak reading is not a hard failure: only shorts, leakage, gas and a white getter are [CTP]", () => {
     const [g] = gradeAgainstNominal(SEED, "12AX7", [gm(1, [400, 420])]); // 25 % of new
     expect(g.grade).toBe("weak");
     expect(g.hardFail).toBe(false);
   });
 
-  it("a white getter rejects every reading of the item, as a hard failure [CTP] brief §6", () => {
+  it("a white getter rejects every reading of the item, as a hard failure [CTP]", () => {
     const graded = gradeAgainstNominal(SEED, "12AX7", [gm(1, [1_700, 1_650]), { tubeNo: 2, measure: "gm", sections: [1_600] }], true);
     expect(graded.map((g) => g.grade)).toEqual(["reject", "reject"]);
     expect(graded.every((g) => g.hardFail)).toBe(true);
@@ -177,15 +177,15 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP] brief 
   });
 
   // The fallback chart is a Gm chart value: it never grades a reading of another measure.
-  it("the Gm fallback chart is not used for an emission run [CTP] brief §6", () => {
+  it("the Gm fallback chart is not used for an emission run [CTP]", () => {
     const [g] = gradeAgainstNominal(SEED, "12AX7", [{ tubeNo: 1, measure: "emission", sections: [70] }], false, CHART);
     expect(g.grade).toBe("not-graded");
     expect(g.chartNewValue).toBeNull();
   });
 });
 
-describe("weighItem: maker misattributed [SUG, CTP-informed] brief §8", () => {
-  it("the buyer's source code belongs to another maker → supports, as evidence not proof [EIA-476] brief §5", () => {
+describe("weighItem: maker misattributed [SUG, CTP-informed]", () => {
+  it("the buyer's source code belongs to another maker → supports, as evidence not proof [EIA-476]", () => {
     const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[PELLHAM] }), PROFILES, { listing: null, buyer: PELLHAM });
     expect(w.verdict).toBe("supports");
     expect(w.position).toBe(3);
@@ -210,7 +210,7 @@ describe("weighItem: maker misattributed [SUG, CTP-informed] brief §8", () => {
     expect(w.findings.some((f) => /But the buyer's own construction/.test(f))).toBe(false);
   });
 
-  it("a code for another maker against the buyer's own high-confidence construction for the listed maker → both findings given [EIA-476] brief §5", () => {
+  it("a code for another maker against the buyer's own high-confidence construction for the listed maker → both findings given [EIA-476]", () => {
     const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[PELLHAM], features: HABITS[KESTREL] }), PROFILES, { listing: null, buyer: PELLHAM });
     expect(w.buyer.ranking.candidates[0]).toMatchObject({ makerName: KESTREL, confidence: "high" });
     expect(w.verdict).not.toBe("supports");
@@ -237,7 +237,7 @@ describe("weighItem: maker misattributed [SUG, CTP-informed] brief §8", () => {
     const w = weighItem(SEED, "maker-misattributed", listing(), report({ features: HABITS[PELLHAM] }), PROFILES, noCodes);
     const [top] = w.buyer.ranking.candidates;
     expect(top.makerName).toBe(PELLHAM);
-    expect(top.confidence).toBe("high"); // every recorded feature matches, many sub-assemblies [CTP] brief §1
+    expect(top.confidence).toBe("high"); // every recorded feature matches, many sub-assemblies [CTP]
     const kestrel = w.buyer.ranking.candidates.find((c) => c.makerName === KESTREL)!;
     expect(kestrel.conflicting).toEqual(expect.arrayContaining(["plateColour", "getterShape", "getterPosition"]));
     expect(w.verdict).toBe("supports");
@@ -258,7 +258,7 @@ describe("weighItem: maker misattributed [SUG, CTP-informed] brief §8", () => {
     expect(w.findings[0]).toContain(`ranks ${KESTREL} first (high confidence), as listed`);
   });
 
-  it("a single feature gives only low confidence → inconclusive [CTP] brief §1", () => {
+  it("a single feature gives only low confidence → inconclusive [CTP]", () => {
     const w = weighItem(SEED, "maker-misattributed", listing(), report({ features: { plateSurface: "dimpled" } }), PROFILES, noCodes);
     expect(w.buyer.ranking.candidates[0]).toMatchObject({ makerName: PELLHAM, confidence: "low" });
     expect(w.verdict).toBe("inconclusive");
@@ -272,7 +272,7 @@ describe("weighItem: maker misattributed [SUG, CTP-informed] brief §8", () => {
     expect(w.findings[0]).toMatch(/no construction features or codes/);
   });
 
-  it("a line listed with no maker → does not support: a label is no attribution [CTP] brief §1, §8.1", () => {
+  it("a line listed with no maker → does not support: a label is no attribution [CTP]", () => {
     const w = weighItem(SEED, "maker-misattributed", listing({ makerName: null, makerBasis: "unconfirmed" }), report({ features: HABITS[PELLHAM] }), PROFILES, { listing: null, buyer: PELLHAM });
     expect(w.verdict).toBe("does-not-support");
     expect(w.findings[0]).toMatch(/named no maker/);
@@ -296,7 +296,7 @@ describe("weighItem: maker misattributed [SUG, CTP-informed] brief §8", () => {
   });
 });
 
-describe("weighItem: undisclosed vacuum loss [CTP] brief §6 white getter = air leak", () => {
+describe("weighItem: undisclosed vacuum loss [CTP] white getter = air leak", () => {
   it("the listing disclosed the white getter → does not support", () => {
     const w = weighItem(SEED, "undisclosed-vacuum-loss", listing({ vacuumLoss: true }), report({ vacuumLoss: true }), PROFILES, noCodes);
     expect(w.verdict).toBe("does-not-support");
@@ -320,11 +320,11 @@ describe("weighItem: undisclosed vacuum loss [CTP] brief §6 white getter = air 
   });
 });
 
-describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disputes", () => {
+describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () => {
   // Listed tube 1: sections 1,700 / 1,650 of 1,600 → weakest 103 % → strong.
   const strongListing = listing({ readings: [gm(1, [1_700, 1_650])] });
 
-  it("testers may differ by 15 points before a lower reading counts [CTP] brief §8 ±10–15 %, generous end [SUG]", () => {
+  it("testers may differ by 15 points before a lower reading counts [CTP] ±10–15 %, generous end [SUG]", () => {
     expect(TESTER_VARIATION_PCT).toBe(15);
   });
 
@@ -336,13 +336,13 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
     expect(w.findings).toContain("Tube 1: listed strong (100 % of new or more); the buyer reads 56 %, more than 15 points below the band.");
   });
 
-  it("listed strong, buyer reads fair at 75 %, more than 15 below the 100 % floor → supports [brief §9.20]", () => {
+  it("listed strong, buyer reads fair at 75 %, more than 15 below the 100 % floor → supports [CTP]", () => {
     const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_200, 1_250])] }), PROFILES, noCodes);
-    expect(w.buyer.readings[0].grade).toBe("fair"); // 75 % [brief §9.20]
+    expect(w.buyer.readings[0].grade).toBe("fair"); // 75 % [CTP]
     expect(w.verdict).toBe("supports");
   });
 
-  it("the edge of the allowance: listed strong, 85 % does not support, 84.9 % does [CTP] brief §8", () => {
+  it("the edge of the allowance: listed strong, 85 % does not support, 84.9 % does [CTP]", () => {
     const at = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_360, 1_400])] }), PROFILES, noCodes); // 1,360 / 1,600 = 85.0 %
     expect(at.buyer.readings[0].worstPercentOfNew).toBe(85);
     expect(at.verdict).toBe("does-not-support");
@@ -350,7 +350,7 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
     expect(below.verdict).toBe("supports");
   });
 
-  it("listed fair (floor 60 %): 45 % does not support, 44 % does [CTP] brief §6, §8", () => {
+  it("listed fair (floor 60 %): 45 % does not support, 44 % does [CTP]", () => {
     const fairListing = listing({ readings: [gm(1, [1_000, 1_050])] }); // 62.5 % → fair
     const at = weighItem(SEED, "readings-not-as-listed", fairListing, report({ readings: [gm(1, [720, 760])] }), PROFILES, noCodes); // 45 %
     expect(at.listing.readings[0].grade).toBe("fair");
@@ -360,21 +360,21 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
     expect(below.findings[0]).toBe("Tube 1: listed fair (60 % of new or more); the buyer reads 44 %, more than 15 points below the band.");
   });
 
-  it("listed weak: the band has no floor, so a lower reading alone does not support [CTP] brief §6", () => {
+  it("listed weak: the band has no floor, so a lower reading alone does not support [CTP]", () => {
     const weakListing = listing({ readings: [gm(1, [800, 850])] }); // 50 % → weak
     const w = weighItem(SEED, "readings-not-as-listed", weakListing, report({ readings: [gm(1, [160, 200])] }), PROFILES, noCodes); // 10 %
     expect(w.listing.readings[0].grade).toBe("weak");
     expect(w.verdict).toBe("does-not-support");
   });
 
-  it("listed strong, buyer finds a short → absolute failure → supports [CTP] brief §8", () => {
+  it("listed strong, buyer finds a short → absolute failure → supports [CTP]", () => {
     const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [], { shorts: true })] }), PROFILES, noCodes);
     expect(w.buyer.readings[0].grade).toBe("reject");
     expect(w.verdict).toBe("supports");
     expect(w.findings[0]).toMatch(/^Tube 1: listed strong, the buyer finds an absolute failure \(short/);
   });
 
-  it("listed strong, buyer finds gas even with a strong Gm → supports [CTP] brief §6 'any gas → reject regardless of Gm'", () => {
+  it("listed strong, buyer finds gas even with a strong Gm → supports [CTP] 'any gas → reject regardless of Gm'", () => {
     const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_650, 1_700], { gas: true })] }), PROFILES, noCodes);
     expect(w.verdict).toBe("supports");
     expect(w.findings[0]).toMatch(/absolute failure \(gas/);
@@ -394,14 +394,14 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
     expect(w.findings).toContain("1 tube reading(s) compared: none falls below its listed band by more than the 15 % testers differ by.");
   });
 
-  it("a buyer's reading without a chart value is graded on the listing's chart for the line [CTP] brief §6", () => {
+  it("a buyer's reading without a chart value is graded on the listing's chart for the line [CTP]", () => {
     const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [{ tubeNo: 1, measure: "gm", sections: [900, 950] }] }), PROFILES, noCodes);
     expect(w.buyer.readings[0].chartNewValue).toBe(1_600);
     expect(w.buyer.readings[0].grade).toBe("weak");
     expect(w.verdict).toBe("supports");
   });
 
-  it("a buyer's reading with its own chart value is graded on that chart, not the listing's [CTP] brief §4", () => {
+  it("a buyer's reading with its own chart value is graded on that chart, not the listing's [CTP]", () => {
     // Buyer's tester chart says 1,400 new: 1,200 → 85.7 % of new (against the listing's 1,600 it would be 75 %).
     const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_200, 1_250], { chartNewValue: 1_400 })] }), PROFILES, noCodes);
     expect(w.buyer.readings[0].chartNewValue).toBe(1_400);
@@ -409,7 +409,7 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
     expect(w.verdict).toBe("does-not-support");
   });
 
-  it("a listing reading without a chart value is not graded on the data sheet, so nothing is compared [CTP] brief §4", () => {
+  it("a listing reading without a chart value is not graded on the data sheet, so nothing is compared [CTP]", () => {
     const noChartListing = listing({ readings: [{ tubeNo: 1, measure: "gm", sections: [1_700, 1_650] }] });
     const w = weighItem(SEED, "readings-not-as-listed", noChartListing, report({ readings: [gm(1, [900, 950])] }), PROFILES, noCodes);
     expect(w.listing.readings[0].grade).toBe("not-graded");
@@ -432,7 +432,7 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
     expect(w.findings[0]).toBe("No tube has readings of the same measure, graded on a chart value, on both sides: nothing to compare like with like.");
   });
 
-  it("a failure the listing already disclosed is not a reading 'not as listed' [CTP] brief §8 test disputes", () => {
+  it("a failure the listing already disclosed is not a reading 'not as listed' [CTP] test disputes", () => {
     // Tube 2 was listed with a short (so listed as reject); the buyer finds the same short.
     const l = listing({ readings: [gm(1, [1_700, 1_650]), gm(2, [], { shorts: true })] });
     const w = weighItem(SEED, "readings-not-as-listed", l, report({ readings: [gm(2, [], { shorts: true })] }), PROFILES, noCodes);
@@ -443,7 +443,7 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
     expect(w2.verdict).toBe("does-not-support");
   });
 
-  it("an emission reading is never set against a Gm reading [CTP] brief §6", () => {
+  it("an emission reading is never set against a Gm reading [CTP]", () => {
     // Listing: Gm run, strong. Buyer: emission run at 50 % of its own chart → graded "weak".
     // The two are not comparable, so nothing is compared.
     const buyerEmission: TubeReading = { tubeNo: 1, measure: "emission", sections: [50], chartNewValue: 100 };
@@ -452,7 +452,7 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
     expect(w.verdict).toBe("inconclusive");
   });
 
-  it("one band lower can still fall far below the listed band: good at 99 % → 60 % supports [CTP] brief §8", () => {
+  it("one band lower can still fall far below the listed band: good at 99 % → 60 % supports [CTP]", () => {
     // Listed good (band 80–99 %); the buyer reads 60 %, 20 points below the band's floor,
     // beyond the ±10–15 % tester allowance, so a valid claim.
     const l = listing({ readings: [gm(1, [1_590, 1_585])] }); // 99.1 % → good
@@ -464,7 +464,7 @@ describe("weighItem: readings not as listed [CTP] brief §6 bands, §8 test disp
   });
 });
 
-describe("weighItem: wrong type [MEM] brief §3 equivalents, short count, transit damage", () => {
+describe("weighItem: wrong type [MEM] equivalents, short count, transit damage", () => {
   it("the buyer reads an unrelated designation → supports; the same one (any case) → does not", () => {
     const wrong = weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "12au7" }), PROFILES, noCodes);
     expect(wrong.verdict).toBe("supports");
@@ -474,24 +474,24 @@ describe("weighItem: wrong type [MEM] brief §3 equivalents, short count, transi
     expect(same.findings[0]).toBe("The buyer reads 12AX7, as listed.");
   });
 
-  it("an exact equivalent under another numbering (listed 12AX7, buyer reads ECC83) → does not support [MEM] brief §3, §9.1", () => {
+  it("an exact equivalent under another numbering (listed 12AX7, buyer reads ECC83) → does not support [MEM]", () => {
     const w = weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "ECC83" }), PROFILES, noCodes);
     expect(w.verdict).toBe("does-not-support");
-    expect(w.findings[0]).toBe("ECC83 is listed as an exact equivalent of 12AX7 [brief §3].");
+    expect(w.findings[0]).toBe("ECC83 is listed as an exact equivalent of 12AX7 [MEM].");
     const reverse = weighItem(SEED, "wrong-type", listing({ designation: "ECC83" }), report({ designationSeen: "12ax7" }), PROFILES, noCodes);
     expect(reverse.verdict).toBe("does-not-support");
   });
 
-  it("a premium or caveat equivalent is not the type listed → supports, naming the link [MEM] brief §3, §9.14", () => {
+  it("a premium or caveat equivalent is not the type listed → supports, naming the link [MEM]", () => {
     const premium = weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "7025" }), PROFILES, noCodes);
     expect(premium.verdict).toBe("supports");
     expect(premium.findings[0]).toBe("Listed as 12AX7; the buyer reads 7025 (a premium equivalent, not the type listed).");
     const caveat = weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "5751" }), PROFILES, noCodes);
-    expect(caveat.verdict).toBe("supports"); // µ 70 against 100: never "exact" [brief §9.14]
+    expect(caveat.verdict).toBe("supports"); // µ 70 against 100: never "exact" [MEM]
     expect(caveat.findings[0]).toContain("(a caveat equivalent, not the type listed)");
   });
 
-  it("near and different-heater relatives → supports, the link kind in words [brief §3, §9.2, §9.14]", () => {
+  it("near and different-heater relatives → supports, the link kind in words [PE]", () => {
     const near = weighItem(SEED, "wrong-type", listing({ designation: "6DJ8" }), report({ designationSeen: "6922" }), PROFILES, noCodes);
     expect(near.verdict).toBe("supports");
     expect(near.findings[0]).toBe("Listed as 6DJ8; the buyer reads 6922 (a near equivalent, not the type listed).");
@@ -535,7 +535,7 @@ describe("weighItem: wrong type [MEM] brief §3 equivalents, short count, transi
     expect(weighItem(SEED, "short-count", listing(), report({ tubesReceived: 0 }), PROFILES, noCodes).verdict).toBe("supports");
   });
 
-  it("transit damage → inconclusive: judged from photos and the carrier's record [CTP] brief §8", () => {
+  it("transit damage → inconclusive: judged from photos and the carrier's record [CTP]", () => {
     const w = weighItem(SEED, "transit-damage", listing(), report({ note: "two bulbs cracked" }), PROFILES, noCodes);
     expect(w.verdict).toBe("inconclusive");
     expect(w.findings[0]).toMatch(/photos and the carrier's record/);

@@ -1,6 +1,6 @@
 // Check values: our own rule [SUG] (lib/lots/comparables.ts): only single-family, single-condition
 // lots are comparables; price per tube = net hammer ÷ tubes, rounded half up. Type families follow
-// our equivalents table (12AX7 and ECC83 are one family [brief §3]). Lot data is invented.
+// our equivalents table (12AX7 and ECC83 are one family [MEM]). Lot data is invented.
 import { describe, expect, it } from "vitest";
 import { comparablesFromSoldLots, type SoldLine } from "@/lib/lots/comparables";
 import { estimateLot } from "@/lib/lots/estimate";
@@ -18,7 +18,7 @@ describe("comparables from our own sold lots [SUG]", () => {
     ]);
   });
 
-  it("lines under another name of the same type count as one family [brief §3: ECC83 = 12AX7]", () => {
+  it("lines under another name of the same type count as one family [MEM]", () => {
     const [c] = comparablesFromSoldLots(SEED, [line("b", 10_000, "12AX7", 3), line("b", 10_000, "ECC83", 3)]);
     expect(c?.typeFamily).toBe("12AX7");
     expect(c?.pricePerTubeCents).toBe(1_667); // 10,000 ÷ 6 = 1,666.67 → half up

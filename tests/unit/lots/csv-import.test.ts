@@ -5,7 +5,7 @@ import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
 const SEED = seedReferenceTable();
 
 // The CSV format is our own [SUG]; its rules are checked here, and the
-// domain values on the rows (NOS/NIB, grades) follow brief §6 [CTP].
+// domain values on the rows (NOS/NIB, grades) follow [CTP].
 
 describe("csvTemplate", () => {
   it("documents every column and parses cleanly", () => {

@@ -5,7 +5,7 @@ import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 
-// A small hand-built lot with worked numbers. Grade bands [CTP; brief §6]:
+// A small hand-built lot with worked numbers. Grade bands [CTP]:
 // ≥100 % strong, 80–99 % good, 60–79 % fair; any short → reject.
 
 function item(designation: string, quantity: number, extra: Partial<LotItem> = {}): LotItem {
@@ -29,7 +29,7 @@ const confirmed = { makerName: "Kestrel Valve Company", basis: "source-code-conf
 const byConstruction = { makerName: "Aldergrove Electron Works", basis: "construction-matched" as const };
 
 const LOT: LotItem[] = [
-  // 0: two 12AX7s; chart "new" 1600 on the reading. 1200/1600 = 75 % → fair [CTP; brief check 20]; 1650/1600 → strong.
+  // 0: two 12AX7s; chart "new" 1600 on the reading. 1200/1600 = 75 % → fair [CTP]; 1650/1600 → strong.
   item("12AX7", 2, { attributedMaker: byConstruction, readings: [gm(1, [1200, 1200], { chartNewValue: 1600 }), gm(2, [1700, 1650], { chartNewValue: 1600 })] }),
   // 1: an ECC83 with a short and no chart value → reject regardless of reading [CTP].
   item("ECC83", 1, { attributedMaker: confirmed, readings: [gm(1, [1600, 1600], { shorts: true })] }),

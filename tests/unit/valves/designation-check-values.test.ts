@@ -14,7 +14,7 @@ function decoded(input: string): DecodedDesignation {
 }
 const systems = (d: DecodedDesignation) => d.electrodes.map((e) => e.system);
 
-describe("brief 9 check values 1-10", () => {
+describe("designation check values [PE, LS53, MEM as tagged]", () => {
   it("9.1 ECC83: E 6.3 V, CC two signal triodes, 8 noval", () => {
     // [PE] European designation scheme
     const d = decoded("ECC83");

@@ -13,7 +13,7 @@ function decoded(input: string): DecodedDesignation {
 }
 
 describe("first letter = heater [PE]", () => {
-  // Values from the brief's heater table; test designations are built as
+  // Values from the European heater-letter table [PE]; test designations are built as
   // <letter>F80 (a signal pentode on noval) so only the letter varies.
   const voltage: [string, number, string][] = [
     ["A", 4, "voltage"],

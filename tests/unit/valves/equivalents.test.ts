@@ -21,7 +21,7 @@ function direction(from: string, to: string) {
   return findEquivalents(from).matches.find((m) => m.designation === to)?.direction;
 }
 
-describe("brief 9 check values", () => {
+describe("check values, each with its source tag", () => {
   it("9.14 5751 <-> 12AX7 is a substitute with caveats, never exact", () => {
     // [MEM] 5751 µ 70 against 100
     expect(link("5751", "12AX7")).toBe("caveat");
@@ -64,7 +64,7 @@ describe("brief 9 check values", () => {
   });
 });
 
-describe("brief section 3 families [MEM]", () => {
+describe("equivalent families [MEM]", () => {
   const expected: [string, string, LinkKind][] = [
     // 12AX7 family
     ["12AX7", "ECC83", "exact"],

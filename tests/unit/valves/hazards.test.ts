@@ -21,7 +21,7 @@ describe("hazardsForType", () => {
   });
 
   it("mercury-vapour rectifiers: 83, 866A, 872A", () => {
-    // [MEM, verify] brief section 7
+    // [MEM, verify]
     for (const t of ["83", "866A", "872A"]) {
       const r = hazardsForType(SEED, t);
       const m = r.notices.find((n) => n.kind === "mercury-vapour");
@@ -84,7 +84,7 @@ describe("caution texts", () => {
     }
   });
 
-  it("state the brief's key facts", () => {
+  it("state the key facts [MEM, verify]", () => {
     // [MEM] UN2911 excepted packages; UN3506 mercury; heater-only warm-up; BeO dust
     expect(HAZARD_CAUTIONS.radioactive.caution).toMatch(/UN2911/);
     expect(HAZARD_CAUTIONS["mercury-vapour"].caution).toMatch(/UN3506/);

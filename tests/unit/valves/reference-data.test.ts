@@ -19,7 +19,7 @@ function amp(r: ReferenceType): Extract<NominalCharacteristics, { kind: "amplifi
   return r.characteristics;
 }
 
-describe("brief 9 check values", () => {
+describe("check values, each with its source tag", () => {
   it("9.8 12AX7 heater: 12.6 V 0.15 A or 6.3 V 0.3 A", () => {
     // [LS53; REG ✓]
     expect(row("12AX7").heater).toEqual({ volts: 12.6, amps: 0.15, tapped: { volts: 6.3, amps: 0.3 } });
@@ -58,7 +58,7 @@ describe("brief 9 check values", () => {
   });
 });
 
-describe("brief section 4 table", () => {
+describe("published nominal characteristics [REG, EU-DS, MIL-E-1 as tagged]", () => {
   type Expect = {
     heater: [number, number] | null;
     base: string;
@@ -71,7 +71,7 @@ describe("brief section 4 table", () => {
     ip?: number;
     rp?: number;
   };
-  // Values as printed in the brief, with its source column.
+  // Values with their source tags (lib/valves/sources.ts).
   const table: [string, Expect][] = [
     ["12AX7", { heater: [12.6, 0.15], base: "noval", plate: 250, grid: -2, mu: 100, gm: 1600, ip: 1.2, rp: 62500 }], // [REG ✓]
     ["ECC83", { heater: [12.6, 0.15], base: "noval", plate: 250, grid: -2, mu: 100, gm: 1600, ip: 1.2 }], // [REG ✓]
@@ -116,7 +116,7 @@ describe("brief section 4 table", () => {
     if (e.rp !== undefined) expect(c.rpOhms).toBe(e.rp);
   });
 
-  it("12AY7 µ lies in the brief's 40-44 range", () => {
+  it("12AY7 µ lies in the 40-44 range of secondary sources [REG MEM?]", () => {
     // [REG MEM?]
     const mu = amp(row("12AY7")).mu!;
     expect(mu).toBeGreaterThanOrEqual(40);
@@ -128,7 +128,7 @@ describe("brief section 4 table", () => {
     expect(row("0A2").characteristics).toEqual({ kind: "regulator", regulatedVolts: 150, currentRangeMa: [5, 30] });
   });
 
-  it("figures marked ≈ or ? in the brief are flagged approximate", () => {
+  it("figures marked ≈ or ? in our sources are flagged approximate", () => {
     for (const name of ["6550", "KT88", "EF86"]) expect(amp(row(name)).approximate, name).toBe(true);
     expect(row("5AR4").characteristics).toMatchObject({ kind: "rectifier", approximate: true });
   });

@@ -37,7 +37,7 @@ describe("validateSourceCodeFormat [EIA-476 registers: a registered three-digit 
     if (!result.ok) expect(result.reason).toMatch(reason);
   });
 
-  it("splits the joined sss-YYWW form [CTP, brief §5]", () => {
+  it("splits the joined sss-YYWW form [CTP]", () => {
     expect(splitJoinedCode("X46-5943")).toEqual({ sourcePart: "X46", datePart: "5943" });
     expect(splitJoinedCode("5943")).toBeNull();
   });
@@ -70,7 +70,7 @@ describe("lookupSourceCode", () => {
   });
 });
 
-describe("parseMakerRegistryCsv [RFC 4180 quoting]", () => {
+describe("parseMakerRegistryCsv [RFC-4180 quoting]", () => {
   it("reads rows with quoted commas, doubled quotes and line breaks inside quotes", () => {
     const text = [
       "code,maker_name,is_demo,notes",
