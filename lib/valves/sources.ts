@@ -105,13 +105,15 @@ const ROW_SOURCE = /^(?:([A-Z0-9-]+(?:\/[A-Z0-9-]+)*)(?: (✓|MEM\??))?|(MEM\??)
  * not in SOURCES.
  */
 export function parseRowSource(source: string): ParsedRowSource | undefined {
+  const bare = /^MEM(\?)?$/.exec(source.trim());
+  if (bare) return { tags: [], mark: bare[1] ? "memory-low" : "memory" };
   const m = ROW_SOURCE.exec(source.trim());
   if (!m) return undefined;
   if (m[3]) return { tags: [], mark: m[3] === "MEM?" ? "memory-low" : "memory" };
   const tags = m[1]!.split("/");
   if (!tags.every((t) => SOURCE_TAGS.includes(t))) return undefined;
   const mark = m[2] === "✓" ? "checked" : m[2] === "MEM" ? "memory" : m[2] === "MEM?" ? "memory-low" : "stated";
-  return { tags, mark: tags.length === 1 && tags[0] === "MEM" ? "memory" : mark };
+  return { tags, mark };
 }
 
 /** Plain words for a row source, for people: "REG, from memory (verify)". */

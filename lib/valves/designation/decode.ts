@@ -58,7 +58,9 @@ function heaterFromRow(s: StructuralDecode, row: ReferenceType, reasons: string[
   // ECC83 says 6.3 V, 12AX7 says 12.6 V: both are right for a tapped heater.
   const named = s.heater.volts;
   const matching = named === undefined ? undefined : configurations.find((c) => Math.abs(c.volts - named) <= 0.05);
-  if (named !== undefined && !matching) {
+  const range = s.heater.voltsRange;
+  const inClass = range !== undefined && configurations.some((c) => c.volts > range[0] && c.volts <= range[1]);
+  if (named !== undefined && !matching && !inClass) {
     reasons.push(`The designation suggests about ${named} V but the reference data gives ${h.volts} V; the data sheet wins ${tag}`);
   }
   if (s.heater.seriesCurrentMa !== undefined && Math.abs(s.heater.seriesCurrentMa - h.amps * 1000) > 1) {
