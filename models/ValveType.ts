@@ -1,5 +1,5 @@
 import {
-  DataTypes, Model, Op, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes, Model, Op, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type Transaction,
 } from "sequelize";
 import type { ReferenceType } from "../lib/valves/reference-row";
 
@@ -25,8 +25,8 @@ export class ValveType extends Model<InferAttributes<ValveType>, InferCreationAt
   }
 
   /** Find by designation or alias (already normalised), retired rows included. */
-  static findByName(name: string): Promise<ValveType | null> {
-    return ValveType.findOne({ where: { [Op.or]: [{ designation: name }, { aliases: { [Op.contains]: [name] } }] } });
+  static findByName(name: string, transaction?: Transaction): Promise<ValveType | null> {
+    return ValveType.findOne({ where: { [Op.or]: [{ designation: name }, { aliases: { [Op.contains]: [name] } }] }, transaction });
   }
 
   /** The rows on file (not retired), in designation order. */

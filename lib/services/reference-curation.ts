@@ -18,8 +18,7 @@ const split = (r: ReferenceType): { designation: string; aliases: string[]; sour
 async function takenNames(names: readonly string[], except: string | null, t: Transaction): Promise<string[]> {
   const taken: string[] = [];
   for (const name of names) {
-    const other = await ValveType.findByName(name);
-    void t;
+    const other = await ValveType.findByName(name, t);
     if (other && other.designation !== except) taken.push(`${name} (${other.designation})`);
   }
   return taken;
@@ -144,7 +143,7 @@ export async function importReferenceCsv(actorId: string, csv: string, apply: bo
       const taken = await takenNames(row.aliases, row.designation, t);
       if (taken.length) errors.push({ line, column: "aliases", message: `Already on file for another type: ${taken.join(", ")}` });
       if (!existing) {
-        const other = await ValveType.findByName(row.designation);
+        const other = await ValveType.findByName(row.designation, t);
         if (other) errors.push({ line, column: "designation", message: `${row.designation} is an alias of ${other.designation}` });
       }
       const next = existing ? merge(existing.toReference(), row, parsed.columns) : row;
