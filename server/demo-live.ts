@@ -123,8 +123,8 @@ async function ensureDemoClaim(): Promise<void> {
   const [line] = await db().query<{ id: string }>(`SELECT id FROM lot_items WHERE lot_id = :id AND position = 1`, { replacements: { id: lot.id }, type: QueryTypes.SELECT });
   const claim = await openDispute(buyer, inv.id, {
     reason: "maker-misattributed", remedy: "refund-affected-items",
-    statement: "Three of the six 12AX7s carry source code 946 and square top getters with dimpled grey plates: not the construction listed.",
-    items: [{ itemId: line!.id, tubes: 3, sourceCode: "946", dateCode: "6231", designationSeen: null, tubesReceived: null, vacuumLoss: false, features: { getterShape: "square", getterPosition: "top", plateSurface: "dimpled", plateColour: "grey" }, readings: [], note: "Tubes 4–6 in the carton." }],
+    statement: "Three of the six 12AX7s carry source code X46 and square top getters with dimpled grey plates: not the construction listed.",
+    items: [{ itemId: line!.id, tubes: 3, sourceCode: "X46", dateCode: "6231", designationSeen: null, tubesReceived: null, vacuumLoss: false, features: { getterShape: "square", getterPosition: "top", plateSurface: "dimpled", plateColour: "grey" }, readings: [], note: "Tubes 4–6 in the carton." }],
   });
   await postMessage(estate, claim.id, { body: "The cartons were marked that way on Mr Voss's bench; we listed what we were told.", stance: "contests" });
   console.log(`demo: claim ${claim.number} waits in the mediators' queue`);

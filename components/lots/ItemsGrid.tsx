@@ -6,8 +6,7 @@ import {
   rowSortingFeature, sortFn_alphanumeric, tableFeatures, useTable,
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
-import type { ItemView } from "@/lib/services/lots";
-import { typeFamily } from "@/lib/lots/type-family";
+import type { ItemView, LotItemView } from "@/lib/services/lots";
 import { CONDITION_VALUES } from "@/lib/validation/lots";
 import { BASIS_WORDS, CONDITION_WORDS, HAZARD_WORDS } from "./words";
 
@@ -29,7 +28,7 @@ const features = tableFeatures({
 const helper = createColumnHelper<typeof features, Row>();
 
 type Props = {
-  items: ItemView[];
+  items: LotItemView[];
   editable: boolean;
   onEdit?: (item: ItemView) => void;
   onRemove?: (item: ItemView) => void;
@@ -45,7 +44,7 @@ export function ItemsGrid({ items, editable, onEdit, onRemove, onQuickChange }: 
   const [filter, setFilter] = useState("");
   const [grouped, setGrouped] = useState(true);
   const data = useMemo<Row[]>(
-    () => items.map((i) => ({ ...i, family: typeFamily(i.designation).label, tested: i.readings.length })),
+    () => items.map((i) => ({ ...i, family: i.familyLabel, tested: i.readings.length })),
     [items],
   );
 

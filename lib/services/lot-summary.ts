@@ -5,11 +5,13 @@ import { readingsVsNominal, summariseLot, type ComparableSale, type LotSummary, 
 import type { HazardKind } from "../valves/index-types";
 import { db } from "../../models";
 import type { ItemView } from "./lots";
+import { currentReferenceTable } from "./reference-table";
+import type { ReferenceTable } from "../valves/reference-table";
 
 /** A stored item as the pure summary code reads it. */
-export function toDomainItem(i: ItemView): DomainItem {
+export function toDomainItem(table: ReferenceTable, i: ItemView): DomainItem {
   return {
-    designation: describeDesignation(i.designationTyped),
+    designation: describeDesignation(table, i.designationTyped),
     quantity: i.quantity,
     labelBrand: i.labelBrand || null,
     attributedMaker: { makerName: i.makerName, basis: i.makerBasis },
@@ -54,12 +56,13 @@ async function readComparableSales(): Promise<ComparableSale[]> {
       ORDER BY i.created_at DESC LIMIT 20000`,
     { type: QueryTypes.SELECT },
   );
-  return comparablesFromSoldLots(rows.map((r) => ({ lotId: r.lot_id, netHammerCents: Number(r.net), soldAt: r.sold_at.toISOString(), designation: r.designation, condition: r.condition, quantity: r.quantity })));
+  return comparablesFromSoldLots(await currentReferenceTable(), rows.map((r) => ({ lotId: r.lot_id, netHammerCents: Number(r.net), soldAt: r.sold_at.toISOString(), designation: r.designation, condition: r.condition, quantity: r.quantity })));
 }
 
 /** The summary dealers read first, and the points for the readings-against-nominal chart. */
 export async function summaryFor(items: ItemView[]): Promise<{ summary: LotSummary; chart: NominalPoint[] }> {
-  const domain = items.map(toDomainItem);
-  const summary = summariseLot(domain, { comparables: await comparableSales(), tolerancePct: 5 });
-  return { summary, chart: readingsVsNominal(domain) };
+  const reference = await currentReferenceTable();
+  const domain = items.map((i) => toDomainItem(reference, i));
+  const summary = summariseLot(domain, { reference, comparables: await comparableSales(), tolerancePct: 5 });
+  return { summary, chart: readingsVsNominal(reference, domain) };
 }
