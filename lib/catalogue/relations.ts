@@ -6,6 +6,7 @@
 import { normaliseDesignation } from "../valves/designation/normalise";
 import { isKnownDesignation } from "../valves/designation/known-names";
 import { findEquivalents, type LinkKind } from "../valves/equivalents";
+import type { ReferenceTable } from "../valves/reference-table";
 
 /** How an item's type relates to the searched type: the same type, or one of the equivalents table's links. */
 export type Relation = "same" | LinkKind;
@@ -30,12 +31,12 @@ export type DesignationTerm = { typed: string; designation: string; related: Rea
  * know (it is then searched as words). Only a whole term that normalises to a known type counts, so "voss"
  * never becomes a type, and "ecc 83" is one type, not two words.
  */
-export function designationTerm(typed: string): DesignationTerm | null {
+export function designationTerm(typed: string, table: ReferenceTable): DesignationTerm | null {
   const n = normaliseDesignation(typed);
   if (!n.ok) return null;
   const eq = findEquivalents(n.value);
   const self = eq.resolvedAs ?? n.value;
-  if (!isKnownDesignation(n.value) && !isKnownDesignation(self) && eq.matches.length === 0) return null;
+  if (!isKnownDesignation(table, n.value) && !isKnownDesignation(table, self) && eq.matches.length === 0) return null;
   const related = new Map<string, Relation>([[self, "same"], [n.value, "same"]]);
   for (const m of eq.matches) if (!related.has(m.designation)) related.set(m.designation, m.link);
   return { typed, designation: self, related };

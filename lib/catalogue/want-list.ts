@@ -3,6 +3,7 @@
  * no white getters, estimate under $200"). Which designations a list wants, and whether a lot meets it. Pure.
  */
 import type { AttributionBasis, ItemCondition } from "../lots/item";
+import type { ReferenceTable } from "../valves/reference-table";
 import { designationTerm, relationRank, type Relation } from "./relations";
 
 /** How far from the type a list reaches: each step takes in the looser relations before it. */
@@ -28,8 +29,8 @@ export type WantCriteria = {
 };
 
 /** Every designation the list wants, each with its relation to the list's type; empty when the type is unknown. */
-export function wantedDesignations(c: Pick<WantCriteria, "designation" | "closeness">): Map<string, Relation> {
-  const term = designationTerm(c.designation);
+export function wantedDesignations(c: Pick<WantCriteria, "designation" | "closeness">, table: ReferenceTable): Map<string, Relation> {
+  const term = designationTerm(c.designation, table);
   const out = new Map<string, Relation>();
   if (!term) return out;
   const reach = relationRank(c.closeness);

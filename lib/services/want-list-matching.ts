@@ -8,6 +8,7 @@ import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
 import { db } from "../../models";
 import { notify } from "./notices";
+import { currentReferenceTable } from "./reference-table";
 
 /** Why a lot is matched: it became visible, or it was offered in a sale. */
 export type MatchReason = "approved" | "scheduled";
@@ -49,8 +50,9 @@ export async function matchLotToWantLists(lotId: string): Promise<string[]> {
     { replacements: { designations, estLow: lot.estimate_low_cents }, type: QueryTypes.SELECT },
   );
   const hits: { id: string; dealerId: string; summary: string }[] = [];
+  const table = await currentReferenceTable();
   for (const c of candidates) {
-    const { matched, tubes } = meetsWantList(c.criteria, wantedDesignations(c.criteria), { estimateLowCents: lot.estimate_low_cents, items });
+    const { matched, tubes } = meetsWantList(c.criteria, wantedDesignations(c.criteria, table), { estimateLowCents: lot.estimate_low_cents, items });
     if (matched) hits.push({ id: c.id, dealerId: c.dealer_id, summary: `"${lot.title}": ${tubes} tube${tubes === 1 ? "" : "s"} for your want list "${c.name}"`.slice(0, 300) });
   }
   if (!hits.length) return [];

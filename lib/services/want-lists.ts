@@ -5,6 +5,7 @@ import { ApiError } from "../api/errors";
 import { wantedDesignations, type WantCriteria } from "../catalogue/want-list";
 import { MAX_WANT_LISTS, type WantListCreateInput } from "../validation/want-lists";
 import { db } from "../../models";
+import { currentReferenceTable } from "./reference-table";
 
 export type WantList = { id: string; name: string; criteria: WantCriteria; designations: string[]; paused: boolean; createdAt: string; hits: number; lastHitAt: string | null };
 
@@ -32,8 +33,8 @@ export async function listWantLists(viewer: Viewer): Promise<WantList[]> {
  */
 export async function createWantList(viewer: Viewer, input: WantListCreateInput): Promise<WantList> {
   const criteria: WantCriteria = { ...input.criteria };
-  const wanted = [...wantedDesignations(criteria).keys()];
-  if (!wanted.length) throw new ApiError("validation_failed", "Not a type we know", { "criteria.designation": "Not a type we know: check the designation" });
+  const wanted = [...wantedDesignations(criteria, await currentReferenceTable()).keys()];
+  if (!wanted.length) throw new ApiError("validation_failed", "Not a type we know", { "criteria.designation": "Not a type we know: check the designation, or ask the house to add it to the reference" });
   const id = randomUUID();
   await db().transaction(async (t) => {
     await db().query(`SELECT pg_advisory_xact_lock(hashtext('want-lists:' || :me))`, { replacements: { me: viewer.id }, transaction: t });

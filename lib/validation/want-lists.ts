@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { CLOSENESS } from "../catalogue/want-list";
-import { designationTerm } from "../catalogue/relations";
+import { normaliseDesignation } from "../valves/designation/normalise";
 import { BASIS_VALUES, CONDITION_VALUES } from "./lots";
 
 /** How many want lists one dealer may keep: enough for any buying plan, few enough to read. */
@@ -8,7 +8,7 @@ export const MAX_WANT_LISTS = 100;
 
 export const WantCriteriaSchema = z.object({
   designation: z.string().trim().min(1, "Name the type you want").max(40)
-    .refine((d) => designationTerm(d) !== null, "Not a type we know: check the designation (e.g. 12AX7, ECC83, 6SN7GT)"),
+    .refine((d) => normaliseDesignation(d).ok, "Not a designation: check it (e.g. 12AX7, ECC83, 6SN7GT)"),
   closeness: z.enum(CLOSENESS).default("exact"),
   minQuantity: z.coerce.number().int().min(1, "At least 1 tube").max(10_000).default(1),
   conditions: z.array(z.enum(CONDITION_VALUES)).max(3).default([]),

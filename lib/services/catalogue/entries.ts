@@ -4,6 +4,7 @@ import { summariseLot } from "../../lots/summary";
 import { db, LotItem } from "../../../models";
 import { toDomainItem } from "../lot-summary";
 import { presentItem } from "../lots";
+import { currentReferenceTable } from "../reference-table";
 import { consignorRecord } from "../track-record";
 
 type LotRow = {
@@ -30,8 +31,9 @@ export async function refreshCatalogueEntry(lotId: string, t?: Transaction): Pro
     await db().query(`DELETE FROM catalogue_entries WHERE lot_id = :lotId`, { replacements: { lotId }, transaction: t });
     return;
   }
-  const items = (await LotItem.findAll({ where: { lotId }, order: [["position", "ASC"]], transaction: t })).map(presentItem).map(toDomainItem);
-  const a = aggregateLot(items, summariseLot(items, { comparables: [] }));
+  const reference = await currentReferenceTable();
+  const items = (await LotItem.findAll({ where: { lotId }, order: [["position", "ASC"]], transaction: t })).map(presentItem).map((i) => toDomainItem(reference, i));
+  const a = aggregateLot(items, summariseLot(items, { reference, comparables: [] }));
   const stage = lot.phase === "sold" ? "sold" : lot.phase === "open" ? "in-sale" : "listed";
   const record = await consignorRecord(lot.consignor_id);
   await db().query(

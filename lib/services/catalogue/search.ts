@@ -4,6 +4,7 @@ import { decodeCursor, encodeCursor, type CatalogueSort, type Cursor } from "../
 import { designationTerm, RELATION_ORDER, relationRank, type DesignationTerm, type Relation } from "../../catalogue/relations";
 import type { CatalogueQuery, CatalogueStatus } from "../../validation/catalogue";
 import { db } from "../../../models";
+import { currentReferenceTable } from "../reference-table";
 import { catalogueFacets, type CatalogueFacets } from "./facets";
 import { filterSql, type SqlPart } from "./filters";
 
@@ -87,7 +88,7 @@ function statusOf(r: Pick<Row, "stage" | "sale_starts_at">, now: number): Catalo
  * counts over the whole result. Reserves, maximum bids and consignors' details are never read here.
  */
 export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueResult> {
-  const term = query.q ? designationTerm(query.q) : null;
+  const term = query.q ? designationTerm(query.q, await currentReferenceTable()) : null;
   const sort: CatalogueSort = query.sort ?? (query.q ? "relevance" : "newest");
   const cursor = query.cursor ? decodeCursor(query.cursor, sort) : null;
   if (query.cursor && !cursor) throw new ApiError("bad_request", "That page link is not valid (the cursor is malformed or for another sort): start the search again", { cursor: "Not a valid cursor" });
