@@ -119,7 +119,7 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
         estimateLowCents: r.estimate_low_cents, estimateHighCents: r.estimate_high_cents,
         priceCents: status === "sold" ? r.hammer_cents : status === "live" ? r.live_price : null, bids: status === "live" ? r.live_bids : null,
         tubes: r.tubes, families: r.families, grades: r.grades, hazards: r.hazards, vacuumLossTubes: r.vacuum_loss_tubes, pairs: r.pairs, quads: r.quads,
-        thumbnail: r.thumb_photo_id ? `/api/photos/${r.thumb_photo_id}?size=thumb` : null,
+        thumbnail: r.thumb_photo_id ? `/api/photos/${r.thumb_photo_id}?size=list` : null,
         saleLotId: status === "live" || status === "upcoming" ? r.sale_lot_id : null, saleId: status === "live" || status === "upcoming" ? r.sale_id : null,
         matches: matches.get(r.lot_id) ?? [],
       };
