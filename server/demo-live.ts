@@ -15,6 +15,7 @@ import { addItem, createLot } from "../lib/services/lots";
 import { createSale } from "../lib/services/sales";
 import type { ItemInput } from "../lib/validation/lots";
 import { db, User } from "../models";
+import { ensureDemoCatalogue, pictureDemoLot } from "./demo-catalogue";
 
 const SIMULATED = ["bellweather@dealer.getterline.test", "northbank@dealer.getterline.test", "sablehill@dealer.getterline.test"];
 const LOCK_KEY = 7_331_001; // advisory lock: one instance runs the demo life
@@ -71,6 +72,8 @@ async function ensureDemoSale(): Promise<void> {
     const c = await viewer(spec.consignor);
     const lot = await createLot(c, { title: spec.title, provenance: "Demo lot (invented).", shippingOrigin: "Demo county", testerKind: "mutual-conductance", testerNotes: "" });
     for (const it of spec.items) await addItem(c, lot.id, item(it));
+    const first = spec.items[0]!;
+    await pictureDemoLot(c, lot.id, first.designation!, spec.items.reduce((n, i) => n + (i.quantity ?? 1), 0), first.labelBrand ?? "");
     await submitLot(c, lot.id);
     await decideLot(admin, lot.id, { action: "approve", comment: "Demo lot", estimateLowCents: spec.estimate[0], estimateHighCents: spec.estimate[1], reserveCents: spec.reserve, reserveAgreed: true });
     lots.push({ lotId: lot.id, openingCents: spec.opening });
@@ -153,7 +156,8 @@ export async function startDemoLife(): Promise<() => void> {
   const [got] = await db().query<{ ok: boolean }>(`SELECT pg_try_advisory_lock(${LOCK_KEY}) AS ok`, { type: QueryTypes.SELECT });
   if (!got?.ok) return () => undefined;
   await ensureDemoSale();
-  void ensureDemoClaim().catch((e: Error) => console.error("[demo] claim story failed", e.message));
+  void ensureDemoClaim().catch((e: Error) => console.error("[demo] claim story failed", e.message))
+    .then(() => ensureDemoCatalogue(viewer)).catch((e: Error) => console.error("[demo] catalogue failed", e.message));
   const bidders = await Promise.all(SIMULATED.map(viewer));
   let stopped = false;
   const tick = () => {
