@@ -1,7 +1,9 @@
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { PriceHistory } from "@/components/catalogue/PriceHistory";
+import { LocalTime } from "@/components/LocalTime";
 import { LotView } from "@/components/lots/LotView";
+import { formatCents } from "@/lib/money/cents";
 import { ApiError } from "@/lib/api/errors";
 import { currentViewer } from "@/lib/auth/guards";
 import { priceHistoryForFamilies } from "@/lib/services/catalogue/price-history";
@@ -27,12 +29,16 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
   });
   const [{ summary, chart }, record, sale] = await Promise.all([summaryFor(data.items), consignorRecord(data.lot.consignorId), saleLotOf(id)]);
   const history = await priceHistoryForFamilies(summary.families.map((f) => f.key));
-  const actions = sale && sale.phase === "open" ? (
+  const actions = sale?.phase === "open" ? (
     <p className="card flex flex-wrap items-center gap-3 text-sm">
       This lot is offered in <strong>{sale.saleTitle}</strong>.
       {viewer ? <Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="btn-primary">Go to bidding</Link>
         : <Link href={`/sign-in?from=${encodeURIComponent(`/lots/${id}`)}`} className="btn-primary">Sign in to bid</Link>}
     </p>
+  ) : sale?.phase === "sold" ? (
+    <p className="card text-sm" data-testid="lot-outcome">Sold in <strong>{sale.saleTitle}</strong>{sale.hammerCents != null ? <> for <strong className="code">{formatCents(sale.hammerCents)}</strong></> : null}{sale.closedAt ? <> on <LocalTime iso={sale.closedAt} /></> : null}.</p>
+  ) : sale ? (
+    <p className="card text-sm" data-testid="lot-outcome">Offered in <strong>{sale.saleTitle}</strong>; it closed unsold.</p>
   ) : !viewer ? (
     <p className="card text-sm"><Link href={`/sign-in?from=${encodeURIComponent(`/lots/${id}`)}`} className="font-medium underline underline-offset-4">Sign in</Link> to watch this lot and bid when it is offered.</p>
   ) : null;
