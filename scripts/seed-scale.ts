@@ -76,7 +76,8 @@ async function main(): Promise<void> {
   await c.query(`CREATE INDEX ON lot_seq (n)`);
   step(`${LOTS.toLocaleString("en")} lots`);
 
-  // Items: 1 to 19 lines per lot (10 on average); the bench's page lot (lot 1) has 120. Tested lots carry Gm readings.
+  // Items: 1 to 19 lines per lot (10 on average) of one to three types, as a drawer or a carton holds them; the
+  // bench's page lot (lot 1) has 120. Tested lots carry Gm readings.
   await c.query(`INSERT INTO lot_items (id, lot_id, position, designation_typed, designation, designation_known, quantity, label_brand, maker_name, maker_basis, source_code, date_code, features, condition, vacuum_loss, defects, hazards, readings, notes, created_at, updated_at)
     SELECT gen_random_uuid(), s.id, k, t.designation, t.designation, true, 1 + (s.n * k) % 4, 'Scale Label ' || (1 + s.n % 9), NULL,
            CASE WHEN (s.n + k) % 11 = 0 THEN 'construction-matched' ELSE 'unconfirmed' END, NULL, NULL, '{}'::jsonb,
@@ -85,7 +86,7 @@ async function main(): Promise<void> {
            '', now(), now()
       FROM lot_seq s
       CROSS JOIN LATERAL generate_series(1, CASE WHEN s.n = 1 THEN 120 ELSE 1 + (s.n * 13) % 19 END) k
-      JOIN types t ON t.n = 1 + ((s.n * 31 + k * 17) % ${typeCount})`);
+      JOIN types t ON t.n = 1 + ((s.n * 31 + (k % (1 + s.n % 3)) * 17) % ${typeCount})`);
   // Tested lines are single tubes (one reading each).
   await c.query(`UPDATE lot_items SET quantity = 1 WHERE jsonb_array_length(readings) > 0`);
   const items = Number((await c.query(`SELECT COUNT(*) AS n FROM lot_items`)).rows[0].n);

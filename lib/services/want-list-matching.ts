@@ -28,14 +28,26 @@ export async function requestWantListMatch(lotId: string, reason: MatchReason): 
 }
 
 type LotRow = { id: string; title: string; state: string; estimate_low_cents: number | null };
+export type WantListHit = { id: string; dealerId: string; summary: string };
+
+/** A list's wanted designations depend only on its type, reach and the reference table: worked out once each. */
+const wantedMemo = new Map<string, ReturnType<typeof wantedDesignations>>();
+function wantedFor(c: WantCriteria, table: Awaited<ReturnType<typeof currentReferenceTable>>) {
+  const key = `${table.revision}|${c.designation}|${c.closeness}`;
+  let w = wantedMemo.get(key);
+  if (!w) {
+    if (wantedMemo.size > 5_000) wantedMemo.clear();
+    w = wantedDesignations(c, table);
+    wantedMemo.set(key, w);
+  }
+  return w;
+}
 
 /**
- * Match one lot against every active want list: candidates by an indexed overlap of designations, then each
- * list's own rule (quantity, condition, basis, white getters, estimate). A hit is recorded once per lot per
- * list (primary key), so concurrent or repeated runs notify once; each new hit is an in-app notice at once,
- * and the dealer's daily digest carries it by e-mail. Returns the want lists newly matched.
+ * The want lists a lot meets: candidates by an indexed overlap of designations, then each list's own rule
+ * (quantity, condition, basis, white getters, estimate). Reads only.
  */
-export async function matchLotToWantLists(lotId: string): Promise<string[]> {
+export async function findWantListHits(lotId: string): Promise<WantListHit[]> {
   const [lot] = await db().query<LotRow>(`SELECT id, title, state, estimate_low_cents FROM lots WHERE id = :lotId`, { replacements: { lotId }, type: QueryTypes.SELECT });
   if (!lot || lot.state !== "approved") return [];
   const items = await db().query<ItemForMatching & { designation: string }>(
@@ -49,12 +61,22 @@ export async function matchLotToWantLists(lotId: string): Promise<string[]> {
       WHERE NOT paused AND designations && ARRAY[:designations]::varchar[] AND (max_estimate_cents IS NULL OR :estLow::int IS NULL OR max_estimate_cents >= :estLow::int)`,
     { replacements: { designations, estLow: lot.estimate_low_cents }, type: QueryTypes.SELECT },
   );
-  const hits: { id: string; dealerId: string; summary: string }[] = [];
+  const hits: WantListHit[] = [];
   const table = await currentReferenceTable();
   for (const c of candidates) {
-    const { matched, tubes } = meetsWantList(c.criteria, wantedDesignations(c.criteria, table), { estimateLowCents: lot.estimate_low_cents, items });
+    const { matched, tubes } = meetsWantList(c.criteria, wantedFor(c.criteria, table), { estimateLowCents: lot.estimate_low_cents, items });
     if (matched) hits.push({ id: c.id, dealerId: c.dealer_id, summary: `"${lot.title}": ${tubes} tube${tubes === 1 ? "" : "s"} for your want list "${c.name}"`.slice(0, 300) });
   }
+  return hits;
+}
+
+/**
+ * Match one lot against every active want list (findWantListHits) and record the hits: once per lot per list
+ * (primary key), so concurrent or repeated runs notify once; each new hit is an in-app notice at once, and the
+ * dealer's daily digest carries it by e-mail. Returns the want lists newly matched.
+ */
+export async function matchLotToWantLists(lotId: string): Promise<string[]> {
+  const hits = await findWantListHits(lotId);
   if (!hits.length) return [];
   const values = hits.map((_, i) => `(:w${i}, :lotId, :d${i}, :s${i}, now())`).join(", ");
   const replacements: Record<string, unknown> = { lotId };

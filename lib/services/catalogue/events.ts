@@ -1,6 +1,6 @@
 import { requestWantListMatch } from "../want-list-matching";
 import { refreshCatalogueEntry } from "./entries";
-import { forgetFacetCounts } from "./facets";
+import { ageFacetCounts } from "./facets";
 
 /** What happened to a lot that the catalogue should follow. */
 export type LotChange = "approved" | "amended" | "scheduled" | "closed" | "photos";
@@ -12,7 +12,7 @@ export type LotChange = "approved" | "amended" | "scheduled" | "closed" | "photo
  */
 export async function lotChanged(lotId: string, change: LotChange): Promise<void> {
   await refreshCatalogueEntry(lotId).catch((e: Error) => console.error(`[catalogue] refresh of ${lotId} failed`, e.message));
-  forgetFacetCounts();
+  ageFacetCounts();
   if (change === "approved" || change === "scheduled") {
     await requestWantListMatch(lotId, change).catch((e: Error) => console.error(`[want-lists] could not queue ${lotId}`, e.message));
   }

@@ -19,23 +19,32 @@ export type CatalogueFacets = {
   quads: number;
 };
 
-const TTL_MS = 20_000;
+const FRESH_MS = 20_000;
+const KEEP_MS = 10 * 60_000;
 const MAX_CACHED = 500;
-const cache = new Map<string, { at: number; facets: CatalogueFacets }>();
+const cache = new Map<string, { at: number; facets: Promise<CatalogueFacets> }>();
 
 /**
  * Facet counts for a search. The same filters give the same counts for every page of a result, so they are
- * kept for a few seconds per filter set (paging and sort do not change them).
+ * kept per filter set (paging and sort do not change them): fresh for 20 s, then served while a recount runs
+ * in the background (counts a few seconds old are good enough to choose a filter by; the lots themselves are
+ * always read fresh).
  */
 export async function catalogueFacets(query: CatalogueQuery, term: DesignationTerm | null): Promise<CatalogueFacets> {
   const { cursor: _c, sort: _s, limit: _l, ...filters } = query;
   const key = JSON.stringify(filters);
   const hit = cache.get(key);
-  if (hit && Date.now() - hit.at < TTL_MS) return hit.facets;
-  const facets = await countFacets(query, term);
+  const age = hit ? Date.now() - hit.at : Infinity;
+  if (hit && age < FRESH_MS) return hit.facets;
+  const fresh = countFacets(query, term);
+  fresh.catch(() => cache.delete(key));
   if (cache.size >= MAX_CACHED) cache.delete(cache.keys().next().value!);
-  cache.set(key, { at: Date.now(), facets });
-  return facets;
+  if (hit && age < KEEP_MS) {
+    void fresh.then((f) => cache.set(key, { at: Date.now(), facets: Promise.resolve(f) }), () => undefined);
+    return hit.facets;
+  }
+  cache.set(key, { at: Date.now(), facets: fresh });
+  return fresh;
 }
 
 async function countFacets(query: CatalogueQuery, term: DesignationTerm | null): Promise<CatalogueFacets> {
@@ -68,7 +77,13 @@ async function countFacets(query: CatalogueQuery, term: DesignationTerm | null):
   return f;
 }
 
-/** Forget every cached count (a lot was listed, scheduled, sold or changed). */
+/** A lot changed: every cached count is recounted at its next use (served once more meanwhile). */
+export function ageFacetCounts(): void {
+  const stale = Date.now() - FRESH_MS;
+  for (const v of cache.values()) v.at = Math.min(v.at, stale);
+}
+
+/** Forget every cached count (tests). */
 export function forgetFacetCounts(): void {
   cache.clear();
 }

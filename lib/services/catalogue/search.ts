@@ -96,6 +96,8 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
   const rank = rankSql(term, p);
   const { orderBy, after } = order(sort, cursor, p);
   const limit = p.bind(query.limit + 1);
+  const facetsPending = catalogueFacets(query, term); // counted alongside the page, not after it
+  facetsPending.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
   const rows = await db().query<Row>(
     `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
        FROM (SELECT * FROM (SELECT e.lot_id, e.title, e.stage, e.sale_lot_id, e.sale_starts_at, e.closes_at, e.sold_at, e.hammer_cents, e.listed_at,
@@ -108,7 +110,7 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
     { replacements: p.values, type: QueryTypes.SELECT },
   );
   const page = rows.slice(0, query.limit);
-  const [matches, facets] = await Promise.all([matchesFor(page.map((r) => r.lot_id), term), catalogueFacets(query, term)]);
+  const [matches, facets] = await Promise.all([matchesFor(page.map((r) => r.lot_id), term), facetsPending]);
   const now = Date.now();
   return {
     lots: page.map((r) => {
@@ -144,4 +146,10 @@ async function matchesFor(lotIds: string[], term: DesignationTerm | null): Promi
   }
   for (const ms of out.values()) ms.sort((a, b) => relationRank(a.relation) - relationRank(b.relation) || b.quantity - a.quantity);
   return out;
+}
+
+/** Count the broad searches once at start (every visitor's first page), so nobody waits for them. */
+export async function warmCatalogue(): Promise<void> {
+  const { CatalogueQuerySchema } = await import("../../validation/catalogue");
+  for (const status of [[], ["approved"], ["live", "upcoming"], ["sold"]] as const) await searchCatalogue(CatalogueQuerySchema.parse({ status }));
 }
