@@ -106,6 +106,25 @@ describe("paging and bad input", () => {
     expect([...seen].sort()).toEqual([...first].sort()); // nothing skipped; later lots start before the first page
   }, 60_000);
 
+  it("pages by relevance one lot at a time without repeating or skipping, closest relation first", async () => {
+    await listed("Relevance pager A", [{ designation: "12AX7", quantity: 2 }]);
+    await listed("Relevance pager B", [{ designation: "ECC83", quantity: 2 }]);
+    await listed("Relevance pager C", [{ designation: "7025", quantity: 1 }]);
+    const whole = (await search({ q: "ECC83" })).lots;
+    const paged: typeof whole = [];
+    let page = await search({ q: "ECC83", limit: 1 });
+    paged.push(...page.lots);
+    while (page.nextCursor) {
+      page = await search({ q: "ECC83", limit: 1, cursor: page.nextCursor });
+      paged.push(...page.lots);
+    }
+    expect(paged.map((l) => l.id)).toEqual(whole.map((l) => l.id));
+    const best = paged.map((l) => ["same", "exact", "premium", "near", "caveat", "sibling-heater", "different-base"].indexOf(l.matches[0]!.relation));
+    expect(best).toEqual([...best].sort((a, b) => a - b));
+    expect(paged[0]!.matches[0]!.relation).toBe("same");
+    expect(paged.some((l) => l.matches[0]!.relation === "premium")).toBe(true); // 7025, the low-noise 12AX7
+  }, 60_000);
+
   it("refuses an unknown filter, a malformed cursor, a 10 KB search and control characters with 400 in our error shape", async () => {
     const { GET } = await import("../../app/api/catalogue/route");
     const cases = [

@@ -49,22 +49,17 @@ export async function catalogueFacets(query: CatalogueQuery, term: DesignationTe
 
 async function countFacets(query: CatalogueQuery, term: DesignationTerm | null): Promise<CatalogueFacets> {
   const p = filterSql(query, term);
+  // One pass over the result: each lot yields a (facet, value) row per value it has; one hash aggregate counts them.
   const rows = await db().query<{ facet: string; value: string; n: string }>(
-    `WITH hits AS MATERIALIZED (
-       SELECT e.families, e.conditions, e.maker_bases, e.grades, e.hazards, e.tested, e.vacuum_loss_tubes, e.pairs, e.quads,
-              CASE WHEN e.stage = 'listed' THEN 'approved' WHEN e.stage = 'sold' THEN 'sold' WHEN e.sale_starts_at > now() THEN 'upcoming' ELSE 'live' END AS status
-         FROM catalogue_entries e WHERE ${p.where()})
-     SELECT 'total' AS facet, '' AS value, COUNT(*) AS n FROM hits
-     UNION ALL SELECT 'status', status, COUNT(*) FROM hits GROUP BY status
-     UNION ALL (SELECT 'family', v, COUNT(*) FROM hits, unnest(families) v GROUP BY v ORDER BY COUNT(*) DESC LIMIT 40)
-     UNION ALL SELECT 'condition', v, COUNT(*) FROM hits, unnest(conditions) v GROUP BY v
-     UNION ALL SELECT 'basis', v, COUNT(*) FROM hits, unnest(maker_bases) v GROUP BY v
-     UNION ALL SELECT 'grade', v, COUNT(*) FROM hits, unnest(grades) v GROUP BY v
-     UNION ALL SELECT 'hazard', v, COUNT(*) FROM hits, unnest(hazards) v GROUP BY v
-     UNION ALL SELECT 'flags', 'tested', COUNT(*) FILTER (WHERE tested) FROM hits
-     UNION ALL SELECT 'flags', 'noVacuumLoss', COUNT(*) FILTER (WHERE vacuum_loss_tubes = 0) FROM hits
-     UNION ALL SELECT 'flags', 'pairs', COUNT(*) FILTER (WHERE pairs > 0) FROM hits
-     UNION ALL SELECT 'flags', 'quads', COUNT(*) FILTER (WHERE quads > 0) FROM hits`,
+    `SELECT x.facet, x.value, COUNT(*) AS n
+       FROM catalogue_entries e CROSS JOIN LATERAL (
+              SELECT 'family' AS facet, unnest(e.families) AS value UNION ALL SELECT 'condition', unnest(e.conditions)
+              UNION ALL SELECT 'basis', unnest(e.maker_bases) UNION ALL SELECT 'grade', unnest(e.grades) UNION ALL SELECT 'hazard', unnest(e.hazards)
+              UNION ALL SELECT 'status', CASE WHEN e.stage = 'listed' THEN 'approved' WHEN e.stage = 'sold' THEN 'sold' WHEN e.sale_starts_at > now() THEN 'upcoming' ELSE 'live' END
+              UNION ALL SELECT 'flags', 'tested' WHERE e.tested UNION ALL SELECT 'flags', 'noVacuumLoss' WHERE e.vacuum_loss_tubes = 0
+              UNION ALL SELECT 'flags', 'pairs' WHERE e.pairs > 0 UNION ALL SELECT 'flags', 'quads' WHERE e.quads > 0 UNION ALL SELECT 'total', '') x
+      WHERE ${p.where()}
+      GROUP BY x.facet, x.value`,
     { replacements: p.values, type: QueryTypes.SELECT },
   );
   const f: CatalogueFacets = { total: 0, status: {}, family: {}, condition: {}, basis: {}, grade: {}, hazard: {}, tested: 0, noVacuumLoss: 0, pairs: 0, quads: 0 };
@@ -74,6 +69,7 @@ async function countFacets(query: CatalogueQuery, term: DesignationTerm | null):
     else if (r.facet === "flags") f[r.value as "tested" | "noVacuumLoss" | "pairs" | "quads"] = n;
     else (f[r.facet as "status"] as Record<string, number>)[r.value] = n;
   }
+  f.family = Object.fromEntries(Object.entries(f.family).sort(([, a], [, b]) => b - a).slice(0, 40)); // the 40 commonest families
   return f;
 }
 

@@ -33,7 +33,7 @@ const STATUS_SQL = {
 } as const;
 
 /** Words of a search as a prefix query: "voss carton" finds "Voss estate … cartons". */
-function wordsQuery(q: string): string | null {
+export function wordsQuery(q: string): string | null {
   const words = q.toLowerCase().split(/[^\p{L}\p{N}]+/u).filter((w) => w.length > 0).slice(0, 8);
   return words.length ? words.map((w) => `${w}:*`).join(" & ") : null;
 }
@@ -42,11 +42,11 @@ function wordsQuery(q: string): string | null {
  * The WHERE of a catalogue search (every filter but paging), shared by the result page and the facet counts:
  * a facet says how many lots of the current result have each value.
  */
-export function filterSql(q: CatalogueQuery, term: DesignationTerm | null): SqlPart {
+export function filterSql(q: CatalogueQuery, term: DesignationTerm | null, opts: { search?: boolean } = {}): SqlPart {
   const p = new SqlPart();
   const statuses = q.status.length ? q.status : (["approved", "upcoming", "live", "sold"] as const);
   p.and(`(${statuses.map((s) => STATUS_SQL[s]).join(" OR ")})`);
-  if (q.q) {
+  if (q.q && opts.search !== false) {
     const either: string[] = [];
     if (term) either.push(`e.designations && ARRAY[${p.bind([...term.related.keys()])}]::varchar[]`);
     const words = wordsQuery(q.q);

@@ -6,7 +6,7 @@ import type { CatalogueQuery, CatalogueStatus } from "../../validation/catalogue
 import { db } from "../../../models";
 import { currentReferenceTable } from "../reference-table";
 import { catalogueFacets, type CatalogueFacets } from "./facets";
-import { filterSql, type SqlPart } from "./filters";
+import { filterSql, wordsQuery, type SqlPart } from "./filters";
 
 export type CatalogueMatch = { designation: string; relation: Relation; quantity: number };
 export type CatalogueLot = {
@@ -24,31 +24,35 @@ type Row = {
   live_price: number | null; live_bids: number | null; live_closes_at: Date | null; sale_id: string | null;
 };
 
-/** Relevance: the closest relation any item has to the searched type; words alone come after every type match. */
-function rankSql(term: DesignationTerm | null, p: SqlPart): string {
-  if (!term) return "0";
-  const cases: string[] = [];
+type Tier = { rank: number; where: (p: SqlPart) => string };
+
+/**
+ * Relevance, as tiers read in order: lots whose closest item is the searched type, then the same type under
+ * another name, then each looser relation, then lots found by words alone; newest first within a tier. Each
+ * tier is one query the newest-first index can serve, so a common type costs no more than a rare one.
+ */
+function relevanceTiers(term: DesignationTerm, words: string | null): Tier[] {
+  const tiers: Tier[] = [];
+  const closer: string[] = [];
   for (const r of RELATION_ORDER) {
     const names = [...term.related].filter(([, rel]) => rel === r).map(([d]) => d);
     if (!names.length) continue;
-    cases.push(`WHEN e.designations && ARRAY[${p.bind(names)}]::varchar[] THEN ${relationRank(r)}`);
+    const before = [...closer];
+    tiers.push({ rank: relationRank(r), where: (p) => `e.designations && ARRAY[${p.bind(names)}]::varchar[]${before.length ? ` AND NOT e.designations && ARRAY[${p.bind(before)}]::varchar[]` : ""}` });
+    closer.push(...names);
   }
-  return cases.length ? `CASE ${cases.join(" ")} ELSE 9 END` : "9";
+  if (words) tiers.push({ rank: 9, where: (p) => `e.search_tsv @@ to_tsquery('simple', ${p.bind(words)}) AND NOT e.designations && ARRAY[${p.bind(closer)}]::varchar[]` });
+  return tiers;
 }
 
 const US = (col: string) => `(extract(epoch from ${col}) * 1000000)::bigint`;
 const AT = (param: string) => `('epoch'::timestamptz + (${param} || ' microseconds')::interval)`;
 
-/** ORDER BY and the keyset condition after a cursor, per sort. */
-function order(sort: CatalogueSort, cursor: Cursor | null, p: SqlPart): { orderBy: string; after: string } {
+/** ORDER BY and the keyset condition after a cursor, per index-ordered sort (relevance is read in tiers). */
+function order(sort: Exclude<CatalogueSort, "relevance">, cursor: Cursor | null, p: SqlPart): { orderBy: string; after: string } {
   const id = cursor ? p.bind(cursor.id) : "";
-  const [k0, k1] = cursor?.k ?? [];
+  const [k0] = cursor?.k ?? [];
   switch (sort) {
-    case "relevance":
-      return {
-        orderBy: "rank, listed_at DESC, lot_id DESC",
-        after: cursor ? `(rank > ${p.bind(k0)} OR (rank = ${p.bind(k0)} AND (listed_at, lot_id) < (${AT(p.bind(String(k1)))}, ${id}::uuid)))` : "",
-      };
     case "newest":
       return { orderBy: "listed_at DESC, lot_id DESC", after: cursor ? `(listed_at, lot_id) < (${AT(p.bind(String(k0)))}, ${id}::uuid)` : "" };
     case "closing":
@@ -92,23 +96,9 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
   const sort: CatalogueSort = query.sort ?? (query.q ? "relevance" : "newest");
   const cursor = query.cursor ? decodeCursor(query.cursor, sort) : null;
   if (query.cursor && !cursor) throw new ApiError("bad_request", "That page link is not valid (the cursor is malformed or for another sort): start the search again", { cursor: "Not a valid cursor" });
-  const p = filterSql(query, term);
-  const rank = rankSql(term, p);
-  const { orderBy, after } = order(sort, cursor, p);
-  const limit = p.bind(query.limit + 1);
   const facetsPending = catalogueFacets(query, term); // counted alongside the page, not after it
   facetsPending.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
-  const rows = await db().query<Row>(
-    `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
-       FROM (SELECT * FROM (SELECT e.lot_id, e.title, e.stage, e.sale_lot_id, e.sale_starts_at, e.closes_at, e.sold_at, e.hammer_cents, e.listed_at,
-                                   e.estimate_low_cents, e.estimate_high_cents, e.tubes, e.families, e.grades, e.hazards, e.vacuum_loss_tubes, e.pairs, e.quads,
-                                   e.thumb_photo_id, ${rank} AS rank, ${US("e.listed_at")} AS listed_us, ${US("e.closes_at")} AS closes_us
-                              FROM catalogue_entries e WHERE ${p.where()}) x
-              ${after ? `WHERE ${after}` : ""} ORDER BY ${orderBy} LIMIT ${limit}) y
-       LEFT JOIN sale_lots sl ON sl.id = y.sale_lot_id
-      ORDER BY ${orderBy.split(", ").map((o) => `y.${o}`).join(", ")}`,
-    { replacements: p.values, type: QueryTypes.SELECT },
-  );
+  const rows = sort === "relevance" && term ? await tieredRows(query, term, cursor) : await sortedRows(query, term, sort, cursor);
   const page = rows.slice(0, query.limit);
   const [matches, facets] = await Promise.all([matchesFor(page.map((r) => r.lot_id), term), facetsPending]);
   const now = Date.now();
@@ -133,6 +123,46 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
 }
 
 /** Which items of each lot matched the searched type, and how: best relation first, then most tubes. */
+const SELECT_ENTRY = `e.lot_id, e.title, e.stage, e.sale_lot_id, e.sale_starts_at, e.closes_at, e.sold_at, e.hammer_cents, e.listed_at,
+  e.estimate_low_cents, e.estimate_high_cents, e.tubes, e.families, e.grades, e.hazards, e.vacuum_loss_tubes, e.pairs, e.quads, e.thumb_photo_id,
+  ${US("e.listed_at")} AS listed_us, ${US("e.closes_at")} AS closes_us`;
+
+/** One page in a sort that follows an index (newest, closing, estimate; relevance by words alone). */
+async function sortedRows(query: CatalogueQuery, term: DesignationTerm | null, sort: CatalogueSort, cursor: Cursor | null): Promise<Row[]> {
+  const p = filterSql(query, term);
+  const { orderBy, after } = order(sort === "relevance" ? "newest" : sort, cursor && sort === "relevance" ? { ...cursor, k: [cursor.k[1] ?? null] } : cursor, p);
+  return db().query<Row>(
+    `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
+       FROM (SELECT * FROM (SELECT ${SELECT_ENTRY}, 0 AS rank FROM catalogue_entries e WHERE ${p.where()}) x
+              ${after ? `WHERE ${after}` : ""} ORDER BY ${orderBy} LIMIT ${p.bind(query.limit + 1)}) y
+       LEFT JOIN sale_lots sl ON sl.id = y.sale_lot_id
+      ORDER BY ${orderBy.split(", ").map((o) => `y.${o}`).join(", ")}`,
+    { replacements: p.values, type: QueryTypes.SELECT },
+  );
+}
+
+/** One page by relevance: tier after tier (see relevanceTiers) until the page is full. */
+async function tieredRows(query: CatalogueQuery, term: DesignationTerm, cursor: Cursor | null): Promise<Row[]> {
+  const out: Row[] = [];
+  const [k0, k1] = cursor?.k ?? [];
+  for (const tier of relevanceTiers(term, wordsQuery(query.q))) {
+    if (cursor && tier.rank < (k0 ?? 0)) continue;
+    const p = filterSql(query, term, { search: false });
+    p.and(tier.where(p));
+    if (cursor && tier.rank === k0) p.and(`(e.listed_at, e.lot_id) < (${AT(p.bind(String(k1)))}, ${p.bind(cursor.id)}::uuid)`);
+    const rows = await db().query<Row>(
+      `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
+         FROM (SELECT ${SELECT_ENTRY}, ${tier.rank} AS rank FROM catalogue_entries e WHERE ${p.where()}
+                ORDER BY e.listed_at DESC, e.lot_id DESC LIMIT ${p.bind(query.limit + 1 - out.length)}) y
+         LEFT JOIN sale_lots sl ON sl.id = y.sale_lot_id ORDER BY y.listed_at DESC, y.lot_id DESC`,
+      { replacements: p.values, type: QueryTypes.SELECT },
+    );
+    out.push(...rows);
+    if (out.length > query.limit) break;
+  }
+  return out;
+}
+
 async function matchesFor(lotIds: string[], term: DesignationTerm | null): Promise<Map<string, CatalogueMatch[]>> {
   const out = new Map<string, CatalogueMatch[]>();
   if (!term || !lotIds.length) return out;
