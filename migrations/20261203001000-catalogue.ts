@@ -9,7 +9,6 @@ type Ctx = { context: QueryInterface };
  * a hit is recorded once per lot per list.
  */
 export async function up({ context: qi }: Ctx): Promise<void> {
-  await qi.sequelize.query(`CREATE EXTENSION IF NOT EXISTS pg_trgm`);
   await qi.createTable("catalogue_entries", {
     lot_id: { type: DataTypes.UUID, primaryKey: true, references: { model: "lots", key: "id" }, onDelete: "CASCADE" },
     title: { type: DataTypes.STRING(140), allowNull: false },
@@ -43,7 +42,6 @@ export async function up({ context: qi }: Ctx): Promise<void> {
   await qi.sequelize.query(`CREATE INDEX catalogue_designations ON catalogue_entries USING gin (designations)`);
   await qi.sequelize.query(`CREATE INDEX catalogue_families ON catalogue_entries USING gin (families)`);
   await qi.sequelize.query(`CREATE INDEX catalogue_tsv ON catalogue_entries USING gin (search_tsv)`);
-  await qi.sequelize.query(`CREATE INDEX catalogue_title_trgm ON catalogue_entries USING gin (title gin_trgm_ops)`);
   await qi.sequelize.query(`CREATE INDEX catalogue_newest ON catalogue_entries (listed_at DESC, lot_id DESC)`);
   await qi.sequelize.query(`CREATE INDEX catalogue_closing ON catalogue_entries (closes_at, lot_id) WHERE stage = 'in-sale'`);
   await qi.sequelize.query(`CREATE INDEX catalogue_estimate ON catalogue_entries (estimate_low_cents, lot_id)`);

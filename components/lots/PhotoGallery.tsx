@@ -16,6 +16,7 @@ export function PhotoGallery({ photos, labelOf }: { photos: Photo[]; labelOf: Re
   const go = (d: number) => setAt((i) => (i + d + photos.length) % photos.length);
   const p = photos[at]!;
   const what = (x: Photo) => `${x.itemId ? labelOf[x.itemId] ?? "An item" : "The whole lot"}${x.caption ? `: ${x.caption}` : ""}`;
+  const alt = (x: Photo) => `Photo of ${x.itemId ? labelOf[x.itemId] ?? "an item" : "the lot"}${x.caption ? `: ${x.caption}` : ""}`;
   return (
     <div
       className="space-y-2 outline-none focus-visible:ring-2 focus-visible:ring-glow-400"
@@ -29,7 +30,7 @@ export function PhotoGallery({ photos, labelOf }: { photos: Photo[]; labelOf: Re
     >
       <figure className="relative overflow-hidden rounded-lg border border-flash-200 bg-flash-100">
         {/* eslint-disable-next-line @next/next/no-img-element -- permission-checked route, not a static asset */}
-        <img key={p.id} src={`/api/photos/${p.id}?size=full`} alt={what(p)} width={p.width} height={p.height} decoding="async"
+        <img key={p.id} src={`/api/photos/${p.id}?size=full`} alt={alt(p)} width={p.width} height={p.height} decoding="async"
           className="mx-auto max-h-[28rem] w-auto touch-pan-y select-none object-contain" draggable={false} />
         {photos.length > 1 ? (
           <>

@@ -2,6 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { DateCodeAnswer } from "@/components/valves/DateCodeAnswer";
 import { TypeAnswer } from "@/components/valves/TypeAnswer";
+import { PriceHistory } from "@/components/catalogue/PriceHistory";
+import { priceHistoryForDesignation } from "@/lib/services/catalogue/price-history";
 import { ApiError } from "@/lib/api/errors";
 import { readCodeForType, type DateCodeAnswer as CodeData } from "@/lib/services/date-codes";
 import { lookupType, type TypeLookup } from "@/lib/services/valve-types";
@@ -83,6 +85,7 @@ export default async function ReferencePage({ searchParams }: { searchParams: Pr
         </div>
       ) : null}
       {t?.data ? <TypeAnswer data={t.data} /> : null}
+      {t?.data ? <PriceHistory series={await priceHistoryForDesignation(q)} heading="Price history in our sales" /> : null}
       {c?.error ? <p role="status" className="card font-medium text-fault-700">{c.error}</p> : null}
       {c?.data ? <DateCodeAnswer data={c.data} /> : null}
       <section aria-labelledby="sources-h" className="card space-y-2">
