@@ -11,18 +11,12 @@ import { execFileSync, spawn } from "node:child_process";
 import { existsSync } from "node:fs";
 import { performance } from "node:perf_hooks";
 import pg from "pg";
+import { scaleDatabaseUrl } from "./scale-db";
 
 const PORT = Number(process.env.BENCH_PORT ?? 3310);
 const BASE = `http://127.0.0.1:${PORT}`;
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 8);
 
-function scaleUrl(): string {
-  if (process.env.SCALE_DATABASE_URL) return process.env.SCALE_DATABASE_URL;
-  const base = process.env.DATABASE_URL ?? execFileSync("bash", ["scripts/db.sh", "url"], { encoding: "utf8" }).trim();
-  const u = new URL(base);
-  u.pathname = "/getterline_scale";
-  return u.toString();
-}
 
 const pct = (xs: number[], p: number) => { const s = [...xs].sort((a, b) => a - b); return s[Math.min(s.length - 1, Math.ceil(p * s.length) - 1)]!; };
 const round = (x: number) => Math.round(x * 10) / 10;
@@ -42,7 +36,7 @@ async function get(path: string): Promise<{ ms: number; status: number; body: st
 }
 
 async function main(): Promise<void> {
-  const url = scaleUrl();
+  const url = scaleDatabaseUrl();
   const c = new pg.Client({ connectionString: url });
   await c.connect().catch(() => { throw new Error(`no scale database at ${url}: run npm run seed:scale first`); });
   const counts = (await c.query(`SELECT (SELECT COUNT(*) FROM lots) AS lots, (SELECT COUNT(*) FROM lot_items) AS items, (SELECT COUNT(*) FROM want_lists) AS wants`)).rows[0] as { lots: string; items: string; wants: string };

@@ -6,6 +6,7 @@ import { loadEnvConfig } from "@next/env";
 loadEnvConfig(process.cwd());
 import { execFileSync } from "node:child_process";
 import pg from "pg";
+import { scaleDatabaseUrl } from "./scale-db";
 import { initialProxyState } from "../lib/auction/proxy";
 import { DEFAULT_INCREMENT_LADDER } from "../lib/auction/increments";
 
@@ -25,17 +26,10 @@ const TYPES: [string, number][] = [
 const CHART: Record<string, number> = { "12AX7": 1600, ECC83: 1600, "12AU7": 2200, ECC82: 2200, "12AT7": 5500, ECC81: 5500, "6922": 12500, "6DJ8": 12500, ECC88: 12500, EL84: 11300, "6BQ5": 11300, EL34: 11000, "6L6GC": 6000, "6V6GT": 4100, KT88: 11500, "6SN7GT": 2600 };
 const WORDS = ["estate", "attic", "bench", "drawer", "shop", "stock", "boxed", "tested", "sleeves", "cartons", "radio", "amplifier", "console", "service", "spares"];
 
-function scaleUrl(): string {
-  if (process.env.SCALE_DATABASE_URL) return process.env.SCALE_DATABASE_URL;
-  const base = process.env.DATABASE_URL ?? execFileSync("bash", ["scripts/db.sh", "url"], { encoding: "utf8" }).trim();
-  const u = new URL(base);
-  u.pathname = "/getterline_scale";
-  return u.toString();
-}
 
 async function main(): Promise<void> {
   const started = Date.now();
-  const url = scaleUrl();
+  const url = scaleDatabaseUrl();
   const step = (what: string) => console.log(`seed:scale ${((Date.now() - started) / 1000).toFixed(1)} s — ${what}`);
   const admin = new URL(url);
   const name = admin.pathname.slice(1);
