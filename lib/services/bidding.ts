@@ -6,7 +6,8 @@ import { extendOnBid } from "../auction/soft-close";
 import { emitTo } from "../realtime/emit";
 import { lotRoom, saleRoom, type LotLive } from "../realtime/events";
 import { db } from "../../models";
-import { scheduleClose } from "./lot-closing";
+import { scheduleClose } from "./close-schedule";
+import { liveFrom } from "./live-lot";
 import { notifyOutbid } from "./notices";
 import { paddleFor, paddlesOf } from "./paddles";
 
@@ -32,15 +33,6 @@ type Row = {
 };
 
 const saleOf = new Map<string, string>();
-
-/** The public state of a lot from its row (never the leader's maximum). */
-export function liveFrom(r: { id: string; sale_id: string; phase: LotLive["phase"]; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null }, leaderPaddle: number | null, extended = false): LotLive {
-  return {
-    saleLotId: r.id, saleId: r.sale_id, seq: r.seq, phase: r.phase, priceCents: r.state.priceCents, bidCount: r.state.bidCount,
-    leaderPaddle, reserveMet: r.state.reserveMet, minimumCents: minimumBidFor(r.state), closesAt: r.closes_at.toISOString(), extended,
-    hammerCents: r.hammer_cents,
-  };
-}
 
 /**
  * Place a maximum bid. One transaction takes the lot's row lock, decides

@@ -2,26 +2,20 @@ import { QueryTypes } from "sequelize";
 import { closeOutcome } from "../auction/lot-phase";
 import type { ProxyState } from "../auction/proxy";
 import { env } from "../config/env";
-import { jobId, queue, QUEUES } from "../jobs/queue";
+import { queue, QUEUES } from "../jobs/queue";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
 import { emitTo } from "../realtime/emit";
 import { lotRoom, saleRoom } from "../realtime/events";
 import { db, User } from "../../models";
-import { liveFrom } from "./bidding";
+import { scheduleClose } from "./close-schedule";
+import { liveFrom } from "./live-lot";
 import { disputeSweep } from "./disputes";
 import { releaseDue } from "./escrow";
 import { refundDueUnexpectedCharges } from "./unexpected-charges";
 import { invoiceSoldLot, sendReminders } from "./invoices";
 import { notify } from "./notices";
 import { paddlesOf } from "./paddles";
-
-/** Queue the close of a sale lot at `closesAt`; the same lot and time queue one job however often this is called. */
-export async function scheduleClose(saleLotId: string, closesAt: Date): Promise<void> {
-  const boss = queue();
-  if (!boss) return; // no worker in this process (the sweeper still closes due lots)
-  await boss.send(QUEUES.lotClose, { saleLotId }, { id: jobId("close", saleLotId, String(closesAt.getTime())), startAfter: closesAt, retryLimit: 5 });
-}
 
 type Closing = { id: string; sale_id: string; lot_id: string; phase: "open" | "sold" | "unsold" | "withdrawn"; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null; consignor_id: string; due: boolean };
 

@@ -8,8 +8,8 @@ import { emitTo } from "../realtime/emit";
 import { lotRoom, saleRoom, type LotLive } from "../realtime/events";
 import type { SaleCreateInput } from "../validation/sales";
 import { db, Lot, Sale, SaleLot } from "../../models";
-import { liveFrom } from "./bidding";
-import { scheduleClose } from "./lot-closing";
+import { scheduleClose } from "./close-schedule";
+import { liveFrom } from "./live-lot";
 import { paddlesOf } from "./paddles";
 
 /**
