@@ -8,9 +8,9 @@ export const metadata = { title: "Sale" };
 
 export default async function SalePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  await requirePageViewer("account.read", `/sales/${id}`);
+  const viewer = await requirePageViewer("account.read", `/sales/${id}`);
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
-  const data = await getSale(id).catch((e) => { if (e instanceof ApiError && e.code === "not_found") notFound(); throw e; });
+  const data = await getSale(id, viewer).catch((e) => { if (e instanceof ApiError && e.code === "not_found") notFound(); throw e; });
   return (
     <div className="space-y-4">
       <h1 className="text-2xl font-semibold">{data.sale.title}</h1>
