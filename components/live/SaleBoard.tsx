@@ -7,7 +7,8 @@ import { apiFetch } from "@/lib/client/api";
 import { standingOf, type Standing } from "@/lib/auction/standing";
 import { formatCents } from "@/lib/money/cents";
 import { saleRoom, type LotLive } from "@/lib/realtime/events";
-import { formatLeft, useCountdown } from "./useCountdown";
+import { STANDING_SHORT } from "./standing-words";
+import { TimeLeft } from "./TimeLeft";
 import { useLotEvents } from "./useLotEvents";
 import { useNow } from "@/components/time/useViewerZone";
 
@@ -15,10 +16,6 @@ type Row = LotLive & { lotId: string; title: string; position: number; consignor
 type You = { paddle: number | null; ceilings: Record<string, number>; watched: string[] };
 type Data = { sale: { id: string; title: string; startsAt: string; softCloseSeconds: number }; lots: Row[]; you: You };
 
-/** Our words for a dealer's standing in a list. */
-export const STANDING_SHORT: Record<Standing, string> = {
-  "not-bid": "—", leading: "You hold it", outbid: "Behind", won: "Yours", lost: "Not yours", unsold: "Unsold", "own-lot": "Your lot",
-};
 const FILTERS = [
   { key: "all", label: "All lots" },
   { key: "soon", label: "Closing within 15 min" },
@@ -27,13 +24,6 @@ const FILTERS = [
   { key: "watched", label: "Followed" },
 ] as const;
 type Filter = (typeof FILTERS)[number]["key"];
-
-function Left({ iso, phase }: { iso: string; phase: string }) {
-  const ms = useCountdown(iso);
-  if (phase !== "open") return <span>{phase === "sold" ? "Sold" : phase === "unsold" ? "Unsold" : "Withdrawn"}</span>;
-  if (ms == null) return <span>…</span>;
-  return <span className={ms < 120_000 ? "font-semibold text-glow-700" : ""}>{formatLeft(ms)}</span>;
-}
 
 function standingFor(l: Row, you: You): Standing {
   const bidding = you.ceilings[l.saleLotId] != null;
@@ -77,7 +67,7 @@ export function SaleBoard({ initial }: { initial: Data }) {
             <Link href={href(l)} className="font-medium underline underline-offset-2">{l.position}. {l.title}</Link>
             <div className="flex items-baseline justify-between gap-2">
               <span className="code text-lg font-semibold">{l.bidCount ? formatCents(l.priceCents) : "No bids"}</span>
-              <span data-testid={`left-${l.saleLotId}`}><Left iso={l.closesAt} phase={l.phase} /></span>
+              <span data-testid={`left-${l.saleLotId}`}><TimeLeft iso={l.closesAt} phase={l.phase} /></span>
             </div>
             <p className="flex justify-between text-xs text-flash-600">
               <span>{l.bidCount} bids · {l.bidCount === 0 ? "reserve —" : l.reserveMet ? "reserve reached" : "reserve not reached"}</span>
@@ -101,7 +91,7 @@ export function SaleBoard({ initial }: { initial: Data }) {
                 <td className="px-3 py-2">{l.bidCount}</td>
                 <td className="px-3 py-2">{l.leaderPaddle ? `Paddle ${l.leaderPaddle}` : "—"}</td>
                 <td className="px-3 py-2">{l.bidCount === 0 ? "" : l.reserveMet ? "Reached" : "Not reached"}</td>
-                <td className="px-3 py-2"><Left iso={l.closesAt} phase={l.phase} /></td>
+                <td className="px-3 py-2"><TimeLeft iso={l.closesAt} phase={l.phase} /></td>
                 <td className="px-3 py-2" data-testid={`standing-${l.saleLotId}`}>{STANDING_SHORT[l.standing]}</td>
               </tr>
             ))}

@@ -1,4 +1,4 @@
-import type { LastAction, PanelMessage } from "@/lib/auction/standing";
+import type { LastAction, PanelMessage, Standing } from "@/lib/auction/standing";
 import { formatCents } from "@/lib/money/cents";
 
 /** Figures the words need. */
@@ -37,3 +37,8 @@ export function closedText(phase: string, hammerCents: number | null): string {
   if (phase === "withdrawn") return "Withdrawn";
   return "Closed unsold";
 }
+
+/** Our words for a dealer's standing in a list. */
+export const STANDING_SHORT: Record<Standing, string> = {
+  "not-bid": "—", leading: "You hold it", outbid: "Behind", won: "Yours", lost: "Not yours", unsold: "Unsold", "own-lot": "Your lot",
+};

@@ -218,3 +218,10 @@ export async function offerableLots() {
   );
   return rows.map((r) => ({ id: r.id, title: r.title, consignor: r.consignor, estimateLowCents: r.estimate_low_cents, estimateHighCents: r.estimate_high_cents, reserveCents: r.reserve_cents }));
 }
+
+/** Where a lot is offered, if it is: for a link from its evidence back to bidding. */
+export async function saleLotOf(lotId: string): Promise<{ saleId: string; saleLotId: string; phase: LotLive["phase"] } | null> {
+  const [r] = await db().query<{ id: string; sale_id: string; phase: LotLive["phase"] }>(
+    `SELECT id, sale_id, phase FROM sale_lots WHERE lot_id = :lotId ORDER BY created_at DESC LIMIT 1`, { replacements: { lotId }, type: QueryTypes.SELECT });
+  return r ? { saleId: r.sale_id, saleLotId: r.id, phase: r.phase } : null;
+}
