@@ -78,8 +78,10 @@ async function closingMail(row: Closing, outcome: ReturnType<typeof closeOutcome
       await notify(buyer.id, `You won "${title}" at ${formatCents(outcome.hammerCents)}.`, href);
       await sendMail({ to: buyer.email, subject: `You won: ${title}`, text: `Hello ${buyer.displayName},\n\nYou won "${title}" with a hammer price of ${formatCents(outcome.hammerCents)}. The invoice follows separately.\n\n${base}${href}\n\nGetterline Exchange` });
     }
+    await notify(row.consignor_id, `"${title}" sold for ${formatCents(outcome.hammerCents)}. Settlement follows payment and inspection.`, "/consignor");
     if (consignor) await sendMail({ to: consignor.email, subject: `Sold: ${title}`, text: `Hello ${consignor.displayName},\n\nYour lot "${title}" sold for ${formatCents(outcome.hammerCents)} (hammer price). Settlement follows once the buyer has paid and inspected the tubes.\n\nGetterline Exchange` });
   } else if (consignor) {
+    await notify(row.consignor_id, `"${title}" closed unsold.`, "/consignor");
     const why = outcome.reason === "no-bids" ? "it drew no bids" : `the reserve was not met (highest bid ${formatCents(outcome.highBidCents ?? 0)})`;
     await sendMail({ to: consignor.email, subject: `Unsold: ${title}`, text: `Hello ${consignor.displayName},\n\nYour lot "${title}" closed unsold: ${why}. The house will talk with you about offering it again.\n\nGetterline Exchange` });
   }
