@@ -52,3 +52,18 @@ describe("panelMessage", () => {
     expect(m.tone).toBe("behind");
   });
 });
+
+describe("a leader's private ceiling raise [SUG]", () => {
+  it("does not count as a public bid unless it moves the price", async () => {
+    const { applyBid, initialProxyState } = await import("@/lib/auction/proxy");
+    const { DEFAULT_INCREMENT_LADDER } = await import("@/lib/auction/increments");
+    let st = initialProxyState({ openingCents: 1000, reserveCents: null, ladder: DEFAULT_INCREMENT_LADDER, consignorId: "c" });
+    const a = applyBid(st, { bidderId: "a", maxCents: 5000, placedAtMs: 1, seq: 1 });
+    if (!a.accepted) throw new Error("refused");
+    st = a.state;
+    const raise = applyBid(st, { bidderId: "a", maxCents: 9000, placedAtMs: 2, seq: 2 });
+    expect(raise.accepted && raise.outcome).toBe("max-raised");
+    expect(raise.state.bidCount).toBe(1);
+    expect(raise.state.priceCents).toBe(st.priceCents);
+  });
+});
