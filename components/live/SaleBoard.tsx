@@ -70,7 +70,7 @@ export function SaleBoard({ initial }: { initial: Data }) {
               <span data-testid={`left-${l.saleLotId}`}><TimeLeft iso={l.closesAt} phase={l.phase} /></span>
             </div>
             <p className="flex justify-between text-xs text-flash-600">
-              <span>{l.bidCount} bids · {l.bidCount === 0 ? "reserve —" : l.reserveMet ? "reserve reached" : "reserve not reached"}</span>
+              <span>{l.bidCount} {l.bidCount === 1 ? "bid" : "bids"} · {l.bidCount === 0 ? "reserve —" : l.reserveMet ? "reserve reached" : "reserve not reached"}</span>
               <span className="font-medium text-flash-800">{STANDING_SHORT[l.standing]}</span>
             </p>
           </li>

@@ -1,6 +1,5 @@
 import { getServerSession } from "next-auth";
 import { getToken } from "next-auth/jwt";
-import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import type { NextRequest } from "next/server";
 import { ApiError } from "../api/errors";
@@ -64,6 +63,8 @@ export async function requireActionViewer(permission?: Permission): Promise<View
 /** The page being rendered, as the root proxy (proxy.ts) recorded it; null outside a page request. */
 export async function requestedPath(): Promise<string | null> {
   try {
+    // Loaded lazily: the custom server (socket handshake) imports this module outside Next's request scope.
+    const { headers } = await import("next/headers");
     return safeCallbackPath((await headers()).get("x-getterline-path"));
   } catch {
     return null;

@@ -92,5 +92,5 @@ test("two dealers bid live; the panel never contradicts itself; after the close 
   // The consignor sees the sold lot's net: $750.00 hammer − marginal commission (20 % of $500 + 15 % of $250 = $137.50) = $612.50 [SUG house tiers].
   const consignor = await as(browser, DEMO.consignor);
   await expect.poll(async () => { await consignor.goto("/consignor"); return consignor.getByTestId(`net-${lot.id}`).textContent(); }, { timeout: 30_000, intervals: [1_000] }).toBe("$612.50");
-  await expect(consignor.getByTestId(`stage-${lot.id}`)).toHaveText("Sold, buyer paying");
+  await expect(consignor.locator("table").getByTestId(`stage-${lot.id}`)).toHaveText("Sold, buyer paying");
 });
