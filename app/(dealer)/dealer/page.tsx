@@ -41,7 +41,7 @@ export default async function DealerHome() {
         <Section id="bids" title="Lots I'm bidding on" empty={open.length ? null : "No open bids. Open a sale and set a ceiling on a lot."}>
           {open.map((b) => (
             <li key={b.saleLotId} className="flex flex-wrap items-baseline gap-x-3 py-2" data-testid={`desk-bid-${b.saleLotId}`}>
-              <Link href={lotHref(b)} className="min-w-0 flex-1 font-medium underline underline-offset-2">{b.title}</Link>
+              <Link href={lotHref(b)} className="w-full min-w-0 sm:w-auto sm:flex-1 font-medium underline underline-offset-2">{b.title}</Link>
               <span className={`font-medium ${b.standing === "leading" ? "text-sound-700" : "text-glow-700"}`}>{STANDING_SHORT[b.standing]}</span>
               <span className="w-full text-flash-700">
                 <span className="code">{formatCents(b.priceCents)}</span> now · my ceiling <span className="code">{formatCents(b.ceilingCents)}</span> · closes in <TimeLeft iso={b.closesAt} />
@@ -52,7 +52,7 @@ export default async function DealerHome() {
         <Section id="due" title="Invoices to pay" empty={desk.due.length ? null : "Nothing to pay."}>
           {desk.due.map((w) => (
             <li key={w.invoiceId} className="flex flex-wrap items-center gap-x-3 gap-y-1 py-2">
-              <span className="min-w-0 flex-1">{w.title}</span>
+              <span className="w-full min-w-0 sm:w-auto sm:flex-1">{w.title}</span>
               <span className="code">{formatCents(w.totalCents ?? 0)}</span>
               <span className="text-flash-600">due <When iso={w.dueAt} style="date" /></span>
               <Link href={`/invoices/${w.invoiceId}`} className="btn-primary min-h-10">Pay</Link>
@@ -62,7 +62,7 @@ export default async function DealerHome() {
         <Section id="won" title="Lots won" empty={desk.won.length ? null : "No lots won yet."}>
           {desk.won.map((w) => (
             <li key={w.saleLotId} className="flex flex-wrap items-baseline gap-x-3 py-2">
-              <Link href={w.invoiceId ? `/invoices/${w.invoiceId}` : lotHref(w)} className="min-w-0 flex-1 underline underline-offset-2">{w.title}</Link>
+              <Link href={w.invoiceId ? `/invoices/${w.invoiceId}` : lotHref(w)} className="w-full min-w-0 sm:w-auto sm:flex-1 underline underline-offset-2">{w.title}</Link>
               <span className="code">{formatCents(w.hammerCents)}</span>
               <span className="text-flash-600">{w.invoiceState ? INVOICE_STATE_WORDS[w.invoiceState] ?? w.invoiceState : "Invoice on its way"}</span>
             </li>
@@ -72,7 +72,7 @@ export default async function DealerHome() {
           {desk.claims.map((c) => (
             <li key={c.id} className="flex flex-wrap gap-x-3 py-2">
               <Link href={`/disputes/${c.id}`} className="code underline">{c.number}</Link>
-              <span className="min-w-0 flex-1">{c.lotTitle}</span>
+              <span className="w-full min-w-0 sm:w-auto sm:flex-1">{c.lotTitle}</span>
               <span className="text-flash-600">{STATE_WORDS[c.state]}</span>
             </li>
           ))}
@@ -80,7 +80,7 @@ export default async function DealerHome() {
         <Section id="watch" title="Lots I follow" empty={desk.watching.length ? null : "Nothing followed yet: open a lot in a sale and choose “Follow on my desk”."}>
           {desk.watching.map((w) => (
             <li key={w.saleLotId} className="flex flex-wrap items-baseline gap-x-3 py-2">
-              <Link href={lotHref(w)} className="min-w-0 flex-1 underline underline-offset-2">{w.title}</Link>
+              <Link href={lotHref(w)} className="w-full min-w-0 sm:w-auto sm:flex-1 underline underline-offset-2">{w.title}</Link>
               <span className="code">{w.bidCount ? formatCents(w.priceCents) : "no bids"}</span>
               <span className="text-flash-600">{w.phase === "open" ? <>closes <When iso={w.closesAt} style="datetime" /></> : <TimeLeft iso={w.closesAt} phase={w.phase} />}</span>
             </li>
