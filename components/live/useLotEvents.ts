@@ -37,13 +37,16 @@ export function useLotEvents(room: string, seqOf: (saleLotId: string) => number 
         }, GAP_WAIT_MS));
       }
     };
+    const batch = (b: { events: { live: LotLive }[] }) => { for (const e of b.events) on(e.live); };
     const s = liveSocket();
     s.on("lot.bid", on);
     s.on("lot.closed", on);
+    s.on("lot.batch", batch);
     return () => {
       leave();
       s.off("lot.bid", on);
       s.off("lot.closed", on);
+      s.off("lot.batch", batch);
       for (const t of timers.values()) clearTimeout(t);
     };
   }, [room]);

@@ -25,6 +25,8 @@ export interface ServerToClientEvents {
   "lot.bid": (p: LotLive) => void;
   /** The lot closed: sold or unsold. */
   "lot.closed": (p: LotLive) => void;
+  /** Several events of one lot that became ready together, in seq order (see lib/realtime/lot-emitter). */
+  "lot.batch": (p: { events: { kind: "lot.bid" | "lot.closed"; live: LotLive }[] }) => void;
 }
 
 /** The answer to a bid placed over the socket: the same result as POST /api/sale-lots/:id/bids. */

@@ -3,12 +3,13 @@ import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
 import { minimumBidFor, placeBid, type BidOutcome, type BidRefusal, type ProxyState } from "../auction/proxy";
 import { extendOnBid } from "../auction/soft-close";
-import { emitTo } from "../realtime/emit";
-import { lotRoom, saleRoom, type LotLive } from "../realtime/events";
+import { type LotLive } from "../realtime/events";
+import { emitLot } from "../realtime/lot-emitter";
 import { db } from "../../models";
+import { withLotLock, type LockedLot } from "./bid-lock";
 import { scheduleClose } from "./close-schedule";
 import { liveFrom } from "./live-lot";
-import { notifyOutbid } from "./notices";
+import { queueOutbidNotice } from "./outbid-notices";
 import { paddleFor, paddlesOf } from "./paddles";
 
 /** Refusals in words a dealer reads. */
@@ -65,43 +66,28 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
     return { accepted: false, reason: "below-minimum", message: REFUSAL_WORDS["below-minimum"], minimumCents: minimumBidFor(peek.state), live: liveFrom(peek, leader) };
   }
 
-  const done = await s.transaction(async (t) => {
-    // One round trip: the lot's row lock, the sale's clock and any earlier bid with this key.
-    const [row] = await s.query<Row & { prior_seq: number | null; prior_outcome: BidOutcome | null; prior_max: number | null }>(
-      `SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.extension_count, sl.seq, sl.state, sl.hammer_cents,
-              s.starts_at, s.soft_close_seconds, now() AS db_now, b.seq AS prior_seq, b.outcome AS prior_outcome, b.max_cents AS prior_max
-         FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id
-         LEFT JOIN bids b ON b.sale_lot_id = sl.id AND b.bidder_id = :bidder AND b.idempotency_key = :key
-        WHERE sl.id = :saleLotId FOR UPDATE OF sl`,
-      { replacements: { saleLotId, bidder: viewer.id, key: idempotencyKey }, type: QueryTypes.SELECT, transaction: t },
-    );
+  // Under the lot's row lock (lib/services/bid-lock): decide with the pure rules, then write and commit in one round trip.
+  type Done =
+    | { kind: "refused"; row: LockedLot; reason: BidRefusal | "not-started"; minimumCents: number }
+    | { kind: "replayed"; row: LockedLot; prior: { seq: number; outcome: BidOutcome; max_cents: number } }
+    | { kind: "accepted"; row: LockedLot; outcome: BidOutcome; seq: number; previousLeader: string | null; previousLeaderPaddle: number | null; extended: boolean };
+  const done = await withLotLock<Done>(saleLotId, viewer.id, idempotencyKey, (row) => {
     if (!row) throw new ApiError("not_found", "No such lot in a sale");
-    if (row.prior_seq != null) return { kind: "replayed" as const, row, prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! } };
+    if (row.prior_seq != null) return { write: null, result: { kind: "replayed", row, prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! } } };
     const nowMs = row.db_now.getTime();
-    if (nowMs < row.starts_at.getTime()) return { kind: "refused" as const, row, reason: "not-started" as const, minimumCents: minimumBidFor(row.state) };
+    if (nowMs < row.starts_at.getTime()) return { write: null, result: { kind: "refused", row, reason: "not-started", minimumCents: minimumBidFor(row.state) } };
     const previousLeader = row.state.leader?.bidderId ?? null;
     const decision = placeBid(row.state, { bidderId: viewer.id, maxCents, placedAtMs: nowMs, seq: row.seq + 1 }, { phase: row.phase, closesAtMs: row.closes_at.getTime() });
-    if (!decision.accepted) return { kind: "refused" as const, row, reason: decision.reason, minimumCents: decision.minimumCents };
+    if (!decision.accepted) return { write: null, result: { kind: "refused", row, reason: decision.reason, minimumCents: decision.minimumCents } };
     const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, { windowSeconds: row.soft_close_seconds, maxExtensions: null });
     const next = decision.state;
     const seq = row.seq + 1;
-    await s.query(
-      `UPDATE sale_lots SET seq = :seq, state = :state::jsonb, price_cents = :price, bid_count = :count, leader_id = :leader,
-              reserve_met = :reserveMet, closes_at = :closesAt, extension_count = :ext, updated_at = now() WHERE id = :saleLotId;
-       INSERT INTO bids (sale_lot_id, seq, bidder_id, max_cents, price_after_cents, outcome, idempotency_key, placed_at)
-       VALUES (:saleLotId, :seq, :bidder, :max, :price, :outcome, :key, :placedAt)`,
-      {
-        replacements: {
-          seq, state: JSON.stringify(next), price: next.priceCents, count: next.bidCount, leader: next.leader?.bidderId ?? null,
-          reserveMet: next.reserveMet, closesAt: new Date(clock.closesAtMs), ext: clock.extensionCount, saleLotId,
-          bidder: viewer.id, max: maxCents, outcome: decision.outcome, key: idempotencyKey, placedAt: row.db_now,
-        },
-        transaction: t,
-      },
-    );
     return {
-      kind: "accepted" as const, outcome: decision.outcome, seq, previousLeader, extended: clock.extended,
-      row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
+      write: { seq, state: next, closesAt: new Date(clock.closesAtMs), extensionCount: clock.extensionCount, bidderId: viewer.id, maxCents, outcome: decision.outcome, key: idempotencyKey, placedAt: row.db_now },
+      result: {
+        kind: "accepted", outcome: decision.outcome, seq, previousLeader, previousLeaderPaddle: row.leader_paddle, extended: clock.extended,
+        row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
+      },
     };
   });
 
@@ -117,12 +103,13 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
     };
   }
   const leaderId = done.row.state.leader!.bidderId;
-  const leaderPaddle = leaderId === viewer.id ? paddle : (await paddlesOf(saleId, [leaderId])).get(leaderId) ?? null;
+  // The new leader is the bidder or the one before: both paddles are known, so the broadcast leaves with no await after commit.
+  const leaderPaddle = leaderId === viewer.id ? paddle : done.previousLeaderPaddle;
   const live = liveFrom(done.row, leaderPaddle, done.extended);
-  emitTo([lotRoom(saleLotId), saleRoom(saleId)], "lot.bid", live);
+  emitLot("lot.bid", live);
   if (done.extended) void scheduleClose(saleLotId, done.row.closes_at).catch((e: Error) => console.error("[close] reschedule failed", e.message));
   // The bidder hears about a proxy outbid in this answer; the notice is for a leader who lost the lead.
   const outbid = done.previousLeader && done.previousLeader !== leaderId ? done.previousLeader : null;
-  if (outbid) void notifyOutbid(outbid, saleLotId, live).catch((e: Error) => console.error("[notice] outbid failed", e.message));
+  if (outbid) void queueOutbidNotice(outbid, live).catch((e: Error) => console.error("[notice] outbid failed", e.message));
   return { accepted: true, outcome: done.outcome, seq: done.seq, live, yourMaxCents: maxCents, leading: leaderId === viewer.id, replayed: false };
 }

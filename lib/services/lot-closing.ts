@@ -5,8 +5,7 @@ import { env } from "../config/env";
 import { queue, QUEUES } from "../jobs/queue";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
-import { emitTo } from "../realtime/emit";
-import { lotRoom, saleRoom } from "../realtime/events";
+import { reserveLotSeq } from "../realtime/lot-emitter";
 import { db, User } from "../../models";
 import { scheduleClose } from "./close-schedule";
 import { liveFrom } from "./live-lot";
@@ -15,6 +14,7 @@ import { releaseDue } from "./escrow";
 import { refundDueUnexpectedCharges } from "./unexpected-charges";
 import { invoiceSoldLot, sendReminders } from "./invoices";
 import { notify } from "./notices";
+import { startOutbidWorker } from "./outbid-notices";
 import { paddlesOf } from "./paddles";
 
 type Closing = { id: string; sale_id: string; lot_id: string; phase: "open" | "sold" | "unsold" | "withdrawn"; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null; consignor_id: string; due: boolean };
@@ -57,9 +57,10 @@ export async function closeSaleLot(saleLotId: string): Promise<"closed" | "alrea
   }
   if (result.kind !== "closed") return result.kind;
   const { row, outcome } = result;
+  const slot = reserveLotSeq(row.id, row.seq);
   const leaderId = row.state.leader?.bidderId;
-  const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId])).get(leaderId) ?? null : null;
-  emitTo([lotRoom(row.id), saleRoom(row.sale_id)], "lot.closed", liveFrom(row, paddle));
+  const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId]).catch(() => new Map<string, number>())).get(leaderId) ?? null : null;
+  slot.send("lot.closed", liveFrom(row, paddle));
   if (outcome.phase === "sold") await invoiceSoldLot(row.id).catch((e: Error) => console.error("[invoice] failed; the sweeper retries", e.message));
   await closingMail(row, outcome).catch((e: Error) => console.error("[mail] closing notice failed", e.message));
   return "closed";
@@ -110,6 +111,7 @@ export async function startClosingWorker(): Promise<() => void> {
   await boss.work<{ saleLotId: string }>(QUEUES.lotClose, { pollingIntervalSeconds: 0.5, batchSize: 5 }, async (jobs) => {
     for (const job of jobs) await closeSaleLot(job.data.saleLotId);
   });
+  await startOutbidWorker();
   await sweepDueLots();
   const timer = setInterval(() => {
     void sweepDueLots().catch((e: Error) => console.error("[close] sweep failed", e.message));
