@@ -230,6 +230,7 @@ async function main(): Promise<number> {
   const duplicated = a.dupBroadcast + a.dupAnswers + a.dupKeys;
   log(`audit: ${all.length} accepted answers, ${table.rows.length} bid rows (sale_lots.seq ${table.lotSeq}); lost: ${a.lostBroadcast} not broadcast to every watcher, ${a.lostTable} not in the table; duplicated: ${a.dupBroadcast} broadcast copies, ${a.dupAnswers} answers, ${a.dupKeys} keys; seq gaps ${a.gaps}; unanswered rows ${a.unanswered}; broadcasts without a row ${a.phantom}`);
   log(`audit: order at the watchers: ${receipts.outOfOrder} arrivals behind a later seq, ${receipts.jumps} arrivals skipping a seq not yet seen; ${receipts.refetches} refetches after a ${GAP_WAIT_MS} ms wait; ${receipts.batches} batched frames`);
+  if (receipts.orderExamples.length) log(`audit: first arrivals out of order: ${receipts.orderExamples.join("; ")}`);
   log(`audit: watcher disconnects ${receipts.disconnects}, connect errors ${receipts.connectErrors}, still connected ${receipts.connected} of ${W}`);
   for (const e of a.examples) log(`  ${e}`);
   const serverLog = fs.readFileSync(server.logFile, "utf8");

@@ -43,6 +43,11 @@ export interface ClientToServerEvents {
 
 export type SocketData = { userId: string; roles: string[] };
 
+/** Between app instances: a lot's events, sent by the instance that committed them, for the others to deliver locally in the same order. */
+export interface InterServerEvents {
+  "lot.relay": (p: { rooms: string[]; event: "lot.bid" | "lot.closed" | "lot.batch"; payload: unknown }) => void;
+}
+
 /** Rooms a client may join by itself: public sale and lot rooms. */
 export function joinableRoom(room: string): boolean {
   return /^(sale|lot):[0-9a-zA-Z-]{1,40}$/.test(room);

@@ -1,69 +1,74 @@
-import { emitTo } from "./emit";
+import { emitLotEvent } from "./emit";
 import { lotRoom, saleRoom, type LotLive } from "./events";
 
 /**
- * Per-lot ordered broadcasts after commit. A writer reserves its seq the
- * moment its transaction commits (commits are serialised by the lot's row
- * lock, so reservations arrive in seq order), may then await other work, and
- * sends; a lot's events leave this process strictly in seq order, whichever
- * writer finishes first. Events ready in the same turn of the event loop
- * leave together as one `lot.batch` per room (fewer frames per watcher when
- * bids bunch up); a lone event leaves as itself.
+ * Per-lot ordered broadcasts after commit. Commits are serialised by the
+ * lot's row lock, but their replies can reach this process in another order
+ * (a backend descheduled between releasing the lock and answering), so every
+ * writer of a lot brackets its work with beginLotWrite / finishLotWrite. An
+ * event whose predecessor is still being written here waits for it; once no
+ * write of the lot is in flight here, whatever waits leaves in seq order (the
+ * missing seq was committed by another instance). Events ready in the same
+ * turn of the event loop leave as one `lot.batch` frame per room.
  */
 type Kind = "lot.bid" | "lot.closed";
-type Slot = { seq: number; ready: { kind: Kind; live: LotLive } | null; cancelled: boolean };
-type LotQueue = { slots: Slot[]; out: { kind: Kind; live: LotLive }[]; flushing: boolean };
+type Ev = { kind: Kind; live: LotLive };
+type LotQueue = { last: number | null; inflight: number; held: Map<number, Ev>; out: Ev[]; flushing: boolean; timer: ReturnType<typeof setTimeout> | null };
 
-const lots = new Map<string, LotQueue>();
+/** The longest an event waits for a predecessor before it leaves anyway (a writer stuck after commit). */
+export const HOLD_MAX_MS = 25;
 
-/** How long a reserved seq may hold later ones before they go anyway (a writer that died after commit). */
-export const RESERVATION_TIMEOUT_MS = 2_000;
+// One set of queues per process, shared by the custom server's and Next's module graphs (as the socket.io server is).
+const g = globalThis as unknown as { __getterlineLotQueues?: Map<string, LotQueue> };
+const lots = (g.__getterlineLotQueues ??= new Map<string, LotQueue>());
 
-export type Reservation = { send(kind: Kind, live: LotLive): void; cancel(): void };
-
-/** Reserve `seq` on a lot, right after its commit; call send() (or cancel()) exactly once. */
-export function reserveLotSeq(saleLotId: string, seq: number): Reservation {
+function queueOf(saleLotId: string): LotQueue {
   let q = lots.get(saleLotId);
-  if (!q) { q = { slots: [], out: [], flushing: false }; lots.set(saleLotId, q); }
-  const slot: Slot = { seq, ready: null, cancelled: false };
-  // Keep slots sorted by seq (a reservation from a late-resolving commit still finds its place).
-  const at = q.slots.findIndex((s) => s.seq > seq);
-  if (at < 0) q.slots.push(slot); else q.slots.splice(at, 0, slot);
-  const timer = setTimeout(() => { slot.cancelled = true; drain(saleLotId); }, RESERVATION_TIMEOUT_MS);
-  timer.unref?.();
-  return {
-    send(kind, live) { clearTimeout(timer); slot.ready = { kind, live }; drain(saleLotId); },
-    cancel() { clearTimeout(timer); slot.cancelled = true; drain(saleLotId); },
-  };
+  if (!q) { q = { last: null, inflight: 0, held: new Map(), out: [], flushing: false, timer: null }; lots.set(saleLotId, q); }
+  return q;
 }
 
-/** Send a lot event now, in order behind any reserved earlier seq (for writers that had no awaits). */
+/** A write of this lot starts (call before taking its row lock). */
+export function beginLotWrite(saleLotId: string): void {
+  queueOf(saleLotId).inflight += 1;
+}
+
+/** The write is done: with the event it committed, or null (refused, replayed or failed). Call exactly once per begin. */
+export function finishLotWrite(saleLotId: string, ev: Ev | null): void {
+  const q = queueOf(saleLotId);
+  q.inflight = Math.max(0, q.inflight - 1);
+  if (ev) q.held.set(ev.live.seq, ev);
+  release(saleLotId, q, false);
+}
+
+/** An event from a writer that had nothing in flight to wait for (e.g. a close). */
 export function emitLot(kind: Kind, live: LotLive): void {
-  reserveLotSeq(live.saleLotId, live.seq).send(kind, live);
+  beginLotWrite(live.saleLotId);
+  finishLotWrite(live.saleLotId, { kind, live });
 }
 
-function drain(saleLotId: string): void {
-  const q = lots.get(saleLotId);
-  if (!q) return;
-  while (q.slots.length && (q.slots[0]!.ready || q.slots[0]!.cancelled)) {
-    const s = q.slots.shift()!;
-    if (s.ready) q.out.push(s.ready);
+function release(saleLotId: string, q: LotQueue, force: boolean): void {
+  const take = (seq: number) => { q.out.push(q.held.get(seq)!); q.held.delete(seq); if (q.last == null || seq > q.last) q.last = seq; };
+  for (const seq of [...q.held.keys()].sort((a, b) => a - b)) if (q.last != null && seq <= q.last) take(seq); // stale: let clients drop it
+  while (q.last != null && q.held.has(q.last + 1)) take(q.last + 1);
+  if (q.held.size && (q.inflight === 0 || force)) for (const seq of [...q.held.keys()].sort((a, b) => a - b)) take(seq);
+  if (q.timer && !q.held.size) { clearTimeout(q.timer); q.timer = null; }
+  if (q.held.size && !q.timer) {
+    q.timer = setTimeout(() => { q.timer = null; release(saleLotId, q, true); }, HOLD_MAX_MS);
+    q.timer.unref?.();
   }
   if (q.out.length && !q.flushing) {
     q.flushing = true;
-    setImmediate(() => flush(saleLotId));
+    setImmediate(() => flush(saleLotId, q));
   }
 }
 
-function flush(saleLotId: string): void {
-  const q = lots.get(saleLotId);
-  if (!q) return;
+function flush(saleLotId: string, q: LotQueue): void {
   const out = q.out;
   q.out = [];
   q.flushing = false;
-  if (!q.slots.length && !q.out.length) lots.delete(saleLotId);
   if (!out.length) return;
   const rooms = [lotRoom(saleLotId), saleRoom(out[0]!.live.saleId)];
-  if (out.length === 1) emitTo(rooms, out[0]!.kind, out[0]!.live);
-  else emitTo(rooms, "lot.batch", { events: out });
+  if (out.length === 1) emitLotEvent(rooms, out[0]!.kind, out[0]!.live);
+  else emitLotEvent(rooms, "lot.batch", { events: out });
 }

@@ -4,7 +4,7 @@ import { ApiError } from "../api/errors";
 import { minimumBidFor, placeBid, type BidOutcome, type BidRefusal, type ProxyState } from "../auction/proxy";
 import { extendOnBid } from "../auction/soft-close";
 import { type LotLive } from "../realtime/events";
-import { emitLot } from "../realtime/lot-emitter";
+import { beginLotWrite, finishLotWrite } from "../realtime/lot-emitter";
 import { db } from "../../models";
 import { withLotLock, type LockedLot } from "./bid-lock";
 import { scheduleClose } from "./close-schedule";
@@ -71,25 +71,38 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
     | { kind: "refused"; row: LockedLot; reason: BidRefusal | "not-started"; minimumCents: number }
     | { kind: "replayed"; row: LockedLot; prior: { seq: number; outcome: BidOutcome; max_cents: number } }
     | { kind: "accepted"; row: LockedLot; outcome: BidOutcome; seq: number; previousLeader: string | null; previousLeaderPaddle: number | null; extended: boolean };
-  const done = await withLotLock<Done>(saleLotId, viewer.id, idempotencyKey, (row) => {
-    if (!row) throw new ApiError("not_found", "No such lot in a sale");
-    if (row.prior_seq != null) return { write: null, result: { kind: "replayed", row, prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! } } };
-    const nowMs = row.db_now.getTime();
-    if (nowMs < row.starts_at.getTime()) return { write: null, result: { kind: "refused", row, reason: "not-started", minimumCents: minimumBidFor(row.state) } };
-    const previousLeader = row.state.leader?.bidderId ?? null;
-    const decision = placeBid(row.state, { bidderId: viewer.id, maxCents, placedAtMs: nowMs, seq: row.seq + 1 }, { phase: row.phase, closesAtMs: row.closes_at.getTime() });
-    if (!decision.accepted) return { write: null, result: { kind: "refused", row, reason: decision.reason, minimumCents: decision.minimumCents } };
-    const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, { windowSeconds: row.soft_close_seconds, maxExtensions: null });
-    const next = decision.state;
-    const seq = row.seq + 1;
-    return {
-      write: { seq, state: next, closesAt: new Date(clock.closesAtMs), extensionCount: clock.extensionCount, bidderId: viewer.id, maxCents, outcome: decision.outcome, key: idempotencyKey, placedAt: row.db_now },
-      result: {
-        kind: "accepted", outcome: decision.outcome, seq, previousLeader, previousLeaderPaddle: row.leader_paddle, extended: clock.extended,
-        row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
-      },
-    };
-  });
+  // The write is bracketed so that its broadcast leaves in seq order with this process's other writes of the lot.
+  beginLotWrite(saleLotId);
+  let done: Done;
+  let live: LotLive | null = null;
+  try {
+    done = await withLotLock<Done>(saleLotId, viewer.id, idempotencyKey, (row) => {
+      if (!row) throw new ApiError("not_found", "No such lot in a sale");
+      if (row.prior_seq != null) return { write: null, result: { kind: "replayed", row, prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! } } };
+      const nowMs = row.db_now.getTime();
+      if (nowMs < row.starts_at.getTime()) return { write: null, result: { kind: "refused", row, reason: "not-started", minimumCents: minimumBidFor(row.state) } };
+      const previousLeader = row.state.leader?.bidderId ?? null;
+      const decision = placeBid(row.state, { bidderId: viewer.id, maxCents, placedAtMs: nowMs, seq: row.seq + 1 }, { phase: row.phase, closesAtMs: row.closes_at.getTime() });
+      if (!decision.accepted) return { write: null, result: { kind: "refused", row, reason: decision.reason, minimumCents: decision.minimumCents } };
+      const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, { windowSeconds: row.soft_close_seconds, maxExtensions: null });
+      const next = decision.state;
+      const seq = row.seq + 1;
+      return {
+        write: { seq, state: next, closesAt: new Date(clock.closesAtMs), extensionCount: clock.extensionCount, bidderId: viewer.id, maxCents, outcome: decision.outcome, key: idempotencyKey, placedAt: row.db_now },
+        result: {
+          kind: "accepted", outcome: decision.outcome, seq, previousLeader, previousLeaderPaddle: row.leader_paddle, extended: clock.extended,
+          row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
+        },
+      };
+    });
+    if (done.kind === "accepted") {
+      // The new leader is the bidder or the one before: both paddles are known, so nothing is awaited between commit and broadcast.
+      const leaderId = done.row.state.leader!.bidderId;
+      live = liveFrom(done.row, leaderId === viewer.id ? paddle : done.previousLeaderPaddle, done.extended);
+    }
+  } finally {
+    finishLotWrite(saleLotId, live ? { kind: "lot.bid", live } : null);
+  }
 
   if (done.kind === "refused") {
     const leader = done.row.state.leader ? (await paddlesOf(saleId, [done.row.state.leader.bidderId])).get(done.row.state.leader.bidderId) ?? null : null;
@@ -103,13 +116,9 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
     };
   }
   const leaderId = done.row.state.leader!.bidderId;
-  // The new leader is the bidder or the one before: both paddles are known, so the broadcast leaves with no await after commit.
-  const leaderPaddle = leaderId === viewer.id ? paddle : done.previousLeaderPaddle;
-  const live = liveFrom(done.row, leaderPaddle, done.extended);
-  emitLot("lot.bid", live);
   if (done.extended) void scheduleClose(saleLotId, done.row.closes_at).catch((e: Error) => console.error("[close] reschedule failed", e.message));
   // The bidder hears about a proxy outbid in this answer; the notice is for a leader who lost the lead.
   const outbid = done.previousLeader && done.previousLeader !== leaderId ? done.previousLeader : null;
-  if (outbid) void queueOutbidNotice(outbid, live).catch((e: Error) => console.error("[notice] outbid failed", e.message));
-  return { accepted: true, outcome: done.outcome, seq: done.seq, live, yourMaxCents: maxCents, leading: leaderId === viewer.id, replayed: false };
+  if (outbid) void queueOutbidNotice(outbid, live!).catch((e: Error) => console.error("[notice] outbid failed", e.message));
+  return { accepted: true, outcome: done.outcome, seq: done.seq, live: live!, yourMaxCents: maxCents, leading: leaderId === viewer.id, replayed: false };
 }

@@ -5,7 +5,7 @@ import { env } from "../config/env";
 import { queue, QUEUES } from "../jobs/queue";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
-import { reserveLotSeq } from "../realtime/lot-emitter";
+import { emitLot } from "../realtime/lot-emitter";
 import { db, User } from "../../models";
 import { scheduleClose } from "./close-schedule";
 import { liveFrom } from "./live-lot";
@@ -57,10 +57,9 @@ export async function closeSaleLot(saleLotId: string): Promise<"closed" | "alrea
   }
   if (result.kind !== "closed") return result.kind;
   const { row, outcome } = result;
-  const slot = reserveLotSeq(row.id, row.seq);
   const leaderId = row.state.leader?.bidderId;
   const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId]).catch(() => new Map<string, number>())).get(leaderId) ?? null : null;
-  slot.send("lot.closed", liveFrom(row, paddle));
+  emitLot("lot.closed", liveFrom(row, paddle));
   if (outcome.phase === "sold") await invoiceSoldLot(row.id).catch((e: Error) => console.error("[invoice] failed; the sweeper retries", e.message));
   await closingMail(row, outcome).catch((e: Error) => console.error("[mail] closing notice failed", e.message));
   return "closed";

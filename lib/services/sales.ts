@@ -5,7 +5,7 @@ import { DEFAULT_INCREMENT_LADDER } from "../auction/increments";
 import { applyBid, initialProxyState, type ProxyState } from "../auction/proxy";
 import { staggeredCloseTimes } from "../auction/soft-close";
 import { type LotLive } from "../realtime/events";
-import { reserveLotSeq } from "../realtime/lot-emitter";
+import { emitLot } from "../realtime/lot-emitter";
 import type { SaleCreateInput } from "../validation/sales";
 import { db, Lot, Sale, SaleLot } from "../../models";
 import { scheduleClose } from "./close-schedule";
@@ -201,10 +201,9 @@ export async function retractBid(admin: Viewer, saleLotId: string, bidId: string
       { replacements: { state: JSON.stringify(state), seq, price: state.priceCents, count: state.bidCount, leader: state.leader?.bidderId ?? null, met: state.reserveMet, saleLotId }, transaction: t });
     return { ...sl, seq, state };
   });
-  const slot = reserveLotSeq(saleLotId, row.seq); // in order with bids that commit while the paddle is read
   const leader = row.state.leader ? (await paddlesOf(row.sale_id, [row.state.leader.bidderId]).catch(() => new Map<string, number>())).get(row.state.leader.bidderId) ?? null : null;
   const live = liveFrom(row, leader);
-  slot.send("lot.bid", live);
+  emitLot("lot.bid", live);
   return live;
 }
 

@@ -23,6 +23,8 @@ export type Receipts = {
   refetches: number;
   /** lot.batch frames received (several events of the lot in one frame). */
   batches: number;
+  /** The first few arrivals out of order, as "seq after highest". */
+  orderExamples: string[];
   disconnects: number;
   connectErrors: number;
   /** lot.bid events for other lots (expected 0). */

@@ -48,6 +48,7 @@ let maxSeq = 0;
 let outOfOrder = 0;
 let jumps = 0;
 let refetches = 0;
+const orderExamples: string[] = [];
 let batches = 0;
 
 async function startAll(url: string, saleLotId: string, cookies: string[], batch: number): Promise<void> {
@@ -91,8 +92,8 @@ async function startAll(url: string, saleLotId: string, cookies: string[], batch
       grow(seq);
       if (seq > maxSeq) maxSeq = seq;
       if (seen.add(seq)) { dupes[seq]!++; return; }
-      if (highest >= 0 && seq < highest) outOfOrder++;
-      else if (highest >= 0 && seq > highest + 1) jumps++;
+      if (highest >= 0 && seq < highest) { outOfOrder++; if (orderExamples.length < 10) orderExamples.push(`${seq} after ${highest}`); }
+      else if (highest >= 0 && seq > highest + 1) { jumps++; if (orderExamples.length < 10) orderExamples.push(`${seq} skipping from ${highest}`); }
       if (seq > highest) highest = seq;
       counts[seq]!++;
       if (at > lastArrival[seq]!) lastArrival[seq] = at;
@@ -117,7 +118,7 @@ process.on("message", (m: FromParent) => {
       counts: Array.from(counts.subarray(m.from, m.from + n)),
       lastArrival: Array.from(lastArrival.subarray(m.from, m.from + n)),
       dupes: Array.from(dupes.subarray(m.from, m.from + n)),
-      maxSeq, outOfOrder, jumps, refetches, batches, disconnects, connectErrors, otherEvents, connected: sockets.filter((s) => s.connected).length,
+      maxSeq, outOfOrder, jumps, refetches, batches, orderExamples, disconnects, connectErrors, otherEvents, connected: sockets.filter((s) => s.connected).length,
     });
   } else if (m.type === "stop") {
     for (const s of sockets) s.disconnect();
