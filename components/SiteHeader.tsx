@@ -3,6 +3,7 @@ import type { Viewer } from "@/lib/auth/guards";
 import { can, ROLE_LABEL } from "@/lib/auth/roles";
 import { Mark } from "./Mark";
 import { NoticeBell } from "./live/NoticeBell";
+import { MenuButton } from "./MenuButton";
 import { SignOutButton } from "./SignOutButton";
 
 type NavItem = { href: string; label: string };
@@ -26,33 +27,37 @@ export function navFor(viewer: Viewer | null): NavItem[] {
   return items;
 }
 
+/** The site header: brand, links and the viewer's corner; below 768 px the links fold behind a menu button. */
 export function SiteHeader({ viewer }: { viewer: Viewer | null }) {
+  const items = navFor(viewer);
   return (
-    <header className="border-b border-flash-200 bg-white">
-      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+    <header className="relative border-b border-flash-200 bg-white">
+      <div className="mx-auto flex max-w-6xl items-center gap-x-6 gap-y-2 px-4 py-3 md:flex-wrap">
         <Link href="/" className="flex items-center gap-2 font-semibold text-flash-900">
           <Mark />
           <span className="text-lg tracking-tight">Getterline</span>
         </Link>
-        <nav aria-label="Main" className="flex flex-1 flex-wrap gap-x-4 gap-y-1 text-sm">
-          {navFor(viewer).map((i) => (
+        <nav aria-label="Main" className="hidden flex-1 flex-wrap gap-x-4 gap-y-1 text-sm md:flex">
+          {items.map((i) => (
             <Link key={i.href} href={i.href} className="text-flash-700 underline-offset-4 hover:text-flash-900 hover:underline">
               {i.label}
             </Link>
           ))}
         </nav>
         {viewer ? (
-          <div className="flex items-center gap-3 text-sm">
-            <span className="text-flash-700">
+          <div className="ml-auto flex items-center gap-3 text-sm md:ml-0">
+            <span className="hidden text-flash-700 md:inline">
               {viewer.name} <span className="text-flash-500">· {viewer.roles.map((r) => ROLE_LABEL[r]).join(", ")}</span>
             </span>
             <NoticeBell />
-            <SignOutButton />
+            <span className="hidden md:inline"><SignOutButton /></span>
+            <MenuButton items={items}><p className="py-3 text-flash-700">{viewer.name} · <SignOutButton /></p></MenuButton>
           </div>
         ) : (
-          <div className="flex items-center gap-3 text-sm">
+          <div className="ml-auto flex items-center gap-3 text-sm md:ml-0">
             <Link href="/sign-in" className="text-flash-800 underline-offset-4 hover:underline">Sign in</Link>
             <Link href="/sign-up" className="btn-primary">Open an account</Link>
+            <MenuButton items={items} />
           </div>
         )}
       </div>

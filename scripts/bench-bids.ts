@@ -24,6 +24,7 @@ import type { Receipts } from "./bench-bids/protocol";
 import { ensureBuild, freePort, startServer, type AppServer } from "./bench-bids/server";
 import { bidRows, createDatabase, databaseUrl, dropDatabase, INCREMENT_CENTS, migrate, OPENING_CENTS, seed, sessionCookie } from "./bench-bids/setup";
 import { startWatchers, type Watchers } from "./bench-bids/watchers";
+import { GAP_WAIT_MS } from "../lib/realtime/sequencer";
 
 const cwd = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..");
 loadEnvConfig(cwd, false, { info: () => undefined, error: console.error });
@@ -228,7 +229,8 @@ async function main(): Promise<number> {
   const lost = a.lost;
   const duplicated = a.dupBroadcast + a.dupAnswers + a.dupKeys;
   log(`audit: ${all.length} accepted answers, ${table.rows.length} bid rows (sale_lots.seq ${table.lotSeq}); lost: ${a.lostBroadcast} not broadcast to every watcher, ${a.lostTable} not in the table; duplicated: ${a.dupBroadcast} broadcast copies, ${a.dupAnswers} answers, ${a.dupKeys} keys; seq gaps ${a.gaps}; unanswered rows ${a.unanswered}; broadcasts without a row ${a.phantom}`);
-  log(`audit: order at the watchers: ${receipts.outOfOrder} arrivals behind a later seq, ${receipts.jumps} arrivals skipping a seq not yet seen (each would make a client refetch)`);
+  log(`audit: order at the watchers: ${receipts.outOfOrder} arrivals behind a later seq, ${receipts.jumps} arrivals skipping a seq not yet seen; ${receipts.refetches} refetches after a ${GAP_WAIT_MS} ms wait; ${receipts.batches} batched frames`);
+  if (receipts.orderExamples.length) log(`audit: first arrivals out of order: ${receipts.orderExamples.join("; ")}`);
   log(`audit: watcher disconnects ${receipts.disconnects}, connect errors ${receipts.connectErrors}, still connected ${receipts.connected} of ${W}`);
   for (const e of a.examples) log(`  ${e}`);
   const serverLog = fs.readFileSync(server.logFile, "utf8");
@@ -254,6 +256,7 @@ async function main(): Promise<number> {
   console.log(JSON.stringify({
     watchers: W, bidders: M, seconds: T, bidsPerSecond: round(bidsPerSecond), baselineTps: round(base.tps), ratio: round(ratio, 3), offeredRate: R,
     p50Ms: round(percentile(latencies, 50)), p95Ms: round(percentile(latencies, 95)), p99Ms: round(percentile(latencies, 99)), lost, duplicated,
+    outOfOrder: receipts.outOfOrder + receipts.jumps, refetches: receipts.refetches,
   }));
   return ok ? 0 : 1;
 }

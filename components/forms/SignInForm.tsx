@@ -4,6 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
+import { safeCallbackPath } from "@/lib/auth/callback";
 import { SignInSchema, type SignInInput } from "@/lib/validation/account";
 import { Field, FormAlert } from "./Field";
 
@@ -22,7 +23,7 @@ export function SignInForm({ from }: { from?: string }) {
     const res = await fetch("/api/auth/callback/credentials", {
       method: "POST",
       headers: { "content-type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({ ...values, csrfToken: csrf.csrfToken, callbackUrl: from ?? "/", json: "true" }),
+      body: new URLSearchParams({ ...values, csrfToken: csrf.csrfToken, callbackUrl: safeCallbackPath(from) ?? "/", json: "true" }),
     });
     const body = (await res.json().catch(() => ({}))) as { url?: string; error?: { message?: string } };
     if (res.status === 429) return setProblem(body.error?.message ?? "Too many attempts; wait a while and try again.");
@@ -31,7 +32,7 @@ export function SignInForm({ from }: { from?: string }) {
       return setProblem("That e-mail and password do not match an account. Check both, or reset your password.");
     }
     const me = await fetch("/api/account/me").then((r) => (r.ok ? r.json() : null));
-    router.push(from && from.startsWith("/") ? from : (me?.home ?? "/"));
+    router.push(safeCallbackPath(from) ?? me?.home ?? "/");
     router.refresh();
   }
 

@@ -5,6 +5,7 @@ import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { apiFetch } from "@/lib/client/api";
 import { liveSocket } from "./socket";
+import { When } from "@/components/time/When";
 
 type Notice = { id: string; text: string; href: string | null; read: boolean; at: string };
 
@@ -39,7 +40,7 @@ export function NoticeBell() {
               {data.notices.map((n) => (
                 <li key={n.id} className="border-b border-flash-100 pb-1">
                   {n.href ? <Link href={n.href} className="underline">{n.text}</Link> : n.text}
-                  <span className="block text-xs text-flash-500">{n.at.slice(0, 16).replace("T", " ")} UTC</span>
+                  <When iso={n.at} className="block text-xs text-flash-500" />
                 </li>
               ))}
             </ul>

@@ -6,6 +6,7 @@ import {
   rowSortingFeature, sortFn_alphanumeric, tableFeatures, useTable,
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
+import { useNarrow } from "@/components/useNarrow";
 import type { ItemView, LotItemView } from "@/lib/services/lots";
 import { CONDITION_VALUES } from "@/lib/validation/lots";
 import { BASIS_WORDS, CONDITION_WORDS, HAZARD_WORDS } from "./words";
@@ -43,6 +44,7 @@ type Props = {
 export function ItemsGrid({ items, editable, onEdit, onRemove, onQuickChange }: Props) {
   const [filter, setFilter] = useState("");
   const [grouped, setGrouped] = useState(true);
+  const narrow = useNarrow();
   const data = useMemo<Row[]>(
     () => items.map((i) => ({ ...i, family: i.familyLabel, tested: i.readings.length })),
     [items],
@@ -140,6 +142,28 @@ export function ItemsGrid({ items, editable, onEdit, onRemove, onQuickChange }: 
         </label>
         <span className="text-sm text-flash-600">{items.length} lines · {items.reduce((n, i) => n + i.quantity, 0)} tubes</span>
       </div>
+      {narrow ? (
+        <ul className="space-y-2" aria-label="Items" data-testid="items-cards">
+          {table.getRowModel().rows.map((row) => row.getIsGrouped() ? (
+            <li key={row.id} className="pt-2 font-semibold">
+              {String(row.getGroupingValue("family"))}
+              <span className="ml-2 text-sm font-normal text-flash-600">{leafCount(row.subRows as never)} lines · {tubes(row.subRows as never)} tubes</span>
+            </li>
+          ) : (
+            <li key={row.id} className="card p-3">
+              <dl className="grid grid-cols-[auto_1fr] items-center gap-x-3 gap-y-1 text-sm">
+                {row.getAllCells().filter((c) => !(grouped && c.column.id === "family")).map((c) => (
+                  <div key={c.id} className="contents">
+                    <dt className="text-xs text-flash-600">{typeof c.column.columnDef.header === "string" ? c.column.columnDef.header : ""}</dt>
+                    <dd className="min-w-0">{c.getIsPlaceholder() ? null : <table.FlexRender cell={c} />}</dd>
+                  </div>
+                ))}
+              </dl>
+            </li>
+          ))}
+          {items.length === 0 ? <li className="text-flash-600">No items yet: add them by hand or import a CSV.</li> : null}
+        </ul>
+      ) : (
       <div className="overflow-x-auto rounded-lg border border-flash-200 bg-white">
         <table className="min-w-full text-sm">
           <thead className="bg-flash-100 text-left text-flash-700">
@@ -180,6 +204,7 @@ export function ItemsGrid({ items, editable, onEdit, onRemove, onQuickChange }: 
           </tbody>
         </table>
       </div>
+      )}
     </div>
   );
 }

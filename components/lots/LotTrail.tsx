@@ -1,4 +1,5 @@
 import { EVENT_WORDS } from "./words";
+import { When } from "@/components/time/When";
 
 export type TrailEvent = { id: number; kind: string; comment: string; details: Record<string, unknown>; at: string; actor: string | null };
 
@@ -10,7 +11,7 @@ export function LotTrail({ events }: { events: TrailEvent[] }) {
         <li key={e.id} className={`rounded-md border px-3 py-2 text-sm ${e.kind === "amended" ? "border-glow-400 bg-glow-50" : e.kind === "changes-requested" ? "border-glow-200 bg-white" : "border-flash-200 bg-white"}`}>
           <p>
             <strong>{EVENT_WORDS[e.kind] ?? e.kind}</strong>
-            <span className="text-flash-600"> · {e.actor ?? "Getterline"} · <time dateTime={e.at}>{e.at.slice(0, 16).replace("T", " ")} UTC</time></span>
+            <span className="text-flash-600"> · {e.actor ?? "Getterline"} · <When iso={e.at} /></span>
           </p>
           {e.comment ? <p className="mt-1 whitespace-pre-wrap text-flash-800">{e.comment}</p> : null}
           {e.kind === "amended" && e.details.before ? (

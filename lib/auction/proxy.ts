@@ -163,11 +163,14 @@ export function applyBid(state: ProxyState, bid: MaxBid): BidDecision {
     nextLeader = leader;
     price = Math.min(leader.maxCents, bid.maxCents + incrementAt(bid.maxCents, terms.ladder));
   }
+  const priced = withReserve(terms, nextLeader.maxCents, price);
+  // [SUG] A leader raising their own maximum is private: it counts as a public bid only if it moved the price.
+  const counts = outcome !== "max-raised" || priced.priceCents !== state.priceCents;
   const next: ProxyState = {
     terms,
     leader: nextLeader,
-    ...withReserve(terms, nextLeader.maxCents, price),
-    bidCount: state.bidCount + 1,
+    ...priced,
+    bidCount: state.bidCount + (counts ? 1 : 0),
     lastSeq: bid.seq,
   };
   return { accepted: true, outcome, state: next, minimumCents: minimumBidFor(next) };

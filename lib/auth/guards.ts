@@ -5,6 +5,7 @@ import type { NextRequest } from "next/server";
 import { ApiError } from "../api/errors";
 import { env } from "../config/env";
 import { currentRoles } from "../services/accounts";
+import { safeCallbackPath, signInHref } from "./callback";
 import { authOptions } from "./options";
 import { can, type Permission, type Role } from "./roles";
 
@@ -59,10 +60,24 @@ export async function requireActionViewer(permission?: Permission): Promise<View
   return assertCan(await currentViewer(), permission);
 }
 
-/** For layouts and pages: redirect to sign-in, or to /forbidden, instead of rendering. */
+/** The page being rendered, as the root proxy (proxy.ts) recorded it; null outside a page request. */
+export async function requestedPath(): Promise<string | null> {
+  try {
+    // Loaded lazily: the custom server (socket handshake) imports this module outside Next's request scope.
+    const { headers } = await import("next/headers");
+    return safeCallbackPath((await headers()).get("x-getterline-path"));
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * For layouts and pages: redirect to sign-in, or to /forbidden, instead of
+ * rendering. Sign-in returns to the page asked for (query included), else to `from`.
+ */
 export async function requirePageViewer(permission?: Permission, from?: string): Promise<Viewer> {
   const viewer = await currentViewer();
-  if (!viewer) redirect(`/sign-in${from ? `?from=${encodeURIComponent(from)}` : ""}`);
+  if (!viewer) redirect(signInHref((await requestedPath()) ?? from));
   if (permission && !can(viewer.roles, permission)) redirect("/forbidden");
   return viewer;
 }

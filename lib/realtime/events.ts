@@ -25,6 +25,8 @@ export interface ServerToClientEvents {
   "lot.bid": (p: LotLive) => void;
   /** The lot closed: sold or unsold. */
   "lot.closed": (p: LotLive) => void;
+  /** Several events of one lot that became ready together, in seq order (see lib/realtime/lot-emitter). */
+  "lot.batch": (p: { events: { kind: "lot.bid" | "lot.closed"; live: LotLive }[] }) => void;
 }
 
 /** The answer to a bid placed over the socket: the same result as POST /api/sale-lots/:id/bids. */
@@ -40,6 +42,11 @@ export interface ClientToServerEvents {
 }
 
 export type SocketData = { userId: string; roles: string[] };
+
+/** Between app instances: a lot's events, sent by the instance that committed them, for the others to deliver locally in the same order. */
+export interface InterServerEvents {
+  "lot.relay": (p: { rooms: string[]; event: "lot.bid" | "lot.closed" | "lot.batch"; payload: unknown }) => void;
+}
 
 /** Rooms a client may join by itself: public sale and lot rooms. */
 export function joinableRoom(room: string): boolean {

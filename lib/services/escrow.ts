@@ -7,6 +7,7 @@ import { formatCents } from "../money/cents";
 import { inspectionWindowEnd } from "../money/inspection";
 import { escrowReleasedEntries, payoutSentEntries } from "../money/ledger";
 import { stripe, stripeConfig } from "../stripe/client";
+import { notify } from "./notices";
 import { db, User } from "../../models";
 import type { InvoiceRow } from "./invoices";
 import { post } from "./ledger";
@@ -177,6 +178,7 @@ async function mailStatement(inv: InvoiceRow, left: ReturnType<typeof remainingF
 }
 
 async function mailParty(userId: string, subject: string, body: string): Promise<void> {
+  await notify(userId, subject, null).catch((e: Error) => console.error("[notice]", e.message));
   const u = await User.findByPk(userId, { attributes: ["email", "displayName"] });
   if (!u) return;
   await sendMail({ to: u.email, subject, text: `Hello ${u.displayName},\n\n${body}\n\nGetterline Exchange` }).catch((e: Error) => console.error("[mail]", e.message));

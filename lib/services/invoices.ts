@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
+import { can } from "../auth/roles";
 import { ApiError } from "../api/errors";
 import { env } from "../config/env";
 import { sendMail } from "../mail/mailer";
@@ -100,7 +101,7 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
 
 /** One invoice, for its buyer, its consignor (without buyer details) or the house. */
 export async function getInvoice(viewer: Viewer, invoiceId: string) {
-  const [inv] = await db().query<InvoiceRow & { title: string; sale_id: string }>(
+  const [inv] = await db().query<InvoiceRow & { title: string; sale_id: string; dispute_id: string | null }>(
     `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id,
             (SELECT COALESCE(jsonb_agg(jsonb_build_object('amountCents', u.amount_cents, 'state', u.state, 'refundedAt', u.refunded_at) ORDER BY u.detected_at), '[]'::jsonb)
                FROM unexpected_charges u WHERE u.invoice_id = i.id) AS unexpected
@@ -108,8 +109,14 @@ export async function getInvoice(viewer: Viewer, invoiceId: string) {
     { replacements: { invoiceId }, type: QueryTypes.SELECT },
   );
   const house = viewer.roles.includes("admin");
-  if (!inv || !(house || inv.buyer_id === viewer.id || inv.consignor_id === viewer.id)) throw new ApiError("not_found", "No such invoice");
-  return presentInvoice(inv, viewer);
+  if (!inv) throw new ApiError("not_found", "No such invoice");
+  if (house || inv.buyer_id === viewer.id || inv.consignor_id === viewer.id) return presentInvoice(inv, viewer);
+  // A mediator reads (never changes) the invoice of a case they mediate; any other invoice stays hidden.
+  if (can(viewer.roles, "disputes.mediate") && inv.dispute_id) {
+    const [mediated] = await db().query(`SELECT 1 FROM disputes WHERE id = :d AND mediator_id = :me`, { replacements: { d: inv.dispute_id, me: viewer.id }, type: QueryTypes.SELECT });
+    if (mediated) return { ...presentInvoice(inv, viewer), readOnly: true as const };
+  }
+  throw new ApiError("not_found", "No such invoice");
 }
 
 /** A charge this invoice did not owe, refunded automatically (lib/services/unexpected-charges.ts). */

@@ -2,27 +2,21 @@ import { QueryTypes } from "sequelize";
 import { closeOutcome } from "../auction/lot-phase";
 import type { ProxyState } from "../auction/proxy";
 import { env } from "../config/env";
-import { jobId, queue, QUEUES } from "../jobs/queue";
+import { queue, QUEUES } from "../jobs/queue";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
-import { emitTo } from "../realtime/emit";
-import { lotRoom, saleRoom } from "../realtime/events";
+import { emitLot } from "../realtime/lot-emitter";
 import { db, User } from "../../models";
-import { liveFrom } from "./bidding";
+import { scheduleClose } from "./close-schedule";
+import { liveFrom } from "./live-lot";
 import { disputeSweep } from "./disputes";
 import { releaseDue } from "./escrow";
 import { refundDueUnexpectedCharges } from "./unexpected-charges";
 import { lotChanged } from "./catalogue/events";
 import { invoiceSoldLot, sendReminders } from "./invoices";
 import { notify } from "./notices";
+import { startOutbidWorker } from "./outbid-notices";
 import { paddlesOf } from "./paddles";
-
-/** Queue the close of a sale lot at `closesAt`; the same lot and time queue one job however often this is called. */
-export async function scheduleClose(saleLotId: string, closesAt: Date): Promise<void> {
-  const boss = queue();
-  if (!boss) return; // no worker in this process (the sweeper still closes due lots)
-  await boss.send(QUEUES.lotClose, { saleLotId }, { id: jobId("close", saleLotId, String(closesAt.getTime())), startAfter: closesAt, retryLimit: 5 });
-}
 
 type Closing = { id: string; sale_id: string; lot_id: string; phase: "open" | "sold" | "unsold" | "withdrawn"; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null; consignor_id: string; due: boolean };
 
@@ -65,8 +59,8 @@ export async function closeSaleLot(saleLotId: string): Promise<"closed" | "alrea
   if (result.kind !== "closed") return result.kind;
   const { row, outcome } = result;
   const leaderId = row.state.leader?.bidderId;
-  const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId])).get(leaderId) ?? null : null;
-  emitTo([lotRoom(row.id), saleRoom(row.sale_id)], "lot.closed", liveFrom(row, paddle));
+  const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId]).catch(() => new Map<string, number>())).get(leaderId) ?? null : null;
+  emitLot("lot.closed", liveFrom(row, paddle));
   await lotChanged(row.lot_id, "closed");
   if (outcome.phase === "sold") await invoiceSoldLot(row.id).catch((e: Error) => console.error("[invoice] failed; the sweeper retries", e.message));
   await closingMail(row, outcome).catch((e: Error) => console.error("[mail] closing notice failed", e.message));
@@ -86,8 +80,10 @@ async function closingMail(row: Closing, outcome: ReturnType<typeof closeOutcome
       await notify(buyer.id, `You won "${title}" at ${formatCents(outcome.hammerCents)}.`, href);
       await sendMail({ to: buyer.email, subject: `You won: ${title}`, text: `Hello ${buyer.displayName},\n\nYou won "${title}" with a hammer price of ${formatCents(outcome.hammerCents)}. The invoice follows separately.\n\n${base}${href}\n\nGetterline Exchange` });
     }
+    await notify(row.consignor_id, `"${title}" sold for ${formatCents(outcome.hammerCents)}. Settlement follows payment and inspection.`, "/consignor");
     if (consignor) await sendMail({ to: consignor.email, subject: `Sold: ${title}`, text: `Hello ${consignor.displayName},\n\nYour lot "${title}" sold for ${formatCents(outcome.hammerCents)} (hammer price). Settlement follows once the buyer has paid and inspected the tubes.\n\nGetterline Exchange` });
   } else if (consignor) {
+    await notify(row.consignor_id, `"${title}" closed unsold.`, "/consignor");
     const why = outcome.reason === "no-bids" ? "it drew no bids" : `the reserve was not met (highest bid ${formatCents(outcome.highBidCents ?? 0)})`;
     await sendMail({ to: consignor.email, subject: `Unsold: ${title}`, text: `Hello ${consignor.displayName},\n\nYour lot "${title}" closed unsold: ${why}. The house will talk with you about offering it again.\n\nGetterline Exchange` });
   }
@@ -116,6 +112,7 @@ export async function startClosingWorker(): Promise<() => void> {
   await boss.work<{ saleLotId: string }>(QUEUES.lotClose, { pollingIntervalSeconds: 0.5, batchSize: 5 }, async (jobs) => {
     for (const job of jobs) await closeSaleLot(job.data.saleLotId);
   });
+  await startOutbidWorker();
   await sweepDueLots();
   const timer = setInterval(() => {
     void sweepDueLots().catch((e: Error) => console.error("[close] sweep failed", e.message));

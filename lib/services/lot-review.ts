@@ -11,6 +11,7 @@ import type { LotState } from "../../models/Lot";
 import { lotChanged } from "./catalogue/events";
 import { assertConsignorCanEdit } from "./lot-access";
 import { presentLot, type LotView } from "./lots";
+import { notify } from "./notices";
 
 const TARGET: Record<ReviewDecision["action"], LotState> = {
   "request-changes": "needs-changes",
@@ -19,6 +20,7 @@ const TARGET: Record<ReviewDecision["action"], LotState> = {
 };
 
 async function mailConsignor(lot: Lot, subject: string, body: string): Promise<void> {
+  await notify(lot.consignorId, `${subject}: ${lot.title}`, `/consignor/lots/${lot.id}`).catch((e: Error) => console.error("[notice] lot notice failed", e.message));
   const consignor = await User.findByPk(lot.consignorId, { attributes: ["email", "displayName"] });
   if (!consignor) return;
   await sendMail({

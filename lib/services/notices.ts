@@ -16,7 +16,7 @@ export async function notify(userId: string, text: string, href: string | null):
   emitTo([userRoom(userId)], "notice.created", { id: n.id, text: n.text, ...(href ? { href } : {}), at: n.createdAt.toISOString() });
 }
 
-/** Tell a dealer they were outbid: always in the app, by e-mail at most once per lot per window. */
+/** Tell a dealer another is now ahead of them: always in the app, by e-mail at most once per lot per window. */
 export async function notifyOutbid(userId: string, saleLotId: string, live: LotLive): Promise<void> {
   const s = db();
   const [title] = await s.query<{ title: string }>(
@@ -24,7 +24,7 @@ export async function notifyOutbid(userId: string, saleLotId: string, live: LotL
     { replacements: { saleLotId }, type: QueryTypes.SELECT },
   );
   const href = `/sales/${live.saleId}/lots/${saleLotId}`;
-  const text = `You were outbid on "${title?.title ?? "a lot"}": now ${formatCents(live.priceCents)}, next minimum ${formatCents(live.minimumCents)}.`;
+  const text = `Another dealer is ahead on "${title?.title ?? "a lot"}": the price is ${formatCents(live.priceCents)}; a bid from ${formatCents(live.minimumCents)} takes the lead back if it passes their ceiling.`;
   await notify(userId, text, href);
   const due = await s.query<{ user_id: string }>(
     `INSERT INTO outbid_mail (user_id, sale_lot_id, last_sent_at) VALUES (:userId, :saleLotId, now())
@@ -38,7 +38,7 @@ export async function notifyOutbid(userId: string, saleLotId: string, live: LotL
   if (!user) return;
   await sendMail({
     to: user.email,
-    subject: `Outbid: ${title?.title ?? "a lot"}`,
+    subject: `Another dealer is ahead: ${title?.title ?? "a lot"}`,
     text: `Hello ${user.displayName},\n\n${text}\n\nBid again: ${env().NEXTAUTH_URL}${href}\n\n(We send at most one of these per lot every ${OUTBID_MAIL_EVERY_MS / 60000} minutes; the lot page always shows the latest.)\n\nGetterline Exchange`,
   }).catch((e: Error) => console.error("[mail] outbid failed", e.message));
 }

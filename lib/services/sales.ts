@@ -4,13 +4,13 @@ import { ApiError } from "../api/errors";
 import { DEFAULT_INCREMENT_LADDER } from "../auction/increments";
 import { applyBid, initialProxyState, type ProxyState } from "../auction/proxy";
 import { staggeredCloseTimes } from "../auction/soft-close";
-import { emitTo } from "../realtime/emit";
-import { lotRoom, saleRoom, type LotLive } from "../realtime/events";
+import { type LotLive } from "../realtime/events";
+import { emitLot } from "../realtime/lot-emitter";
 import type { SaleCreateInput } from "../validation/sales";
 import { db, Lot, Sale, SaleLot } from "../../models";
-import { liveFrom } from "./bidding";
 import { lotChanged } from "./catalogue/events";
-import { scheduleClose } from "./lot-closing";
+import { scheduleClose } from "./close-schedule";
+import { liveFrom } from "./live-lot";
 import { paddlesOf } from "./paddles";
 
 /**
@@ -50,21 +50,18 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
   return { id: sale.id, lots: saleLots.length };
 }
 
-type LiveRow = { id: string; sale_id: string; lot_id: string; title: string; position: number; phase: LotLive["phase"]; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null; consignor: string };
+type LiveRow = { id: string; sale_id: string; lot_id: string; title: string; position: number; phase: LotLive["phase"]; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null; consignor: string; leader_paddle: number | null };
 
-async function liveRows(where: string, replacements: Record<string, unknown>): Promise<(LotLive & { lotId: string; title: string; position: number; consignor: string })[]> {
+/** Sale lots with their live state and the leader's paddle (any number of sales, one query). */
+export async function liveRows(where: string, replacements: Record<string, unknown>, order = "sl.position"): Promise<(LotLive & { lotId: string; title: string; position: number; consignor: string })[]> {
   const rows = await db().query<LiveRow>(
-    `SELECT sl.id, sl.sale_id, sl.lot_id, l.title, sl.position, sl.phase, sl.seq, sl.state, sl.closes_at, sl.hammer_cents, u.display_name AS consignor
-       FROM sale_lots sl JOIN lots l ON l.id = sl.lot_id JOIN users u ON u.id = l.consignor_id WHERE ${where} ORDER BY sl.position`,
+    `SELECT sl.id, sl.sale_id, sl.lot_id, l.title, sl.position, sl.phase, sl.seq, sl.state, sl.closes_at, sl.hammer_cents, u.display_name AS consignor, p.number AS leader_paddle
+       FROM sale_lots sl JOIN lots l ON l.id = sl.lot_id JOIN users u ON u.id = l.consignor_id
+       LEFT JOIN paddles p ON p.sale_id = sl.sale_id AND p.user_id = sl.leader_id
+      WHERE ${where} ORDER BY ${order}`,
     { replacements, type: QueryTypes.SELECT },
   );
-  if (!rows.length) return [];
-  const saleId = rows[0]!.sale_id;
-  const paddles = await paddlesOf(saleId, [...new Set(rows.map((r) => r.state.leader?.bidderId).filter((x): x is string => Boolean(x)))]);
-  return rows.map((r) => ({
-    ...liveFrom(r, r.state.leader ? paddles.get(r.state.leader.bidderId) ?? null : null),
-    lotId: r.lot_id, title: r.title, position: r.position, consignor: r.consignor,
-  }));
+  return rows.map((r) => ({ ...liveFrom(r, r.leader_paddle ?? null), lotId: r.lot_id, title: r.title, position: r.position, consignor: r.consignor }));
 }
 
 /** Sales with counts, newest first. */
@@ -80,15 +77,28 @@ export async function listSales() {
   })));
 }
 
-/** One sale with every lot's live state. */
-export async function getSale(saleId: string) {
+/** One sale with every lot's live state and, for a viewer, their paddle, ceilings and watched lots. */
+export async function getSale(saleId: string, viewer?: Viewer) {
   db();
   const sale = await Sale.findByPk(saleId);
   if (!sale) throw new ApiError("not_found", "No such sale");
   return {
     sale: { id: sale.id, title: sale.title, startsAt: sale.startsAt.toISOString(), softCloseSeconds: sale.softCloseSeconds, isDemo: sale.isDemo },
     lots: await liveRows("sl.sale_id = :saleId", { saleId }),
+    you: viewer ? await yourPlaceIn(saleId, viewer.id) : { paddle: null, ceilings: {}, watched: [] },
   };
+}
+
+/** A dealer's paddle in a sale, their highest standing ceiling per lot and the lots they follow (one query). */
+async function yourPlaceIn(saleId: string, userId: string): Promise<{ paddle: number | null; ceilings: Record<string, number>; watched: string[] }> {
+  const [r] = await db().query<{ paddle: number | null; ceilings: Record<string, number> | null; watched: string[] | null }>(
+    `SELECT (SELECT number FROM paddles WHERE sale_id = :saleId AND user_id = :userId) AS paddle,
+            (SELECT jsonb_object_agg(sale_lot_id, m) FROM (SELECT b.sale_lot_id, MAX(b.max_cents) AS m FROM bids b JOIN sale_lots sl ON sl.id = b.sale_lot_id
+               WHERE sl.sale_id = :saleId AND b.bidder_id = :userId AND b.retracted_at IS NULL GROUP BY b.sale_lot_id) x) AS ceilings,
+            (SELECT array_agg(w.sale_lot_id) FROM watches w JOIN sale_lots sl ON sl.id = w.sale_lot_id WHERE sl.sale_id = :saleId AND w.user_id = :userId) AS watched`,
+    { replacements: { saleId, userId }, type: QueryTypes.SELECT },
+  );
+  return { paddle: r?.paddle ?? null, ceilings: r?.ceilings ?? {}, watched: r?.watched ?? [] };
 }
 
 /**
@@ -109,12 +119,17 @@ export async function getSaleLot(viewer: Viewer, saleLotId: string) {
   const mine = bids.filter((b) => b.bidder_id === viewer.id && !b.retracted_at);
   const [watch] = await s.query<{ n: number }>(`SELECT 1 AS n FROM watches WHERE user_id = :u AND sale_lot_id = :l`, { replacements: { u: viewer.id, l: saleLotId }, type: QueryTypes.SELECT });
   const isHouse = viewer.roles.includes("admin");
+  // A leader raising their own ceiling is private: no public row unless the price moved.
+  const priceBefore = new Map<number, number>();
+  [...bids].reverse().reduce((prev, b) => { priceBefore.set(b.seq, prev); return b.retracted_at ? prev : b.price_after_cents; }, -1);
+  const privateRaise = (b: (typeof bids)[number]) => b.outcome === "max-raised" && priceBefore.get(b.seq) === b.price_after_cents;
   return {
     live,
     sale: { title: sale!.title, startsAt: sale!.starts_at.toISOString(), softCloseSeconds: sale!.soft_close_seconds },
-    history: bids.map((b) => ({
+    lot: await lotFacts(live.lotId),
+    history: bids.filter((b) => isHouse || b.bidder_id === viewer.id || !privateRaise(b)).map((b) => ({
       id: isHouse ? String(b.id) : undefined, seq: b.seq, paddle: b.number, priceAfterCents: b.price_after_cents, at: b.placed_at.toISOString(),
-      retracted: Boolean(b.retracted_at), retractReason: b.retract_reason, mine: b.bidder_id === viewer.id,
+      retracted: Boolean(b.retracted_at), retractReason: b.retract_reason, mine: b.bidder_id === viewer.id, privateRaise: privateRaise(b),
     })),
     you: {
       paddle: mine.length ? (await paddlesOf(live.saleId, [viewer.id])).get(viewer.id) ?? null : null,
@@ -124,6 +139,22 @@ export async function getSaleLot(viewer: Viewer, saleLotId: string) {
       ownLot: row!.consignor_id === viewer.id,
       watching: Boolean(watch),
     },
+  };
+}
+
+/** What a dealer reads beside the bid form: estimate, tube count, conditions and a first photo. */
+async function lotFacts(lotId: string) {
+  const [r] = await db().query<{ estimate_low_cents: number | null; estimate_high_cents: number | null; tubes: string | null; conditions: Record<string, number> | null; photo_id: string | null }>(
+    `SELECT l.estimate_low_cents, l.estimate_high_cents,
+            (SELECT SUM(quantity) FROM lot_items WHERE lot_id = l.id) AS tubes,
+            (SELECT jsonb_object_agg(condition, n) FROM (SELECT condition, SUM(quantity)::int AS n FROM lot_items WHERE lot_id = l.id GROUP BY condition) c) AS conditions,
+            (SELECT id FROM lot_photos WHERE lot_id = l.id ORDER BY created_at LIMIT 1) AS photo_id
+       FROM lots l WHERE l.id = :lotId`,
+    { replacements: { lotId }, type: QueryTypes.SELECT },
+  );
+  return {
+    estimateLowCents: r?.estimate_low_cents ?? null, estimateHighCents: r?.estimate_high_cents ?? null,
+    tubes: Number(r?.tubes ?? 0), conditions: r?.conditions ?? {}, photoId: r?.photo_id ?? null,
   };
 }
 
@@ -138,13 +169,9 @@ export async function setWatch(viewer: Viewer, saleLotId: string, on: boolean): 
   return { watching: on };
 }
 
-/** The viewer's watchlist with live states. */
+/** The viewer's watchlist with live states, read in one query. */
 export async function watchlist(viewer: Viewer) {
-  const ids = await db().query<{ sale_lot_id: string }>(`SELECT sale_lot_id FROM watches WHERE user_id = :u`, { replacements: { u: viewer.id }, type: QueryTypes.SELECT });
-  if (!ids.length) return [];
-  const all = [];
-  for (const { sale_lot_id } of ids) all.push(...(await liveRows("sl.id = :id", { id: sale_lot_id })));
-  return all;
+  return liveRows("sl.id IN (SELECT sale_lot_id FROM watches WHERE user_id = :u)", { u: viewer.id }, "sl.closes_at");
 }
 
 /**
@@ -176,9 +203,9 @@ export async function retractBid(admin: Viewer, saleLotId: string, bidId: string
       { replacements: { state: JSON.stringify(state), seq, price: state.priceCents, count: state.bidCount, leader: state.leader?.bidderId ?? null, met: state.reserveMet, saleLotId }, transaction: t });
     return { ...sl, seq, state };
   });
-  const leader = row.state.leader ? (await paddlesOf(row.sale_id, [row.state.leader.bidderId])).get(row.state.leader.bidderId) ?? null : null;
+  const leader = row.state.leader ? (await paddlesOf(row.sale_id, [row.state.leader.bidderId]).catch(() => new Map<string, number>())).get(row.state.leader.bidderId) ?? null : null;
   const live = liveFrom(row, leader);
-  emitTo([lotRoom(saleLotId), saleRoom(row.sale_id)], "lot.bid", live);
+  emitLot("lot.bid", live);
   return live;
 }
 
@@ -193,3 +220,4 @@ export async function offerableLots() {
   );
   return rows.map((r) => ({ id: r.id, title: r.title, consignor: r.consignor, estimateLowCents: r.estimate_low_cents, estimateHighCents: r.estimate_high_cents, reserveCents: r.reserve_cents }));
 }
+

@@ -19,6 +19,12 @@ export type Receipts = {
   outOfOrder: number;
   /** Arrivals that skipped seqs the watcher had not seen yet (a client following the seq rule would refetch). */
   jumps: number;
+  /** Refetches a client would make: a gap still open GAP_WAIT_MS after the event ahead of it arrived. */
+  refetches: number;
+  /** lot.batch frames received (several events of the lot in one frame). */
+  batches: number;
+  /** The first few arrivals out of order, as "seq after highest". */
+  orderExamples: string[];
   disconnects: number;
   connectErrors: number;
   /** lot.bid events for other lots (expected 0). */

@@ -3,6 +3,7 @@
 // Started by watchers.ts with an IPC channel; exits when the parent goes away.
 import { performance } from "node:perf_hooks";
 import { io as connect, type Socket } from "socket.io-client";
+import { GAP_WAIT_MS } from "../../lib/realtime/sequencer";
 import type { FromParent, ToParent } from "./protocol";
 
 const now = () => performance.timeOrigin + performance.now();
@@ -38,6 +39,7 @@ function grow(seq: number): void {
   const d = new Uint32Array(size); d.set(dupes); dupes = d;
 }
 
+
 const sockets: Socket[] = [];
 let disconnects = 0;
 let connectErrors = 0;
@@ -45,6 +47,9 @@ let otherEvents = 0;
 let maxSeq = 0;
 let outOfOrder = 0;
 let jumps = 0;
+let refetches = 0;
+const orderExamples: string[] = [];
+let batches = 0;
 
 async function startAll(url: string, saleLotId: string, cookies: string[], batch: number): Promise<void> {
   const room = `lot:${saleLotId}`;
@@ -71,19 +76,32 @@ async function startAll(url: string, saleLotId: string, cookies: string[], batch
     });
     s.on("connect_error", () => { connectErrors++; });
     s.on("disconnect", (reason) => { if (reason !== "io client disconnect") disconnects++; });
-    s.on("lot.bid", (p: { saleLotId: string; seq: number }) => {
+    // A client's sequencer (lib/realtime/sequencer): one ahead of a gap waits GAP_WAIT_MS for the missing seq, then refetches.
+    let applied = -1;
+    const held = new Set<number>();
+    let gapTimer: ReturnType<typeof setTimeout> | null = null;
+    const settle = () => {
+      while (held.has(applied + 1)) { held.delete(applied + 1); applied += 1; }
+      if (gapTimer) { clearTimeout(gapTimer); gapTimer = null; }
+      if (held.size) gapTimer = setTimeout(() => { gapTimer = null; if (held.size) { refetches++; applied = Math.max(...held); held.clear(); } }, GAP_WAIT_MS);
+    };
+    const onLot = (p: { saleLotId: string; seq: number }) => {
       const at = now();
       if (p.saleLotId !== saleLotId) { otherEvents++; return; }
       const seq = p.seq;
       grow(seq);
       if (seq > maxSeq) maxSeq = seq;
       if (seen.add(seq)) { dupes[seq]!++; return; }
-      if (highest >= 0 && seq < highest) outOfOrder++;
-      else if (highest >= 0 && seq > highest + 1) jumps++;
+      if (highest >= 0 && seq < highest) { outOfOrder++; if (orderExamples.length < 10) orderExamples.push(`${seq} after ${highest}`); }
+      else if (highest >= 0 && seq > highest + 1) { jumps++; if (orderExamples.length < 10) orderExamples.push(`${seq} skipping from ${highest}`); }
       if (seq > highest) highest = seq;
       counts[seq]!++;
       if (at > lastArrival[seq]!) lastArrival[seq] = at;
-    });
+      if (applied < 0) applied = seq - 1;
+      if (seq > applied) { held.add(seq); settle(); }
+    };
+    s.on("lot.bid", onLot);
+    s.on("lot.batch", (b: { events: { live: { saleLotId: string; seq: number } }[] }) => { batches++; for (const e of b.events) onLot(e.live); });
   });
   for (let i = 0; i < cookies.length; i += batch) await Promise.all(cookies.slice(i, i + batch).map(one));
   send({ type: "ready", connected: sockets.filter((s) => s.connected).length, ms: now() - started });
@@ -100,7 +118,7 @@ process.on("message", (m: FromParent) => {
       counts: Array.from(counts.subarray(m.from, m.from + n)),
       lastArrival: Array.from(lastArrival.subarray(m.from, m.from + n)),
       dupes: Array.from(dupes.subarray(m.from, m.from + n)),
-      maxSeq, outOfOrder, jumps, disconnects, connectErrors, otherEvents, connected: sockets.filter((s) => s.connected).length,
+      maxSeq, outOfOrder, jumps, refetches, batches, orderExamples, disconnects, connectErrors, otherEvents, connected: sockets.filter((s) => s.connected).length,
     });
   } else if (m.type === "stop") {
     for (const s of sockets) s.disconnect();

@@ -3,7 +3,7 @@ import { createAdapter } from "@socket.io/postgres-adapter";
 import type pg from "pg";
 import { Server } from "socket.io";
 import { viewerFromCookieHeader } from "../../lib/auth/guards";
-import type { ClientToServerEvents, ServerToClientEvents, SocketData } from "../../lib/realtime/events";
+import type { ClientToServerEvents, InterServerEvents, ServerToClientEvents, SocketData } from "../../lib/realtime/events";
 import { joinableRoom, userRoom, type BidAck } from "../../lib/realtime/events";
 import { ApiError, fieldsFromIssues } from "../../lib/api/errors";
 import { can } from "../../lib/auth/roles";
@@ -34,7 +34,7 @@ async function placeBidOverSocket(userId: string, raw: unknown): Promise<BidAck>
   }
 }
 
-export type GetterlineIo = Server<ClientToServerEvents, ServerToClientEvents, Record<string, never>, SocketData>;
+export type GetterlineIo = Server<ClientToServerEvents, ServerToClientEvents, InterServerEvents, SocketData>;
 
 /**
  * socket.io on the app's own HTTP server, path /socket.io. Every connection is
@@ -68,6 +68,13 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
     } catch {
       next(new Error("unavailable"));
     }
+  });
+
+  // Lot events committed on another instance: deliver them to our sockets in the order they arrive (lib/realtime/emit).
+  io.on("lot.relay", ({ rooms, event, payload }) => {
+    if (!Array.isArray(rooms) || !rooms.every((r) => typeof r === "string" && joinableRoom(r))) return;
+    if (event !== "lot.bid" && event !== "lot.closed" && event !== "lot.batch") return;
+    (io.local.to(rooms) as unknown as { emit: (e: string, ...a: unknown[]) => void }).emit(event, payload);
   });
 
   io.on("connection", (socket) => {

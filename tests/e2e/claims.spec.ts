@@ -54,11 +54,11 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   const sale = ((await (await house.request.post("/api/sales", { data: { title: "Claims sale", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 40_000).toISOString(), gapSeconds: 30, softCloseSeconds: 30, lots: [{ lotId, openingCents: 2_000 }] } })).json()) as { sale: { id: string } }).sale;
   const saleLotId = (((await (await house.request.get(`/api/sales/${sale.id}`)).json()) as { lots: { saleLotId: string }[] }).lots[0]!).saleLotId;
 
-  // A dealer bids live ($150 maximum; the price goes to the $80 reserve [CTP proxy rule]) and wins.
+  // A dealer bids live ($150 ceiling; the price goes to the $80 reserve [CTP proxy rule]) and wins.
   const dealer = await as(browser, DEMO.dealer);
   await dealer.goto(`/sales/${sale.id}/lots/${saleLotId}`);
-  await dealer.getByLabel("Your maximum ($)").fill("150");
-  await dealer.getByRole("button", { name: "Place bid" }).click();
+  await dealer.getByLabel("Your ceiling ($)").fill("150");
+  await dealer.getByRole("button", { name: "Bid", exact: true }).click();
   await expect(dealer.getByRole("main")).toContainText("$80.00");
   await expect.poll(async () => ((await (await dealer.request.get("/api/invoices")).json()) as { invoices: { title: string }[] }).invoices.some((i) => i.title === title), { timeout: 90_000, intervals: [2_000] }).toBe(true);
 

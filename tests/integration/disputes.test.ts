@@ -29,6 +29,8 @@ import { POST as decisionRoute } from "../../app/api/disputes/[id]/decision/rout
 import { POST as openRoute } from "../../app/api/invoices/[id]/dispute/route";
 import sharp from "sharp";
 import { stripe } from "../../lib/stripe/client";
+import { consignorDesk } from "../../lib/services/consignor-desk";
+import { getInvoice } from "../../lib/services/invoices";
 
 let fake: TestStripe;
 let s3: TestS3;
@@ -133,6 +135,12 @@ describe("claims and mediation", () => {
     expect((await mediationQueue(m1)).waiting.map((c) => c.id)).toContain(id);
     await takeCase(m1, id);
     expect((await refused(takeCase(m2, id))).status).toBe(409);
+    // [SUG] The case's mediator reads its invoice, read-only; any other mediator still gets 404.
+    expect(await getInvoice(m1, f.invoiceId)).toMatchObject({ id: f.invoiceId, readOnly: true, isBuyer: false, isConsignor: false });
+    expect((await refused(getInvoice(m2, f.invoiceId))).status).toBe(404);
+    // The consignor's desk shows the lot under its claim (not "approved"), netting the $27.00 hammer less 20 % commission
+    // = $21.60 [SUG house tiers: 20 % of the first $500].
+    expect((await consignorDesk(consignor)).lots.find((l) => l.id === f.lotId)).toMatchObject({ stage: "claim", netCents: 2_160 });
     expect((await mediationQueue(m2)).waiting.map((c) => c.id)).not.toContain(id);
 
     // Before the consignor answers (and before the deadline) the mediator cannot decide.

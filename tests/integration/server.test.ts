@@ -1,31 +1,11 @@
 import http from "node:http";
 import type { AddressInfo } from "node:net";
-import pg from "pg";
 import { io as connect, type Socket } from "socket.io-client";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { gracefulShutdown } from "../../server/shutdown";
-import { attachSockets, type GetterlineIo } from "../../server/socket";
 import { createSale, getSale } from "../../lib/services/sales";
 import { approvedLot, makeUser, sessionCookie, viewerOf } from "../support/factories";
-
-/** Our socket.io server on a plain HTTP server and a real pool, for the describe block that calls it. */
-function socketServer(): { readonly url: string } {
-  let io: GetterlineIo;
-  let pool: pg.Pool;
-  const state = { url: "" };
-  beforeAll(async () => {
-    const server = http.createServer();
-    pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
-    io = await attachSockets(server, pool);
-    await new Promise<void>((r) => server.listen(0, "127.0.0.1", () => r()));
-    state.url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  });
-  afterAll(async () => {
-    await new Promise<void>((r) => io.close(() => r()));
-    await pool.end();
-  });
-  return state;
-}
+import { socketServer } from "../support/socket-server";
 
 describe("socket.io handshake uses the same guard as the routes", () => {
   const live = socketServer();

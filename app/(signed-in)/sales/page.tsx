@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { listSales } from "@/lib/services/sales";
+import { When } from "@/components/time/When";
 
 export const metadata = { title: "Sales" };
 
@@ -20,10 +21,10 @@ export default async function SalesPage() {
             {sales.map((s) => (
               <tr key={s.id} className="border-t border-flash-200">
                 <td className="px-3 py-2"><Link href={`/sales/${s.id}`} className="font-medium underline underline-offset-2">{s.title}</Link></td>
-                <td className="px-3 py-2">{s.startsAt.slice(0, 16).replace("T", " ")} UTC</td>
+                <td className="px-3 py-2"><When iso={s.startsAt} /></td>
                 <td className="px-3 py-2">{s.lots}</td>
                 <td className="px-3 py-2">{s.open}</td>
-                <td className="px-3 py-2">{s.firstClose?.slice(11, 16)}–{s.lastClose?.slice(11, 16)} UTC</td>
+                <td className="px-3 py-2">{s.firstClose ? <><When iso={s.firstClose} /> – <When iso={s.lastClose} /></> : "—"}</td>
               </tr>
             ))}
             {sales.length === 0 ? <tr><td colSpan={5} className="px-3 py-4 text-flash-600">No sales yet.</td></tr> : null}

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { listLots } from "@/lib/services/lots";
+import { When } from "@/components/time/When";
 
 export const metadata = { title: "Review queue" };
 
@@ -23,7 +24,7 @@ export default async function ReviewQueuePage() {
                 <td className="px-3 py-2">{l.consignorName}</td>
                 <td className="px-3 py-2">{l.lines}</td>
                 <td className="px-3 py-2">{l.tubes}</td>
-                <td className="px-3 py-2">{l.submittedAt?.slice(0, 16).replace("T", " ")}</td>
+                <td className="px-3 py-2"><When iso={l.submittedAt} /></td>
                 <td className="px-3 py-2">{l.extraReview ? "Extra review: consignor's record" : ""}</td>
               </tr>
             ))}

@@ -32,11 +32,11 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
   const actions = sale?.phase === "open" ? (
     <p className="card flex flex-wrap items-center gap-3 text-sm">
       This lot is offered in <strong>{sale.saleTitle}</strong>.
-      {viewer ? <Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="btn-primary">Go to bidding</Link>
+      {viewer ? <Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="btn-primary" data-testid="back-to-bidding">Back to bidding on this lot</Link>
         : <Link href={`/sign-in?from=${encodeURIComponent(`/lots/${id}`)}`} className="btn-primary">Sign in to bid</Link>}
     </p>
   ) : sale?.phase === "sold" ? (
-    <p className="card text-sm" data-testid="lot-outcome">Sold in <strong>{sale.saleTitle}</strong>{sale.hammerCents != null ? <> for <strong className="code">{formatCents(sale.hammerCents)}</strong></> : null}{sale.closedAt ? <> on <LocalTime iso={sale.closedAt} /></> : null}.</p>
+    <p className="card text-sm" data-testid="lot-outcome"><Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="underline underline-offset-2">Sold in <strong>{sale.saleTitle}</strong></Link>{sale.hammerCents != null ? <> for <strong className="code">{formatCents(sale.hammerCents)}</strong></> : null}{sale.closedAt ? <> on <LocalTime iso={sale.closedAt} /></> : null}.</p>
   ) : sale ? (
     <p className="card text-sm" data-testid="lot-outcome">Offered in <strong>{sale.saleTitle}</strong>; it closed unsold.</p>
   ) : !viewer ? (

@@ -32,7 +32,7 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
         </div>
         <p className="text-flash-700">
           <Link href={`/lots/${c.lotId}`} className="underline">{c.lotTitle}</Link>
-          {c.role !== "mediator" ? <> · <Link href={`/invoices/${c.invoiceId}`} className="underline">invoice {c.invoiceNumber}</Link></> : <> · invoice {c.invoiceNumber}</>}
+          {" · "}<Link href={`/invoices/${c.invoiceId}`} className="underline">invoice {c.invoiceNumber}</Link>{c.role === "mediator" ? " (read only)" : ""}
           {" "}· {REASON_WORDS[c.reason]} · asks for: {REMEDY_WORDS[c.remedy as Remedy] ?? c.remedy}
         </p>
         <p className="text-sm text-flash-700">
