@@ -63,7 +63,7 @@ async function payoutAccount(userId: string): Promise<string> {
     { type: "custom", email: user?.email, capabilities: { transfers: { requested: true } }, metadata: { user_id: userId } },
     { idempotencyKey: `payout-account:${userId}` },
   );
-  await db().query(`INSERT INTO payout_accounts (user_id, stripe_account_id, created_at) VALUES (:userId, :acct, now()) ON CONFLICT (user_id) DO NOTHING`, { replacements: { userId, acct: acct.id } });
+  await db().query(`INSERT INTO payout_accounts (user_id, stripe_account_id, created_at) VALUES (:userId, :acct, now()) ON CONFLICT DO NOTHING`, { replacements: { userId, acct: acct.id } });
   const [again] = await db().query<{ stripe_account_id: string }>(`SELECT stripe_account_id FROM payout_accounts WHERE user_id = :userId`, { replacements: { userId }, type: QueryTypes.SELECT });
   return again!.stripe_account_id;
 }
