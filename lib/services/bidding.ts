@@ -31,10 +31,7 @@ export type BidResult =
 const saleOf = new Map<string, string>();
 
 /** Optimistic attempts before a bid waits for the lot's row lock ([SUG] tuned with npm run bench:bids). */
-const OPTIMISTIC_TRIES = 2;
-/** How long a lot that lost an optimistic race sends its bids straight to the lock ([SUG] tuned with npm run bench:bids). */
-const CONTENDED_MS = 1_000;
-const contendedUntil = new Map<string, number>();
+const OPTIMISTIC_TRIES = 3;
 
 /**
  * Place a maximum bid. The lot is read, the pure rules decide, and the bid is
@@ -88,8 +85,6 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
     // Optimistic first: read, decide, and write in one statement only if the lot has not moved (a few tries).
     // Refusals that stay true are answered from the read: a replay, and a non-leader's maximum below the
     // minimum (the minimum only rises; a house retraction moves the seq). Others are confirmed under the lock.
-    // A lot that lost a race in the last second is contended: its bids read once (for those refusals) and queue on the lock.
-    const contended = (contendedUntil.get(saleLotId) ?? 0) > Date.now();
     for (let attempt = 0; attempt < OPTIMISTIC_TRIES && !done; attempt++) {
       const d = decide(await readLot(saleLotId, viewer.id, idempotencyKey));
       if (!d.write) {
@@ -97,11 +92,9 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
         if (r.kind === "replayed" || (r.kind === "refused" && r.reason === "below-minimum" && r.row.state.leader?.bidderId !== viewer.id)) done = r;
         break;
       }
-      if (contended) break;
       const w = await writeIfUnchanged(saleLotId, d.write);
       if (w === "written") done = d.result;
       else if (w === "duplicate") break;
-      else contendedUntil.set(saleLotId, Date.now() + CONTENDED_MS);
     }
     done ??= await withLotLock<Done>(saleLotId, viewer.id, idempotencyKey, decide);
     if (done.kind === "accepted") {
