@@ -10,14 +10,14 @@ type NavItem = { href: string; label: string };
 
 /** Navigation for what the viewer's roles allow; later features add their links here. */
 export function navFor(viewer: Viewer | null): NavItem[] {
-  const items: NavItem[] = [{ href: "/reference", label: "Valve reference" }];
+  const items: NavItem[] = [{ href: "/catalogue", label: "Catalogue" }, { href: "/reference", label: "Valve reference" }];
   if (!viewer) return items;
   items.push({ href: "/sales", label: "Sales" });
   items.push({ href: "/lots", label: "Lots" });
   items.push({ href: "/invoices", label: "Invoices" });
   if (can(viewer.roles, "lots.consign") || can(viewer.roles, "lots.bid")) items.push({ href: "/disputes", label: "Claims" });
   if (can(viewer.roles, "lots.consign")) items.push({ href: "/consignor", label: "My consignments" });
-  if (can(viewer.roles, "lots.bid")) items.push({ href: "/dealer", label: "Dealer desk" });
+  if (can(viewer.roles, "lots.bid")) items.push({ href: "/dealer", label: "Dealer desk" }, { href: "/dealer/want-lists", label: "Want lists" });
   if (can(viewer.roles, "shelf.use")) items.push({ href: "/shelf", label: "Unconfirmed shelf" });
   if (can(viewer.roles, "disputes.mediate")) items.push({ href: "/mediation", label: "Mediation" });
   if (can(viewer.roles, "house.manage")) {

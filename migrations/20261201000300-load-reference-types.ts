@@ -1,10 +1,10 @@
 import type { QueryInterface } from "sequelize";
-import { REFERENCE_TYPES } from "../lib/valves/reference-data";
+import { CORE_ROWS as REFERENCE_TYPES } from "../lib/valves/seed/core";
 
 type Ctx = { context: QueryInterface };
 
 /**
- * Loads the published reference rows (lib/valves/reference-data.ts) into
+ * Loads the published reference rows (lib/valves/seed/core.ts) into
  * valve_types, where the house can correct them with a recorded history.
  * Rows already present are left as the house edited them.
  */

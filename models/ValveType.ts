@@ -1,7 +1,7 @@
 import {
-  DataTypes, Model, Op, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes, Model, Op, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type Transaction,
 } from "sequelize";
-import type { ReferenceType } from "../lib/valves/reference-data";
+import type { ReferenceType } from "../lib/valves/reference-row";
 
 /** The editable part of a reference row (everything but its names and source). */
 export type ValveTypeData = Omit<ReferenceType, "designation" | "aliases" | "source">;
@@ -14,6 +14,8 @@ export class ValveType extends Model<InferAttributes<ValveType>, InferCreationAt
   declare source: string;
   declare revision: CreationOptional<number>;
   declare updatedBy: CreationOptional<string | null>;
+  /** Set when the house retires the type: kept with its history, no longer on file. */
+  declare retiredAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -22,9 +24,20 @@ export class ValveType extends Model<InferAttributes<ValveType>, InferCreationAt
     return { ...this.data, designation: this.designation, aliases: this.aliases, source: this.source as ReferenceType["source"] };
   }
 
-  /** Find by designation or alias (already normalised). */
-  static findByName(name: string): Promise<ValveType | null> {
-    return ValveType.findOne({ where: { [Op.or]: [{ designation: name }, { aliases: { [Op.contains]: [name] } }] } });
+  /** Find by designation or alias (already normalised), retired rows included. */
+  static findByName(name: string, transaction?: Transaction): Promise<ValveType | null> {
+    return ValveType.findOne({ where: { [Op.or]: [{ designation: name }, { aliases: { [Op.contains]: [name] } }] }, transaction });
+  }
+
+  /** The rows on file (not retired), in designation order. */
+  static onFile(): Promise<ValveType[]> {
+    return ValveType.findAll({ where: { retiredAt: null }, order: [["designation", "ASC"]] });
+  }
+
+  /** The revision counter every change to valve_types bumps (a statement trigger). */
+  static async tableRevision(): Promise<string> {
+    const [rows] = await ValveType.sequelize!.query(`SELECT revision FROM reference_revision WHERE id = 1`);
+    return String((rows as { revision: string | number }[])[0]?.revision ?? "0");
   }
 
   static initModel(sequelize: Sequelize): typeof ValveType {
@@ -36,6 +49,7 @@ export class ValveType extends Model<InferAttributes<ValveType>, InferCreationAt
         source: { type: DataTypes.STRING(40), allowNull: false },
         revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         updatedBy: { type: DataTypes.UUID, allowNull: true },
+        retiredAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import type { QueryInterface } from "sequelize";
 import { decodeDesignation } from "../lib/valves/designation";
+import { seedReferenceTable } from "../lib/valves/seed";
 
 type Ctx = { context: QueryInterface };
 
@@ -18,7 +19,7 @@ const HABITS: Record<string, Record<string, string>> = {
   "Pellham Radio Tube Corp.": { plateShape: "flat", plateColour: "grey", plateSurface: "dimpled", getterShape: "square", getterPosition: "top", flashPlace: "dome", micaCount: "2", micaOutline: "shaped", plateFastening: "rivets", plateFastenerCount: "2", markingMethod: "silk-screen" },
   "Vireo Lamp & Valve": { plateShape: "round", plateColour: "bright", plateSurface: "finned", getterShape: "disc", getterPosition: "bottom", flashPlace: "side", micaCount: "3", micaOutline: "shaped", supportRodFinish: "copper-coloured", markingMethod: "etched" },
 };
-const CODES: Record<string, string> = { "Aldergrove Electron Works": "917", "Kestrel Valve Company": "931", "Pellham Radio Tube Corp.": "946", "Vireo Lamp & Valve": "958" };
+const CODES: Record<string, string> = { "Aldergrove Electron Works": "X17", "Kestrel Valve Company": "X31", "Pellham Radio Tube Corp.": "X46", "Vireo Lamp & Valve": "X58" };
 
 function prng(seed: number) {
   let s = seed >>> 0;
@@ -36,7 +37,8 @@ async function makerId(qi: QueryInterface, name: string): Promise<number> {
   return rows[0]!.id;
 }
 
-const norm = (d: string) => { const r = decodeDesignation(d); return { designation: r.ok ? r.normalised : d, known: r.ok && r.knownType }; };
+// Demo items are read against the seed rows, which the migrations have just loaded into valve_types.
+const norm = (d: string) => { const r = decodeDesignation(seedReferenceTable(), d); return { designation: r.ok ? r.normalised : d, known: r.ok }; };
 
 type ItemSpec = {
   designation: string; quantity: number; label: string; maker?: string; basis?: string; source?: string; date?: string;
@@ -118,7 +120,7 @@ export async function up({ context: qi }: Ctx): Promise<void> {
 
   // The Voss estate's attic box: 120 valves, approved.
   const voss120: ItemSpec[] = [
-    ...tested(rand, "12AX7", 16, 1600, { label: "Fairmont Home Radio", maker: "Aldergrove Electron Works", basis: "source-code-confirmed", source: "917", date: "5943", features: HABITS["Aldergrove Electron Works"], condition: "used" }, true, 8),
+    ...tested(rand, "12AX7", 16, 1600, { label: "Fairmont Home Radio", maker: "Aldergrove Electron Works", basis: "source-code-confirmed", source: "X17", date: "5943", features: HABITS["Aldergrove Electron Works"], condition: "used" }, true, 8),
     ...tested(rand, "12AX7", 8, 1600, { label: "Carrow Instruments", maker: "Kestrel Valve Company", basis: "construction-matched", date: "6211", features: { plateColour: "black", getterShape: "d-shape" }, condition: "new-old-stock" }),
     ...tested(rand, "6SN7GT", 16, 2600, { label: "Tri-County Parts", condition: "used" }, true, 0),
     ...tested(rand, "EL84", 16, 11300, { label: "Fairmont Home Radio", maker: "Vireo Lamp & Valve", basis: "construction-matched", features: HABITS["Vireo Lamp & Valve"], condition: "used" }, false),

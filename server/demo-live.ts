@@ -15,6 +15,7 @@ import { addItem, createLot } from "../lib/services/lots";
 import { createSale } from "../lib/services/sales";
 import type { ItemInput } from "../lib/validation/lots";
 import { db, User } from "../models";
+import { ensureDemoCatalogue, pictureDemoLot } from "./demo-catalogue";
 
 const SIMULATED = ["bellweather@dealer.getterline.test", "northbank@dealer.getterline.test", "sablehill@dealer.getterline.test"];
 const LOCK_KEY = 7_331_001; // advisory lock: one instance runs the demo life
@@ -71,6 +72,8 @@ async function ensureDemoSale(): Promise<void> {
     const c = await viewer(spec.consignor);
     const lot = await createLot(c, { title: spec.title, provenance: "Demo lot (invented).", shippingOrigin: "Demo county", testerKind: "mutual-conductance", testerNotes: "" });
     for (const it of spec.items) await addItem(c, lot.id, item(it));
+    const first = spec.items[0]!;
+    await pictureDemoLot(c, lot.id, first.designation!, spec.items.reduce((n, i) => n + (i.quantity ?? 1), 0), first.labelBrand ?? "");
     await submitLot(c, lot.id);
     await decideLot(admin, lot.id, { action: "approve", comment: "Demo lot", estimateLowCents: spec.estimate[0], estimateHighCents: spec.estimate[1], reserveCents: spec.reserve, reserveAgreed: true });
     lots.push({ lotId: lot.id, openingCents: spec.opening });
@@ -123,8 +126,8 @@ async function ensureDemoClaim(): Promise<void> {
   const [line] = await db().query<{ id: string }>(`SELECT id FROM lot_items WHERE lot_id = :id AND position = 1`, { replacements: { id: lot.id }, type: QueryTypes.SELECT });
   const claim = await openDispute(buyer, inv.id, {
     reason: "maker-misattributed", remedy: "refund-affected-items",
-    statement: "Three of the six 12AX7s carry source code 946 and square top getters with dimpled grey plates: not the construction listed.",
-    items: [{ itemId: line!.id, tubes: 3, sourceCode: "946", dateCode: "6231", designationSeen: null, tubesReceived: null, vacuumLoss: false, features: { getterShape: "square", getterPosition: "top", plateSurface: "dimpled", plateColour: "grey" }, readings: [], note: "Tubes 4–6 in the carton." }],
+    statement: "Three of the six 12AX7s carry source code X46 and square top getters with dimpled grey plates: not the construction listed.",
+    items: [{ itemId: line!.id, tubes: 3, sourceCode: "X46", dateCode: "6231", designationSeen: null, tubesReceived: null, vacuumLoss: false, features: { getterShape: "square", getterPosition: "top", plateSurface: "dimpled", plateColour: "grey" }, readings: [], note: "Tubes 4–6 in the carton." }],
   });
   await postMessage(estate, claim.id, { body: "The cartons were marked that way on Mr Voss's bench; we listed what we were told.", stance: "contests" });
   console.log(`demo: claim ${claim.number} waits in the mediators' queue`);
@@ -153,7 +156,8 @@ export async function startDemoLife(): Promise<() => void> {
   const [got] = await db().query<{ ok: boolean }>(`SELECT pg_try_advisory_lock(${LOCK_KEY}) AS ok`, { type: QueryTypes.SELECT });
   if (!got?.ok) return () => undefined;
   await ensureDemoSale();
-  void ensureDemoClaim().catch((e: Error) => console.error("[demo] claim story failed", e.message));
+  void ensureDemoClaim().catch((e: Error) => console.error("[demo] claim story failed", e.message))
+    .then(() => ensureDemoCatalogue(viewer)).catch((e: Error) => console.error("[demo] catalogue failed", e.message));
   const bidders = await Promise.all(SIMULATED.map(viewer));
   let stopped = false;
   const tick = () => {

@@ -11,6 +11,9 @@ import { getSequelize } from "../lib/db/sequelize";
 import { initModels } from "../models";
 import { startQueue, stopQueue } from "../lib/jobs/queue";
 import { startClosingWorker } from "../lib/services/lot-closing";
+import { startWantListWorker } from "../lib/services/want-list-matching";
+import { repairCatalogue } from "../lib/services/catalogue/entries";
+import { warmCatalogue } from "../lib/services/catalogue/search";
 import { gracefulShutdown } from "./shutdown";
 import { attachSockets } from "./socket";
 
@@ -41,6 +44,9 @@ async function main(): Promise<void> {
 
   await startQueue(e.DATABASE_URL);
   const stopSweeper = await startClosingWorker();
+  await startWantListWorker();
+  void repairCatalogue().then((n) => n && console.log(`[catalogue] ${n} lot(s) added to the catalogue`)).then(() => warmCatalogue())
+    .catch((err: Error) => console.error("[catalogue] repair failed", err.message));
   const reconcileTimer = setInterval(() => void import("../lib/services/reconcile").then((m) => m.reconcile()).catch((err: Error) => console.error("[reconcile]", err.message)), 10 * 60_000);
   reconcileTimer.unref();
   const stopDemo = process.env.DEMO_LIVE === "1" ? await (await import("./demo-live")).startDemoLife() : () => undefined;

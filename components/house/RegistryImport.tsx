@@ -7,7 +7,7 @@ import { FormAlert } from "@/components/forms/Field";
 type Row = { code: string; makerName: string; isDemo: boolean; notes: string; change: "new" | "changed" | "unchanged"; previousMaker?: string };
 type Preview = { rows: Row[]; errors: { line: number; message: string }[]; counts: Record<Row["change"], number> };
 
-const TEMPLATE = "code,maker_name,is_demo,notes\n917,Aldergrove Electron Works,true,Invented demo code\n";
+const TEMPLATE = "code,maker_name,is_demo,notes\nX17,Aldergrove Electron Works,true,Invented demo code\n";
 
 async function post(csv: string, mode: "preview" | "apply"): Promise<Preview> {
   const res = await fetch(`/api/valves/makers/import?mode=${mode}`, { method: "POST", headers: { "content-type": "text/csv" }, body: csv });

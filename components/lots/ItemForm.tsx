@@ -11,6 +11,7 @@ import type { ItemView } from "@/lib/services/lots";
 import { BASIS_VALUES, CONDITION_VALUES, HAZARD_VALUES, ItemSchema, withoutBlankSections, type ItemInput } from "@/lib/validation/lots";
 import { decodeDesignation } from "@/lib/valves/designation";
 import { hazardsForType } from "@/lib/valves/hazards";
+import type { ReferenceTable } from "@/lib/valves/reference-table";
 import { BASIS_WORDS, CONDITION_WORDS, HAZARD_WORDS } from "./words";
 
 const EMPTY: ItemInput = {
@@ -29,7 +30,7 @@ export function toInput(i: ItemView): ItemInput {
 const num = (v: unknown) => (v === "" || v == null || Number.isNaN(Number(v)) ? undefined : Number(v));
 
 /** Add or edit one item of a lot, with its per-tube readings. */
-export function ItemForm({ lotId, item, onDone }: { lotId: string; item?: ItemView; onDone: () => void }) {
+export function ItemForm({ table, lotId, item, onDone }: { table: ReferenceTable; lotId: string; item?: ItemView; onDone: () => void }) {
   const [problem, setProblem] = useState<string | null>(null);
   const { register, control, handleSubmit, formState, setError, setValue } = useForm<ItemInput>({
     resolver: (values, ctx, opts) => zodResolver(ItemSchema)(withoutBlankSections(values), ctx, opts),
@@ -38,8 +39,8 @@ export function ItemForm({ lotId, item, onDone }: { lotId: string; item?: ItemVi
   const readings = useFieldArray({ control, name: "readings" });
   const typed = useWatch({ control, name: "designation" });
   const defects = useWatch({ control, name: "defects" });
-  const decoded = typed ? decodeDesignation(typed) : null;
-  const hazards = decoded?.ok ? hazardsForType(decoded.normalised).notices.filter((n) => n.certainty !== "always") : [];
+  const decoded = typed ? decodeDesignation(table, typed) : null;
+  const hazards = decoded?.ok ? hazardsForType(table, decoded.normalised).notices.filter((n) => n.certainty !== "always") : [];
 
   async function onSubmit(values: ItemInput) {
     setProblem(null);
@@ -59,7 +60,7 @@ export function ItemForm({ lotId, item, onDone }: { lotId: string; item?: ItemVi
       {problem ? <FormAlert>{problem}</FormAlert> : null}
       <div className="grid gap-3 sm:grid-cols-3">
         <Field id="designation" label="Designation as printed" error={e.designation?.message}
-          hint={decoded ? (decoded.ok ? `Reads as ${decoded.normalised}${decoded.knownType ? "" : " (not in our lists: flagged for review)"}` : "Not readable: it will be flagged for review") : undefined}>
+          hint={decoded ? (decoded.ok ? `Reads as ${decoded.normalised}${decoded.knownType ? "" : " (decodes by its scheme; no figures on file)"}` : "Not a designation we can read: it will be flagged \"check type\" for review") : undefined}>
           <input id="designation" className="input code" autoComplete="off" {...register("designation")} />
         </Field>
         <Field id="quantity" label="Quantity" error={e.quantity?.message}>

@@ -7,8 +7,7 @@ import {
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { useNarrow } from "@/components/useNarrow";
-import type { ItemView } from "@/lib/services/lots";
-import { typeFamily } from "@/lib/lots/type-family";
+import type { ItemView, LotItemView } from "@/lib/services/lots";
 import { CONDITION_VALUES } from "@/lib/validation/lots";
 import { BASIS_WORDS, CONDITION_WORDS, HAZARD_WORDS } from "./words";
 
@@ -30,7 +29,7 @@ const features = tableFeatures({
 const helper = createColumnHelper<typeof features, Row>();
 
 type Props = {
-  items: ItemView[];
+  items: LotItemView[];
   editable: boolean;
   onEdit?: (item: ItemView) => void;
   onRemove?: (item: ItemView) => void;
@@ -47,7 +46,7 @@ export function ItemsGrid({ items, editable, onEdit, onRemove, onQuickChange }: 
   const [grouped, setGrouped] = useState(true);
   const narrow = useNarrow();
   const data = useMemo<Row[]>(
-    () => items.map((i) => ({ ...i, family: typeFamily(i.designation).label, tested: i.readings.length })),
+    () => items.map((i) => ({ ...i, family: i.familyLabel, tested: i.readings.length })),
     [items],
   );
 

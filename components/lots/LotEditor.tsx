@@ -1,11 +1,11 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { useCallback, useState } from "react";
+import { useCallback, useMemo, useState } from "react";
+import type { ReferenceType } from "@/lib/valves/reference-row";
+import { referenceTable } from "@/lib/valves/reference-table";
 import { CautionStrip } from "@/components/CautionStrip";
 import { FormAlert } from "@/components/forms/Field";
-import type { HazardKind } from "@/lib/valves/index-types";
-import { hazardsForType } from "@/lib/valves/hazards";
 import { apiFetch } from "@/lib/client/api";
 import { formatCents } from "@/lib/money/cents";
 import type { getLot, ItemView } from "@/lib/services/lots";
@@ -24,7 +24,8 @@ export type LotData = Awaited<ReturnType<typeof getLot>>;
  * bulk import, photos and the review trail. Data comes from /api/lots/:id
  * through TanStack Query; every change refetches it.
  */
-export function LotEditor({ initial }: { initial: LotData }) {
+export function LotEditor({ initial, reference }: { initial: LotData; reference: { revision: string; rows: readonly ReferenceType[] } }) {
+  const table = useMemo(() => referenceTable(reference.rows, reference.revision), [reference]);
   const qc = useQueryClient();
   const id = initial.lot.id;
   const key = ["lot", id];
@@ -57,7 +58,7 @@ export function LotEditor({ initial }: { initial: LotData }) {
   // Handling and shipping cautions for every hazard the items carry (from our type data or declared).
   const cautions = new Map<string, { title: string; caution: string; kind: string; types: string[] }>();
   for (const i of data.items) {
-    for (const n of hazardsForType(i.designation, i.hazards as HazardKind[]).notices) {
+    for (const n of i.typeHazards) {
       if (n.certainty === "always") continue;
       const c = cautions.get(n.kind) ?? { title: n.title, caution: n.caution, kind: n.kind, types: [] };
       if (!c.types.includes(i.designation)) c.types.push(i.designation);
@@ -94,7 +95,7 @@ export function LotEditor({ initial }: { initial: LotData }) {
         </div>
         {editing !== null ? (
           <div className="card">
-            <ItemForm lotId={id} item={editing === "new" ? undefined : editing} onDone={() => { setEditing(null); void refresh(); }} />
+            <ItemForm table={table} lotId={id} item={editing === "new" ? undefined : editing} onDone={() => { setEditing(null); void refresh(); }} />
           </div>
         ) : null}
         <ItemsGrid items={data.items} editable={editable} onEdit={(i) => setEditing(i)} onRemove={onRemove} onQuickChange={onQuickChange} />

@@ -7,7 +7,7 @@ import type { getLot } from "@/lib/services/lots";
 import { ItemsGrid } from "./ItemsGrid";
 import { LotSummaryPanel } from "./LotSummaryPanel";
 import { LotTrail } from "./LotTrail";
-import { PhotoPanel } from "./PhotoPanel";
+import { PhotoGallery } from "./PhotoGallery";
 import { StateBadge } from "./StateBadge";
 import { TESTER_WORDS } from "./words";
 
@@ -24,7 +24,7 @@ export function LotView({ data, summary, chart, actions, record }: { data: Data;
           <StateBadge state={lot.state} />
         </div>
         <p className="text-sm text-flash-700">
-          Consigned by <strong>{lot.consignorName}</strong>{lot.shippingOrigin ? ` · ships from ${lot.shippingOrigin}` : ""} · {TESTER_WORDS[lot.testerKind] ?? lot.testerKind}
+          {lot.consignorName ? <>Consigned by <strong>{lot.consignorName}</strong> · </> : null}{lot.shippingOrigin ? `Ships from ${lot.shippingOrigin} · ` : ""}{TESTER_WORDS[lot.testerKind] ?? lot.testerKind}
           {lot.estimateLowCents != null && lot.estimateHighCents != null ? <> · house estimate <strong>{formatCents(lot.estimateLowCents)}–{formatCents(lot.estimateHighCents)}</strong></> : null}
           {lot.reserveCents != null ? <> · reserve {formatCents(lot.reserveCents)} <span className="text-flash-500">(not shown to bidders)</span></> : null}
         </p>
@@ -37,8 +37,10 @@ export function LotView({ data, summary, chart, actions, record }: { data: Data;
         <h2 id="items-h" className="text-lg font-semibold">Items</h2>
         <ItemsGrid items={data.items} editable={false} />
       </section>
-      <PhotoPanel lotId={lot.id} photos={data.photos} editable={false}
-        items={data.items.map((i) => ({ id: i.id, label: `Line ${i.position}: ${i.designation}` }))} />
+      <section aria-labelledby="photos-h" className="space-y-3">
+        <h2 id="photos-h" className="text-lg font-semibold">Photos <span className="text-sm font-normal text-flash-600">({data.photos.length})</span></h2>
+        <PhotoGallery photos={data.photos} labelOf={Object.fromEntries(data.items.map((i) => [i.id, `Line ${i.position}: ${i.designation}`]))} />
+      </section>
       <section aria-labelledby="prov-h" className="card space-y-1">
         <h2 id="prov-h" className="font-semibold">Provenance, in the consignor&apos;s words</h2>
         <p className="whitespace-pre-wrap text-sm text-flash-800">{lot.provenance || "Not given."}</p>

@@ -2,6 +2,7 @@ import Link from "next/link";
 import { CautionStrip } from "@/components/CautionStrip";
 import type { TypeLookup } from "@/lib/services/valve-types";
 import { baseFamilyLabel } from "@/lib/valves/designation";
+import { describeRowSource } from "@/lib/valves/sources";
 
 const LINK_WORDS: Record<string, string> = {
   exact: "Exact equivalent",
@@ -98,11 +99,16 @@ export function TypeAnswer({ data }: { data: TypeLookup }) {
                 </Row>
               ) : null}
               {ref.introduced ? <Row label="Introduced">{ref.introduced.year} <span className="text-flash-500">(from secondary histories; verify)</span></Row> : null}
-              <Row label="Source"><span className="code">{ref.source}</span>{ref.revision > 1 ? <span className="text-flash-500"> · corrected by the house (revision {ref.revision})</span> : null}</Row>
+              <Row label="Source"><span className="code">{ref.source}</span> <span className="text-flash-600">({describeRowSource(ref.source)})</span>{ref.revision > 1 ? <span className="text-flash-500"> · corrected by the house (revision {ref.revision})</span> : null}</Row>
+              <Row label="Checked">{ref.verification ? `against ${ref.verification.against}, by ${ref.verification.by}, ${ref.verification.on}` : "not yet checked against a data sheet"}</Row>
               {ref.note ? <Row label="Note">{ref.note}</Row> : null}
             </dl>
           ) : (
-            <p className="text-sm text-flash-700">We hold no figures for this type yet.</p>
+            <div className="space-y-1 text-sm text-flash-700" data-testid="no-figures">
+              <p>{data.onFile ? "Listed in our equivalents tables; no figures on file." : "Decoded by its scheme; no figures on file."}</p>
+              {decode.candidates.length ? <p>Close types on file: {decode.candidates.slice(0, 4).map((c, i) => <span key={c}>{i ? ", " : ""}<Link className="code underline" href={`/reference?q=${encodeURIComponent(c)}`}>{c}</Link></span>)}</p> : null}
+              {data.canAdd ? <p><Link className="underline" href={`/house/reference/new?d=${encodeURIComponent(decode.normalised)}`}>The house can add this type</Link></p> : null}
+            </div>
           )}
           <p className="mt-3 text-xs text-flash-500">Testers use their own test points: compare readings with your tester&apos;s chart, not with these figures.</p>
         </div>

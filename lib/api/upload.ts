@@ -25,12 +25,16 @@ export async function readPhotoUpload(req: NextRequest): Promise<{ name: string;
 }
 
 /** The response for a stored photo: private, never sniffed. */
-export function photoResponse(obj: { body: Buffer | Uint8Array; contentType: string; contentLength: number }): Response {
+/**
+ * A stored photo. A photo never changes under its id (a new upload is a new id), so a listed lot's photos may
+ * be cached by anyone for a day; others stay private to the browser.
+ */
+export function photoResponse(obj: { body: Buffer | Uint8Array; contentType: string; contentLength: number; listed?: boolean }): Response {
   return new Response(new Uint8Array(obj.body), {
     headers: {
       "content-type": obj.contentType,
       "content-length": String(obj.contentLength),
-      "cache-control": "private, max-age=300",
+      "cache-control": obj.listed ? "public, max-age=86400, stale-while-revalidate=604800" : "private, max-age=300",
       "x-content-type-options": "nosniff",
       "content-disposition": "inline",
     },

@@ -16,7 +16,7 @@ export interface LadderRung {
 export type IncrementLadder = readonly LadderRung[];
 
 /**
- * Default ladder: brief §8's generic 1-2-5 steps [CTP; a product setting, not
+ * Default ladder: generic 1-2-5 steps [CTP; a product setting, not
  * any company's table], in cents. Under $20: $1 · $20–49.99: $2 ·
  * $50–99.99: $5 · $100–249.99: $10 · $250–499.99: $25 · $500–999.99: $50 ·
  * $1,000–2,499.99: $100 · $2,500–4,999.99: $250 · $5,000 and up: $500.

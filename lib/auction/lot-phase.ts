@@ -56,7 +56,7 @@ export type CloseOutcome =
   | { phase: "unsold"; reason: "no-bids" | "reserve-not-met"; highBidCents: number | null };
 
 /**
- * Decides a closing lot (brief §8 [CTP]): sold to the leader at the current
+ * Decides a closing lot [CTP]: sold to the leader at the current
  * shown price if the reserve is met, otherwise unsold — "no-bids", or
  * "reserve-not-met" with the highest shown price for the consignor's report.
  */

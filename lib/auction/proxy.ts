@@ -1,5 +1,5 @@
 /**
- * Proxy (maximum) bidding as the trade runs it (brief §8 [CTP]): each bidder
+ * Proxy (maximum) bidding as the trade runs it [CTP]: each bidder
  * enters a maximum; the shown price is min(top maximum, second maximum + one
  * increment at the second maximum's level); equal maxima go to the earlier
  * bid at that amount; a leader raising their maximum leaves the price alone

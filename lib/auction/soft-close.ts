@@ -1,5 +1,5 @@
 /**
- * Soft close and staggered closing times (brief §8 [CTP]): a bid inside the
+ * Soft close and staggered closing times [CTP]: a bid inside the
  * final window moves the lot's end to bid time + window, so nobody can win
  * by bidding in the last second; lots in a sale close one after another.
  * Times are epoch milliseconds; a lot is closed AT its closing time, so a
@@ -8,7 +8,7 @@
 
 /** House settings for soft close. */
 export interface SoftCloseSettings {
-  /** Final window, seconds: 120 [CTP, brief §8 "e.g. 2 min"]. */
+  /** Final window, seconds: 120 [CTP]. */
   windowSeconds: number;
   /** Most extensions a lot may get, or null for no cap [CTP "optionally cap extensions"]. */
   maxExtensions: number | null;
@@ -17,7 +17,7 @@ export interface SoftCloseSettings {
 /** Defaults: a 2-minute window, no cap [SUG house setting]. */
 export const DEFAULT_SOFT_CLOSE: SoftCloseSettings = { windowSeconds: 120, maxExtensions: null };
 
-/** Default gap between consecutive lots' closing times, seconds: 30 [CTP, brief §8 "30–60 s apart"]. */
+/** Default gap between consecutive lots' closing times, seconds: 30 [CTP]. */
 export const DEFAULT_STAGGER_SECONDS = 30;
 
 /** A lot's closing clock. */

@@ -98,7 +98,7 @@ export interface SaleAmounts {
 
 /**
  * The share of a sale a claim cannot touch, for release while it is open
- * [SUG, brief §8: "release the undisputed share and hold the rest"]. The held
+ * [SUG: "release the undisputed share and hold the rest"]. The held
  * part is what refunding every claimed tube in full would cost (the claimed
  * lines' value, a matched set whole, rounded as the refund itself would be);
  * the rest is undisputed. A later partial refund on the same line values can

@@ -71,9 +71,9 @@ export const STANCE_WORDS: Record<Stance, string> = {
 
 /** The house's dispute settings [SUG: our own figures]. */
 export const DISPUTE_SETTINGS = Object.freeze({
-  /** Business days the consignor has to accept or contest a claim [brief §8: "~3 business days"]. */
+  /** Business days the consignor has to accept or contest a claim [CTP/SUG]. */
   answerBusinessDays: 3,
-  /** Hours after delivery within which a breakage claim must be opened [CTP, brief §8: 48 h, with packaging photos]. */
+  /** Hours after delivery within which a breakage claim must be opened [CTP: 48 h, with packaging photos]. */
   breakageClaimHours: 48,
   /** Days the buyer has to ship a lot back after a refund-on-return decision. */
   returnShipDays: 14,
@@ -111,7 +111,7 @@ export interface ClaimableInvoice {
 /**
  * Why a claim cannot be opened now, or null when it can: only on a
  * delivered lot, and only before its inspection window ends; breakage in
- * transit only within 48 hours of delivery [CTP, brief §8].
+ * transit only within 48 hours of delivery [CTP].
  */
 export function openingRefusal(inv: ClaimableInvoice, nowMs: number, reason?: DisputeReason): string | null {
   if (inv.state === "disputed") return "A claim is already open on this lot.";

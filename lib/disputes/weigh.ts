@@ -12,6 +12,7 @@ import { rankMakers, type MakerCandidate, type ReferenceProfile } from "../valve
 import { featuresFromText } from "../valves/construction-text";
 import { decodeDesignation } from "../valves/designation";
 import { findEquivalents } from "../valves/equivalents";
+import type { ReferenceTable } from "../valves/reference-table";
 import { gradeReading, HOUSE_DEFAULT_THRESHOLDS, type Grade } from "../valves/grading";
 import type { DisputeReason } from "./rules";
 
@@ -84,7 +85,7 @@ export interface ItemWeighing {
 
 /**
  * Tester-to-tester variation allowed before a lower reading counts against
- * the listing [CTP, brief §8: roughly ±10–15 %; we take the generous end].
+ * the listing [CTP: roughly ±10–15 %; we take the generous end].
  */
 export const TESTER_VARIATION_PCT = 15;
 
@@ -97,11 +98,11 @@ const BAND_FLOOR: Record<string, number> = {
  * Grade each reading against the tester chart's "new" value: the reading's
  * own, else `fallbackChart` (the listing's chart for the same type, so both
  * sides are graded on one basis). Grades never rest on data-sheet figures
- * [CTP, brief §4]; the weakest section as % of the nominal Gm is shown beside
+ * [CTP]; the weakest section as % of the nominal Gm is shown beside
  * them for orientation only.
  */
-export function gradeAgainstNominal(designation: string, readings: readonly TubeReading[], vacuumLoss = false, fallbackChart?: number): GradedReading[] {
-  const nominal = nominalGmFromReference(designation);
+export function gradeAgainstNominal(table: ReferenceTable, designation: string, readings: readonly TubeReading[], vacuumLoss = false, fallbackChart?: number): GradedReading[] {
+  const nominal = nominalGmFromReference(table, designation);
   return readings.map((r) => {
     const chart = r.chartNewValue ?? (r.measure === "gm" ? fallbackChart : undefined);
     const failed = Boolean(r.shorts || r.leakage || r.gas || vacuumLoss);
@@ -130,23 +131,24 @@ function rank(features: Record<string, string>, sourceCodeMaker: string | null, 
 const same = (a: string | null | undefined, b: string | null | undefined) => Boolean(a && b && a.trim().toLowerCase() === b.trim().toLowerCase());
 
 /**
- * Weigh one claimed item. `sourceMakers` are the makers the house's code
+ * Weigh one claimed item against the house's reference table. `sourceMakers` are the makers the house's code
  * registry gives for each side's source code (null when absent or unknown).
  */
 export function weighItem(
+  table: ReferenceTable,
   reason: DisputeReason,
   listing: ListingSide,
   report: BuyerReport,
   profiles: readonly ReferenceProfile[],
   sourceMakers: { listing: string | null; buyer: string | null },
 ): ItemWeighing {
-  const d = decodeDesignation(listing.designation);
-  const family = d.ok ? typeFamily(d.normalised).key : undefined;
+  const d = decodeDesignation(table, listing.designation);
+  const family = d.ok ? typeFamily(table, d.normalised).key : undefined;
   const listingRanking = rank(listing.features, sourceMakers.listing, profiles, family);
   const buyerRanking = rank(report.features, sourceMakers.buyer, profiles, family);
   const chart = listingChart(listing.readings);
-  const listingReadings = gradeAgainstNominal(listing.designation, listing.readings, listing.vacuumLoss);
-  const buyerReadings = gradeAgainstNominal(listing.designation, report.readings, Boolean(report.vacuumLoss), chart);
+  const listingReadings = gradeAgainstNominal(table, listing.designation, listing.readings, listing.vacuumLoss);
+  const buyerReadings = gradeAgainstNominal(table, listing.designation, report.readings, Boolean(report.vacuumLoss), chart);
   const findings: string[] = [];
   let verdict: Verdict = "inconclusive";
 
@@ -193,7 +195,7 @@ export function weighItem(
       findings.push("The buyer reports a white getter flash that the listing did not disclose; photos should show it.");
     } else { verdict = "does-not-support"; findings.push("The buyer does not report a white getter on this line."); }
   } else if (reason === "readings-not-as-listed") {
-    // Like with like: same tube, same measure, both graded on a chart value [CTP, brief §6].
+    // Like with like: same tube, same measure, both graded on a chart value [CTP].
     const listedByTube = new Map(listingReadings.map((r) => [`${r.tubeNo}:${r.measure}`, r]));
     let worse = 0;
     let compared = 0;
@@ -217,14 +219,14 @@ export function weighItem(
     else if (worse > 0) verdict = "supports";
     else { verdict = "does-not-support"; findings.push(`${compared} tube reading(s) compared: none falls below its listed band by more than the ${TESTER_VARIATION_PCT} % testers differ by.`); }
   } else if (reason === "wrong-type") {
-    const seen = report.designationSeen ? decodeDesignation(report.designationSeen) : null;
+    const seen = report.designationSeen ? decodeDesignation(table, report.designationSeen) : null;
     const seenNorm = seen?.ok ? seen.normalised : report.designationSeen;
     const link = seen?.ok && d.ok ? findEquivalents(d.normalised).matches.find((m) => m.designation === seenNorm)?.link : undefined;
     if (!seenNorm) findings.push("The buyer did not say what type is printed on the tubes.");
     else if (seen && !seen.ok) findings.push(`"${report.designationSeen}" could not be read as a designation; compare the print with the photos.`);
     else if (!d.ok) findings.push(`The listed designation "${listing.designation}" could not be read; compare the print with the photos.`);
     else if (seenNorm === d.normalised) { verdict = "does-not-support"; findings.push(`The buyer reads ${seenNorm}, as listed.`); }
-    else if (link === "exact") { verdict = "does-not-support"; findings.push(`${seenNorm} is listed as an exact equivalent of ${d.normalised} [brief §3].`); }
+    else if (link === "exact") { verdict = "does-not-support"; findings.push(`${seenNorm} is listed as an exact equivalent of ${d.normalised} [MEM].`); }
     else { verdict = "supports"; findings.push(`Listed as ${d.normalised}; the buyer reads ${seenNorm}${link ? ` (a ${link.replace(/-/g, " ")} equivalent, not the type listed)` : ""}.`); }
   } else if (reason === "short-count") {
     if (report.tubesReceived != null && report.tubesReceived < listing.quantity) { verdict = "supports"; findings.push(`Listed ${listing.quantity}, received ${report.tubesReceived}. Check the packing list and the carrier's weight.`); }

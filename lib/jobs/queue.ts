@@ -8,7 +8,7 @@ import PgBoss from "pg-boss";
  */
 const g = globalThis as unknown as { __getterlineBoss?: PgBoss };
 
-export const QUEUES = { lotClose: "lot-close", outbidNotice: "outbid-notice" } as const;
+export const QUEUES = { lotClose: "lot-close", outbidNotice: "outbid-notice", wantListMatch: "want-list-match", wantListDigest: "want-list-digest" } as const;
 
 /** Start pg-boss and create its queues (a send to a queue that does not exist is silently dropped). */
 export async function startQueue(connectionString: string): Promise<PgBoss> {

@@ -8,6 +8,7 @@
  */
 import type { ComparableSale } from "./estimate";
 import type { ItemCondition } from "./item";
+import type { ReferenceTable } from "../valves/reference-table";
 import { typeFamily } from "./type-family";
 
 /** One line of a sold lot, with the lot's net hammer. */
@@ -21,12 +22,12 @@ export interface SoldLine {
   quantity: number;
 }
 
-export function comparablesFromSoldLots(lines: readonly SoldLine[]): ComparableSale[] {
+export function comparablesFromSoldLots(table: ReferenceTable, lines: readonly SoldLine[]): ComparableSale[] {
   const lots = new Map<string, SoldLine[]>();
   for (const l of lines) lots.set(l.lotId, [...(lots.get(l.lotId) ?? []), l]);
   const out: ComparableSale[] = [];
   for (const group of lots.values()) {
-    const families = new Set(group.map((l) => typeFamily(l.designation).key));
+    const families = new Set(group.map((l) => typeFamily(table, l.designation).key));
     const conditions = new Set(group.map((l) => l.condition));
     const tubes = group.reduce((n, l) => n + l.quantity, 0);
     const [first] = group;

@@ -34,7 +34,7 @@ export const IMPORT_COLUMNS: readonly ImportColumn[] = [
   { name: "label", required: false, values: "text", description: "Brand printed on the tube, as printed. The label is not necessarily the maker." },
   { name: "maker", required: false, values: "text", description: "Factory the consignor attributes the tube to." },
   { name: "maker_basis", required: false, values: "confirmed | construction | unconfirmed", description: "Why: confirmed by the source code (needs maker and source_code), matched by construction (needs maker), or unconfirmed. Default unconfirmed." },
-  { name: "source_code", required: false, values: "text", description: "EIA source code as printed (e.g. 931). Evidence of the maker, not proof." },
+  { name: "source_code", required: false, values: "text", description: "EIA source code as printed (e.g. X31). Evidence of the maker, not proof." },
   { name: "date_code", required: false, values: "text", description: "Date code as printed (e.g. 6214 for 1962 week 14)." },
   { name: "other_code", required: false, values: "text", description: "Any other printed or etched code (factory or change codes)." },
   { name: "construction", required: false, values: "name=value; name=value", description: "Construction features, e.g. plates=grey box; getter=halo top; micas=3. Names are lower-cased." },
@@ -72,7 +72,7 @@ const TEMPLATE_ROWS: readonly Record<string, string>[] = [
   },
   {
     designation: "EL84", qty: "1", condition: "used", label: "Kestrel Valve Company", maker: "Kestrel Valve Company",
-    maker_basis: "confirmed", source_code: "931", date_code: "6748", construction: "plates=black ribbed; getter=D side",
+    maker_basis: "confirmed", source_code: "X31", date_code: "6748", construction: "plates=black ribbed; getter=D side",
     vacuum_loss: "no", defects: "print worn", measure: "gm", section_1: "9800", chart_new: "11000",
     plate_current_ma: "44", short: "no", leakage: "no", gas: "no", tube_ref: "A-002",
   },

@@ -16,6 +16,7 @@ import { createHash } from "node:crypto";
 import { parse } from "csv-parse/sync";
 import { normaliseDesignation } from "../valves/designation";
 import { IMPORT_COLUMN_NAMES } from "./csv-columns";
+import type { ReferenceTable } from "../valves/reference-table";
 import { cleanText, newRowCache, readLotRow, type CsvIssue, type RowContent } from "./csv-row";
 import type { LotItem } from "./item";
 
@@ -142,7 +143,7 @@ function syntaxMessage(e: unknown): CsvIssue {
  * before any parsing. Unknown designations are imported and flagged (a
  * warning); bad values are row errors with the line the record starts on.
  */
-export function parseLotCsv(text: string, options: ParseLotCsvOptions = {}): LotCsvResult {
+export function parseLotCsv(table: ReferenceTable, text: string, options: ParseLotCsvOptions = {}): LotCsvResult {
   const maxRows = options.maxRows ?? DEFAULT_MAX_ROWS;
   const maxBytes = options.maxBytes ?? DEFAULT_MAX_BYTES;
   // A UTF-16 code unit is at least one UTF-8 byte, so a long string is refused without encoding it.
@@ -196,7 +197,7 @@ export function parseLotCsv(text: string, options: ParseLotCsvOptions = {}): Lot
 
   const rows: ParsedRow[] = [];
   const seen = new Map<string, number>();
-  const cache = newRowCache();
+  const cache = newRowCache(table);
   for (const r of body) {
     if (r.fields.length !== names.length) {
       errors.push({ line: r.line, message: `expected ${names.length} fields as in the header, found ${r.fields.length}` });

@@ -4,6 +4,7 @@
  * whitespace runs (line breaks included) collapsed to one space, so
  * whitespace-only edits do not change a row.
  */
+import type { ReferenceTable } from "../valves/reference-table";
 import { readDateCode } from "../valves/date-code";
 import type { TestMeasure } from "../valves/grading";
 import type { HazardKind } from "../valves/index-types";
@@ -39,13 +40,15 @@ const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 
 /** Look-ups shared by the rows of one file: lots repeat the same designations and codes. */
 export interface RowCache {
+  /** The house's reference table the file is read against. */
+  reference: ReferenceTable;
   designations: Map<string, ItemDesignation>;
   dateCodeReadable: Map<string, boolean>;
 }
 
 /** A fresh RowCache for one file. */
-export function newRowCache(): RowCache {
-  return { designations: new Map(), dateCodeReadable: new Map() };
+export function newRowCache(reference: ReferenceTable): RowCache {
+  return { reference, designations: new Map(), dateCodeReadable: new Map() };
 }
 
 /** Trim and collapse whitespace runs to one space. */
@@ -62,7 +65,7 @@ export function readLotRow(
   fields: ReadonlyMap<string, string>,
   errors: CsvIssue[],
   warnings: CsvIssue[],
-  cache: RowCache = newRowCache(),
+  cache: RowCache,
 ): RowContent | null {
   const before = errors.length;
   const err = (column: string | undefined, message: string) => errors.push({ line, ...(column ? { column } : {}), message });
@@ -107,7 +110,7 @@ export function readLotRow(
   if (typed === null) err("designation", "is required");
   let designation: ItemDesignation | null = null;
   if (typed !== null) {
-    const known = cache.designations.get(typed) ?? describeDesignation(typed);
+    const known = cache.designations.get(typed) ?? describeDesignation(cache.reference, typed);
     cache.designations.set(typed, known);
     designation = { ...known, ...(known.candidates ? { candidates: [...known.candidates] } : {}) };
   }

@@ -5,21 +5,24 @@
  * Plain data only; validation of typed input lives with each importer.
  */
 import { decodeDesignation } from "../valves/designation";
+import type { ReferenceTable } from "../valves/reference-table";
 import type { TestMeasure } from "../valves/grading";
 import type { HazardKind } from "../valves/index-types";
 
 /**
- * Whether we recognise the designation. Unknown or malformed designations are
- * flagged for review, never rejected: old stock holds types our lists lack [SUG].
+ * The three answers for a designation [SUG]: "known" (on file in the house's
+ * reference table or the equivalents lists), "decoded" (reads by its scheme,
+ * heater, systems and base, but no figures on file), "unknown-flagged" (not a
+ * designation: flagged "check type" for review, never rejected).
  */
-export type DesignationStatus = "known" | "unknown-flagged";
+export type DesignationStatus = "known" | "decoded" | "unknown-flagged";
 
 /** The designation as typed, its normalised form (null when it cannot be cleaned) and its status. */
 export interface ItemDesignation {
   typed: string;
   normalised: string | null;
   status: DesignationStatus;
-  /** For flagged designations: close known designations, nearest first. */
+  /** For decoded and flagged designations: close known designations, nearest first. */
   candidates?: string[];
   /** For flagged designations: why, in words for the reviewer. */
   reviewNote?: string;
@@ -87,18 +90,18 @@ export interface LotItem {
 }
 
 /**
- * Reads a typed designation into an ItemDesignation: "known" when it decodes
- * and is in our reference or equivalents lists, otherwise "unknown-flagged"
- * with close known candidates and a note for the reviewer.
+ * Reads a typed designation into an ItemDesignation against the house's
+ * reference table: "known" when it is on file, "decoded" when it reads by its
+ * scheme with no figures on file, otherwise "unknown-flagged" with close known
+ * candidates and a note for the reviewer.
  */
-export function describeDesignation(typed: string): ItemDesignation {
-  const d = decodeDesignation(typed);
+export function describeDesignation(table: ReferenceTable, typed: string): ItemDesignation {
+  const d = decodeDesignation(table, typed);
   if (d.ok && d.knownType) return { typed, normalised: d.normalised, status: "known" };
-  const normalised = d.ok ? d.normalised : (d.normalised ?? null);
+  if (d.ok) return { typed, normalised: d.normalised, status: "decoded", ...(d.candidates.length ? { candidates: [...d.candidates] } : {}) };
+  const normalised = d.normalised ?? null;
   const candidates = [...d.candidates];
-  const reviewNote = d.ok
-    ? `${d.normalised} is not in our type lists: check the print and the tester run.`
-    : `"${typed.slice(0, 40)}" could not be read as a designation: ${d.message}`;
+  const reviewNote = `"${typed.slice(0, 40)}" could not be read as a designation: ${d.message}`;
   return { typed, normalised, status: "unknown-flagged", ...(candidates.length ? { candidates } : {}), reviewNote };
 }
 

@@ -3,9 +3,10 @@
  * hazardsForType: mercury vapour, radioactive sources, beryllium oxide) and
  * the hazards consignors declared, with the types that carry each. High
  * voltage and glass apply to every valve, so they are shown once by the
- * caution strip rather than flagged per lot (brief section 7).
+ * caution strip rather than flagged per lot.
  */
 import { hazardsForType, type HazardNotice } from "../valves/hazards";
+import type { ReferenceTable } from "../valves/reference-table";
 import type { HazardKind } from "../valves/index-types";
 import type { LotItem } from "./item";
 
@@ -27,11 +28,11 @@ const CERTAINTY_ORDER: Readonly<Record<HazardNotice["certainty"], number>> = { a
  * Hazard flags for the items, in a fixed kind order. `tubesOf` gives the
  * tube count of an item (quantity, or more readings than quantity).
  */
-export function lotHazardFlags(items: readonly LotItem[], tubesOf: (item: LotItem) => number): LotHazardFlag[] {
+export function lotHazardFlags(table: ReferenceTable, items: readonly LotItem[], tubesOf: (item: LotItem) => number): LotHazardFlag[] {
   const flags = new Map<HazardKind, LotHazardFlag & { byType: Map<string, HazardNotice["certainty"]> }>();
   for (const item of items) {
     const designation = item.designation.normalised ?? item.designation.typed;
-    const report = hazardsForType(designation, item.hazards);
+    const report = hazardsForType(table, designation, item.hazards);
     for (const n of report.notices) {
       if (n.certainty === "always") continue;
       let flag = flags.get(n.kind);

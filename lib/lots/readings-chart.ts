@@ -5,7 +5,7 @@
  * the tester chart's "new" value, never from data-sheet figures [CTP]. The
  * chart only helps a dealer see the spread of a lot at a glance.
  */
-import { findReferenceType } from "../valves/reference-data";
+import { findReferenceType, type ReferenceTable } from "../valves/reference-table";
 import type { LotItem } from "./item";
 import { typeFamily } from "./type-family";
 
@@ -27,8 +27,8 @@ export interface NominalPoint {
  * Nominal Gm in µmho from our reference table (per section, at the data
  * sheet's operating point), or undefined when we have no figure.
  */
-export function nominalGmFromReference(designation: string): number | undefined {
-  const c = findReferenceType(designation)?.row.characteristics;
+export function nominalGmFromReference(table: ReferenceTable, designation: string): number | undefined {
+  const c = findReferenceType(table, designation)?.row.characteristics;
   return c?.kind === "amplifier" ? c.gmMicromho : undefined;
 }
 
@@ -41,8 +41,9 @@ const oneDecimal = (x: number) => Math.round(x * 10) / 10;
  * Readings must be in µmho for the reference lookup to mean anything.
  */
 export function readingsVsNominal(
+  table: ReferenceTable,
   items: readonly LotItem[],
-  nominalGm: (designation: string) => number | undefined = nominalGmFromReference,
+  nominalGm: (designation: string) => number | undefined = (d) => nominalGmFromReference(table, d),
 ): NominalPoint[] {
   const points: NominalPoint[] = [];
   items.forEach((item, itemIndex) => {
@@ -50,7 +51,7 @@ export function readingsVsNominal(
     if (!designation) return;
     const nominal = nominalGm(designation);
     if (nominal === undefined || !(nominal > 0)) return;
-    const familyKey = typeFamily(designation).key;
+    const familyKey = typeFamily(table, designation).key;
     for (const r of item.readings) {
       if (r.measure !== "gm" || r.sections.length === 0) continue;
       const pct = r.sections.map((s) => (s / nominal) * 100);

@@ -1,7 +1,7 @@
 /**
  * The lot summary dealers read first: tube count, families, test results,
  * vacuum loss, matched sets, attribution mix, hazards, designations to
- * review and an estimate range from comparable sales (brief §1, §6) [SUG].
+ * review and an estimate range from comparable sales [CTP; SUG].
  */
 import { gradeBatch, type BatchTube } from "../valves/grade-batch";
 import type { TestMeasure } from "../valves/grading";
@@ -9,6 +9,7 @@ import { normaliseDesignation } from "../valves/designation";
 import { estimateLot, type ComparableSale, type EstimateGroup, type LotEstimate } from "./estimate";
 import { itemTubeCount, type AttributionBasis, type ItemCondition, type LotItem } from "./item";
 import { lotHazardFlags, type LotHazardFlag } from "./lot-hazards";
+import type { ReferenceTable } from "../valves/reference-table";
 import { typeFamily } from "./type-family";
 
 export { readingsVsNominal, nominalGmFromReference, type NominalPoint } from "./readings-chart";
@@ -16,6 +17,8 @@ export type { ComparableSale, LotEstimate } from "./estimate";
 
 /** Options for summariseLot. */
 export interface SummaryOptions {
+  /** The house's reference table (families, hazards, designations to review). */
+  reference: ReferenceTable;
   /** Tester chart "new" values by designation; a reading's own chart value wins. */
   chartNewValues?: Record<string, number>;
   /** Matching tolerance, % spread; pairs 5–10 % [CTP]. Default 5. */
@@ -116,7 +119,7 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     const tubes = itemTubeCount(item);
     if (item.readings.length > item.quantity) issues.push(`item ${i + 1}: ${item.readings.length} readings for a quantity of ${item.quantity}; counted as ${tubes} tubes`);
     const d = item.designation;
-    const fam = typeFamily(d.normalised ?? d.typed);
+    const fam = typeFamily(opts.reference, d.normalised ?? d.typed);
     itemFamily.push(fam.key);
     const f = families.get(fam.key) ?? { key: fam.key, label: fam.label, tubes: 0, designations: [], tests: emptyCounts(), pairs: 0, quads: 0, quadsProven: true };
     families.set(fam.key, f);
@@ -200,7 +203,7 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     vacuumLoss,
     matched: { pairs: familyList.reduce((s, f) => s + f.pairs, 0), quads: familyList.reduce((s, f) => s + f.quads, 0), tolerancePct },
     attribution,
-    hazards: lotHazardFlags(items, itemTubeCount),
+    hazards: lotHazardFlags(opts.reference, items, itemTubeCount),
     unknownDesignations: [...unknown.values()],
     estimate: estimateLot([...groups.values()], opts.comparables, { since: opts.comparablesSince }),
     zeroValuedTubes,

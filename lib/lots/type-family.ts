@@ -5,13 +5,13 @@
  *
  * Built from our own tables: the equivalents table's "exact" and "premium"
  * links to each group's anchor, members named as the same type as another
- * ("sameAs": E88CC with 6922), and the reference table's aliases [MEM, as
- * those tables]. "Near", "caveat", heater-sibling and other-base links never
+ * ("sameAs": E88CC with 6922), and the house's reference table's aliases
+ * [MEM, as those tables]. Rebuilt once per reference-table revision. "Near", "caveat", heater-sibling and other-base links never
  * join a family: those tubes are priced and matched apart [SUG].
  */
 import { designationStem, normaliseDesignation } from "../valves/designation";
 import { EQUIVALENT_GROUPS } from "../valves/equivalents";
-import { REFERENCE_TYPES } from "../valves/reference-data";
+import { derivedFrom, type ReferenceTable } from "../valves/reference-table";
 
 /**
  * How a family was found: "listed" (the designation is in our tables),
@@ -41,9 +41,8 @@ interface FamilyIndex {
   stems: Map<string, string>;
 }
 
-let index: FamilyIndex | undefined;
-
-function buildIndex(): FamilyIndex {
+function buildIndex(table: ReferenceTable): FamilyIndex {
+  const rows = table.rows;
   const parent = new Map<string, string>();
   const order: string[] = [];
   const find = (x: string): string => {
@@ -65,7 +64,7 @@ function buildIndex(): FamilyIndex {
     parent.set(drop, keep);
   };
   EQUIVALENT_GROUPS.forEach((g, i) => rank.set(g.anchor, i));
-  REFERENCE_TYPES.forEach((r, i) => {
+  rows.forEach((r, i) => {
     if (!rank.has(r.designation)) rank.set(r.designation, EQUIVALENT_GROUPS.length + i);
   });
   for (const g of EQUIVALENT_GROUPS) {
@@ -76,7 +75,7 @@ function buildIndex(): FamilyIndex {
       if (m.sameAs) union(m.sameAs, m.designation);
     }
   }
-  for (const r of REFERENCE_TYPES) {
+  for (const r of rows) {
     find(r.designation);
     for (const a of r.aliases) union(r.designation, a);
   }
@@ -95,9 +94,8 @@ function buildIndex(): FamilyIndex {
   return { lead, members, stems };
 }
 
-function familyIndex(): FamilyIndex {
-  index ??= buildIndex();
-  return index;
+function familyIndex(table: ReferenceTable): FamilyIndex {
+  return derivedFrom(table, "type-families", buildIndex);
 }
 
 const familyLabel = (lead: string) => `${lead} family`;
@@ -111,10 +109,10 @@ const familyLabel = (lead: string) => `${lead} family`;
  * designations are their own family under their normalised form; unreadable
  * ones are "Unidentified".
  */
-export function typeFamily(designation: string): TypeFamily {
+export function typeFamily(table: ReferenceTable, designation: string): TypeFamily {
   const n = normaliseDesignation(designation);
   if (!n.ok) return { key: UNIDENTIFIED_FAMILY_KEY, label: "Unidentified", match: "invalid" };
-  const { lead, stems } = familyIndex();
+  const { lead, stems } = familyIndex(table);
   const listed = lead.get(n.value);
   if (listed) return { key: listed, label: familyLabel(listed), match: "listed" };
   const stem = designationStem(n.value);
@@ -124,6 +122,6 @@ export function typeFamily(designation: string): TypeFamily {
 }
 
 /** Listed designations in a family, lead first; empty for unlisted keys. */
-export function familyMembers(key: string): string[] {
-  return [...(familyIndex().members.get(key) ?? [])];
+export function familyMembers(table: ReferenceTable, key: string): string[] {
+  return [...(familyIndex(table).members.get(key) ?? [])];
 }

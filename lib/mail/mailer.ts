@@ -25,6 +25,8 @@ export type Mail = {
   text: string;
   html?: string;
   attachments?: { filename: string; content: Buffer | string; contentType: string }[];
+  /** Extra headers, e.g. List-Unsubscribe on digests. */
+  headers?: Record<string, string>;
 };
 
 export async function sendMail(mail: Mail): Promise<void> {

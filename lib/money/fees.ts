@@ -25,7 +25,7 @@ export interface CommissionTier {
 }
 
 /**
- * Default sliding commission [SUG house setting; range per brief §8 CTP]:
+ * Default sliding commission [SUG house setting; range per CTP]:
  * 20 % of the first $500, 15 % of the part from $500 to $2,500, 10 % above.
  * Tiers are marginal, like tax brackets: a $1,000 hammer pays
  * 20 % × 500 + 15 % × 500 = $175, never 15 % of the whole.
@@ -36,10 +36,10 @@ export const DEFAULT_COMMISSION_TIERS: readonly CommissionTier[] = [
   { upToCents: null, rateBp: 1_000 },
 ];
 
-/** Default buyer's premium: 10 % [SUG; brief §8 CTP: trade exchanges run lower than the 10–25 % of general sales]. */
+/** Default buyer's premium: 10 % [SUG; CTP: trade exchanges run lower than the 10–25 % of general sales]. */
 export const DEFAULT_BUYERS_PREMIUM_BP = 1_000;
 
-/** What an invoice's sales tax is charged on (jurisdiction-specific, brief §8). */
+/** What an invoice's sales tax is charged on (jurisdiction-specific). */
 export interface TaxBase {
   /** Tax the hammer price. */
   hammer: boolean;
@@ -179,7 +179,7 @@ export interface PayoutBreakdown {
 }
 
 /**
- * Payout = hammer − commission − fees − refunds (brief §8). `refundsCents` is
+ * Payout = hammer − commission − fees − refunds. `refundsCents` is
  * the consignor's net share, i.e. the negated `consignorChangeCents` of a
  * refund settlement. The result is not clamped: a negative payout is a debt
  * the consignor owes, so the books still reconcile.

@@ -1,6 +1,6 @@
 /**
  * Inspection periods, claim deadlines and the tester-tolerance test for
- * disputes (brief §8). Times are epoch milliseconds; a "day" is exactly
+ * disputes. Times are epoch milliseconds; a "day" is exactly
  * 24 hours counted from the carrier-confirmed delivery time (no calendar or
  * time-zone rounding — the deadline is shown to people in their own zone).
  */
@@ -10,7 +10,7 @@ const DAY_MS = 24 * HOUR_MS;
 
 /** House settings for inspection and claims. */
 export interface InspectionSettings {
-  /** Base inspection period, days: 7 [SUG, brief §8]. */
+  /** Base inspection period, days: 7 [SUG]. */
   baseDays: number;
   /** One extra day per this many tubes (whole groups only): 25 [SUG]. */
   tubesPerExtraDay: number;
@@ -20,12 +20,12 @@ export interface InspectionSettings {
   breakageClaimHours: number;
 }
 
-/** Defaults from brief §8. */
+/** Defaults [SUG, CTP as tagged]. */
 export const DEFAULT_INSPECTION_SETTINGS: InspectionSettings = {
-  baseDays: 7, // [SUG] brief §8
-  tubesPerExtraDay: 25, // [SUG] brief §8
-  maxDays: 21, // [SUG] brief §8
-  breakageClaimHours: 48, // [CTP] brief §8
+  baseDays: 7, // [SUG]
+  tubesPerExtraDay: 25, // [SUG]
+  maxDays: 21, // [SUG]
+  breakageClaimHours: 48, // [CTP]
 };
 
 function checkTime(ms: number, label: string): void {
@@ -67,11 +67,11 @@ export function isClaimInTime(deliveredAtMs: number, claimAtMs: number, deadline
   return claimAtMs >= deliveredAtMs && claimAtMs < deadlineMs;
 }
 
-/** Default tester-to-tester allowance, percent: 10 (brief §8 gives 10–15 [CTP]). */
+/** Default tester-to-tester allowance, percent: 10 (10–15 is common practice [CTP]). */
 export const DEFAULT_TESTER_TOLERANCE_PCT = 10;
 
 /**
- * Whether a buyer's test claim stands (brief §8 [CTP]): it stands on an
+ * Whether a buyer's test claim stands [CTP]: it stands on an
  * absolute failure (short, gas, leakage, open heater) whatever the reading,
  * or when the buyer's "% of new" falls below the listed band's lower edge by
  * MORE than the tolerance, taken relative to that edge:

@@ -1,6 +1,6 @@
 /**
- * Lot manifests and the valuation of refund claims against them (brief §8
- * partial refunds [SUG]). A manifest has one line per type/grade/attribution
+ * Lot manifests and the valuation of refund claims against them: partial
+ * refunds [SUG]. A manifest has one line per type/grade/attribution
  * or per matched set, each carrying a reference value V in cents; V_lot is
  * their sum. Every claim item is valued as W, the share of reference value
  * the buyer is owed back: described − actual for a price adjustment, the
@@ -22,7 +22,7 @@ export interface SinglesLine {
 }
 
 /**
- * A matched pair/quad/etc. listed as ONE line (brief §8): V is the set value,
+ * A matched pair/quad/etc. listed as ONE line: V is the set value,
  * and `singleValueCents` is what one of its tubes is worth sold alone.
  */
 export interface MatchedSetLine {
@@ -97,7 +97,7 @@ export function validateManifest(lines: readonly ManifestLine[]): string[] {
 }
 
 /**
- * The claim for a matched set with `goodTubes` still good (brief §8): the
+ * The claim for a matched set with `goodTubes` still good: the
  * buyer is owed the set value minus the good tubes' value as singles, never
  * merely 1/n of the set. Quad at $200, singles $40, one bad:
  * W = 200 − 3 × 40 = $80 (not $50). Never negative.

@@ -1,5 +1,5 @@
 /**
- * Partial refund settlement (brief §8 [SUG]). With W = the claim's reference
+ * Partial refund settlement [SUG]. With W = the claim's reference
  * value owed back (see ./refund-claims) and V_lot the manifest total:
  *   hammer refund         = hammer     × W ÷ V_lot
  *   premium refund        = premium    × W ÷ V_lot   (pro rata of premium charged)
@@ -28,7 +28,7 @@ export interface SaleFigures {
   commissionCents: number;
 }
 
-/** Default share of V_lot above which misdescription lets the buyer reject the whole lot: 25 % [SUG, brief §8]. */
+/** Default share of V_lot above which misdescription lets the buyer reject the whole lot: 25 % [SUG]. */
 export const DEFAULT_REJECT_THRESHOLD_BP = 2_500;
 
 /** Options for {@link settlePartialRefund}. */
@@ -121,7 +121,7 @@ function settlement(
 
 /**
  * Settles a partial refund (price adjustments, returns, shortfalls, matched
- * set defects) for the given claim items. Worked example, brief §9.22:
+ * set defects) for the given claim items. Worked example [SUG]:
  * hammer $1,000, premium 15 % ($150), commission 20 % ($200), V_lot $2,000,
  * a line described $400 / actual $100 → W $300 → hammer refund $150,
  * premium refund $22.50, commission reduction $30, consignor −$120.
@@ -174,7 +174,7 @@ export function settlePartialRefund(
 
 /**
  * Settles the buyer's rejection of the whole lot (or a full refund, e.g. for
- * re-printed labels, brief §8): everything still unrefunded is returned —
+ * re-printed labels): everything still unrefunded is returned —
  * the rest of the hammer and premium to the buyer, the rest of the
  * commission to the consignor. `priorItems` are partial refunds already paid.
  */

@@ -2,7 +2,7 @@
  * Shipping charges from the house's own rate table: packed weight band ×
  * destination zone → cents. The table is a house setting [SUG]; the figures
  * below are Getterline's own defaults, not any carrier's published rates.
- * Weights are the packed, double-boxed parcel (brief §7 packing [CTP]).
+ * Weights are the packed, double-boxed parcel (packing [CTP]).
  */
 import { assertCents } from "./cents";
 

@@ -5,6 +5,7 @@ import type { DateCodeQueryInput } from "../validation/valves";
 import type { SourceCodeLookup } from "../valves/source-code";
 import { lookupRegisteredCode } from "./makers";
 import { referenceFor } from "./valve-types";
+import { currentReferenceTable } from "./reference-table";
 
 export type DateCodeAnswer = {
   code: string;
@@ -23,7 +24,7 @@ export type DateCodeAnswer = {
 export async function readCodeForType(q: DateCodeQueryInput): Promise<DateCodeAnswer> {
   let type: DateCodeAnswer["type"] = null;
   if (q.type) {
-    const d = decodeDesignation(q.type);
+    const d = decodeDesignation(await currentReferenceTable(), q.type);
     if (!d.ok) throw new ApiError("validation_failed", d.message, { type: d.message });
     const ref = await referenceFor(d.normalised);
     type = {

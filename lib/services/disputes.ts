@@ -30,6 +30,7 @@ import { registryEntries } from "./makers";
 import { notify } from "./notices";
 import { referenceProfiles } from "./shelf";
 import { flagExtraReview } from "./track-record";
+import { currentReferenceTable } from "./reference-table";
 
 /** A case party's or official's role in one dispute. */
 export type CaseRole = "buyer" | "consignor" | "mediator" | "house";
@@ -359,8 +360,9 @@ export async function workspace(viewer: Viewer, id: string, read?: CaseView) {
     return r.ok && r.found ? r.entries.map((e) => e.makerName).join(" / ") : null;
   };
   const weighings: (ItemWeighing & { itemId: string; tubes: number })[] = [];
+  const table = await currentReferenceTable();
   for (const i of c.items) {
-    const w = weighItem(c.reason, {
+    const w = weighItem(table, c.reason, {
       position: i.position, designation: i.designation, quantity: i.quantity, labelBrand: i.listing.labelBrand, makerName: i.listing.makerName,
       makerBasis: i.listing.makerBasis, sourceCode: i.listing.sourceCode, dateCode: i.listing.dateCode, features: i.listing.features,
       vacuumLoss: i.listing.vacuumLoss, readings: i.listing.readings,
@@ -461,7 +463,7 @@ function sameLines(a: readonly LineValue[], b: readonly LineValue[]): boolean {
 
 /**
  * The case's mediator releases the share of the lot the claim does not touch
- * [SUG, brief §8], on line values they set now and keep for the decision. Not
+ * [SUG], on line values they set now and keep for the decision. Not
  * when the buyer asks to return the whole lot. Once per case; a retry
  * finishes an interrupted release.
  */

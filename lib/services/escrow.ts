@@ -115,7 +115,7 @@ export function remainingFigures(inv: Pick<InvoiceRow, "hammer_cents" | "premium
 }
 
 /**
- * Release the undisputed share of a disputed invoice early [SUG, brief §8]:
+ * Release the undisputed share of a disputed invoice early [SUG]:
  * once per invoice, the consignor is paid that share's hammer less its
  * commission, and the premium and commission on it become house revenue; the
  * rest stays held for the claim. Returns the payout in cents, and whether this

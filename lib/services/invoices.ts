@@ -11,6 +11,7 @@ import { invoiceIssuedEntries } from "../money/ledger";
 import { DEFAULT_SHIPPING_TABLE, shippingQuote } from "../money/shipping";
 import { db, User } from "../../models";
 import { post } from "./ledger";
+import { forgetComparables } from "./lot-summary";
 
 /** House settings for invoices (our own figures; see lib/money for the rules). */
 export const INVOICE_SETTINGS = {
@@ -87,6 +88,7 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
     return { id, buyerId: sl.buyer_id, total: inv.totalCents };
   });
   if (!created) return null;
+  forgetComparables(); // a new sale for estimates and price history
   const buyer = await User.findByPk(created.buyerId, { attributes: ["email", "displayName"] });
   if (buyer) {
     await sendMail({

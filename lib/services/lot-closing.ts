@@ -12,6 +12,7 @@ import { liveFrom } from "./live-lot";
 import { disputeSweep } from "./disputes";
 import { releaseDue } from "./escrow";
 import { refundDueUnexpectedCharges } from "./unexpected-charges";
+import { lotChanged } from "./catalogue/events";
 import { invoiceSoldLot, sendReminders } from "./invoices";
 import { notify } from "./notices";
 import { startOutbidWorker } from "./outbid-notices";
@@ -60,6 +61,7 @@ export async function closeSaleLot(saleLotId: string): Promise<"closed" | "alrea
   const leaderId = row.state.leader?.bidderId;
   const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId]).catch(() => new Map<string, number>())).get(leaderId) ?? null : null;
   emitLot("lot.closed", liveFrom(row, paddle));
+  await lotChanged(row.lot_id, "closed");
   if (outcome.phase === "sold") await invoiceSoldLot(row.id).catch((e: Error) => console.error("[invoice] failed; the sweeper retries", e.message));
   await closingMail(row, outcome).catch((e: Error) => console.error("[mail] closing notice failed", e.message));
   return "closed";

@@ -5,6 +5,7 @@ import { DEFAULT_MAX_BYTES, parseLotCsv, type ParsedRow } from "../lots/csv-impo
 import { db, Lot, LotEvent, LotImport, LotItem } from "../../models";
 import { assertConsignorCanEdit } from "./lot-access";
 import { normaliseFeatures } from "./lots";
+import { currentReferenceTable } from "./reference-table";
 
 export type ImportPreviewRow = {
   line: number; designation: string; flagged: boolean; quantity: number; label: string | null; tested: boolean; alreadyImported: boolean;
@@ -38,7 +39,7 @@ function toValues(lotId: string, row: ParsedRow, position: number) {
 async function analyse(viewer: Viewer, lotId: string, csv: string) {
   db();
   assertConsignorCanEdit(viewer, await Lot.findByPk(lotId));
-  const parsed = parseLotCsv(csv, { maxBytes: DEFAULT_MAX_BYTES });
+  const parsed = parseLotCsv(await currentReferenceTable(), csv, { maxBytes: DEFAULT_MAX_BYTES });
   const existing = new Set(
     parsed.rows.length
       ? (await LotItem.findAll({ where: { lotId, importKey: { [Op.in]: parsed.rows.map((r) => r.key) } }, attributes: ["importKey"] })).map((i) => i.importKey)

@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import sharp from "sharp";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
 import { MAX_PHOTO_BYTES } from "../photos/formats";
@@ -71,13 +72,19 @@ export async function removePhoto(viewer: Viewer, lotId: string, photoId: string
   await Promise.allSettled([deleteObject(p.fullKey), deleteObject(p.thumbKey)]);
 }
 
-/** A photo's bytes, for a viewer who may see its lot; anyone else gets 404. */
-export async function readPhoto(viewer: Viewer | null, photoId: string, size: "thumb" | "full") {
+/** A photo's bytes, for a viewer who may see its lot (anyone once it is listed); anyone else gets 404. */
+/** Side of the square photo lists show, in image pixels. */
+export const LIST_SIDE = 192;
+
+export async function readPhoto(viewer: Viewer | null, photoId: string, size: "list" | "thumb" | "full") {
   db();
   const p = await LotPhoto.findByPk(photoId);
   if (!p) throw new ApiError("not_found", "No such photo");
-  assertCanView(viewer, await Lot.findByPk(p.lotId));
+  const lot = assertCanView(viewer, await Lot.findByPk(p.lotId));
   const obj = await getObject(size === "thumb" ? p.thumbKey : p.fullKey);
   if (!obj) throw new ApiError("not_found", "The photo's file is missing");
-  return obj;
+  if (size !== "list") return { ...obj, listed: lot.state === "approved" };
+  // Lists show a 96-pixel square: the thumbnail cut to 192 pixels (sharp for two-times screens), made on request.
+  const body = await sharp(obj.body).resize(LIST_SIDE, LIST_SIDE, { fit: "cover" }).jpeg({ quality: 72 }).toBuffer();
+  return { body, contentType: "image/jpeg", contentLength: body.length, listed: lot.state === "approved" };
 }

@@ -8,6 +8,7 @@ import { needsExtraReview } from "../disputes/rules";
 import { consignorRecord } from "./track-record";
 import { db, Lot, LotEvent, LotItem, User } from "../../models";
 import type { LotState } from "../../models/Lot";
+import { lotChanged } from "./catalogue/events";
 import { assertConsignorCanEdit } from "./lot-access";
 import { presentLot, type LotView } from "./lots";
 import { notify } from "./notices";
@@ -83,6 +84,7 @@ export async function decideLot(admin: Viewer, lotId: string, d: ReviewDecision)
     if (d.action === "request-changes") {
       await mailConsignor(lot, `Changes asked on your lot "${lot.title}"`, `The house reviewed your lot and asks for changes:\n\n${d.comment}\n\nMake them and submit the lot again.`);
     } else if (d.action === "approve") {
+      await lotChanged(lot.id, "approved");
       await mailConsignor(lot, `Your lot "${lot.title}" is approved`, `The house approved your lot with an estimate of ${formatCents(d.estimateLowCents)}–${formatCents(d.estimateHighCents)} and the reserve you agreed (${formatCents(d.reserveCents)}).${d.comment ? `\n\n${d.comment}` : ""}`);
     } else {
       await mailConsignor(lot, `Your lot "${lot.title}" was declined`, `The house declined your lot:\n\n${d.comment}`);
@@ -115,4 +117,5 @@ export async function amendLot(admin: Viewer, lotId: string, a: AmendmentInput):
     }
     await LotEvent.create({ lotId, actorId: admin.id, kind: "amended", comment: a.description, details }, { transaction: t });
   });
+  await lotChanged(lotId, "amended");
 }

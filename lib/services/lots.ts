@@ -7,11 +7,20 @@ import type { ItemInput, LotDetailsInput } from "../validation/lots";
 import { db, Lot, LotEvent, LotItem, LotPhoto, User } from "../../models";
 import type { LotState } from "../../models/Lot";
 import { assertCanView, assertConsignorCanEdit, seesReserve } from "./lot-access";
+import { currentReferenceTable } from "./reference-table";
+import type { ReferenceTable } from "../valves/reference-table";
+import { typeFamily } from "../lots/type-family";
+import { hazardsForType } from "../valves/hazards";
+import type { HazardKind } from "../valves/index-types";
 
-/** What a designation becomes when typed: normalised where possible, flagged for review when unknown. */
-export function normaliseTyped(typed: string): { designation: string; known: boolean } {
-  const d = decodeDesignation(typed);
-  if (d.ok) return { designation: d.normalised, known: d.knownType };
+/**
+ * What a designation becomes when typed: normalised where possible. `known`
+ * is false only for the third answer (not a designation: "check type");
+ * types on file and types that decode by their scheme are not flagged.
+ */
+export function normaliseTyped(table: ReferenceTable, typed: string): { designation: string; known: boolean } {
+  const d = decodeDesignation(table, typed);
+  if (d.ok) return { designation: d.normalised, known: true };
   return { designation: (d.normalised ?? typed.trim().toUpperCase()).slice(0, 40), known: false };
 }
 
@@ -33,6 +42,23 @@ export function presentItem(i: LotItem) {
   };
 }
 
+/**
+ * An item with what the house's current table says about it: whether to ask
+ * "check type" (only for the third answer), its family label, and its
+ * hazards beyond high voltage and glass (the type's own and those declared).
+ */
+export function withReference(table: ReferenceTable, i: ItemView) {
+  return {
+    ...i,
+    designationKnown: normaliseTyped(table, i.designationTyped).known,
+    familyLabel: typeFamily(table, i.designation).label,
+    typeHazards: hazardsForType(table, i.designation, i.hazards as HazardKind[]).notices.filter((n) => n.certainty !== "always"),
+  };
+}
+
+/** An item of getLot: the stored item with the reference table's reading of it. */
+export type LotItemView = ReturnType<typeof withReference>;
+
 export type LotView = ReturnType<typeof presentLot>;
 
 /** A lot as the viewer may see it: the reserve only for the house and the consignor. */
@@ -41,7 +67,7 @@ export function presentLot(lot: Lot, viewer: Viewer | null) {
   return {
     id: lot.id, title: lot.title, provenance: lot.provenance, shippingOrigin: lot.shippingOrigin, testerKind: lot.testerKind,
     testerNotes: lot.testerNotes, state: lot.state as LotState, consignorId: lot.consignorId,
-    consignorName: lot.consignor?.displayName ?? null,
+    consignorName: viewer ? lot.consignor?.displayName ?? null : null, // the public reads the evidence, not who consigned it
     estimateLowCents: lot.estimateLowCents, estimateHighCents: lot.estimateHighCents,
     reserveCents: reserve ? lot.reserveCents : undefined,
     submittedAt: lot.submittedAt?.toISOString() ?? null, approvedAt: lot.approvedAt?.toISOString() ?? null,
@@ -82,11 +108,13 @@ export async function getLot(viewer: Viewer | null, lotId: string) {
     LotPhoto.findAll({ where: { lotId }, order: [["createdAt", "ASC"]] }),
     LotEvent.findAll({ where: { lotId }, order: [["createdAt", "ASC"], ["id", "ASC"]], include: [{ model: User, as: "actor", attributes: ["displayName"] }] }),
   ]);
+  // "check type" follows the house's current table, not the table when the item was typed.
+  const table = await currentReferenceTable();
   return {
     lot: presentLot(lot, viewer),
-    items: items.map(presentItem),
+    items: items.map((i) => withReference(table, presentItem(i))),
     photos: photos.map((p) => ({ id: p.id, itemId: p.itemId, caption: p.caption, width: p.width, height: p.height })),
-    events: events.map((e) => ({ id: e.id, kind: e.kind, comment: e.comment, details: e.details, at: e.createdAt.toISOString(), actor: e.actor?.displayName ?? null })),
+    events: events.map((e) => ({ id: e.id, kind: e.kind, comment: e.comment, details: e.details, at: e.createdAt.toISOString(), actor: viewer ? e.actor?.displayName ?? null : null })),
   };
 }
 
@@ -109,8 +137,8 @@ export async function listLots(viewer: Viewer, scope: "mine" | "approved" | "rev
   return lots.map((l) => ({ ...presentLot(l, viewer), tubes: by.get(l.id)?.tubes ?? 0, lines: by.get(l.id)?.lines ?? 0 }));
 }
 
-function itemValues(input: ItemInput) {
-  const { designation, known } = normaliseTyped(input.designation);
+function itemValues(table: ReferenceTable, input: ItemInput) {
+  const { designation, known } = normaliseTyped(table, input.designation);
   return {
     designationTyped: input.designation, designation, designationKnown: known, quantity: input.quantity, labelBrand: input.labelBrand,
     makerName: input.makerName || null, makerBasis: input.makerBasis, sourceCode: input.sourceCode || null, dateCode: input.dateCode || null,
@@ -122,21 +150,23 @@ function itemValues(input: ItemInput) {
 /** Add an item to the consignor's lot; unknown designations are kept and flagged, never refused. */
 export async function addItem(viewer: Viewer, lotId: string, input: ItemInput): Promise<ItemView> {
   const s = db();
+  const table = await currentReferenceTable();
   return s.transaction(async (t) => {
     assertConsignorCanEdit(viewer, await Lot.findByPk(lotId, { lock: t.LOCK.UPDATE, transaction: t }));
     const max = (await LotItem.max("position", { where: { lotId }, transaction: t })) as number | null;
-    const item = await LotItem.create({ lotId, position: (max ?? 0) + 1, ...itemValues(input) }, { transaction: t });
+    const item = await LotItem.create({ lotId, position: (max ?? 0) + 1, ...itemValues(table, input) }, { transaction: t });
     return presentItem(item);
   });
 }
 
 export async function updateItem(viewer: Viewer, lotId: string, itemId: string, input: ItemInput): Promise<ItemView> {
   const s = db();
+  const table = await currentReferenceTable();
   return s.transaction(async (t) => {
     assertConsignorCanEdit(viewer, await Lot.findByPk(lotId, { lock: t.LOCK.UPDATE, transaction: t }));
     const item = await LotItem.findOne({ where: { id: itemId, lotId }, transaction: t });
     if (!item) throw new ApiError("not_found", "No such item in this lot");
-    await item.update(itemValues(input), { transaction: t });
+    await item.update(itemValues(table, input), { transaction: t });
     return presentItem(item);
   });
 }
@@ -148,4 +178,13 @@ export async function removeItem(viewer: Viewer, lotId: string, itemId: string):
     const n = await LotItem.destroy({ where: { id: itemId, lotId }, transaction: t });
     if (!n) throw new ApiError("not_found", "No such item in this lot");
   });
+}
+
+/** The sale a lot is (or was) offered in, if any: for the lot page's way to bidding. */
+export async function saleLotOf(lotId: string): Promise<{ saleLotId: string; saleId: string; saleTitle: string; phase: string; hammerCents: number | null; closedAt: string | null } | null> {
+  const [row] = await db().query<{ id: string; sale_id: string; title: string; phase: string; hammer_cents: number | null; closed_at: Date | null }>(
+    `SELECT sl.id, sl.sale_id, s.title, sl.phase, sl.hammer_cents, sl.closed_at FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.lot_id = :lotId ORDER BY sl.created_at DESC LIMIT 1`,
+    { replacements: { lotId }, type: QueryTypes.SELECT },
+  );
+  return row ? { saleLotId: row.id, saleId: row.sale_id, saleTitle: row.title, phase: row.phase, hammerCents: row.hammer_cents, closedAt: row.closed_at?.toISOString() ?? null } : null;
 }

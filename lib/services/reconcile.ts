@@ -22,14 +22,6 @@ export type Reconciliation = {
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-async function allCharges(): Promise<Stripe.Charge[]> {
-  const out: Stripe.Charge[] = [];
-  for await (const c of stripe().charges.list({ limit: 100 })) {
-    out.push(c);
-    if (out.length > 50_000) break;
-  }
-  return out;
-}
 
 /**
  * Every captured processor charge that neither a paid invoice nor a recorded unexpected charge accounts
@@ -44,7 +36,7 @@ async function unmatchedCharges(bts: Stripe.BalanceTransaction[]): Promise<{ inF
   const feeOf = new Map(bts.filter((b) => b.type === "charge" || b.type === "payment").map((b) => [b.source as string, b.fee]));
   const cutoff = Date.now() / 1000 - IN_FLIGHT_SECONDS;
   const rows: (UnmatchedCharge & { recent: boolean })[] = [];
-  for (const c of await allCharges()) {
+  for (const c of await all(stripe().charges.list({ limit: 100 }))) {
     if (c.status !== "succeeded" || !c.captured) continue;
     const pi = typeof c.payment_intent === "string" ? c.payment_intent : c.payment_intent?.id ?? null;
     if (pi && known.has(pi)) continue;
@@ -59,10 +51,11 @@ async function unmatchedCharges(bts: Stripe.BalanceTransaction[]): Promise<{ inF
   return { inFlight, unexplained };
 }
 
-async function allBalanceTransactions(): Promise<Stripe.BalanceTransaction[]> {
-  const out: Stripe.BalanceTransaction[] = [];
-  for await (const bt of stripe().balanceTransactions.list({ limit: 100 })) {
-    out.push(bt);
+/** Every item of a processor list, page after page (up to 50,000). */
+async function all<T>(list: AsyncIterable<T>): Promise<T[]> {
+  const out: T[] = [];
+  for await (const x of list) {
+    out.push(x);
     if (out.length > 50_000) break;
   }
   return out;
@@ -77,7 +70,7 @@ async function allBalanceTransactions(): Promise<Stripe.BalanceTransaction[]> {
  * the finance page.
  */
 export async function reconcile(): Promise<Reconciliation> {
-  const [ledger, tb, bts, bal] = await Promise.all([balances(), trialBalance(), allBalanceTransactions(), stripe().balance.retrieve()]);
+  const [ledger, tb, bts, bal] = await Promise.all([balances(), trialBalance(), all(stripe().balanceTransactions.list({ limit: 100 })), stripe().balance.retrieve()]);
   const sum = (types: string[], f: (b: Stripe.BalanceTransaction) => number) => bts.filter((b) => types.includes(b.type)).reduce((n, b) => n + f(b), 0);
   const processor = {
     availableCents: bal.available.reduce((n, a) => n + a.amount, 0) + bal.pending.reduce((n, a) => n + a.amount, 0),

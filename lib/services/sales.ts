@@ -8,6 +8,7 @@ import { type LotLive } from "../realtime/events";
 import { emitLot } from "../realtime/lot-emitter";
 import type { SaleCreateInput } from "../validation/sales";
 import { db, Lot, Sale, SaleLot } from "../../models";
+import { lotChanged } from "./catalogue/events";
 import { scheduleClose } from "./close-schedule";
 import { liveFrom } from "./live-lot";
 import { paddlesOf } from "./paddles";
@@ -46,6 +47,7 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
   });
   const saleLots = await SaleLot.findAll({ where: { saleId: sale.id }, attributes: ["id", "closesAt"] });
   for (const sl of saleLots) await scheduleClose(sl.id, sl.closesAt);
+  for (const l of input.lots) await lotChanged(l.lotId, "scheduled");
   return { id: sale.id, lots: saleLots.length };
 }
 
@@ -220,9 +222,3 @@ export async function offerableLots() {
   return rows.map((r) => ({ id: r.id, title: r.title, consignor: r.consignor, estimateLowCents: r.estimate_low_cents, estimateHighCents: r.estimate_high_cents, reserveCents: r.reserve_cents }));
 }
 
-/** Where a lot is offered, if it is: for a link from its evidence back to bidding. */
-export async function saleLotOf(lotId: string): Promise<{ saleId: string; saleLotId: string; phase: LotLive["phase"] } | null> {
-  const [r] = await db().query<{ id: string; sale_id: string; phase: LotLive["phase"] }>(
-    `SELECT id, sale_id, phase FROM sale_lots WHERE lot_id = :lotId ORDER BY created_at DESC LIMIT 1`, { replacements: { lotId }, type: QueryTypes.SELECT });
-  return r ? { saleId: r.sale_id, saleLotId: r.id, phase: r.phase } : null;
-}

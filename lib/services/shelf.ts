@@ -10,6 +10,8 @@ import { splitJoinedCode } from "../valves/source-code";
 import type { AttributionQuery, ShelfTubeInput } from "../validation/shelf";
 import { db, Lot, LotItem, Maker, ShelfTube } from "../../models";
 import { lookupRegisteredCode } from "./makers";
+import { currentReferenceTable } from "./reference-table";
+import type { ReferenceTable } from "../valves/reference-table";
 
 /** A year for era checks: only when the date code reads unambiguously. */
 function yearOf(dateCode: string | null | undefined): number | undefined {
@@ -18,7 +20,7 @@ function yearOf(dateCode: string | null | undefined): number | undefined {
   return r.ok && r.readings.length === 1 ? r.readings[0]!.year : undefined;
 }
 
-const familyOf = (designation: string) => typeFamily(designation).key;
+const familyOf = (table: ReferenceTable, designation: string) => typeFamily(table, designation).key;
 
 /**
  * Every tube whose maker a source code confirms, from dealers' shelves and
@@ -26,6 +28,7 @@ const familyOf = (designation: string) => typeFamily(designation).key;
  * each newly confirmed tube sharpens the profiles at once.
  */
 export async function referenceProfiles(): Promise<ReferenceProfile[]> {
+  const table = await currentReferenceTable();
   db();
   const [shelf, items] = await Promise.all([
     ShelfTube.findAll({ where: { basis: "source-code-confirmed" }, include: [{ model: Maker, as: "maker", attributes: ["name"] }], limit: 20_000 }),
@@ -37,11 +40,11 @@ export async function referenceProfiles(): Promise<ReferenceProfile[]> {
   ]);
   const examples: AttributableItem[] = [
     ...shelf.filter((t) => t.maker).map((t) => ({
-      itemId: t.id, typeFamily: familyOf(t.designation), year: yearOf(t.dateCode), features: featuresFromText(t.features as Record<string, string>).features,
+      itemId: t.id, typeFamily: familyOf(table, t.designation), year: yearOf(t.dateCode), features: featuresFromText(t.features as Record<string, string>).features,
       basis: "source-code-confirmed" as const, makerId: t.maker!.name, makerName: t.maker!.name,
     })),
     ...items.map((i) => ({
-      itemId: i.id, typeFamily: familyOf(i.designation), year: yearOf(i.dateCode), features: featuresFromText(i.features).features,
+      itemId: i.id, typeFamily: familyOf(table, i.designation), year: yearOf(i.dateCode), features: featuresFromText(i.features).features,
       basis: "source-code-confirmed" as const, makerId: i.makerName!, makerName: i.makerName!,
     })),
   ];
@@ -50,10 +53,11 @@ export async function referenceProfiles(): Promise<ReferenceProfile[]> {
 
 /** Rank makers for a set of features (POST /api/valves/attribution). */
 export async function rankForFeatures(q: AttributionQuery) {
+  const table = await currentReferenceTable();
   const text = Object.fromEntries(Object.entries(q.features).map(([k, v]) => [k, typeof v === "boolean" ? (v ? "yes" : "no") : String(v)]));
   const { features, ignored } = featuresFromText(text);
-  const d = q.designation ? decodeDesignation(q.designation) : null;
-  const family = d?.ok ? familyOf(d.normalised) : undefined;
+  const d = q.designation ? decodeDesignation(table, q.designation) : null;
+  const family = d?.ok ? familyOf(table, d.normalised) : undefined;
   const profiles = await referenceProfiles();
   const candidates = rankMakers(features, profiles, { typeFamily: family, year: q.year });
   return { features, ignored, typeFamily: family ?? null, profilesCompared: profiles.filter((p) => !family || p.typeFamily === family).length, candidates };
@@ -78,12 +82,13 @@ function present(t: ShelfTube, best: MakerCandidate | undefined, proposed: boole
  * otherwise it waits, unconfirmed. A retried request adds nothing.
  */
 export async function addShelfTube(viewer: Viewer, input: ShelfTubeInput): Promise<ShelfTubeView> {
+  const table = await currentReferenceTable();
   db();
   if (input.clientKey) {
     const again = await ShelfTube.findOne({ where: { ownerId: viewer.id, clientKey: input.clientKey }, include: [{ model: Maker, as: "maker" }] });
     if (again) return present(again, undefined, false);
   }
-  const d = decodeDesignation(input.designation);
+  const d = decodeDesignation(table, input.designation);
   const designation = d.ok ? d.normalised : input.designation.trim().toUpperCase();
   let sourceCode = input.sourceCode || null;
   let dateCode = input.dateCode || null;
@@ -109,6 +114,7 @@ export async function addShelfTube(viewer: Viewer, input: ShelfTubeInput): Promi
 
 /** The viewer's shelf: unconfirmed tubes with their best candidate, those now strong enough proposed first. */
 export async function listShelf(viewer: Viewer): Promise<{ proposed: ShelfTubeView[]; waiting: ShelfTubeView[]; confirmed: ShelfTubeView[]; profiles: number }> {
+  const table = await currentReferenceTable();
   db();
   const [tubes, profiles] = await Promise.all([
     ShelfTube.findAll({ where: { ownerId: viewer.id }, include: [{ model: Maker, as: "maker" }], order: [["createdAt", "DESC"]], limit: 2000 }),
@@ -116,7 +122,7 @@ export async function listShelf(viewer: Viewer): Promise<{ proposed: ShelfTubeVi
   ]);
   const open = tubes.filter((t) => t.basis === "unconfirmed");
   const split = unconfirmedShelf(
-    open.map((t) => ({ itemId: t.id, typeFamily: familyOf(t.designation), year: yearOf(t.dateCode), features: featuresFromText(t.features as Record<string, string>).features, basis: "unconfirmed" as const })),
+    open.map((t) => ({ itemId: t.id, typeFamily: familyOf(table, t.designation), year: yearOf(t.dateCode), features: featuresFromText(t.features as Record<string, string>).features, basis: "unconfirmed" as const })),
     profiles,
   );
   const byId = new Map(tubes.map((t) => [t.id, t]));
@@ -130,11 +136,12 @@ export async function listShelf(viewer: Viewer): Promise<{ proposed: ShelfTubeVi
 
 /** One shelf tube with every candidate maker, the features that agree and those that conflict. */
 export async function shelfTube(viewer: Viewer, id: string) {
+  const table = await currentReferenceTable();
   db();
   const t = await ShelfTube.findOne({ where: { id, ownerId: viewer.id }, include: [{ model: Maker, as: "maker" }] });
   if (!t) throw new ApiError("not_found", "No such tube on your shelf");
   const profiles = await referenceProfiles();
-  const family = familyOf(t.designation);
+  const family = familyOf(table, t.designation);
   const candidates = rankMakers(featuresFromText(t.features as Record<string, string>).features, profiles, { typeFamily: family, year: yearOf(t.dateCode) });
   return { tube: present(t, candidates[0], false), candidates, profilesCompared: profiles.filter((p) => p.typeFamily === family).length };
 }

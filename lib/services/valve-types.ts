@@ -3,58 +3,84 @@ import { decodeDesignation } from "../valves/designation";
 import type { DecodedDesignation } from "../valves/designation";
 import { findEquivalents, type EquivalentsResult } from "../valves/equivalents";
 import { hazardsForType, type HazardReport } from "../valves/hazards";
-import { findReferenceType, type ReferenceType } from "../valves/reference-data";
+import type { ReferenceType } from "../valves/reference-row";
+import { findReferenceType } from "../valves/reference-table";
 import { db, User, ValveType, ValveTypeRevision } from "../../models";
 import type { ValveTypeData } from "../../models/ValveType";
 import type { ReferenceEditInput } from "../validation/valves";
+import { currentReferenceTable } from "./reference-table";
 
-/** Everything the exchange knows about one designation. */
+/** A reference row as the house keeps it: the row, its revision and when it last changed. */
+export type HouseReference = ReferenceType & { revision: number; updatedAt: string; retired: boolean };
+
+/**
+ * Everything the exchange knows about one designation. `onFile` is true when
+ * the house's table (or the equivalents lists) holds the type; false when it
+ * decodes by its scheme (heater, systems, base) but has no figures on file,
+ * in which case `canAdd` tells the house it may add the row.
+ */
 export type TypeLookup = {
   query: string;
+  onFile: boolean;
+  canAdd: boolean;
   decode: DecodedDesignation;
-  reference: (ReferenceType & { revision: number; updatedAt: string; matchedBy: "exact" | "alias" | "stem" }) | null;
+  reference: (HouseReference & { matchedBy: "exact" | "alias" | "stem" }) | null;
   equivalents: EquivalentsResult;
   hazards: HazardReport;
 };
 
-/** The house's current reference row for a designation (name, alias, or US stem). */
+const present = (row: ValveType): HouseReference => ({
+  ...row.toReference(), revision: row.revision, updatedAt: row.updatedAt.toISOString(), retired: row.retiredAt !== null,
+});
+
+/** The house's current reference row for a designation (name, alias, or US stem), on file only. */
 export async function referenceFor(designation: string): Promise<TypeLookup["reference"]> {
+  const table = await currentReferenceTable();
+  const found = findReferenceType(table, designation);
+  if (!found) return null;
+  const row = await ValveType.findByPk(found.row.designation);
+  return row ? { ...present(row), matchedBy: found.match } : null;
+}
+
+/** One row by its designation for the house's edit page, retired or not. */
+export async function houseReferenceRow(designation: string): Promise<HouseReference | null> {
   db();
-  const found = findReferenceType(designation);
-  const name = found?.row.designation ?? designation;
-  const row = await ValveType.findByName(name);
-  if (!row) return null;
-  return { ...row.toReference(), revision: row.revision, updatedAt: row.updatedAt.toISOString(), matchedBy: found?.match ?? "exact" };
+  const row = await ValveType.findByPk(designation);
+  return row ? present(row) : null;
 }
 
 /**
- * Decode a designation and gather its equivalents, reference figures and
- * hazards. Malformed input is a 400; a designation we cannot place is a 404
- * whose details list the closest known designations.
+ * The three answers for a designation, the same for the API, the reference
+ * page, intake and the lot summary: on file (figures, equivalents, sources);
+ * decoded by its scheme with no figures on file (200, onFile false); not a
+ * designation (404 with the closest known candidates). Malformed input is a 400.
  */
 export async function lookupType(input: string): Promise<TypeLookup> {
-  const decode = decodeDesignation(input);
+  const table = await currentReferenceTable();
+  const decode = decodeDesignation(table, input);
   if (!decode.ok) {
     if (decode.error === "not-a-designation") {
       throw new ApiError("not_found", decode.message, undefined, undefined, { candidates: decode.candidates });
     }
     throw new ApiError("validation_failed", decode.message, { designation: decode.message });
   }
-  const [reference, equivalents] = [await referenceFor(decode.normalised), findEquivalents(decode.normalised)];
-  if (!reference && equivalents.matches.length === 0 && !decode.knownType) {
-    throw new ApiError("not_found", `${decode.normalised} is not a type we hold figures for`, undefined, undefined, {
-      candidates: decode.candidates,
-      decode,
-    });
-  }
-  return { query: input, decode, reference, equivalents, hazards: hazardsForType(decode.normalised) };
+  const reference = decode.reference ? await referenceFor(decode.normalised) : null;
+  return {
+    query: input,
+    onFile: decode.knownType,
+    canAdd: !reference,
+    decode,
+    reference,
+    equivalents: findEquivalents(decode.normalised),
+    hazards: hazardsForType(table, decode.normalised),
+  };
 }
 
-/** All reference rows, for the house's table. */
-export async function listReferenceTypes(): Promise<(ReferenceType & { revision: number; updatedAt: string })[]> {
+/** All reference rows, retired ones included, for the house's table. */
+export async function listReferenceTypes(): Promise<HouseReference[]> {
   db();
   const rows = await ValveType.findAll({ order: [["designation", "ASC"]] });
-  return rows.map((r) => ({ ...r.toReference(), revision: r.revision, updatedAt: r.updatedAt.toISOString() }));
+  return rows.map(present);
 }
 
 /** The change history of one row, newest first. */
@@ -71,7 +97,7 @@ export async function referenceHistory(designation: string) {
 }
 
 function applyEdit(data: ValveTypeData, e: ReferenceEditInput): ValveTypeData {
-  const heater = e.heaterVolts != null && e.heaterAmps != null ? { ...(data.heater ?? {}), volts: e.heaterVolts, amps: e.heaterAmps } : null;
+  const heater = e.heaterVolts != null && e.heaterAmps != null ? { ...(data.heater ?? {}), volts: e.heaterVolts, amps: e.heaterAmps } : data.heater === null ? null : undefined;
   const prior = data.characteristics;
   const characteristics =
     prior && prior.kind !== "amplifier"
@@ -91,6 +117,9 @@ function applyEdit(data: ValveTypeData, e: ReferenceEditInput): ValveTypeData {
           };
   const next: ValveTypeData = { ...data, heater: heater as ValveTypeData["heater"] };
   const mutable = next as { -readonly [K in keyof ValveTypeData]: ValveTypeData[K] };
+  if (heater === undefined) delete mutable.heater;
+  // A corrected row needs checking again.
+  delete mutable.verification;
   if (characteristics) mutable.characteristics = characteristics;
   else delete mutable.characteristics;
   if (e.introducedYear != null) mutable.introduced = { year: e.introducedYear, source: "MEM" };
@@ -121,6 +150,6 @@ export async function editReferenceType(actorId: string, designation: string, ex
       { designation, revision, changedBy: actorId, reason: e.reason, before, after: { ...data, source: e.source } },
       { transaction: t },
     );
-    return { ...row.toReference(), revision, updatedAt: row.updatedAt.toISOString() };
+    return present(row);
   });
 }

@@ -218,7 +218,7 @@ export function unconfirmedShelf(
  * and disputed when construction points elsewhere (the code may name the
  * brand owner [EIA-476]). Otherwise a medium-or-better construction match
  * gives "construction-matched"; else "unconfirmed". The label brand is kept
- * apart: rebranding alone is not misdescription [SUG, brief §8].
+ * apart: rebranding alone is not misdescription [SUG].
  */
 export function attribute(input: { labelBrand?: string; sourceCodeMaker?: { makerId: string; makerName: string }; ranking?: readonly MakerCandidate[] }): Attribution {
   const top = input.ranking?.[0];

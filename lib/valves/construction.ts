@@ -1,6 +1,6 @@
 /**
  * Our vocabulary for the construction features dealers compare when they
- * attribute a tube to the factory that made it [CTP, brief §1]: plates,
+ * attribute a tube to the factory that made it [CTP]: plates,
  * getter, micas, supports, envelope and base, markings.
  *
  * Every feature is optional: a listing records what can be seen. The value

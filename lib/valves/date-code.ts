@@ -200,7 +200,7 @@ function readCentury(
 }
 
 /**
- * Read an EIA date code ("5943", "943", or joined "946-5943") into ranked
+ * Read an EIA date code ("5943", "943", or joined "X46-5943") into ranked
  * candidate dates. Four digits are YYWW [EIA-476]; three digits are YWW and
  * give one candidate per decade between the type's introduction and the end
  * of production, never before the introduction [CTP].
@@ -322,7 +322,8 @@ export type EuropeanDateResult =
 
 /**
  * Read line two of an etched European code: factory symbol + year digit +
- * month letter + optional week digit (e.g. "Δ7C2") [CTP/MEM]. The decade is
+ * month letter + optional week digit (e.g. "¤7C2", "¤" an invented demo
+ * symbol) [CTP/MEM]. The decade is
  * not in the code, so every decade between the type's introduction and the
  * end of production is offered, ranked like readDateCode. With `schemes`
  * holding both letter schemes, each differing month is offered too.

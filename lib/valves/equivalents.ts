@@ -1,4 +1,4 @@
-// Equivalent and substitute types (brief section 3), as typed links, never a
+// Equivalent and substitute types, as typed links, never a
 // bare "equals" [SUG]. Most relations here are trade knowledge from memory
 // [MEM]; heater figures marked ✓ are checked against data sheets.
 

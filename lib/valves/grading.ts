@@ -1,6 +1,6 @@
 /**
  * Grading one tester reading: "% of new" per section, a grade band, hard
- * failures and dual-section balance [brief §6].
+ * failures and dual-section balance [CTP].
  *
  * "% of new" is always against the tester model's own chart value, never a
  * data-sheet figure [CTP], and emission readings are never set against Gm.

@@ -1,10 +1,10 @@
-// Hazards a listing must show (brief section 7), with short cautions in our
+// Hazards a listing must show, with short cautions in our
 // own words. Cautions defer to local codes, carriers and licensed practice:
 // they are reminders for buyers and sellers, not safety instructions.
 
 import { normaliseDesignation } from "./designation/normalise";
 import type { HazardCertainty, HazardKind, TypeHazard } from "./index-types";
-import { findReferenceType } from "./reference-data";
+import { findReferenceType, type ReferenceTable } from "./reference-table";
 
 /** Title, caution text and source for each hazard kind. */
 export interface HazardCaution {
@@ -72,7 +72,7 @@ export interface HazardReport {
 
 /**
  * Hazards of types outside the reference table that sellers commonly meet.
- * 872A is a mercury-vapour rectifier like 866A (brief section 7).
+ * 872A is a mercury-vapour rectifier like 866A.
  */
 export const EXTRA_TYPE_HAZARDS: Readonly<Record<string, readonly TypeHazard[]>> = {
   "872A": [
@@ -92,10 +92,10 @@ function notice(kind: HazardKind, certainty: HazardNotice["certainty"], note?: s
  * source...) that our data does not list. Unknown types get the general
  * notices and advice to check the data sheet.
  */
-export function hazardsForType(designation: string, declared: readonly HazardKind[] = []): HazardReport {
+export function hazardsForType(table: ReferenceTable, designation: string, declared: readonly HazardKind[] = []): HazardReport {
   const n = normaliseDesignation(designation);
   const key = n.ok ? n.value : designation;
-  const found = n.ok ? findReferenceType(key) : undefined;
+  const found = n.ok ? findReferenceType(table, key) : undefined;
   const row = found?.row;
   const typeHazards: readonly TypeHazard[] = row?.hazards ?? EXTRA_TYPE_HAZARDS[key] ?? [];
   const notices: HazardNotice[] = [notice("high-voltage", "always")];

@@ -2,7 +2,7 @@
 // data, equivalents, hazards). Types only: no data, no behaviour.
 
 /**
- * Source tags used beside every trade constant, as defined in the domain brief:
+ * Source tags used beside every trade constant, listed with their publications in lib/valves/sources.ts:
  * REG registered data sheets, MIL-E-1 military sheets, EU-DS European data books,
  * PE European designation scheme, LS53 designer's handbook 1953, EIA-476 date/source
  * codes, CTP common trade practice, MEM from memory (verify), SUG our own suggestion.
@@ -24,6 +24,7 @@ export type BaseFamily =
   | "b9g"
   | "subminiature"
   | "four-pin"
+  | "pre-octal"
   | "older-european";
 
 /**
@@ -42,7 +43,7 @@ export interface HeaterConfiguration {
 
 /**
  * Hazards a listing may have to show. "high-voltage" and "glass" apply to every
- * valve; the others are type-specific (brief section 7).
+ * valve; the others are type-specific.
  */
 export type HazardKind = "high-voltage" | "glass" | "beryllium-oxide" | "radioactive" | "mercury-vapour";
 

@@ -1,7 +1,7 @@
 /**
  * Spread arithmetic shared by the matching searches.
  *
- * Spread of a set = (max − min)/mean [SUG, brief §6]. For two tubes the mean
+ * Spread of a set = (max − min)/mean [SUG]. For two tubes the mean
  * is fixed by the pair; for larger sets it also depends on the inner values.
  */
 

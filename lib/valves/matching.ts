@@ -1,6 +1,6 @@
 /**
  * Matched pairs and quads: the most disjoint sets whose spread fits the
- * tolerance on Gm and, when asked, on plate current [CTP, brief §6].
+ * tolerance on Gm and, when asked, on plate current [CTP].
  *
  * Spread = (max − min)/mean [SUG]. Pass readings from one tester model at one
  * set of settings only, and Gm (or plate-current) readings only: emission

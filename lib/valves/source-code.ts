@@ -48,21 +48,29 @@ export const SOURCE_CODE_CAVEAT =
   "A source code names the production source or the vendor assuming product responsibility; " +
   "on a rebranded tube it may name the brand owner. Treat it as evidence, not proof.";
 
-// "EIA 946", "RMA-946", "946", "946-5943", "EIA 946 5943" (946: invented demo code) [EIA-476; CTP "sss-YYWW" when printed together]
-const SOURCE_CODE_PATTERN = /^(?:(EIA|RMA)[\s-]?)?(\d{3})(?:[\s-](\d{3,4}))?$/i;
+// Registered codes are three digits: "EIA 274", "RMA-274", "274", "274-5943" [EIA-476; CTP "sss-YYWW" when
+// printed together]. Demo codes are "X" and two digits ("X46"): a form the registers never used, so an
+// invented demo code can never be mistaken for a registered one [SUG].
+const SOURCE_CODE_PATTERN = /^(?:(EIA|RMA)[\s-]?)?(\d{3}|X\d{2})(?:[\s-](\d{3,4}))?$/i;
+
+/** Whether a code is in the invented demo form ("X46"), never a registered code [SUG]. */
+export function isDemoSourceCode(code: string): boolean {
+  return /^X\d{2}$/i.test(code.trim());
+}
 
 /**
  * Split a code printed joined as "sss-YYWW" (or "sss-YWW") into its parts.
  * Returns null when the text is not in that joined form.
  */
 export function splitJoinedCode(text: string): { sourcePart: string; datePart: string } | null {
-  const match = /^(\d{3})[\s-](\d{3,4})$/.exec(text.trim());
+  const match = /^(\d{3}|X\d{2})[\s-](\d{3,4})$/i.exec(text.trim());
   return match ? { sourcePart: match[1], datePart: match[2] } : null;
 }
 
 /**
  * Check the printed form of an EIA source code: three digits, optionally
- * prefixed "EIA" or "RMA", optionally joined to a date code ("946-5943").
+ * (or an invented demo code "X" + two digits), optionally prefixed "EIA" or
+ * "RMA", optionally joined to a date code ("274-5943", "X46-5943").
  */
 export function validateSourceCodeFormat(text: string): SourceCodeFormat {
   const input = text;
@@ -78,7 +86,7 @@ export function validateSourceCodeFormat(text: string): SourceCodeFormat {
     return { ok: false, input, reason };
   }
   const prefix = match[1] ? (match[1].toUpperCase() as "EIA" | "RMA") : undefined;
-  const result: SourceCodeFormat = { ok: true, code: match[2] };
+  const result: SourceCodeFormat = { ok: true, code: match[2].toUpperCase() };
   if (prefix) result.prefix = prefix;
   if (match[3]) result.dateCode = match[3];
   return result;

@@ -28,6 +28,21 @@ export function unexpectedState(pi: Stripe.PaymentIntent, action: string, allowe
   });
 }
 
+/** Captured money reaches the balance: a charge balance transaction, with the fake's fee, on the charge. */
+export function settleCharge(ctx: Ctx, charge: Stripe.Charge, amount: number): void {
+  const txn = record(ctx.state, {
+    amount,
+    fee: processingFee(amount),
+    currency: charge.currency,
+    type: "charge",
+    reportingCategory: "charge",
+    source: charge.id,
+    description: charge.description,
+    created: ctx.now,
+  });
+  charge.balance_transaction = txn.id;
+}
+
 /** The intent's pending authentication ends (completed, superseded, cancelled or no longer needed). */
 export function endAuthentication(ctx: Ctx, pi: Stripe.PaymentIntent): void {
   delete ctx.state.authentications[pi.id];
@@ -37,19 +52,7 @@ export function endAuthentication(ctx: Ctx, pi: Stripe.PaymentIntent): void {
 export function succeed(ctx: Ctx, pi: Stripe.PaymentIntent, pm: Stripe.PaymentMethod, authenticated: boolean): void {
   const captured = pi.capture_method !== "manual";
   const charge = makeCharge(ctx.state, pi, pm, { ok: true, captured, authenticated }, ctx.now);
-  if (captured) {
-    const txn = record(ctx.state, {
-      amount: charge.amount,
-      fee: processingFee(charge.amount),
-      currency: charge.currency,
-      type: "charge",
-      reportingCategory: "charge",
-      source: charge.id,
-      description: charge.description,
-      created: ctx.now,
-    });
-    charge.balance_transaction = txn.id;
-  }
+  if (captured) settleCharge(ctx, charge, charge.amount);
   pi.latest_charge = charge.id;
   pi.next_action = null;
   pi.last_payment_error = null;

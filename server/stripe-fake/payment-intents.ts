@@ -6,11 +6,9 @@
 import type Stripe from "stripe";
 import type { Ctx, Handler } from "./context";
 import { invalid, noSuch } from "./errors";
-import { processingFee } from "./fees";
 import type { ParamHash } from "./form";
 import { newId, randomText } from "./ids";
-import { confirm, endAuthentication, findIntent, readConfirmOptions, unexpectedState } from "./intent-confirm";
-import { record } from "./ledger";
+import { confirm, endAuthentication, findIntent, readConfirmOptions, settleCharge, unexpectedState } from "./intent-confirm";
 import { LIST_PARAMS, page } from "./lists";
 import { applyMetadata, bool, currency, hash, int, onlyParams, oneOf, str } from "./params";
 
@@ -213,17 +211,7 @@ export const capturePaymentIntent: Handler = (ctx, id) => {
   const charge = ctx.state.charges[pi.latest_charge as string];
   charge.captured = true;
   charge.amount_captured = amount;
-  const txn = record(ctx.state, {
-    amount,
-    fee: processingFee(amount),
-    currency: charge.currency,
-    type: "charge",
-    reportingCategory: "charge",
-    source: charge.id,
-    description: charge.description,
-    created: ctx.now,
-  });
-  charge.balance_transaction = txn.id;
+  settleCharge(ctx, charge, amount);
   pi.amount_received = amount;
   pi.amount_capturable = 0;
   pi.status = "succeeded";

@@ -75,10 +75,10 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await dealer.getByRole("link", { name: /open a claim/ }).click();
   await dealer.getByLabel("What is wrong").selectOption("maker-misattributed");
   await dealer.getByLabel("What you ask for").selectOption("refund-affected-items");
-  await dealer.getByLabel("Your statement").fill("Three of the six 12AX7s carry source code 946 and square top getters with dimpled plates, not the construction listed.");
+  await dealer.getByLabel("Your statement").fill("Three of the six 12AX7s carry source code X46 and square top getters with dimpled plates, not the construction listed.");
   await dealer.getByLabel(/Line 1: 12AX7/).check();
   await dealer.getByLabel("Tubes affected").fill("3");
-  await dealer.getByLabel("Source code you read").fill("946");
+  await dealer.getByLabel("Source code you read").fill("X46");
   await dealer.getByLabel("Date code you read").fill("6231");
   await dealer.getByText("Construction you see").click();
   await dealer.getByLabel("Getter shape").selectOption("square");
@@ -101,9 +101,9 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   // A photo of the codes, captioned.
   const jpeg = await sharp({ create: { width: 640, height: 480, channels: 3, background: "#8a8a80" } }).jpeg().toBuffer();
   await dealer.getByLabel("Photo of").selectOption({ label: "Line 1: 12AX7" });
-  await dealer.getByLabel("Caption").fill("Code 946 and square getter, tubes 4–6");
+  await dealer.getByLabel("Caption").fill("Code X46 and square getter, tubes 4–6");
   await dealer.getByLabel("Choose photos").setInputFiles({ name: "codes.jpg", mimeType: "image/jpeg", buffer: jpeg });
-  await expect(dealer.getByRole("img", { name: /Photo of Line 1: 12AX7: Code 946/ })).toBeVisible();
+  await expect(dealer.getByRole("img", { name: /Photo of Line 1: 12AX7: Code X46/ })).toBeVisible();
 
   // Nobody else reads it: another consignor gets "not found".
   const other = await as(browser, DEMO.consignor);
@@ -134,7 +134,7 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await mediator.getByLabel("Line 1 value per tube").fill("10.00");
   await mediator.getByLabel("Line 2 value per tube").fill("5.00");
   await mediator.getByLabel("Line 3 value per tube").fill("10.00");
-  // The claim covers 3 × $10 of V_lot $100: 30 % stays held and the rest is paid now [brief §8, SUG]:
+  // The claim covers 3 × $10 of V_lot $100: 30 % stays held and the rest is paid now [CTP/SUG]:
   // hammer $80 × 70 % = $56.00 less commission $16 × 70 % = $11.20 → $44.80 to the estate.
   await mediator.getByRole("button", { name: "Release the undisputed share now" }).click();
   await expect(mediator.getByRole("main")).toContainText("Released $44.80 to the consignor");
@@ -142,13 +142,13 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await mediator.getByLabel("Tubes upheld").fill("3");
   await mediator.getByLabel("Worth per tube as delivered ($)").fill("4.00");
   await mediator.getByRole("button", { name: "Work out the refund" }).click();
-  // Hand-worked from the partial-refund formula [brief §8]: V_lot = 6×$10 + 4×$5 + 2×$10 = $100; W = 3 × ($10 − $4) = $18;
+  // Hand-worked from the partial-refund formula [CTP/SUG]: V_lot = 6×$10 + 4×$5 + 2×$10 = $100; W = 3 × ($10 − $4) = $18;
   // hammer $80 × 18 % = $14.40, premium $8 × 18 % = $1.44 → buyer $15.84; commission $16 × 18 % = $2.88 given back;
   // consignor −$14.40 + $2.88 = −$11.52; payout $80 − $16 − $11.52 = $52.48 [house rates: 10 % premium, 20 % commission, SUG].
   await expect(mediator.getByTestId("preview-refund")).toHaveText("$15.84");
   await shot(mediator, "workspace");
   expect(await axe(mediator)).toEqual([]);
-  await mediator.getByLabel("Reasons (both parties receive them)").fill("Code 946 is registered to another maker, and the buyer's construction (square top getter, dimpled grey plates) matches that maker's reference profile, not the listed one. More likely than not, three tubes were misattributed; the refund is the listed value less what they are worth as the other maker's.");
+  await mediator.getByLabel("Reasons (both parties receive them)").fill("Code X46 is registered to another maker, and the buyer's construction (square top getter, dimpled grey plates) matches that maker's reference profile, not the listed one. More likely than not, three tubes were misattributed; the refund is the listed value less what they are worth as the other maker's.");
   await mediator.getByRole("button", { name: "Record the decision and move the money" }).click();
   await expect(mediator.getByTestId("decision-refund")).toHaveText("$15.84", { timeout: 20_000 });
 

@@ -11,11 +11,28 @@ test("a designation typed loosely is decoded with its published figures and equi
   await expect(page.getByRole("row", { name: /5751.*Substitute with caveats/ })).toBeVisible();
 });
 
-test("an unknown designation offers the closest known ones", async ({ page }) => {
+test("a designation with no figures on file decodes by its scheme and offers the closest known ones", async ({ page }) => {
   await page.goto("/reference?q=12AX8");
-  await expect(page.getByRole("main").getByRole("status")).toContainText("12AX8");
+  // [LS53] 12 = 12.6 V heater class; no figures on file for 12AX8
+  await expect(page.getByRole("heading", { name: "12AX8", exact: true })).toBeVisible();
+  await expect(page.getByTestId("no-figures")).toContainText("Decoded by its scheme; no figures on file.");
+  await page.getByTestId("no-figures").getByRole("link", { name: "12AX7", exact: true }).click();
+  await expect(page.getByRole("heading", { name: "12AX7", exact: true })).toBeVisible();
+});
+
+test("what is not a designation answers with the closest known ones", async ({ page }) => {
+  // [MEM] a US final number counts 1 to 12 elements; 77 cannot occur
+  await page.goto("/reference?q=12AX77");
+  await expect(page.getByRole("main").getByRole("status")).toContainText("does not occur");
   await page.getByRole("link", { name: "12AX7", exact: true }).click();
   await expect(page.getByRole("heading", { name: "12AX7", exact: true })).toBeVisible();
+});
+
+test("the reference page lists every source tag with its publication", async ({ page }) => {
+  await page.goto("/reference");
+  const sources = page.getByRole("region", { name: "Sources" });
+  await expect(sources).toContainText("Radio Valve Data");
+  await expect(sources).toContainText("EIA-476");
 });
 
 test("a single-digit-year code on a 12AX7 lists every decade since the type's introduction, none before", async ({ page }) => {

@@ -88,7 +88,7 @@ async function deliveredLot(consignor?: User) {
 const claim = (itemId: string, over: Partial<OpenDisputeInput> = {}): OpenDisputeInput => ({
   reason: "maker-misattributed", remedy: "refund-affected-items",
   statement: "Two of the four carry another maker's source code and square getters.",
-  items: [{ itemId, tubes: 2, sourceCode: "946", dateCode: "6231", features: { getterShape: "square", plateSurface: "dimpled" }, readings: [], designationSeen: null, tubesReceived: null, vacuumLoss: false, note: "" }],
+  items: [{ itemId, tubes: 2, sourceCode: "X46", dateCode: "6231", features: { getterShape: "square", plateSurface: "dimpled" }, readings: [], designationSeen: null, tubesReceived: null, vacuumLoss: false, note: "" }],
   ...over,
 });
 
@@ -114,7 +114,7 @@ describe("claims and mediation", () => {
 
     // Evidence: a photo, re-encoded and kept; it cannot be edited or deleted afterwards.
     const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#777" } }).jpeg().toBuffer();
-    const photo = await addDisputePhoto(buyer, id, { name: "getter.jpg", bytes: jpeg }, { itemId: f.items[0]!, caption: "Square getter, code 946" });
+    const photo = await addDisputePhoto(buyer, id, { name: "getter.jpg", bytes: jpeg }, { itemId: f.items[0]!, caption: "Square getter, code X46" });
     expect((await readDisputePhoto(consignor, photo.id, "thumb")).contentType).toBe("image/jpeg");
     await expect(db().query(`UPDATE dispute_messages SET body = 'changed' WHERE dispute_id = :id`, { replacements: { id } })).rejects.toThrow(/cannot be changed/);
     await expect(db().query(`DELETE FROM dispute_evidence WHERE id = :id`, { replacements: { id: photo.id } })).rejects.toThrow(/cannot be changed/);
@@ -145,7 +145,7 @@ describe("claims and mediation", () => {
 
     // Before the consignor answers (and before the deadline) the mediator cannot decide.
     const lines = [{ itemId: f.items[0]!, valueCents: 1_000 }, { itemId: f.items[1]!, valueCents: 500 }, { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 }];
-    const decision = { outcome: "partial-refund" as const, reasons: "Code 946 and the square getter point to another maker on two tubes.", lines, rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }] };
+    const decision = { outcome: "partial-refund" as const, reasons: "Code X46 and the square getter point to another maker on two tubes.", lines, rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }] };
     expect((await refused(decide(m1, id, decision))).message).toMatch(/has until/);
     expect((await refused(postMessage(consignor, id, { body: "I bought them as they are." }))).status).toBe(400); // the answer needs a stance
     await postMessage(consignor, id, { body: "They came from the estate as listed; I matched them by construction.", stance: "contests" });
@@ -166,7 +166,7 @@ describe("claims and mediation", () => {
     expect(lost.status).toBe(409);
     expect((await refused(decide(m2, id, decision))).status).toBe(409);
 
-    // Hand-worked from the partial-refund formula (brief §8): V_lot = 4×$10 + 2×$5 + $50 set = $100;
+    // Hand-worked from the partial-refund formula: V_lot = 4×$10 + 2×$5 + $50 set = $100;
     // W = 2 × ($10 − $3) = $14; hammer $27.00 × 14 % = $3.78; premium $2.70 × 14 % = $0.378 → $0.38;
     // commission $5.40 × 14 % = $0.756 → $0.76 (half-up). Buyer gets $4.16; consignor bears −$3.78 + $0.76 = −$3.02.
     const closed = await getCase(consignor, id);
@@ -193,7 +193,7 @@ describe("claims and mediation", () => {
 
     const decisionMails = [...await inbox(f.buyer.email), ...await inbox(f.consignor.email)].filter((m) => m.subject.includes("Decision on"));
     expect(decisionMails).toHaveLength(2);
-    expect(decisionMails.every((m) => m.text.includes("Code 946 and the square getter"))).toBe(true);
+    expect(decisionMails.every((m) => m.text.includes("Code X46 and the square getter"))).toBe(true);
 
     // The record dealers see on this consignor's next lots.
     const record = await consignorRecord(f.consignor.id);
@@ -325,7 +325,7 @@ describe("claims and mediation", () => {
     const m = viewerOf(await makeUser(["mediator"]));
     await takeCase(m, id);
     const lines = [{ itemId: f.items[0]!, valueCents: 1_000 }, { itemId: f.items[1]!, valueCents: 500 }, { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 }];
-    // Hand-worked [brief §8, SUG]: the claim covers 2 × $10 of V_lot $100 = 20 % held; hammer $27.00 → $5.40 held, $21.60 released;
+    // Hand-worked [CTP/SUG]: the claim covers 2 × $10 of V_lot $100 = 20 % held; hammer $27.00 → $5.40 held, $21.60 released;
     // premium $2.70 → $0.54 / $2.16; commission $5.40 → $1.08 / $4.32; the consignor is paid $21.60 − $4.32 = $17.28 now.
     const r = await releaseUndisputedShare(m, id, { lines });
     expect(r.payoutCents).toBe(1_728);

@@ -10,7 +10,7 @@ const HABIT = { plateShape: "flat", plateColour: "grey", plateSurface: "dimpled"
 
 describe("the unconfirmed shelf", () => {
   it("confirms by source code, learns from it, and proposes matching unconfirmed tubes", async () => {
-    await applyRegistryImport("code,maker_name,is_demo,notes\n946,Pellham Radio Tube Corp.,true,demo\n");
+    await applyRegistryImport("code,maker_name,is_demo,notes\nX46,Pellham Radio Tube Corp.,true,demo\n");
     const dealer = viewerOf(await makeUser(["dealer"]));
 
     const waiting = await addShelfTube(dealer, { designation: "12ax7", labelBrand: "Fairmont Home Radio", sourceCode: null, dateCode: null, features: HABIT, notes: "", clientKey: "k-waiting-1" });
@@ -24,8 +24,8 @@ describe("the unconfirmed shelf", () => {
     await addShelfTube(dealer, { designation: "12AX7", labelBrand: "Fairmont Home Radio", sourceCode: null, dateCode: null, features: HABIT, notes: "", clientKey: "k-waiting-1" });
     expect((await listShelf(dealer)).waiting).toHaveLength(1);
 
-    const confirmed = await addShelfTube(dealer, { designation: "ECC83", labelBrand: "Tri-County Parts", sourceCode: "946-5943", dateCode: null, features: HABIT, notes: "", clientKey: "k-confirmed-1" });
-    expect(confirmed).toMatchObject({ basis: "source-code-confirmed", makerName: "Pellham Radio Tube Corp.", sourceCode: "946", dateCode: "5943" });
+    const confirmed = await addShelfTube(dealer, { designation: "ECC83", labelBrand: "Tri-County Parts", sourceCode: "X46-5943", dateCode: null, features: HABIT, notes: "", clientKey: "k-confirmed-1" });
+    expect(confirmed).toMatchObject({ basis: "source-code-confirmed", makerName: "Pellham Radio Tube Corp.", sourceCode: "X46", dateCode: "5943" });
 
     shelf = await listShelf(dealer);
     expect(shelf.proposed.map((t) => t.id)).toEqual([waiting.id]);

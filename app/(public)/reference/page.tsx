@@ -2,10 +2,13 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { DateCodeAnswer } from "@/components/valves/DateCodeAnswer";
 import { TypeAnswer } from "@/components/valves/TypeAnswer";
+import { PriceHistory } from "@/components/catalogue/PriceHistory";
+import { priceHistoryForDesignation } from "@/lib/services/catalogue/price-history";
 import { ApiError } from "@/lib/api/errors";
 import { readCodeForType, type DateCodeAnswer as CodeData } from "@/lib/services/date-codes";
 import { lookupType, type TypeLookup } from "@/lib/services/valve-types";
 import { DateCodeQuery, DesignationParam } from "@/lib/validation/valves";
+import { SOURCES } from "@/lib/valves/sources";
 
 export const metadata: Metadata = { title: "Valve reference" };
 
@@ -61,7 +64,7 @@ export default async function ReferencePage({ searchParams }: { searchParams: Pr
           <div className="grid grid-cols-[1fr_9rem] gap-2">
             <div>
               <label htmlFor="code" className="label">Code off the glass</label>
-              <input id="code" name="code" defaultValue={code} className="input code mt-1" placeholder="e.g. 5943 or 931-5943" autoComplete="off" maxLength={100} />
+              <input id="code" name="code" defaultValue={code} className="input code mt-1" placeholder="e.g. 5943 or X31-5943" autoComplete="off" maxLength={100} />
             </div>
             <div>
               <label htmlFor="type" className="label">On type (optional)</label>
@@ -82,8 +85,21 @@ export default async function ReferencePage({ searchParams }: { searchParams: Pr
         </div>
       ) : null}
       {t?.data ? <TypeAnswer data={t.data} /> : null}
+      {t?.data ? <PriceHistory series={await priceHistoryForDesignation(q)} heading="Price history in our sales" /> : null}
       {c?.error ? <p role="status" className="card font-medium text-fault-700">{c.error}</p> : null}
       {c?.data ? <DateCodeAnswer data={c.data} /> : null}
+      <section aria-labelledby="sources-h" className="card space-y-2">
+        <h2 id="sources-h" className="font-semibold">Sources</h2>
+        <p className="text-sm text-flash-700">Every figure and rule carries one of these tags. “MEM” marks what was recalled from memory and awaits a check against a data sheet.</p>
+        <dl className="grid gap-x-4 gap-y-1 text-sm sm:grid-cols-[6rem_1fr]">
+          {SOURCES.map((s) => (
+            <div key={s.tag} className="contents">
+              <dt className="code font-medium">{s.tag}</dt>
+              <dd><span className="font-medium">{s.title}.</span> {s.publication}</dd>
+            </div>
+          ))}
+        </dl>
+      </section>
     </div>
   );
 }

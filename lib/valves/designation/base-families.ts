@@ -18,6 +18,7 @@ export const BASE_FAMILY_LABELS: Readonly<Record<BaseFamily, string>> = {
   b9g: "B9G and related",
   subminiature: "Subminiature (wire ends)",
   "four-pin": "Four-pin (pre-octal)",
+  "pre-octal": "Five-, six- or seven-pin (pre-octal)",
   "older-european": "Older or miscellaneous European base",
 };
 

@@ -1,8 +1,9 @@
-// decodeDesignation: reads what a type designation says (brief section 2),
-// then adds what our reference data knows (tapped heaters, heater current,
-// base), each step with a reason that carries its source tag.
+// decodeDesignation: reads what a type designation says by its scheme [LS53,
+// PE], then adds what the house's reference table knows (tapped heaters,
+// heater current, base), each step with a reason that carries its source tag.
 
-import { findReferenceType, type ReferenceType } from "../reference-data";
+import type { ReferenceType } from "../reference-row";
+import { findReferenceType, type ReferenceTable } from "../reference-table";
 import type { HeaterConfiguration } from "../index-types";
 import { baseFamilyLabel } from "./base-families";
 import { decodeEuropean, decodeMilitary } from "./european-schemes";
@@ -36,6 +37,7 @@ function formatHeater(volts: number, amps: number): string {
 function heaterFromRow(s: StructuralDecode, row: ReferenceType, reasons: string[]): HeaterInfo {
   const h = row.heater;
   const tag = `[${row.source}]`;
+  if (h === undefined) return s.heater;
   if (!h) {
     if (s.heater.kind !== "none") reasons.push(`Reference data: cold cathode, no heater ${tag}`);
     return { kind: "none" };
@@ -56,7 +58,9 @@ function heaterFromRow(s: StructuralDecode, row: ReferenceType, reasons: string[
   // ECC83 says 6.3 V, 12AX7 says 12.6 V: both are right for a tapped heater.
   const named = s.heater.volts;
   const matching = named === undefined ? undefined : configurations.find((c) => Math.abs(c.volts - named) <= 0.05);
-  if (named !== undefined && !matching) {
+  const range = s.heater.voltsRange;
+  const inClass = range !== undefined && configurations.some((c) => c.volts > range[0] && c.volts <= range[1]);
+  if (named !== undefined && !matching && !inClass) {
     reasons.push(`The designation suggests about ${named} V but the reference data gives ${h.volts} V; the data sheet wins ${tag}`);
   }
   if (s.heater.seriesCurrentMa !== undefined && Math.abs(s.heater.seriesCurrentMa - h.amps * 1000) > 1) {
@@ -67,10 +71,10 @@ function heaterFromRow(s: StructuralDecode, row: ReferenceType, reasons: string[
   return { ...s.heater, kind, volts: chosen.volts, amps: chosen.amps, tapped: Boolean(h.tapped), configurations };
 }
 
-function enrich(s: StructuralDecode): Omit<DecodedDesignation, "ok" | "input" | "knownType" | "candidates" | "changes"> {
+function enrich(table: ReferenceTable, s: StructuralDecode): Omit<DecodedDesignation, "ok" | "input" | "knownType" | "candidates" | "changes"> {
   const reasons = [...s.reasons];
   const usNumber = s.system === "us-rma" || s.system === "us-special" || s.system === "us-numeric";
-  const found = findReferenceType(s.normalised);
+  const found = findReferenceType(table, s.normalised);
   const usable = found && (found.match !== "stem" || usNumber) ? found : undefined;
   if (!usable) {
     if (s.system === "us-rma" && s.parts.heaterCode === "12") {
@@ -119,7 +123,7 @@ function enrich(s: StructuralDecode): Omit<DecodedDesignation, "ok" | "input" | 
     base,
     ...(envelope ? { envelope } : {}),
     loktal,
-    coldCathode: row.heater === null,
+    coldCathode: row.heater === null || s.coldCathode,
     reference: { designation: row.designation, match },
     reasons,
   };
@@ -128,12 +132,12 @@ function enrich(s: StructuralDecode): Omit<DecodedDesignation, "ok" | "input" | 
 /**
  * Decodes a type designation. Cleans it with normaliseDesignation, reads it as
  * a military, four-digit EIA, US RMA or European number (in that order), and
- * adds reference data where we have the type. Names that follow no scheme are
+ * adds the reference table's data where it has the type. Names that follow no scheme are
  * accepted only when they are in our lists (KT88, 83). Unknown but well-formed
  * designations decode, with `knownType: false` and close known candidates;
  * malformed ones fail with a reason and candidates.
  */
-export function decodeDesignation(input: string): DecodeResult {
+export function decodeDesignation(table: ReferenceTable, input: string): DecodeResult {
   const n = normaliseDesignation(input);
   if (!n.ok) return { ok: false, input, error: n.error, message: n.message, candidates: [] };
   const value = n.value;
@@ -143,12 +147,12 @@ export function decodeDesignation(input: string): DecodeResult {
     normalised: value,
     error: "not-a-designation",
     message,
-    candidates: candidateDesignations(value),
+    candidates: candidateDesignations(table, value),
   });
   if (value.includes("/") && !GT_G.test(value)) {
     return fail('"/" joins two designations, or is a mistyped suffix; enter one designation (GT/G is the only suffix with "/").');
   }
-  const known = isKnownDesignation(value);
+  const known = isKnownDesignation(table, value);
   let structural: StructuralDecode | undefined;
   let refusal: string | undefined;
   for (const decode of SCHEMES) {
@@ -167,14 +171,15 @@ export function decodeDesignation(input: string): DecodeResult {
     if (decodeUsNumeric(value)) return fail("Bare numbers (early or transmitting types) are accepted only for types in our lists.");
     return fail("This follows neither the US nor the European numbering scheme.");
   }
-  const decoded = enrich(structural);
-  const knownType = known || decoded.reference?.match === "exact" || decoded.reference?.match === "alias";
+  const decoded = enrich(table, structural);
+  // On file: listed by name or alias, or an unlisted suffix of a listed US number (5814 -> 5814A).
+  const knownType = known || decoded.reference !== undefined;
   return {
     ok: true,
     input,
     ...decoded,
     knownType,
-    candidates: knownType ? [] : candidateDesignations(value),
+    candidates: knownType ? [] : candidateDesignations(table, value),
     changes: n.changes,
   };
 }

@@ -1,4 +1,4 @@
-// Tables for European valve designations (brief section 2.2) [PE].
+// Tables for European valve designations [PE].
 
 import type { BaseFamily, HeaterKind } from "../index-types";
 
@@ -39,7 +39,7 @@ export const EUROPEAN_HEATER_LETTERS: Readonly<Record<string, EuropeanHeaterLett
 
 /**
  * Following letters = systems, in alphabetical order [PE]. P (secondary
- * emission) is marked MEM in the brief.
+ * emission) is marked MEM (from memory).
  */
 export const EUROPEAN_SYSTEM_LETTERS: Readonly<Record<string, { readonly system: string; readonly source: string }>> = {
   A: { system: "signal diode", source: "PE" },

@@ -32,6 +32,12 @@ export function decodeUsRma(value: string): StructuralDecode | StructuralRefusal
   const heaterReading = readUsHeaterNumber(n, letters);
   const letterReading = readUsLetters(n, letters);
   const elementCount = Number(elementsText);
+  if (elementCount === 0 || elementCount > 12) {
+    return {
+      refused: true,
+      message: `A final number of ${elementCount} does not occur: it counts the useful elements brought out, from 1 up to 12 on the largest (compactron) bases [MEM].`,
+    };
+  }
   const reasons = [
     ...heaterReading.reasons,
     ...letterReading.reasons,

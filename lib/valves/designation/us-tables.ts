@@ -1,4 +1,4 @@
-// Tables for US RMA/RETMA/EIA receiving-tube numbers (brief section 2.1).
+// Tables for US RMA/RETMA/EIA receiving-tube numbers.
 
 import type { EnvelopeInfo, HeaterInfo } from "./types";
 
@@ -12,7 +12,7 @@ export interface UsHeaterReading {
 
 /**
  * Reads the heater class from the first number [LS53]: 0 cold cathode, 1 up to
- * 1.6 V, 5 = 4.6-5.6 V, 6 = 5.6-6.6 V, 12 = 12.6 V. 6.3 V loktals carry 7 [LS53]
+ * 2.0 V (1.4 V types, and the earlier 2.0 V battery types [MEM]), 5 = 4.6-5.6 V, 6 = 5.6-6.6 V, 12 = 12.6 V. 6.3 V loktals carry 7 [LS53]
  * and 12.6 V loktals 14 [MEM]; we take a single serial letter as the loktal
  * sign (7N7, 7A8) and two letters as a later series-string type (7DJ8) [MEM].
  */
@@ -26,9 +26,9 @@ export function readUsHeaterNumber(n: number, letters: string): UsHeaterReading 
       };
     case 1:
       return {
-        heater: { kind: "battery", volts: 1.4, voltsRange: [0, 1.6] },
+        heater: { kind: "battery", volts: 1.4, voltsRange: [0, 2] },
         reasons: [
-          "First number 1: heater or filament above 0 and up to 1.6 V [LS53]; 1.4 V battery filament is typical [MEM]",
+          "First number 1: heater or filament above 0 and up to 1.6 V for the 1.4 V battery types [LS53]; earlier 2.0 V battery types (1A6, 1C6, 1F4) also carry 1, so the class runs to 2.0 V [MEM]",
         ],
       };
     case 5:

@@ -1,4 +1,4 @@
-// Check values: [CTP] common trade practice — brief §8 generic 1-2-5 increment ladder (a house setting).
+// Check values: [CTP] common trade practice — generic 1-2-5 increment ladder (a house setting).
 import { describe, expect, it } from "vitest";
 import {
   DEFAULT_INCREMENT_LADDER,
@@ -8,7 +8,7 @@ import {
   validateLadder,
 } from "@/lib/auction/increments";
 
-describe("default ladder — brief §8 generic 1-2-5 steps [CTP]", () => {
+describe("default ladder — generic 1-2-5 steps [CTP]", () => {
   it("is valid", () => {
     expect(validateLadder(DEFAULT_INCREMENT_LADDER)).toEqual([]);
   });

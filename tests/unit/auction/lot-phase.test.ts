@@ -1,4 +1,4 @@
-// Check values: [SUG] product rule — our own phase names; close decision per brief §8 [CTP].
+// Check values: [SUG] product rule — our own phase names; close decision per [CTP].
 import { describe, expect, it } from "vitest";
 import { canMove, closeOutcome, isBiddable, isFinished, LOT_PHASES } from "@/lib/auction/lot-phase";
 
@@ -18,7 +18,7 @@ describe("lot phases", () => {
   });
 });
 
-describe("closeOutcome — brief §8 [CTP]", () => {
+describe("closeOutcome — [CTP]", () => {
   it("sells to the leader at the shown price when the reserve is met", () => {
     expect(closeOutcome({ leader: { bidderId: "quill-cathode" }, priceCents: 14_000, reserveMet: true })).toEqual({
       phase: "sold",

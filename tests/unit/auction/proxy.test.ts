@@ -1,4 +1,4 @@
-// Check values: [CTP] common trade practice — brief §8 proxy rules; worked example: brief §9.21.
+// Check values: [CTP] common trade practice — proxy rules; worked example:.
 import { describe, expect, it } from "vitest";
 import { DEFAULT_INCREMENT_LADDER, flatLadder } from "@/lib/auction/increments";
 import { closeOutcome } from "@/lib/auction/lot-phase";
@@ -20,7 +20,7 @@ const A = "quill-cathode"; // demo dealers (scenario.md)
 const B = "bellweather-audio";
 const C = "northbank-valve";
 
-// brief §9.21 uses a flat $10 increment
+// uses a flat $10 increment
 const FLAT10: LotTerms = { openingCents: 1_000, reserveCents: null, ladder: flatLadder(1_000), consignorId: "voss-estate" };
 
 let seq = 0;
@@ -40,7 +40,7 @@ function refusal(decision: BidDecision): string {
   return decision.accepted ? "accepted" : decision.reason;
 }
 
-describe("brief §9.21 [CTP]", () => {
+describe("proxy bidding check values [CTP]", () => {
   it("increment 10, A max 150, B max 130 → A leads at 140", () => {
     const s = run(FLAT10, [A, 15_000], [B, 13_000]);
     expect(s.leader?.bidderId).toBe(A);
@@ -56,7 +56,7 @@ describe("brief §9.21 [CTP]", () => {
   });
 });
 
-describe("proxy rules [CTP] brief §8", () => {
+describe("proxy rules [CTP]", () => {
   it("a single bidder pays the opening price", () => {
     const s = run(FLAT10, [A, 50_000]);
     expect(s.priceCents).toBe(1_000);
@@ -116,7 +116,7 @@ describe("ladder boundaries in proxy prices (default ladder)", () => {
   });
 });
 
-describe("reserve [CTP] brief §8", () => {
+describe("reserve [CTP]", () => {
   const terms: LotTerms = { openingCents: 5_000, reserveCents: 20_000, ladder: DEFAULT_INCREMENT_LADDER, consignorId: "voss-estate" };
 
   it("a lone maximum at or above the reserve pays the reserve", () => {

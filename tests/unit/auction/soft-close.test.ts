@@ -1,13 +1,13 @@
-// Check values: [CTP] common trade practice, brief §8 (2-minute window, staggered closings, optional cap).
+// Check values: [CTP] common trade practice, (2-minute window, staggered closings, optional cap).
 import { describe, expect, it } from "vitest";
 import { extendOnBid, isClosed, staggeredCloseTimes, validateSoftClose } from "@/lib/auction/soft-close";
 
 const S = 1_000;
 const T = Date.UTC(2025, 3, 12, 19, 0, 0); // closing time of a demo lot
 const clock = { closesAtMs: T, extensionCount: 0 };
-const twoMinutes = { windowSeconds: 120, maxExtensions: null }; // brief §8 "e.g. 2 min" [CTP]
+const twoMinutes = { windowSeconds: 120, maxExtensions: null }; // "e.g. 2 min" [CTP]
 
-describe("extendOnBid — soft close [CTP] brief §8", () => {
+describe("extendOnBid — soft close [CTP]", () => {
   it("leaves the close alone for bids before the final window", () => {
     expect(extendOnBid(clock, T - 300 * S, twoMinutes)).toEqual({ ...clock, extended: false });
     expect(extendOnBid(clock, T - 120 * S, twoMinutes)).toEqual({ ...clock, extended: false }); // lands exactly on T
@@ -45,7 +45,7 @@ describe("extendOnBid — soft close [CTP] brief §8", () => {
   });
 });
 
-describe("staggeredCloseTimes — lots close 30–60 s apart [CTP] brief §8", () => {
+describe("staggeredCloseTimes — lots close 30–60 s apart [CTP]", () => {
   it("spaces lots by the gap", () => {
     expect(staggeredCloseTimes(T, 30, 3)).toEqual([T, T + 30 * S, T + 60 * S]);
     expect(staggeredCloseTimes(T, 45, 0)).toEqual([]);

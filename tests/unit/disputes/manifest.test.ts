@@ -1,7 +1,7 @@
-// Check values: [SUG] brief §8 "Partial refunds" (manifest lines with reference values V;
+// Check values: [SUG] "Partial refunds" (manifest lines with reference values V;
 // price adjustment refund = hammer × (V_described − V_actual)/V_lot; premium refunded and
 // commission reduced pro rata; "a matched set is one line: a bad tube in a quad costs the
-// set value minus the good tubes' value as singles, not a quarter"); worked example brief §9.22.
+// set value minus the good tubes' value as singles, not a quarter"); worked example.
 // Set prices ($200 quad, $40 singles) are invented inputs; the outputs follow the §8 rule.
 // Item names and makers are invented demo names (scenario.md).
 import { describe, expect, it } from "vitest";
@@ -25,18 +25,18 @@ const MIXED: ManifestItem = { id: "item-mixed", position: 3, quantity: 28, soldA
 const ITEMS: ManifestItem[] = [KESTREL_12AX7, EL34_QUAD, MIXED];
 
 // Mediator's values: $50 a tube as described; quad $200 as a set, $40 a tube alone; $50 a mixed tube.
-// V_lot = 8 × 50 + 200 + 28 × 50 = $2,000, as in brief §9.22.
+// V_lot = 8 × 50 + 200 + 28 × 50 = $2,000, as in.
 const VALUES: LineValue[] = [
   { itemId: "item-kestrel", valueCents: 5_000 },
   { itemId: "item-quad", valueCents: 20_000, singleValueCents: 4_000 },
   { itemId: "item-mixed", valueCents: 5_000 },
 ];
 
-// brief §9.22: hammer $1,000, premium 15 % = $150; commission a flat 20 % = $200 (our input).
+//: hammer $1,000, premium 15 % = $150; commission a flat 20 % = $200 (our input).
 const SALE: SaleFigures = { hammerCents: 100_000, premiumCents: 15_000, commissionCents: 20_000 };
 
 function expectReconciles(s: RefundSettlement): void {
-  // [SUG] brief §8: premium refunded and commission reduced pro rata; money moved is exact cents.
+  // [SUG]: premium refunded and commission reduced pro rata; money moved is exact cents.
   for (const v of [s.hammerRefundCents, s.premiumRefundCents, s.commissionReductionCents, s.buyerRefundCents, s.consignorChangeCents, s.houseChangeCents]) {
     expect(Number.isInteger(v)).toBe(true);
   }
@@ -44,7 +44,7 @@ function expectReconciles(s: RefundSettlement): void {
   expect(s.consignorChangeCents + s.houseChangeCents).toBe(-s.buyerRefundCents);
 }
 
-describe("buildManifest: one line per item, a matched set is one line [SUG] brief §8", () => {
+describe("buildManifest: one line per item, a matched set is one line [SUG]", () => {
   it("singles and a matched set, with line ids from the item position", () => {
     const lines = buildManifest(ITEMS, VALUES);
     expect(lines).toEqual([
@@ -52,7 +52,7 @@ describe("buildManifest: one line per item, a matched set is one line [SUG] brie
       { lineId: "line-2", kind: "matched-set", tubeCount: 4, setValueCents: 20_000, singleValueCents: 4_000 },
       { lineId: "line-3", kind: "singles", quantity: 28, unitValueCents: 5_000 },
     ]);
-    expect(lotValueCents(lines)).toBe(200_000); // brief §9.22: V_lot $2,000
+    expect(lotValueCents(lines)).toBe(200_000); //: V_lot $2,000
   });
 
   it("a set without a single value takes its per-tube share, rounded down", () => {
@@ -121,7 +121,7 @@ describe("claimsFromRulings: one claim item per upheld ruling", () => {
     ]);
   });
 
-  it("a set with one bad tube and no worth → the good tubes as singles (setDefectClaim) [SUG] brief §8", () => {
+  it("a set with one bad tube and no worth → the good tubes as singles (setDefectClaim) [SUG]", () => {
     const claims = claimsFromRulings(ITEMS, lines, [{ itemId: "item-quad", upheld: true, tubes: 1 }]);
     expect(claims).toEqual([{ kind: "set-adjustment", lineId: "line-2", actualSetValueCents: 12_000 }]); // 3 × $40
   });
@@ -146,10 +146,10 @@ describe("claimsFromRulings: one claim item per upheld ruling", () => {
   });
 });
 
-describe("settling the rulings with lib/money [SUG] brief §8 partial refunds", () => {
+describe("settling the rulings with lib/money [SUG] partial refunds", () => {
   const lines = buildManifest(ITEMS, VALUES);
 
-  it("one bad tube in a $200 quad with $40 singles: W = $80, not a quarter ($50) [SUG] brief §8", () => {
+  it("one bad tube in a $200 quad with $40 singles: W = $80, not a quarter ($50) [SUG]", () => {
     const claims = claimsFromRulings(ITEMS, lines, [{ itemId: "item-quad", upheld: true, tubes: 1 }]);
     const s = settlePartialRefund(SALE, lines, claims);
     expect(s.claimValueCents).toBe(8_000); // 200 − 3 × 40 = $80
@@ -163,15 +163,15 @@ describe("settling the rulings with lib/money [SUG] brief §8 partial refunds", 
     expectReconciles(s);
   });
 
-  it("the demo story: eight tubes listed Kestrel-made prove Pellham-made, $50 → $12.50 each [SUG] brief §9.22", () => {
+  it("the demo story: eight tubes listed Kestrel-made prove Pellham-made, $50 → $12.50 each [SUG]", () => {
     const claims = claimsFromRulings(ITEMS, lines, [{ itemId: "item-kestrel", upheld: true, tubes: 8, worthCents: 1_250 }]);
     const s = settlePartialRefund(SALE, lines, claims);
     expect(s.claimValueCents).toBe(30_000); // described $400 − actual $100
-    expect(s.hammerRefundCents).toBe(15_000); // brief §9.22: refund 150
-    expect(s.premiumRefundCents).toBe(2_250); // brief §9.22: + 22.50 premium
+    expect(s.hammerRefundCents).toBe(15_000); //: refund 150
+    expect(s.premiumRefundCents).toBe(2_250); //: + 22.50 premium
     expect(s.buyerRefundCents).toBe(17_250);
     expect(s.commissionReductionCents).toBe(3_000); // 20 % commission, pro rata
-    expect(s.consignorChangeCents).toBe(-12_000); // brief §9.22: "loses 150 less its commission"
+    expect(s.consignorChangeCents).toBe(-12_000); //: "loses 150 less its commission"
     expectReconciles(s);
   });
 
@@ -204,10 +204,10 @@ describe("settling the rulings with lib/money [SUG] brief §8 partial refunds", 
   });
 });
 
-describe("undisputedShare: release what a claim cannot touch, hold the rest [SUG] brief §8 'release the undisputed share and hold the rest'", () => {
+describe("undisputedShare: release what a claim cannot touch, hold the rest [SUG] 'release the undisputed share and hold the rest'", () => {
   it("a claim on 3 of the 8 line-1 tubes holds 3 × $50 = $150 of V_lot $2,000 (7.5 %) and releases the rest", () => {
     const { held, undisputed } = undisputedShare(SALE, ITEMS, VALUES, [{ itemId: "item-kestrel", tubes: 3 }]);
-    // hammer $1,000 × 7.5 % = $75; premium $150 × 7.5 % = $11.25; commission $200 × 7.5 % = $15 (brief §9.22 inputs).
+    // hammer $1,000 × 7.5 % = $75; premium $150 × 7.5 % = $11.25; commission $200 × 7.5 % = $15 (the worked example's inputs [SUG]).
     expect(held).toEqual({ hammerCents: 7_500, premiumCents: 1_125, commissionCents: 1_500 });
     expect(undisputed).toEqual({ hammerCents: 92_500, premiumCents: 13_875, commissionCents: 18_500 });
   });

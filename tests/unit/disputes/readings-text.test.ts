@@ -1,10 +1,10 @@
 // Check values: [SUG] our own quick-entry format for tester readings (lib/disputes/readings-text.ts):
 // one tube per line or ";"-separated, the tube number first, section values separated by "/" or
 // spaces, at most 4 sections, the words short / leak(age) / gas for failed checks.
-// [CTP] brief §1 and §6: a tube is tested for shorts, leakage and gas, then Gm per section
+// [CTP]: a tube is tested for shorts, leakage and gas, then Gm per section
 // (a dual triode has two sections); readings are in the tester's own unit (µmho on most
-// charts; 1 mA/V = 1,000 µmho, brief Sources [EU-DS]). Figures below are invented readings
-// around the 12AX7 chart value of 1,600 used in brief §9.20.
+// charts; 1 mA/V = 1,000 µmho [EU-DS]). Figures below are invented readings
+// around the 12AX7 chart value of 1,600 used in.
 import { describe, expect, it } from "vitest";
 import { parseReadingsText, readingsToText } from "@/lib/disputes/readings-text";
 import type { TubeReading } from "@/lib/lots/item";
@@ -28,7 +28,7 @@ describe("parseReadingsText: tube numbers and sections [SUG]", () => {
     expect(readings.map((r) => [r.tubeNo, r.sections])).toEqual([[3, [1_520]], [4, [1_510]], [5, [1_505]], [6, [1_490]], [7, [1_480]]]);
   });
 
-  it("decimal values are kept (mA/V charts) [EU-DS] brief Sources: 1 mA/V = 1,000 µmho", () => {
+  it("decimal values are kept (mA/V charts) [EU-DS]: 1 mA/V = 1,000 µmho", () => {
     expect(parseReadingsText("1: 1.6/1.55", 8).readings[0].sections).toEqual([1.6, 1.55]);
   });
 
@@ -69,7 +69,7 @@ describe("parseReadingsText: separators between tubes [SUG]", () => {
   });
 });
 
-describe("parseReadingsText: failed checks as words [CTP] brief §1, §6 shorts, leakage, gas", () => {
+describe("parseReadingsText: failed checks as words [CTP] shorts, leakage, gas", () => {
   it("'gas', 'short', 'leakage' alone → a reading with that failure and no sections", () => {
     const { readings, problems } = parseReadingsText("3: gas; 4: short; 5: leakage", 8);
     expect(problems).toEqual([]);

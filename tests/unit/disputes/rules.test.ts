@@ -1,8 +1,8 @@
 // Check values: [SUG] house dispute settings (lib/disputes/rules.ts DISPUTE_SETTINGS);
-// [CTP] label ≠ maker, brief §1; [SUG, CTP-informed] misattribution disputes, brief §8
+// [CTP] label ≠ maker; [SUG, CTP-informed] misattribution disputes,
 // (step 3: the seller accepts or contests "within ~3 business days");
-// [SUG] inspection period, brief §8 "Inspection and escrow";
-// [CTP/SUG] breakage claims within 48 h of delivery, with packaging photos, brief §8.
+// [SUG] inspection period;
+// [CTP/SUG] breakage claims within 48 h of delivery, with packaging photos,.
 // All names below are invented demo names (scenario.md).
 import { describe, expect, it } from "vitest";
 import { inspectionWindowEnd } from "@/lib/money/inspection";
@@ -21,13 +21,13 @@ const HOUR = 3_600_000;
 const DAY = 24 * HOUR;
 // Invented delivery: the Voss estate box of 120 valves, delivered 3 March 2025, 15:00 UTC.
 const DELIVERED = Date.UTC(2025, 2, 3, 15, 0, 0);
-// 7 days + 1 per full 25 tubes = 11 days for 120 tubes [SUG] brief §8 "Inspection and escrow".
+// 7 days + 1 per full 25 tubes = 11 days for 120 tubes [SUG] "Inspection and escrow".
 const WINDOW_END = inspectionWindowEnd(DELIVERED, 120);
 
 const delivered: ClaimableInvoice = { state: "delivered", deliveredAtMs: DELIVERED, inspectionEndsAtMs: WINDOW_END };
 
-describe("openingRefusal: claims only on a delivered lot, inside its inspection window [SUG] brief §8", () => {
-  it("the window used here is 11 days for 120 tubes [SUG] brief §8", () => {
+describe("openingRefusal: claims only on a delivered lot, inside its inspection window [SUG]", () => {
+  it("the window used here is 11 days for 120 tubes [SUG]", () => {
     expect(WINDOW_END).toBe(DELIVERED + 11 * DAY);
   });
 
@@ -37,7 +37,7 @@ describe("openingRefusal: claims only on a delivered lot, inside its inspection 
   });
 
   it("at or after the window's end → refused, naming the closing date in UTC", () => {
-    // 3 March 15:00 UTC + 11 days = 14 March 2025, 15:00 UTC [SUG] brief §8
+    // 3 March 15:00 UTC + 11 days = 14 March 2025, 15:00 UTC [SUG]
     const atEnd = openingRefusal(delivered, WINDOW_END);
     expect(atEnd).toContain("2025-03-14 15:00 UTC");
     expect(atEnd).toMatch(/inspection window closed/i);
@@ -70,8 +70,8 @@ describe("openingRefusal: claims only on a delivered lot, inside its inspection 
   });
 });
 
-describe("openingRefusal: breakage in transit only within 48 h of delivery [CTP/SUG] brief §8 \"Inspection and escrow\"", () => {
-  it("the house allows 48 hours [brief §8]", () => {
+describe("openingRefusal: breakage in transit only within 48 h of delivery [CTP/SUG] \"Inspection and escrow\"", () => {
+  it("the house allows 48 hours [CTP/SUG]", () => {
     expect(DISPUTE_SETTINGS.breakageClaimHours).toBe(48);
   });
 
@@ -89,7 +89,7 @@ describe("openingRefusal: breakage in transit only within 48 h of delivery [CTP/
     expect(openingRefusal(delivered, DELIVERED + 5 * DAY, "transit-damage")).toContain("2025-03-03 15:00 UTC");
   });
 
-  it("other reasons keep the whole inspection window [SUG] brief §8", () => {
+  it("other reasons keep the whole inspection window [SUG]", () => {
     const threeDaysOn = DELIVERED + 3 * DAY;
     expect(openingRefusal(delivered, threeDaysOn, "maker-misattributed")).toBeNull();
     expect(openingRefusal(delivered, threeDaysOn, "readings-not-as-listed")).toBeNull();
@@ -110,7 +110,7 @@ describe("openingRefusal: breakage in transit only within 48 h of delivery [CTP/
   });
 });
 
-describe("misattributionRefusal: a label is not a maker claim [CTP] brief §1; rebranding alone is not misdescription [SUG, CTP-informed] brief §8.1", () => {
+describe("misattributionRefusal: a label is not a maker claim [CTP]; rebranding alone is not misdescription [SUG, CTP-informed]", () => {
   const labelOnly: ListedAttribution = {
     position: 4,
     designation: "12AX7",
@@ -134,18 +134,18 @@ describe("misattributionRefusal: a label is not a maker claim [CTP] brief §1; r
     expect(reason).not.toContain('""');
   });
 
-  it("a named maker may be claimed against, whatever the label [SUG] brief §8.1", () => {
+  it("a named maker may be claimed against, whatever the label [SUG]", () => {
     expect(misattributionRefusal({ ...labelOnly, makerName: "Kestrel Valve Company", makerBasis: "construction-matched" })).toBeNull();
     expect(misattributionRefusal({ ...labelOnly, labelBrand: "", makerName: "Vireo Lamp & Valve", makerBasis: "source-code-confirmed" })).toBeNull();
   });
 });
 
-describe("answerDueAt: the consignor answers within 3 business days [SUG, CTP-informed] brief §8.3 \"~3 business days\"", () => {
+describe("answerDueAt: the consignor answers within 3 business days [SUG, CTP-informed] \"~3 business days\"", () => {
   // 7 March 2025 was a Friday.
   const friday = Date.UTC(2025, 2, 7, 9, 30, 0);
 
-  it("the house gives 3 business days [brief §8.3]; the old calendar-day setting is gone", () => {
-    expect(DISPUTE_SETTINGS.answerBusinessDays).toBe(3); // [SUG, CTP-informed] brief §8.3
+  it("the house gives 3 business days [CTP/SUG]; the old calendar-day setting is gone", () => {
+    expect(DISPUTE_SETTINGS.answerBusinessDays).toBe(3); // [SUG, CTP-informed]
     expect("answerDays" in DISPUTE_SETTINGS).toBe(false);
   });
 
@@ -177,7 +177,7 @@ describe("answerDueAt: the consignor answers within 3 business days [SUG, CTP-in
   });
 });
 
-describe("trackRecord: each consignor's attribution record [SUG] brief §8.6 'repeat offenders tracked'", () => {
+describe("trackRecord: each consignor's attribution record [SUG] 'repeat offenders tracked'", () => {
   it("upheld per 1,000 sold = round(upheld × 1,000 ÷ sold) [SUG]", () => {
     const r = trackRecord({ tubesSold: 1_250, tubesDisputed: 40, tubesUpheld: 8, upheldMisattributionClaims: 1 });
     expect(r.upheldPerThousand).toBe(6); // 8 × 1,000 / 1,250 = 6.4 → 6

@@ -1,15 +1,18 @@
 import { describe, expect, it } from "vitest";
 import { csvTemplate, IMPORT_COLUMNS, parseLotCsv } from "@/lib/lots/csv-import";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // The CSV format is our own [SUG]; its rules are checked here, and the
-// domain values on the rows (NOS/NIB, grades) follow brief §6 [CTP].
+// domain values on the rows (NOS/NIB, grades) follow [CTP].
 
 describe("csvTemplate", () => {
   it("documents every column and parses cleanly", () => {
     const header = csvTemplate().split("\n")[0].split(",");
     expect(header).toEqual(IMPORT_COLUMNS.map((c) => c.name));
     expect(IMPORT_COLUMNS.filter((c) => c.required).map((c) => c.name)).toEqual(["designation"]);
-    const r = parseLotCsv(csvTemplate());
+    const r = parseLotCsv(SEED, csvTemplate());
     expect(r.errors).toEqual([]);
     expect(r.warnings).toEqual([]);
     expect(r.rows.map((x) => [x.line, x.item.designation.normalised, x.item.quantity, x.item.condition, x.item.readings.length])).toEqual([
@@ -35,7 +38,7 @@ describe("parseLotCsv", () => {
   ].join("\n");
 
   it("reports bad rows by the line they start on, after a quoted multi-line field", () => {
-    const r = parseLotCsv(FILE);
+    const r = parseLotCsv(SEED, FILE);
     expect(r.errors).toEqual([
       { line: 4, column: "qty", message: expect.stringMatching(/"abc" is not a whole number/) },
       { line: 6, column: "chart_new", message: expect.stringMatching(/required with section readings/) },
@@ -46,68 +49,68 @@ describe("parseLotCsv", () => {
   });
 
   it("gives the same line numbers for CRLF files", () => {
-    const r = parseLotCsv(FILE.replace(/\n/g, "\r\n"));
+    const r = parseLotCsv(SEED, FILE.replace(/\n/g, "\r\n"));
     expect(r.errors.map((e) => e.line)).toEqual([4, 6]);
     expect(r.rows.map((x) => x.line)).toEqual([2, 7]);
   });
 
   it("imports unknown designations with a warning, never an error [SUG]", () => {
-    const r = parseLotCsv(FILE);
+    const r = parseLotCsv(SEED, FILE);
     expect(r.rows[1].item.designation).toMatchObject({ normalised: "6ZZ99", status: "unknown-flagged" });
     expect(r.warnings).toEqual([{ line: 7, column: "designation", message: expect.stringMatching(/flagged for review/) }]);
   });
 
   it("refuses a 100,000-row file with one clear file-level error, unparsed", () => {
     const big = `designation\n${"12AX7\n".repeat(100_000)}`;
-    const r = parseLotCsv(big);
+    const r = parseLotCsv(SEED, big);
     expect(r.errors).toEqual([{ line: 0, message: "The file has more than 5,000 data rows. Split it into files of at most 5,000 rows and import each." }]);
     expect(r.rows).toEqual([]);
     expect(r.fingerprint).toBeNull();
   });
 
   it("refuses a file over the byte limit", () => {
-    const r = parseLotCsv(`designation,notes\n12AX7,${"x".repeat(3 * 1024 * 1024)}\n`);
+    const r = parseLotCsv(SEED, `designation,notes\n12AX7,${"x".repeat(3 * 1024 * 1024)}\n`);
     expect(r.errors).toHaveLength(1);
     expect(r.errors[0].message).toMatch(/larger than 2,097,152 bytes/);
-    expect(parseLotCsv("designation\n12AX7\n", { maxBytes: 10 }).errors[0].message).toMatch(/larger than 10 bytes/);
+    expect(parseLotCsv(SEED, "designation\n12AX7\n", { maxBytes: 10 }).errors[0].message).toMatch(/larger than 10 bytes/);
   });
 
   it("counts records, not lines: line breaks inside quotes do not count as rows", () => {
     const row = '12AX7,"a\nb\nc\nd"';
     const three = `designation,notes\n${[row, row, row].join("\n")}\n`;
-    expect(parseLotCsv(three, { maxRows: 3 }).errors).toEqual([]);
-    expect(parseLotCsv(`${three}${row}\n`, { maxRows: 3 }).errors[0]).toMatchObject({ line: 0, message: expect.stringMatching(/more than 3 data rows/) });
+    expect(parseLotCsv(SEED, three, { maxRows: 3 }).errors).toEqual([]);
+    expect(parseLotCsv(SEED, `${three}${row}\n`, { maxRows: 3 }).errors[0]).toMatchObject({ line: 0, message: expect.stringMatching(/more than 3 data rows/) });
   });
 
   it("gives the same fingerprint and row keys for the same file, and distinct keys for duplicate rows", () => {
     const file = "designation,qty,condition\n12AX7,4,used\n12AX7,4,used\nEL34,2,nos\n";
-    const a = parseLotCsv(file);
-    const b = parseLotCsv(file);
+    const a = parseLotCsv(SEED, file);
+    const b = parseLotCsv(SEED, file);
     expect(a.fingerprint).toMatch(/^[0-9a-f]{64}$/);
     expect(b.fingerprint).toBe(a.fingerprint);
     expect(b.rowKeys).toEqual(a.rowKeys);
     expect(new Set(a.rowKeys).size).toBe(3);
-    expect(parseLotCsv(file.replace("EL34,2", "EL34,3")).fingerprint).not.toBe(a.fingerprint);
+    expect(parseLotCsv(SEED, file.replace("EL34,2", "EL34,3")).fingerprint).not.toBe(a.fingerprint);
   });
 
   it("ignores column order and whitespace-only edits; row order changes the fingerprint but not the keys", () => {
-    const a = parseLotCsv('designation,qty,notes\n12AX7,4,"boxed, clean"\nEL34,2,\n');
-    const reordered = parseLotCsv('  Notes , QTY,designation\r\n"  boxed,   clean ", 4 ,12AX7\r\n\r\n,2,EL34\r\n');
+    const a = parseLotCsv(SEED, 'designation,qty,notes\n12AX7,4,"boxed, clean"\nEL34,2,\n');
+    const reordered = parseLotCsv(SEED, '  Notes , QTY,designation\r\n"  boxed,   clean ", 4 ,12AX7\r\n\r\n,2,EL34\r\n');
     expect(reordered.errors).toEqual([]);
     expect(reordered.fingerprint).toBe(a.fingerprint);
     expect(reordered.rowKeys).toEqual(a.rowKeys);
-    const swapped = parseLotCsv("designation,qty,notes\nEL34,2,\n12AX7,4,\"boxed, clean\"\n");
+    const swapped = parseLotCsv(SEED, "designation,qty,notes\nEL34,2,\n12AX7,4,\"boxed, clean\"\n");
     expect(swapped.fingerprint).not.toBe(a.fingerprint);
     expect([...swapped.rowKeys].sort()).toEqual([...a.rowKeys].sort());
   });
 
   it("reports unknown columns and refuses a header without designation", () => {
-    const r = parseLotCsv("designation,colour\n12AX7,blue\n");
+    const r = parseLotCsv(SEED, "designation,colour\n12AX7,blue\n");
     expect(r.unknownColumns).toEqual(["colour"]);
     expect(r.warnings).toEqual([{ line: 1, column: "colour", message: 'unknown column "colour" ignored' }]);
     expect(r.rows).toHaveLength(1);
-    expect(parseLotCsv("type,qty\n12AX7,1\n").errors).toEqual([{ line: 1, column: "designation", message: "the header has no designation column" }]);
-    expect(parseLotCsv("").errors[0]).toMatchObject({ line: 0, message: expect.stringMatching(/header row/) });
+    expect(parseLotCsv(SEED, "type,qty\n12AX7,1\n").errors).toEqual([{ line: 1, column: "designation", message: "the header has no designation column" }]);
+    expect(parseLotCsv(SEED, "").errors[0]).toMatchObject({ line: 0, message: expect.stringMatching(/header row/) });
   });
 
   it("rejects bad enums, numbers and measure mismatches on the right columns", () => {
@@ -127,7 +130,7 @@ describe("parseLotCsv", () => {
       "83,1,used,,,,,,,,,,mercury-vapour; Radioactive", // 13: fine
       "12AX7,1,used,,,,gm,,,,,yes,", // 14: fine: a short with no readings is a tested, rejected tube
     ].join("\n");
-    const r = parseLotCsv(rows);
+    const r = parseLotCsv(SEED, rows);
     const at = (line: number) => r.errors.filter((e) => e.line === line).map((e) => e.column);
     expect(at(2)).toEqual(["condition"]);
     expect(at(3)).toEqual(["maker_basis", "maker_basis"]);
@@ -146,7 +149,7 @@ describe("parseLotCsv", () => {
   });
 
   it("refuses malformed CSV with the line where reading stopped", () => {
-    const r = parseLotCsv('designation,notes\n12AX7,ok\nEL34,"never closed\n6V6GT,fine\n');
+    const r = parseLotCsv(SEED, 'designation,notes\n12AX7,ok\nEL34,"never closed\n6V6GT,fine\n');
     expect(r.rows).toEqual([]);
     expect(r.errors).toHaveLength(1);
     expect(r.errors[0]).toMatchObject({ line: 0, message: expect.stringMatching(/not valid CSV near line \d+: a quoted field is never closed/) });
@@ -155,7 +158,7 @@ describe("parseLotCsv", () => {
 
 describe("parseLotCsv construction features", () => {
   it("reads name=value pairs, lower-casing names, and rejects pairs without a value", () => {
-    const r = parseLotCsv('designation,construction\n12AX7,"Plates = grey box;getter=halo top; constructor=two micas"\n12AX7,plates\n');
+    const r = parseLotCsv(SEED, 'designation,construction\n12AX7,"Plates = grey box;getter=halo top; constructor=two micas"\n12AX7,plates\n');
     expect(r.rows[0].item.construction).toEqual({ plates: "grey box", getter: "halo top", constructor: "two micas" });
     expect(r.errors).toEqual([{ line: 3, column: "construction", message: '"plates" is not name=value' }]);
   });

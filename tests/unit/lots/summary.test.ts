@@ -1,13 +1,16 @@
 import { describe, expect, it } from "vitest";
 import { describeDesignation, type LotItem, type TubeReading } from "@/lib/lots/item";
 import { readingsVsNominal, summariseLot, type ComparableSale } from "@/lib/lots/summary";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
 
-// A small hand-built lot with worked numbers. Grade bands [CTP; brief §6]:
+const SEED = seedReferenceTable();
+
+// A small hand-built lot with worked numbers. Grade bands [CTP]:
 // ≥100 % strong, 80–99 % good, 60–79 % fair; any short → reject.
 
 function item(designation: string, quantity: number, extra: Partial<LotItem> = {}): LotItem {
   return {
-    designation: describeDesignation(designation),
+    designation: describeDesignation(SEED, designation),
     quantity,
     labelBrand: null,
     attributedMaker: { makerName: null, basis: "unconfirmed" },
@@ -26,7 +29,7 @@ const confirmed = { makerName: "Kestrel Valve Company", basis: "source-code-conf
 const byConstruction = { makerName: "Aldergrove Electron Works", basis: "construction-matched" as const };
 
 const LOT: LotItem[] = [
-  // 0: two 12AX7s; chart "new" 1600 on the reading. 1200/1600 = 75 % → fair [CTP; brief check 20]; 1650/1600 → strong.
+  // 0: two 12AX7s; chart "new" 1600 on the reading. 1200/1600 = 75 % → fair [CTP]; 1650/1600 → strong.
   item("12AX7", 2, { attributedMaker: byConstruction, readings: [gm(1, [1200, 1200], { chartNewValue: 1600 }), gm(2, [1700, 1650], { chartNewValue: 1600 })] }),
   // 1: an ECC83 with a short and no chart value → reject regardless of reading [CTP].
   item("ECC83", 1, { attributedMaker: confirmed, readings: [gm(1, [1600, 1600], { shorts: true })] }),
@@ -42,7 +45,7 @@ const LOT: LotItem[] = [
   // 7: a 7025 tested with no chart value anywhere: tested, not graded.
   item("7025", 1, { condition: "new-old-stock", readings: [gm(1, [1500, 1500])] }),
 ];
-const OPTS = { chartNewValues: { el34: 11000 }, comparables: [] as ComparableSale[] };
+const OPTS = { reference: SEED, chartNewValues: { el34: 11000 }, comparables: [] as ComparableSale[] };
 
 describe("summariseLot", () => {
   const s = summariseLot(LOT, OPTS);
@@ -121,6 +124,7 @@ describe("summariseLot", () => {
 
   it("reports more readings than quantity, and conflicting chart values", () => {
     const odd = summariseLot([item("12AX7", 1, { readings: [gm(1, [1600, 1600]), gm(2, [1500, 1500])] })], {
+      reference: SEED,
       comparables: [],
       chartNewValues: { "12AX7": 1600, "12ax7": 1500 },
     });
@@ -133,12 +137,12 @@ describe("summariseLot", () => {
 describe("readingsVsNominal", () => {
   it("gives each Gm-tested tube's sections as % of nominal Gm", () => {
     // 12AX7 nominal Gm 1,600 µmho at 250 V, −2 V [REG ✓]: 1200 → 75 %, 1280 → 80 %.
-    const points = readingsVsNominal([item("12AX7", 1, { readings: [gm(1, [1200, 1280])] })]);
+    const points = readingsVsNominal(SEED, [item("12AX7", 1, { readings: [gm(1, [1200, 1280])] })]);
     expect(points).toEqual([{ itemIndex: 0, tubeNo: 1, designation: "12AX7", familyKey: "12AX7", percentOfNominal: 77.5, sectionsPct: [75, 80], failed: false }]);
   });
 
   it("leaves out emission runs and types without a nominal figure, and marks failures", () => {
-    const points = readingsVsNominal(
+    const points = readingsVsNominal(SEED, 
       [
         item("EL84", 1, { readings: [{ tubeNo: 1, sections: [80], measure: "emission" }] }),
         item("6ZZ99", 1, { readings: [gm(1, [3000])] }),

@@ -85,8 +85,8 @@ describe("rounding", () => {
   });
 
   it("percentOfCents uses basis points and one rounding", () => {
-    expect(percentOfCents(100_000, 1_500)).toBe(15_000); // 15 % of $1,000 = $150 (brief §9.22)
-    expect(percentOfCents(15_000, 1_500)).toBe(2_250); // 15 % of $150 = $22.50 (brief §9.22)
+    expect(percentOfCents(100_000, 1_500)).toBe(15_000); // 15 % of $1,000 = $150
+    expect(percentOfCents(15_000, 1_500)).toBe(2_250); // 15 % of $150 = $22.50
     expect(percentOfCents(10, 1_250)).toBe(1); // 1.25 ¢ → 1 ¢
     expect(percentOfCents(50, 1_000, "half-up")).toBe(5);
     expect(percentOfCents(5, 1_000, "half-up")).toBe(1); // 0.5 ¢ → 1 ¢ half-up

@@ -1,4 +1,4 @@
-// Check values: [CTP] brief §8 fee practice; [SUG] default tiers and rounding; worked example: brief §9.22.
+// Check values: [CTP] fee practice; [SUG] default tiers and rounding; worked example:.
 import { describe, expect, it } from "vitest";
 import {
   buyersPremiumCents,
@@ -15,7 +15,7 @@ const FLAT_20: FeeSchedule["commissionTiers"] = [{ upToCents: null, rateBp: 2_00
 
 describe("buyer's premium", () => {
   it("is a basis-point share of hammer, rounded half-up", () => {
-    expect(buyersPremiumCents(100_000, 1_500)).toBe(15_000); // brief §9.22: 15 % of $1,000 = $150
+    expect(buyersPremiumCents(100_000, 1_500)).toBe(15_000); //: 15 % of $1,000 = $150
     expect(buyersPremiumCents(1_005, 1_000)).toBe(101); // 100.5 ¢ → 101 ¢ (half-up)
     expect(() => buyersPremiumCents(-1, 1_000)).toThrow(RangeError);
   });
@@ -38,7 +38,7 @@ describe("seller's commission (marginal tiers)", () => {
   });
 
   it("a flat 20 % table is one open tier", () => {
-    expect(sellersCommissionCents(100_000, FLAT_20)).toBe(20_000); // brief §9.22 with a 20 % commission
+    expect(sellersCommissionCents(100_000, FLAT_20)).toBe(20_000); // with a 20 % commission
   });
 
   it("validates tier tables", () => {
@@ -92,8 +92,8 @@ describe("invoiceFor", () => {
 });
 
 describe("payoutFor", () => {
-  it("payout = hammer − commission − fees − refunds (brief §8 [CTP])", () => {
-    // brief §9.22 with a 20 % commission: consignor loses $120 net of commission
+  it("payout = hammer − commission − fees − refunds [CTP]", () => {
+    // with a 20 % commission: consignor loses $120 net of commission
     expect(payoutFor({ hammerCents: 100_000, commissionCents: 20_000, refundsCents: 12_000 }).payoutCents).toBe(68_000);
     expect(payoutFor({ hammerCents: 100_000, commissionCents: 17_500, feesCents: 500 }).payoutCents).toBe(82_000);
   });

@@ -1,4 +1,4 @@
-// Check values: [SUG] inspection period and [CTP] 48 h breakage / ±10–15 % tester tolerance, brief §8.
+// Check values: [SUG] inspection period and [CTP] 48 h breakage / ±10–15 % tester tolerance,.
 import { describe, expect, it } from "vitest";
 import {
   breakageClaimDeadline,
@@ -13,7 +13,7 @@ const DAY = 24 * HOUR;
 const delivered = Date.UTC(2025, 2, 3, 15, 0, 0);
 
 describe("inspection period", () => {
-  it("is 7 days + 1 per full 25 tubes, max 21 [SUG] brief §8", () => {
+  it("is 7 days + 1 per full 25 tubes, max 21 [SUG]", () => {
     expect(inspectionDays(0)).toBe(7);
     expect(inspectionDays(24)).toBe(7);
     expect(inspectionDays(25)).toBe(8);
@@ -30,7 +30,7 @@ describe("inspection period", () => {
     );
   });
 
-  it("breakage claims close 48 h after delivery [CTP] brief §8", () => {
+  it("breakage claims close 48 h after delivery [CTP]", () => {
     const deadline = breakageClaimDeadline(delivered);
     expect(deadline).toBe(delivered + 48 * HOUR);
     expect(isClaimInTime(delivered, deadline - 1, deadline)).toBe(true);
@@ -39,9 +39,9 @@ describe("inspection period", () => {
   });
 });
 
-describe("claimStandsOnReadings (tester-to-tester tolerance ±10–15 % [CTP] brief §8)", () => {
+describe("claimStandsOnReadings (tester-to-tester tolerance ±10–15 % [CTP])", () => {
   it("stands only when the reading is below the band edge by more than the tolerance", () => {
-    // listed "good" = 80–99 % of new (brief §6 [CTP]); tolerance 10 % relative → edge 72 %
+    // listed "good" = 80–99 % of new [CTP]; tolerance 10 % relative → edge 72 %
     expect(claimStandsOnReadings(80, 71, 10, false)).toBe(true);
     expect(claimStandsOnReadings(80, 72, 10, false)).toBe(false); // exactly at the edge: not "more than"
     expect(claimStandsOnReadings(80, 75, 10, false)).toBe(false);

@@ -1,4 +1,4 @@
-// Check values: [SUG] product rule — our own chart of accounts; worked example: brief §9.22 through the books.
+// Check values: [SUG] product rule — our own chart of accounts; worked example: through the books.
 import { describe, expect, it } from "vitest";
 import { invoiceFor, payoutFor, DEFAULT_FEE_SCHEDULE } from "@/lib/money/fees";
 import {
@@ -17,7 +17,7 @@ import {
 import { figuresAfterRefunds, settlePartialRefund, type SaleFigures } from "@/lib/money/refunds";
 import type { ManifestLine } from "@/lib/money/refund-claims";
 
-// brief §9.22: hammer $1,000, premium 15 %, commission 20 % (flat), shipping $40 (our own figure)
+//: hammer $1,000, premium 15 %, commission 20 % (flat), shipping $40 (our own figure)
 const invoice = invoiceFor({ hammerCents: 100_000, shippingCents: 4_000 }, { ...DEFAULT_FEE_SCHEDULE, buyersPremiumBp: 1_500 });
 const SALE: SaleFigures = { hammerCents: 100_000, premiumCents: 15_000, commissionCents: 20_000 };
 const LOT: ManifestLine[] = [

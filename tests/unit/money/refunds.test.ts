@@ -1,4 +1,4 @@
-// Check values: [SUG] product rule — brief §8 partial refunds; worked example: brief §9.22.
+// Check values: [SUG] product rule — partial refunds; worked example:.
 import { describe, expect, it } from "vitest";
 import {
   lotValueCents,
@@ -16,12 +16,12 @@ import {
   type SaleFigures,
 } from "@/lib/money/refunds";
 
-// Demo lot (scenario: the Voss estate box). V_lot = $2,000 as in brief §9.22.
+// Demo lot (scenario: the Voss estate box). V_lot = $2,000 as in.
 const kestrelLine: ManifestLine = { lineId: "6sn7gt-kestrel-nos", kind: "singles", quantity: 8, unitValueCents: 5_000 };
 const mixedLine: ManifestLine = { lineId: "mixed-receiving", kind: "singles", quantity: 100, unitValueCents: 1_600 };
 const LOT: ManifestLine[] = [kestrelLine, mixedLine];
 
-// brief §9.22: hammer $1,000, premium 15 % = $150; commission at a flat 20 % = $200
+//: hammer $1,000, premium 15 % = $150; commission at a flat 20 % = $200
 const SALE: SaleFigures = { hammerCents: 100_000, premiumCents: 15_000, commissionCents: 20_000 };
 
 function expectReconciles(s: RefundSettlement): void {
@@ -40,7 +40,7 @@ function expectReconciles(s: RefundSettlement): void {
 describe("manifest", () => {
   it("V_lot is the sum of line values; a matched set is one line", () => {
     const quad: MatchedSetLine = { lineId: "quad", kind: "matched-set", tubeCount: 4, setValueCents: 20_000, singleValueCents: 4_000 };
-    expect(lotValueCents(LOT)).toBe(200_000); // brief §9.22: V_lot $2,000
+    expect(lotValueCents(LOT)).toBe(200_000); //: V_lot $2,000
     expect(lotValueCents([...LOT, quad])).toBe(220_000);
     expect(validateManifest(LOT)).toEqual([]);
     expect(validateManifest([kestrelLine, kestrelLine])).toContain('duplicate line id "6sn7gt-kestrel-nos"');
@@ -48,7 +48,7 @@ describe("manifest", () => {
   });
 });
 
-describe("settlePartialRefund — brief §9.22 worked example [SUG]", () => {
+describe("settlePartialRefund — worked example [SUG]", () => {
   // Eight tubes listed as Kestrel-made turn out Pellham-made: described $400, actual $100.
   const claim = [{ kind: "price-adjustment" as const, lineId: kestrelLine.lineId, count: 8, actualUnitValueCents: 1_250 }];
   const s = settlePartialRefund(SALE, LOT, claim);
@@ -77,7 +77,7 @@ describe("matched sets", () => {
   const quad: MatchedSetLine = { lineId: "el34-quad", kind: "matched-set", tubeCount: 4, setValueCents: 20_000, singleValueCents: 4_000 };
   const lines: ManifestLine[] = [quad, { lineId: "rest", kind: "singles", quantity: 30, unitValueCents: 6_000 }];
 
-  it("a bad tube in a quad costs the set value minus the good tubes as singles, not a quarter [SUG] brief §8", () => {
+  it("a bad tube in a quad costs the set value minus the good tubes as singles, not a quarter [SUG]", () => {
     const claim = setDefectClaim(quad, 3);
     expect(claim).toEqual({ kind: "set-adjustment", lineId: "el34-quad", actualSetValueCents: 12_000 });
     const [valued] = valueClaimItems(lines, [claim]);
@@ -111,7 +111,7 @@ describe("returns, shortfalls and the rejection threshold", () => {
     expectReconciles(s);
   });
 
-  it("rejection needs MORE than 25 % of V_lot misdescribed [SUG] brief §8", () => {
+  it("rejection needs MORE than 25 % of V_lot misdescribed [SUG]", () => {
     // V_lot = 10 × $50 + 100 × $15 = $2,000; the whole first line ($500) is exactly 25 %
     const lines: ManifestLine[] = [{ ...kestrelLine, quantity: 10 }, { ...mixedLine, quantity: 100, unitValueCents: 1_500 }];
     const allTen = { kind: "price-adjustment" as const, lineId: kestrelLine.lineId, count: 10, actualUnitValueCents: 0 };

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { hasIsoWeek53, parseEuropeanDateLine, readDateCode } from "../../../lib/valves/date-code";
 
-// 12AX7 introduced September 1947 [MEM, secondary histories; brief §5].
+// 12AX7 introduced September 1947 [MEM, secondary histories].
 const TWELVE_AX7 = { introducedYear: 1947 };
 
 function years(result: ReturnType<typeof readDateCode>): number[] {
@@ -10,7 +10,7 @@ function years(result: ReturnType<typeof readDateCode>): number[] {
 }
 
 describe("readDateCode: four digits (YYWW)", () => {
-  it("5943 → 1959, week 43 [EIA-476; brief 9.15]", () => {
+  it("5943 → 1959, week 43 [EIA-476]", () => {
     const result = readDateCode("5943");
     expect(result.ok).toBe(true);
     if (!result.ok) return;
@@ -19,7 +19,7 @@ describe("readDateCode: four digits (YYWW)", () => {
     expect(result.flags).not.toContain("ambiguous-decade");
   });
 
-  it("7749 → 1977 week 49; week-first is impossible, there is no week 77 [CTP; brief 9.16]", () => {
+  it("7749 → 1977 week 49; week-first is impossible, there is no week 77 [CTP]", () => {
     const result = readDateCode("7749");
     if (!result.ok) throw new Error("expected a reading");
     expect(result.readings.map((r) => [r.year, r.week, r.form])).toEqual([[1977, 49, "YYWW"]]);
@@ -27,14 +27,14 @@ describe("readDateCode: four digits (YYWW)", () => {
     expect(weekFirst?.reason).toMatch(/week 77 cannot exist/);
   });
 
-  it.each(["5800", "5854"])("%s → invalid week [CTP; brief 9.17]", (code) => {
+  it.each(["5800", "5854"])("%s → invalid week [CTP]", (code) => {
     const result = readDateCode(code);
     expect(result.ok).toBe(false);
     if (result.ok) return;
     expect(result.error.code).toBe("invalid-week");
   });
 
-  it("4312 on a 12AX7 (introduced 1947) is flagged, not hidden [CTP; brief 9.18]", () => {
+  it("4312 on a 12AX7 (introduced 1947) is flagged, not hidden [CTP]", () => {
     const result = readDateCode("4312", TWELVE_AX7);
     if (!result.ok) throw new Error("expected a reading");
     expect(result.flags).toContain("predates-type");
@@ -42,10 +42,10 @@ describe("readDateCode: four digits (YYWW)", () => {
     expect(result.readings[0].reasons.join(" ")).toMatch(/before the type was introduced \(1947\)/);
   });
 
-  it("reads the date out of a joined source code sss-YYWW [CTP, brief §5]", () => {
-    const result = readDateCode("946-5943", TWELVE_AX7);
+  it("reads the date out of a joined source code sss-YYWW [CTP]", () => {
+    const result = readDateCode("X46-5943", TWELVE_AX7);
     if (!result.ok) throw new Error("expected a reading");
-    expect(result.sourceCode).toBe("946");
+    expect(result.sourceCode).toBe("X46");
     expect(result.flags).toContain("joined-source-code");
     expect(years(result)).toEqual([1959]);
   });
@@ -73,7 +73,7 @@ describe("readDateCode: four digits (YYWW)", () => {
 });
 
 describe("readDateCode: three digits (YWW)", () => {
-  it("digit 9 on a 12AX7, production to 1985 → 1949, 1959, 1969, 1979, never 1939 [CTP; MEM; brief 9.18]", () => {
+  it("digit 9 on a 12AX7, production to 1985 → 1949, 1959, 1969, 1979, never 1939 [CTP; MEM]", () => {
     const result = readDateCode("912", { ...TWELVE_AX7, endOfProductionYear: 1985 });
     if (!result.ok) throw new Error("expected a reading");
     expect(years(result)).toEqual([1949, 1959, 1969, 1979]);
@@ -90,7 +90,7 @@ describe("readDateCode: three digits (YWW)", () => {
     for (const reading of result.readings) expect(reading.reasons.join(" ")).toMatch(/tied on evidence/);
   });
 
-  it("drops decades before a GT envelope existed (late 1930s) for a 6SN7GT [MEM; brief §5 rule 3]", () => {
+  it("drops decades before a GT envelope existed (late 1930s) for a 6SN7GT [MEM;]", () => {
     // 6SN7 introduced 1939 [MEM]; take a lower bound of 1930 to show the suffix rule acting alone.
     const noSuffix = readDateCode("712", { introducedYear: 1930, endOfProductionYear: 1960 });
     const withSuffix = readDateCode("712", { introducedYear: 1930, envelopeSuffix: "GT", endOfProductionYear: 1960 });
@@ -106,8 +106,9 @@ describe("readDateCode: three digits (YWW)", () => {
     expect(years(ruled)).toEqual([1955]);
   });
 
-  it("warns that three digits may be a source code instead (946 is an invented demo code)", () => {
-    const result = readDateCode("946", TWELVE_AX7);
+  it("warns that three digits may be a source code instead", () => {
+    // [CTP] a bare three-digit number on the glass may be a source code rather than a YWW date
+    const result = readDateCode("943", TWELVE_AX7);
     if (!result.ok) throw new Error("expected a reading");
     expect(result.flags).toContain("may-be-source-code");
   });
@@ -129,10 +130,10 @@ describe("readDateCode: not a date code", () => {
 });
 
 describe("parseEuropeanDateLine [CTP/MEM: factory symbol + year digit + month letter + week digit]", () => {
-  it("splits factory symbol, year digit, month letter and week digit", () => {
-    const result = parseEuropeanDateLine("Δ7C2", { introducedYear: 1953 });
+  it("splits factory symbol, year digit, month letter and week digit (\"¤\" is an invented factory symbol)", () => {
+    const result = parseEuropeanDateLine("¤7C2", { introducedYear: 1953 });
     if (!result.ok) throw new Error(result.error.message);
-    expect(result).toMatchObject({ factorySymbol: "Δ", yearDigit: 7, monthLetter: "C", weekDigit: 2 });
+    expect(result).toMatchObject({ factorySymbol: "¤", yearDigit: 7, monthLetter: "C", weekDigit: 2 });
     // EL84 introduced 1953 [MEM]; house end of production 1990 by default.
     expect(result.readings.map((r) => [r.year, r.month])).toEqual([
       [1957, 3],

@@ -1,17 +1,20 @@
 import { describe, expect, it } from "vitest";
 import { decodeDesignation, type DecodedDesignation } from "@/lib/valves/designation";
 import { findEquivalents } from "@/lib/valves/equivalents";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Brief section 9, items 1-10: designation check values, each with its source.
 
 function decoded(input: string): DecodedDesignation {
-  const r = decodeDesignation(input);
+  const r = decodeDesignation(SEED, input);
   if (!r.ok) throw new Error(`expected ${input} to decode: ${r.message}`);
   return r;
 }
 const systems = (d: DecodedDesignation) => d.electrodes.map((e) => e.system);
 
-describe("brief 9 check values 1-10", () => {
+describe("designation check values [PE, LS53, MEM as tagged]", () => {
   it("9.1 ECC83: E 6.3 V, CC two signal triodes, 8 noval", () => {
     // [PE] European designation scheme
     const d = decoded("ECC83");

@@ -6,6 +6,9 @@ import {
   isKnownDesignation,
   knownDesignations,
 } from "@/lib/valves/designation";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Error handling and suggestions are our own product rules [SUG]; the
 // designations suggested are registered types [REG] and European names [PE].
@@ -20,7 +23,7 @@ describe("decodeDesignation failures", () => {
       ["12AX7;DROP", "bad-characters"],
     ];
     for (const [input, error] of cases) {
-      const r = decodeDesignation(input);
+      const r = decodeDesignation(SEED, input);
       expect(r.ok).toBe(false);
       if (!r.ok) {
         expect(r.error).toBe(error);
@@ -37,7 +40,7 @@ describe("decodeDesignation failures", () => {
       ["ECC8", "ECC83"],
     ];
     for (const [input, expected] of cases) {
-      const r = decodeDesignation(input);
+      const r = decodeDesignation(SEED, input);
       expect(r.ok, input).toBe(false);
       if (!r.ok) {
         expect(r.error).toBe("not-a-designation");
@@ -47,7 +50,7 @@ describe("decodeDesignation failures", () => {
   });
 
   it("two designations joined by a slash suggest both", () => {
-    const r = decodeDesignation("12AX7/ECC83");
+    const r = decodeDesignation(SEED, "12AX7/ECC83");
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.candidates.slice(0, 2)).toEqual(["12AX7", "ECC83"]);
   });
@@ -55,7 +58,7 @@ describe("decodeDesignation failures", () => {
 
 describe("well-formed but unknown designations", () => {
   it("12AX8 decodes, is flagged unknown and suggests 12AX7", () => {
-    const r = decodeDesignation("12AX8");
+    const r = decodeDesignation(SEED, "12AX8");
     expect(r.ok).toBe(true);
     if (r.ok) {
       expect(r.knownType).toBe(false);
@@ -64,7 +67,7 @@ describe("well-formed but unknown designations", () => {
   });
 
   it("ECC38 suggests ECC83 (swapped digits)", () => {
-    const r = decodeDesignation("ECC38");
+    const r = decodeDesignation(SEED, "ECC38");
     expect(r.ok).toBe(true);
     if (r.ok) {
       expect(r.knownType).toBe(false);
@@ -73,7 +76,7 @@ describe("well-formed but unknown designations", () => {
   });
 
   it("known types carry no candidates", () => {
-    const r = decodeDesignation("ECC83");
+    const r = decodeDesignation(SEED, "ECC83");
     expect(r.ok && r.knownType).toBe(true);
     expect(r.ok && r.candidates).toEqual([]);
   });
@@ -98,18 +101,18 @@ describe("edit distance", () => {
 
 describe("known designations", () => {
   it("cover reference rows, aliases and the equivalents table", () => {
-    const names = knownDesignations();
+    const names = knownDesignations(SEED);
     expect(names).toContain("12AX7");
     expect(names).toContain("ECC83");
     expect(names).toContain("CV4004");
-    expect(isKnownDesignation("7189A")).toBe(true);
-    expect(isKnownDesignation("12AX8")).toBe(false);
+    expect(isKnownDesignation(SEED, "7189A")).toBe(true);
+    expect(isKnownDesignation(SEED, "12AX8")).toBe(false);
   });
 
   it("decoding is fast enough for form validation", () => {
     const inputs = ["12ax7", "ECC38", "12AX8", "KT89", "6SN7GTB", "E88CC", "garbage!", "5751"];
     const start = performance.now();
-    for (let i = 0; i < 2000; i++) decodeDesignation(inputs[i % inputs.length]);
+    for (let i = 0; i < 2000; i++) decodeDesignation(SEED, inputs[i % inputs.length]);
     expect(performance.now() - start).toBeLessThan(3000);
   });
 });

@@ -1,16 +1,19 @@
 import { describe, expect, it } from "vitest";
 import { decodeDesignation, type DecodedDesignation } from "@/lib/valves/designation";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Brief section 2.2: European designations [PE].
 
 function decoded(input: string): DecodedDesignation {
-  const r = decodeDesignation(input);
+  const r = decodeDesignation(SEED, input);
   if (!r.ok) throw new Error(`expected ${input} to decode: ${r.message}`);
   return r;
 }
 
 describe("first letter = heater [PE]", () => {
-  // Values from the brief's heater table; test designations are built as
+  // Values from the European heater-letter table [PE]; test designations are built as
   // <letter>F80 (a signal pentode on noval) so only the letter varies.
   const voltage: [string, number, string][] = [
     ["A", 4, "voltage"],
@@ -89,7 +92,7 @@ describe("following letters = systems [PE]", () => {
   });
 
   it("refuses letters that are not systems", () => {
-    const r = decodeDesignation("EGG83");
+    const r = decodeDesignation(SEED, "EGG83");
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.message).toMatch(/not a European system letter/);

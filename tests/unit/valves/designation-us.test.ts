@@ -1,20 +1,23 @@
 import { describe, expect, it } from "vitest";
 import { decodeDesignation, type DecodedDesignation } from "@/lib/valves/designation";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Brief section 2.1: US RMA/RETMA/EIA receiving-tube numbers.
 
 function decoded(input: string): DecodedDesignation {
-  const r = decodeDesignation(input);
+  const r = decodeDesignation(SEED, input);
   if (!r.ok) throw new Error(`expected ${input} to decode: ${r.message}`);
   return r;
 }
 
 describe("first number = heater class [LS53]", () => {
-  it("1 is a low-voltage (battery) class up to 1.6 V", () => {
-    // [LS53] 1 = above 0 to 1.6 V
+  it("1 is a low-voltage (battery) class, 1.4 V types up to 1.6 V and earlier 2.0 V types", () => {
+    // [LS53] 1 = above 0 to 1.6 V; 2.0 V battery types also carry 1 [MEM]
     const d = decoded("1T4");
     expect(d.heater.kind).toBe("battery");
-    expect(d.heater.voltsRange).toEqual([0, 1.6]);
+    expect(d.heater.voltsRange).toEqual([0, 2]); // widened for the 2.0 V battery types (1A6, 1C6, 1F4) [MEM]
     expect(d.heater.volts).toBe(1.4); // [REG MEM] 1T4 filament 1.4 V 0.05 A
   });
 
@@ -63,7 +66,7 @@ describe("first number = heater class [LS53]", () => {
 describe("serial letters [LS53]", () => {
   it("skip I and O", () => {
     for (const input of ["6IQ7", "6SO7"]) {
-      const r = decodeDesignation(input);
+      const r = decodeDesignation(SEED, input);
       expect(r.ok).toBe(false);
       if (!r.ok) expect(r.message).toMatch(/skip I and O/);
     }
@@ -138,7 +141,7 @@ describe("suffixes [MEM]", () => {
   });
 
   it("refuses an unknown suffix", () => {
-    const r = decodeDesignation("12AX7Q");
+    const r = decodeDesignation(SEED, "12AX7Q");
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.error).toBe("not-a-designation");
@@ -168,7 +171,7 @@ describe("other US numbers", () => {
     const d = decoded("83");
     expect(d.system).toBe("us-numeric");
     expect(d.heater).toMatchObject({ volts: 5, amps: 3 }); // [REG MEM]
-    const r = decodeDesignation("123");
+    const r = decodeDesignation(SEED, "123");
     expect(r.ok).toBe(false);
   });
 

@@ -6,7 +6,10 @@ import {
   findEquivalents,
   type LinkKind,
 } from "@/lib/valves/equivalents";
-import { getReferenceType } from "@/lib/valves/reference-data";
+import { getReferenceType } from "@/lib/valves/reference-table";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Brief section 3 (common equivalents, mostly [MEM], heaters ✓ where marked)
 // and section 9 items 2, 3, 12 and 14.
@@ -18,7 +21,7 @@ function direction(from: string, to: string) {
   return findEquivalents(from).matches.find((m) => m.designation === to)?.direction;
 }
 
-describe("brief 9 check values", () => {
+describe("check values, each with its source tag", () => {
   it("9.14 5751 <-> 12AX7 is a substitute with caveats, never exact", () => {
     // [MEM] 5751 µ 70 against 100
     expect(link("5751", "12AX7")).toBe("caveat");
@@ -56,12 +59,12 @@ describe("brief 9 check values", () => {
     // [REG ✓/MEM] 6.3 V 0.6 A against 12.6 V 0.3 A
     expect(link("6SN7GT", "12SN7GT")).toBe("sibling-heater");
     expect(link("12SN7GT", "6SN7GT")).toBe("sibling-heater");
-    expect(getReferenceType("6SN7GT")?.heater).toEqual({ volts: 6.3, amps: 0.6 });
-    expect(getReferenceType("12SN7GT")?.heater).toEqual({ volts: 12.6, amps: 0.3 });
+    expect(getReferenceType(SEED, "6SN7GT")?.heater).toEqual({ volts: 6.3, amps: 0.6 });
+    expect(getReferenceType(SEED, "12SN7GT")?.heater).toEqual({ volts: 12.6, amps: 0.3 });
   });
 });
 
-describe("brief section 3 families [MEM]", () => {
+describe("equivalent families [MEM]", () => {
   const expected: [string, string, LinkKind][] = [
     // 12AX7 family
     ["12AX7", "ECC83", "exact"],

@@ -8,7 +8,7 @@ describe("gradeBatch", () => {
       chartNewValue: 1600, // [REG ✓] 12AX7 nominal Gm 1,600 µmho, used here as the chart's "new" value
       tolerancePct: 5,
       tubes: [
-        { id: "a", sections: [1200, 1200] }, // 75 % of new → fair [CTP bands; brief check 9.20]
+        { id: "a", sections: [1200, 1200] }, // 75 % of new → fair [CTP bands]
         { id: "b", sections: [1700, 1650] }, // ≥ 100 % → strong [CTP]
         { id: "c", sections: [1700, 1700], shorts: true }, // any short → reject [CTP]
         { id: "d", sections: [1600, 1600], vacuumLoss: true }, // white getter → reject [CTP]
@@ -19,7 +19,7 @@ describe("gradeBatch", () => {
     expect(r.counts.reject).toBe(2);
   });
 
-  it("matches only passing tubes: 2,000 and 2,100 pair at 5 %, 2,150 does not [CTP; brief check 9.19]", () => {
+  it("matches only passing tubes: 2,000 and 2,100 pair at 5 %, 2,150 does not [CTP]", () => {
     const r = gradeBatch({
       measure: "gm",
       chartNewValue: 2000,

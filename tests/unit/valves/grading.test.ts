@@ -8,11 +8,11 @@ import {
   sectionSpreadPct,
 } from "../../../lib/valves/grading";
 
-// 12AX7 chart "new" value used in the brief's worked example: 1,600 µmho [REG ✓; brief 9.20].
+// 12AX7 chart "new" value used in the worked examples: 1,600 µmho [REG ✓].
 const CHART_12AX7 = 1600;
 
 describe("percentOfNew [CTP: reading ÷ chart new × 100]", () => {
-  it("1,200 against 1,600 → 75 % [brief 9.20]", () => {
+  it("1,200 against 1,600 → 75 % [CTP]", () => {
     expect(percentOfNew(1200, CHART_12AX7)).toBe(75);
   });
   it("refuses a zero chart value and negative readings", () => {
@@ -41,14 +41,14 @@ describe("bandForPercent with the house bands [CTP: ≥100 strong, 80–99 good,
 });
 
 describe("gradeReading", () => {
-  it("Gm 1,200 against chart 1,600 → 75 % → fair [CTP; brief 9.20]", () => {
+  it("Gm 1,200 against chart 1,600 → 75 % → fair [CTP]", () => {
     const result = gradeReading({ measure: "gm", sections: [1200], chartNewValue: CHART_12AX7 });
     expect(result.percentOfNew).toEqual([75]);
     expect(result.grade).toBe("fair");
     expect(result.hardFails).toEqual([]);
   });
 
-  it("any short rejects regardless of Gm [CTP; brief 9.20]", () => {
+  it("any short rejects regardless of Gm [CTP]", () => {
     const result = gradeReading({ measure: "gm", sections: [1800, 1790], chartNewValue: CHART_12AX7, shorts: true });
     expect(result.grade).toBe("reject");
     expect(result.hardFails).toEqual(["short"]);
@@ -60,7 +60,7 @@ describe("gradeReading", () => {
     ["gas", "gas"],
     ["vacuumLoss", "vacuum-loss"],
     ["openHeater", "open-heater"],
-  ] as const)("%s rejects a strong tube [CTP: absolute failures, brief §6 and §8]", (flag, fail) => {
+  ] as const)("%s rejects a strong tube [CTP: absolute failures]", (flag, fail) => {
     const result = gradeReading({ measure: "gm", sections: [2000], chartNewValue: CHART_12AX7, [flag]: true });
     expect(result.grade).toBe("reject");
     expect(result.hardFails).toEqual([fail]);

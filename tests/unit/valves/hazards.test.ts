@@ -1,26 +1,29 @@
 import { describe, expect, it } from "vitest";
 import { HAZARD_CAUTIONS, hazardsForType } from "@/lib/valves/hazards";
 import type { HazardKind } from "@/lib/valves/index-types";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Brief section 7 (hazards and cautions): [MEM/CTP]; carrier rules [MEM, verify].
 
 const kinds = (designation: string, declared: HazardKind[] = []) =>
-  hazardsForType(designation, declared).notices.map((n) => n.kind);
+  hazardsForType(SEED, designation, declared).notices.map((n) => n.kind);
 
 describe("hazardsForType", () => {
   it("every valve carries high-voltage and glass notices", () => {
     // [MEM/CTP] testers apply hundreds of volts; glass can crack or implode
     for (const t of ["12AX7", "6L6GC", "0A2", "6ZZ99"]) {
-      const r = hazardsForType(t);
+      const r = hazardsForType(SEED, t);
       expect(r.notices[0]).toMatchObject({ kind: "high-voltage", certainty: "always" });
       expect(r.notices[1]).toMatchObject({ kind: "glass", certainty: "always" });
     }
   });
 
   it("mercury-vapour rectifiers: 83, 866A, 872A", () => {
-    // [MEM, verify] brief section 7
+    // [MEM, verify]
     for (const t of ["83", "866A", "872A"]) {
-      const r = hazardsForType(t);
+      const r = hazardsForType(SEED, t);
       const m = r.notices.find((n) => n.kind === "mercury-vapour");
       expect(m?.certainty, t).toBe("known");
       expect(r.known).toBe(true);
@@ -30,27 +33,27 @@ describe("hazardsForType", () => {
 
   it("cold-cathode regulators: a possible radioactive priming source", () => {
     // [MEM, verify] some regulators held priming sources, not always marked
-    const r = hazardsForType("0A2");
+    const r = hazardsForType(SEED, "0A2");
     expect(r.notices.find((n) => n.kind === "radioactive")?.certainty).toBe("possible");
     expect(kinds("12AX7")).not.toContain("radioactive");
   });
 
   it("large envelopes get the stronger glass caution", () => {
     // [CTP] large envelopes are worst
-    const large = hazardsForType("KT88").notices.find((n) => n.kind === "glass")!;
-    const small = hazardsForType("12AX7").notices.find((n) => n.kind === "glass")!;
+    const large = hazardsForType(SEED, "KT88").notices.find((n) => n.kind === "glass")!;
+    const small = hazardsForType(SEED, "12AX7").notices.find((n) => n.kind === "glass")!;
     expect(large.note).toBe("Large envelope");
     expect(large.caution.length).toBeGreaterThan(small.caution.length);
     expect(large.caution).toMatch(/5 cm/);
   });
 
   it("normalises and resolves aliases", () => {
-    expect(hazardsForType("oa2").designation).toBe("0A2");
+    expect(hazardsForType(SEED, "oa2").designation).toBe("0A2");
     expect(kinds("866-a")).toContain("mercury-vapour");
   });
 
   it("unknown types get the general notices and advice", () => {
-    const r = hazardsForType("6ZZ99");
+    const r = hazardsForType(SEED, "6ZZ99");
     expect(r.known).toBe(false);
     expect(r.notices.map((n) => n.kind)).toEqual(["high-voltage", "glass"]);
     expect(r.advice).toMatch(/data sheet/);
@@ -58,10 +61,10 @@ describe("hazardsForType", () => {
 
   it("adds seller-declared hazards once", () => {
     // [MEM] some ceramic RF and planar types use beryllium oxide; listings must flag it
-    const r = hazardsForType("6ZZ99", ["beryllium-oxide", "glass"]);
+    const r = hazardsForType(SEED, "6ZZ99", ["beryllium-oxide", "glass"]);
     expect(r.notices.map((n) => n.kind)).toEqual(["high-voltage", "glass", "beryllium-oxide"]);
     expect(r.notices[2].certainty).toBe("declared");
-    const again = hazardsForType("0A2", ["radioactive"]);
+    const again = hazardsForType(SEED, "0A2", ["radioactive"]);
     expect(again.notices.filter((n) => n.kind === "radioactive")).toHaveLength(1);
   });
 });
@@ -81,7 +84,7 @@ describe("caution texts", () => {
     }
   });
 
-  it("state the brief's key facts", () => {
+  it("state the key facts [MEM, verify]", () => {
     // [MEM] UN2911 excepted packages; UN3506 mercury; heater-only warm-up; BeO dust
     expect(HAZARD_CAUTIONS.radioactive.caution).toMatch(/UN2911/);
     expect(HAZARD_CAUTIONS["mercury-vapour"].caution).toMatch(/UN3506/);

@@ -84,17 +84,17 @@ function checkSets(tubes: MatchReading[], sets: { ids: string[] }[], k: number, 
   }
 }
 
-describe("spread (max − min)/mean [SUG, brief §6]", () => {
-  it("Gm 2,000 & 2,100 → 4.9 %, within 5 % [CTP; brief 9.19]", () => {
+describe("spread (max − min)/mean [SUG]", () => {
+  it("Gm 2,000 & 2,100 → 4.9 %, within 5 % [CTP]", () => {
     expect(spreadPct([2000, 2100])).toBeCloseTo(4.878, 3);
     expect(isWithinTolerance([2000, 2100], 5)).toBe(true);
   });
-  it("Gm 2,000 & 2,150 → 7.2 %: fails 5 %, passes 10 % [CTP; brief 9.19]", () => {
+  it("Gm 2,000 & 2,150 → 7.2 %: fails 5 %, passes 10 % [CTP]", () => {
     expect(spreadPct([2000, 2150])).toBeCloseTo(7.229, 3);
     expect(isWithinTolerance([2000, 2150], 5)).toBe(false);
     expect(isWithinTolerance([2000, 2150], 10)).toBe(true);
   });
-  it("the same values as a matching run [brief 9.19]", () => {
+  it("the same values as a matching run [CTP; SUG]", () => {
     const lot = [
       { id: "a", gm: 2000 },
       { id: "b", gm: 2150 },

@@ -1,18 +1,16 @@
 import { describe, expect, it } from "vitest";
 import { decodeDesignation, normaliseDesignation } from "@/lib/valves/designation";
-import {
-  REFERENCE_TYPES,
-  findReferenceType,
-  getReferenceType,
-  type NominalCharacteristics,
-  type ReferenceType,
-} from "@/lib/valves/reference-data";
+import { findReferenceType, getReferenceType } from "@/lib/valves/reference-table";
+import type { NominalCharacteristics, ReferenceType } from "@/lib/valves/reference-row";
+import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+
+const SEED = seedReferenceTable();
 
 // Brief section 4 (published nominal characteristics, class A1, per section)
 // and section 9 items 8, 11, 12 and 13.
 
 function row(designation: string): ReferenceType {
-  const r = getReferenceType(designation);
+  const r = getReferenceType(SEED, designation);
   if (!r) throw new Error(`no reference row for ${designation}`);
   return r;
 }
@@ -21,7 +19,7 @@ function amp(r: ReferenceType): Extract<NominalCharacteristics, { kind: "amplifi
   return r.characteristics;
 }
 
-describe("brief 9 check values", () => {
+describe("check values, each with its source tag", () => {
   it("9.8 12AX7 heater: 12.6 V 0.15 A or 6.3 V 0.3 A", () => {
     // [LS53; REG ✓]
     expect(row("12AX7").heater).toEqual({ volts: 12.6, amps: 0.15, tapped: { volts: 6.3, amps: 0.3 } });
@@ -48,7 +46,7 @@ describe("brief 9 check values", () => {
 
   it("9.13 triodes with rp listed obey |µ - Gm·rp| / µ <= 5 %", () => {
     // [LS53] µ ≈ Gm × rp; 12AX7: 0.0016 × 62,500 = 100
-    const triodes = REFERENCE_TYPES.filter((r) => r.characteristics?.kind === "amplifier" && r.characteristics.rpOhms !== undefined);
+    const triodes = SEED_REFERENCE_TYPES.filter((r) => r.characteristics?.kind === "amplifier" && r.characteristics.rpOhms !== undefined);
     expect(triodes.length).toBeGreaterThanOrEqual(15);
     for (const r of triodes) {
       const c = amp(r);
@@ -60,7 +58,7 @@ describe("brief 9 check values", () => {
   });
 });
 
-describe("brief section 4 table", () => {
+describe("published nominal characteristics [REG, EU-DS, MIL-E-1 as tagged]", () => {
   type Expect = {
     heater: [number, number] | null;
     base: string;
@@ -73,7 +71,7 @@ describe("brief section 4 table", () => {
     ip?: number;
     rp?: number;
   };
-  // Values as printed in the brief, with its source column.
+  // Values with their source tags (lib/valves/sources.ts).
   const table: [string, Expect][] = [
     ["12AX7", { heater: [12.6, 0.15], base: "noval", plate: 250, grid: -2, mu: 100, gm: 1600, ip: 1.2, rp: 62500 }], // [REG ✓]
     ["ECC83", { heater: [12.6, 0.15], base: "noval", plate: 250, grid: -2, mu: 100, gm: 1600, ip: 1.2 }], // [REG ✓]
@@ -104,7 +102,7 @@ describe("brief section 4 table", () => {
 
   it.each(table)("%s", (name, e) => {
     const r = row(name);
-    expect(r.heater === null ? null : [r.heater.volts, r.heater.amps]).toEqual(e.heater);
+    expect(r.heater == null ? null : [r.heater.volts, r.heater.amps]).toEqual(e.heater);
     expect(r.base).toBe(e.base);
     if (e.plate === undefined) return;
     const c = amp(r);
@@ -118,7 +116,7 @@ describe("brief section 4 table", () => {
     if (e.rp !== undefined) expect(c.rpOhms).toBe(e.rp);
   });
 
-  it("12AY7 µ lies in the brief's 40-44 range", () => {
+  it("12AY7 µ lies in the 40-44 range of secondary sources [REG MEM?]", () => {
     // [REG MEM?]
     const mu = amp(row("12AY7")).mu!;
     expect(mu).toBeGreaterThanOrEqual(40);
@@ -130,7 +128,7 @@ describe("brief section 4 table", () => {
     expect(row("0A2").characteristics).toEqual({ kind: "regulator", regulatedVolts: 150, currentRangeMa: [5, 30] });
   });
 
-  it("figures marked ≈ or ? in the brief are flagged approximate", () => {
+  it("figures marked ≈ or ? in our sources are flagged approximate", () => {
     for (const name of ["6550", "KT88", "EF86"]) expect(amp(row(name)).approximate, name).toBe(true);
     expect(row("5AR4").characteristics).toMatchObject({ kind: "rectifier", approximate: true });
   });
@@ -146,21 +144,21 @@ describe("brief section 4 table", () => {
 
 describe("structure", () => {
   it("has at least 45 types across receiving, audio, rectifier and regulator kinds", () => {
-    expect(REFERENCE_TYPES.length).toBeGreaterThanOrEqual(45);
-    const kinds = new Set(REFERENCE_TYPES.map((r) => r.kind));
+    expect(SEED_REFERENCE_TYPES.length).toBeGreaterThanOrEqual(45);
+    const kinds = new Set(SEED_REFERENCE_TYPES.map((r) => r.kind));
     for (const k of ["dual-triode", "pentode", "beam-tetrode", "power-pentode", "full-wave-rectifier", "voltage-regulator"]) {
       expect(kinds.has(k as ReferenceType["kind"])).toBe(true);
     }
   });
 
   it("every row has an honest source tag", () => {
-    for (const r of REFERENCE_TYPES) {
+    for (const r of SEED_REFERENCE_TYPES) {
       expect(r.source, r.designation).toMatch(/^((REG|EU-DS|MIL-E-1\/REG) )?(✓|MEM\??)$/);
     }
   });
 
   it("designations and aliases are unique and already normalised", () => {
-    const names = REFERENCE_TYPES.flatMap((r) => [r.designation, ...r.aliases]);
+    const names = SEED_REFERENCE_TYPES.flatMap((r) => [r.designation, ...r.aliases]);
     expect(new Set(names).size).toBe(names.length);
     for (const n of names) {
       const res = normaliseDesignation(n);
@@ -168,19 +166,20 @@ describe("structure", () => {
     }
   });
 
-  it("every row has a heater unless it is a cold-cathode regulator", () => {
-    for (const r of REFERENCE_TYPES) {
+  it("every row has a heater unless it is cold-cathode; a heater we have no figure for is left out, never guessed", () => {
+    // [LS53] first number 0 = cold cathode, no heater
+    for (const r of SEED_REFERENCE_TYPES) {
       if (r.kind === "voltage-regulator") expect(r.heater, r.designation).toBeNull();
-      else {
-        expect(r.heater, r.designation).not.toBeNull();
-        expect(r.heater!.volts).toBeGreaterThan(0);
-        expect(r.heater!.amps).toBeGreaterThan(0);
+      else if (r.heater === null) expect(r.designation, r.designation).toMatch(/^0/);
+      else if (r.heater !== undefined) {
+        expect(r.heater.volts).toBeGreaterThan(0);
+        expect(r.heater.amps).toBeGreaterThan(0);
       }
     }
   });
 
   it("tapped heaters: halves in parallel at half the voltage and twice the current", () => {
-    for (const r of REFERENCE_TYPES) {
+    for (const r of SEED_REFERENCE_TYPES) {
       const t = r.heater?.tapped;
       if (!t) continue;
       expect(t.volts * 2).toBeCloseTo(r.heater!.volts, 5);
@@ -190,8 +189,8 @@ describe("structure", () => {
 
   it("every row decodes, and US heater classes agree with the data", () => {
     // [LS53] 5 = 4.6-5.6 V, 6 = 5.6-6.6 V, 12 = 12.6 V; 0 = no heater
-    for (const r of REFERENCE_TYPES) {
-      const d = decodeDesignation(r.designation);
+    for (const r of SEED_REFERENCE_TYPES) {
+      const d = decodeDesignation(SEED, r.designation);
       expect(d.ok, r.designation).toBe(true);
       if (!d.ok) continue;
       expect(d.knownType).toBe(true);
@@ -208,15 +207,17 @@ describe("structure", () => {
 
   it("European heater letters agree with the data", () => {
     // [PE] E = 6.3 V (either wiring of a tapped heater), G = 5 V, P = 300 mA
-    for (const r of REFERENCE_TYPES) {
+    for (const r of SEED_REFERENCE_TYPES) {
       for (const name of [r.designation, ...r.aliases]) {
         const first = name[0];
         if (!/^[A-Z]{2}/.test(name) || name.startsWith("KT") || name.startsWith("VR")) continue;
-        const volts = [r.heater!.volts, r.heater!.tapped?.volts];
+        if (!r.heater) continue;
+        const volts = [r.heater.volts, r.heater.tapped?.volts];
         if (first === "E") expect(volts, name).toContain(6.3);
         if (first === "G") expect(volts, name).toContain(5);
-        if (first === "P") expect(r.heater!.amps, name).toBe(0.3);
-        if (first === "D") expect(r.heater!.volts, name).toBe(1.4);
+        if (first === "P") expect(r.heater.amps, name).toBe(0.3);
+        if (first === "U") expect(r.heater.amps, name).toBe(0.1); // [PE] U = 100 mA
+        if (first === "D") expect(volts, name).toContain(1.4); // either wiring of a 2.8/1.4 V filament
       }
     }
   });
@@ -230,17 +231,17 @@ describe("structure", () => {
 
 describe("lookup", () => {
   it("resolves aliases and normalisation", () => {
-    expect(getReferenceType("ecc 83")?.designation).toBe("12AX7");
-    expect(getReferenceType("gz-34")?.designation).toBe("5AR4");
-    expect(getReferenceType("E88CC")?.designation).toBe("6922");
-    expect(getReferenceType("12AX8")).toBeUndefined();
-    expect(getReferenceType("")).toBeUndefined();
+    expect(getReferenceType(SEED, "ecc 83")?.designation).toBe("12AX7");
+    expect(getReferenceType(SEED, "gz-34")?.designation).toBe("5AR4");
+    expect(getReferenceType(SEED, "E88CC")?.designation).toBe("6922");
+    expect(getReferenceType(SEED, "12AX8")).toBeUndefined();
+    expect(getReferenceType(SEED, "")).toBeUndefined();
   });
 
   it("matches unlisted suffix variants by stem only through findReferenceType", () => {
-    expect(getReferenceType("6L6GB")).toBeUndefined();
-    expect(findReferenceType("6L6GB")).toMatchObject({ row: { designation: "6L6" }, match: "stem" });
-    expect(findReferenceType("ECC83")?.match).toBe("alias");
-    expect(findReferenceType("12AX7")?.match).toBe("exact");
+    expect(getReferenceType(SEED, "6L6GB")).toBeUndefined();
+    expect(findReferenceType(SEED, "6L6GB")).toMatchObject({ row: { designation: "6L6" }, match: "stem" });
+    expect(findReferenceType(SEED, "ECC83")?.match).toBe("alias");
+    expect(findReferenceType(SEED, "12AX7")?.match).toBe("exact");
   });
 });

@@ -9,18 +9,18 @@ import {
 
 // Demo registry: invented makers with the invented demo codes of the demo seeder, marked demo.
 const DEMO_REGISTRY: MakerRegistryEntry[] = [
-  { code: "917", makerName: "Aldergrove Electron Works", isDemo: true, notes: "demo" },
-  { code: "931", makerName: "Kestrel Valve Company", isDemo: true, notes: "demo" },
-  { code: "946", makerName: "Pellham Radio Tube Corp.", isDemo: true, notes: "demo" },
+  { code: "X17", makerName: "Aldergrove Electron Works", isDemo: true, notes: "demo" },
+  { code: "X31", makerName: "Kestrel Valve Company", isDemo: true, notes: "demo" },
+  { code: "X46", makerName: "Pellham Radio Tube Corp.", isDemo: true, notes: "demo" },
 ];
 
 describe("validateSourceCodeFormat [EIA-476 registers: a registered three-digit number]", () => {
   it.each([
-    ["946", { ok: true, code: "946" }],
-    ["EIA 946", { ok: true, code: "946", prefix: "EIA" }],
-    ["rma-946", { ok: true, code: "946", prefix: "RMA" }],
-    ["946-5943", { ok: true, code: "946", dateCode: "5943" }],
-    ["EIA 946 943", { ok: true, code: "946", prefix: "EIA", dateCode: "943" }],
+    ["X46", { ok: true, code: "X46" }],
+    ["EIA X46", { ok: true, code: "X46", prefix: "EIA" }],
+    ["rma-X46", { ok: true, code: "X46", prefix: "RMA" }],
+    ["X46-5943", { ok: true, code: "X46", dateCode: "5943" }],
+    ["EIA X46 943", { ok: true, code: "X46", prefix: "EIA", dateCode: "943" }],
   ])("accepts %j", (text, expected) => {
     expect(validateSourceCodeFormat(text)).toEqual(expected);
   });
@@ -30,22 +30,22 @@ describe("validateSourceCodeFormat [EIA-476 registers: a registered three-digit 
     ["90", /exactly three digits, got 2/],
     ["EIA 9461", /exactly three digits, got 4/],
     ["9O6", /not a source code/],
-    ["946-59431", /not a source code/],
+    ["X46-59431", /not a source code/],
   ])("refuses %j", (text, reason) => {
     const result = validateSourceCodeFormat(text);
     expect(result.ok).toBe(false);
     if (!result.ok) expect(result.reason).toMatch(reason);
   });
 
-  it("splits the joined sss-YYWW form [CTP, brief §5]", () => {
-    expect(splitJoinedCode("946-5943")).toEqual({ sourcePart: "946", datePart: "5943" });
+  it("splits the joined sss-YYWW form [CTP]", () => {
+    expect(splitJoinedCode("X46-5943")).toEqual({ sourcePart: "X46", datePart: "5943" });
     expect(splitJoinedCode("5943")).toBeNull();
   });
 });
 
 describe("lookupSourceCode", () => {
   it("finds the registered holder and says the code is evidence, not proof [EIA-476: vendor assuming responsibility]", () => {
-    const result = lookupSourceCode("EIA 946", DEMO_REGISTRY);
+    const result = lookupSourceCode("EIA X46", DEMO_REGISTRY);
     if (!result.ok) throw new Error(result.reason);
     expect(result.found).toBe(true);
     expect(result.entries.map((e) => e.makerName)).toEqual(["Pellham Radio Tube Corp."]);
@@ -56,57 +56,57 @@ describe("lookupSourceCode", () => {
   });
 
   it("reports unknown codes as not found, and malformed ones as errors", () => {
-    const unknown = lookupSourceCode("958", DEMO_REGISTRY);
+    const unknown = lookupSourceCode("X58", DEMO_REGISTRY);
     expect(unknown.ok && unknown.found).toBe(false);
     expect(lookupSourceCode("ABC", DEMO_REGISTRY).ok).toBe(false);
   });
 
   it("flags a code held by several registry entries", () => {
-    const registry = [...DEMO_REGISTRY, { code: "946", makerName: "Vireo Lamp & Valve", isDemo: true, notes: "demo, later holder" }];
-    const result = lookupSourceCode("946", registry);
+    const registry = [...DEMO_REGISTRY, { code: "X46", makerName: "Vireo Lamp & Valve", isDemo: true, notes: "demo, later holder" }];
+    const result = lookupSourceCode("X46", registry);
     if (!result.ok) throw new Error(result.reason);
     expect(result.entries).toHaveLength(2);
     expect(result.flags).toContain("several-entries");
   });
 });
 
-describe("parseMakerRegistryCsv [RFC 4180 quoting]", () => {
+describe("parseMakerRegistryCsv [RFC-4180 quoting]", () => {
   it("reads rows with quoted commas, doubled quotes and line breaks inside quotes", () => {
     const text = [
       "code,maker_name,is_demo,notes",
-      '917,Aldergrove Electron Works,true,"plain row"',
-      '931,"Kestrel Valve Company","yes","notes with a comma, and ""quotes"""',
-      '946,Pellham Radio Tube Corp.,TRUE,"two',
+      'X17,Aldergrove Electron Works,true,"plain row"',
+      'X31,"Kestrel Valve Company","yes","notes with a comma, and ""quotes"""',
+      'X46,Pellham Radio Tube Corp.,TRUE,"two',
       'lines"',
-      "958,Vireo Lamp & Valve,false,",
+      "X58,Vireo Lamp & Valve,false,",
     ].join("\r\n");
     const { rows, errors } = parseMakerRegistryCsv(text);
     expect(errors).toEqual([]);
-    expect(rows.map((r) => r.code)).toEqual(["917", "931", "946", "958"]);
+    expect(rows.map((r) => r.code)).toEqual(["X17", "X31", "X46", "X58"]);
     expect(rows[1].notes).toBe('notes with a comma, and "quotes"');
     expect(rows[2].notes).toBe("two\r\nlines");
     expect(rows.map((r) => r.isDemo)).toEqual([true, true, true, false]);
   });
 
   it("accepts columns in any order and a byte-order mark", () => {
-    const { rows, errors } = parseMakerRegistryCsv("\uFEFFnotes,is_demo,maker_name,code\nx,true,Aldergrove Electron Works,EIA 917\n");
+    const { rows, errors } = parseMakerRegistryCsv("\uFEFFnotes,is_demo,maker_name,code\nx,true,Aldergrove Electron Works,EIA X17\n");
     expect(errors).toEqual([]);
-    expect(rows).toEqual([{ code: "917", makerName: "Aldergrove Electron Works", isDemo: true, notes: "x" }]);
+    expect(rows).toEqual([{ code: "X17", makerName: "Aldergrove Electron Works", isDemo: true, notes: "x" }]);
   });
 
   it("reports bad rows with the line they start on and keeps the good ones", () => {
     const text = [
       "code,maker_name,is_demo,notes", // line 1
-      "917,Aldergrove Electron Works,true,ok", // 2
+      "X17,Aldergrove Electron Works,true,ok", // 2
       "90,Short Code Co,true,", // 3
-      "931,,true,", // 4
-      "946,Pellham Radio Tube Corp.,maybe,", // 5
-      "917,Duplicate Works,true,", // 6
-      "958,Too,Many,Fields,here", // 7
+      "X31,,true,", // 4
+      "X46,Pellham Radio Tube Corp.,maybe,", // 5
+      "X17,Duplicate Works,true,", // 6
+      "X58,Too,Many,Fields,here", // 7
       '905,"Unclosed,true,', // 8
     ].join("\n");
     const { rows, errors } = parseMakerRegistryCsv(text);
-    expect(rows.map((r) => r.code)).toEqual(["917"]);
+    expect(rows.map((r) => r.code)).toEqual(["X17"]);
     const byLine = Object.fromEntries(errors.map((e) => [e.line, e.message]));
     expect(byLine[3]).toMatch(/three digits/);
     expect(byLine[4]).toMatch(/maker_name is required/);
@@ -117,13 +117,13 @@ describe("parseMakerRegistryCsv [RFC 4180 quoting]", () => {
   });
 
   it("requires the header columns", () => {
-    const { rows, errors } = parseMakerRegistryCsv("code,maker\n917,Aldergrove Electron Works\n");
+    const { rows, errors } = parseMakerRegistryCsv("code,maker\nX17,Aldergrove Electron Works\n");
     expect(rows).toEqual([]);
     expect(errors[0]).toEqual({ line: 1, message: "header lacks column(s): maker_name, is_demo, notes" });
   });
 
   it("refuses text after a closing quote", () => {
-    const { rows, errors } = parseMakerRegistryCsv('code,maker_name,is_demo,notes\n"917"x,Aldergrove Electron Works,true,\n');
+    const { rows, errors } = parseMakerRegistryCsv('code,maker_name,is_demo,notes\n"X17"x,Aldergrove Electron Works,true,\n');
     expect(rows).toEqual([]);
     expect(errors).toEqual([{ line: 2, message: "text after the closing quote of a field" }]);
   });

@@ -3,6 +3,7 @@ import { LotEditor } from "@/components/lots/LotEditor";
 import { ApiError } from "@/lib/api/errors";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { getLot } from "@/lib/services/lots";
+import { referenceRowsForClient } from "@/lib/services/reference-table";
 
 export const metadata = { title: "Your lot" };
 
@@ -14,5 +15,5 @@ export default async function ConsignorLotPage({ params }: { params: Promise<{ i
     throw e;
   });
   if (data.lot.consignorId !== viewer.id) notFound();
-  return <LotEditor initial={data} />;
+  return <LotEditor initial={data} reference={await referenceRowsForClient()} />;
 }

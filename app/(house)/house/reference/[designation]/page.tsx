@@ -2,15 +2,17 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ReferenceEditForm } from "@/components/house/ReferenceEditForm";
 import { requirePageViewer } from "@/lib/auth/guards";
-import { referenceFor, referenceHistory } from "@/lib/services/valve-types";
+import { ReferenceRowActions } from "@/components/house/ReferenceRowActions";
+import { houseReferenceRow, referenceHistory } from "@/lib/services/valve-types";
+import { describeRowSource } from "@/lib/valves/sources";
 
 export const metadata = { title: "Correct a reference row" };
 
 export default async function EditReferencePage({ params }: { params: Promise<{ designation: string }> }) {
   await requirePageViewer("reference.edit", "/house/reference");
   const { designation } = await params;
-  const ref = await referenceFor(designation);
-  if (!ref || ref.designation !== designation) notFound();
+  const ref = await houseReferenceRow(designation);
+  if (!ref) notFound();
   const history = await referenceHistory(designation);
   const amp = ref.characteristics?.kind === "amplifier" ? ref.characteristics : undefined;
   return (
@@ -36,6 +38,12 @@ export default async function EditReferencePage({ params }: { params: Promise<{ 
           note: ref.note ?? "",
         }}
       />
+      <p className="text-sm text-flash-700">
+        Source: <span className="code">{ref.source}</span> ({describeRowSource(ref.source)}).{" "}
+        {ref.verification ? `Checked against ${ref.verification.against} by ${ref.verification.by} on ${ref.verification.on}.` : "Not yet checked against a data sheet."}
+        {ref.retired ? " Retired: not on file." : ""}
+      </p>
+      <ReferenceRowActions designation={designation} retired={ref.retired} />
       <section aria-labelledby="hist" className="space-y-2">
         <h2 id="hist" className="text-lg font-semibold">History</h2>
         {history.length ? (

@@ -1,140 +1,17 @@
-// Reference data for common receiving types: heater, base, nominal class-A1
-// characteristics at a stated operating point, hazards, and an honest source
-// tag per row. Brief section 4 is included with its values; other rows are
-// registered or data-book figures recalled from memory and marked MEM.
-// Testers use their own test points: never grade against these figures [CTP].
+// Seed rows: the reference table's first 68 rows (see builders.ts for the
+// helpers). Values unchanged from the first release, with two fixes: 5Y3GT is
+// directly heated (filament) [REG MEM]; the 5AR4 note says higher output
+// voltage (lower drop), not higher DC output [MEM].
 
-import { designationStem, normaliseDesignation } from "./designation/normalise";
-import type { BaseFamily, TypeHazard } from "./index-types";
-
-/** What a type is, in trade words. */
-export type ValveKind =
-  | "triode"
-  | "dual-triode"
-  | "power-triode"
-  | "dual-power-triode"
-  | "duo-diode-triode"
-  | "diode-duo-diode-triode"
-  | "pentode"
-  | "remote-cutoff-pentode"
-  | "power-pentode"
-  | "beam-tetrode"
-  | "triode-pentode"
-  | "pentagrid-converter"
-  | "twin-diode"
-  | "full-wave-rectifier"
-  | "half-wave-rectifier"
-  | "voltage-regulator"
-  | "tuning-indicator";
+import type { ReferenceType } from "../reference-row";
+import { H, MEM_YEAR, MERCURY, PEN, PRIMING_SOURCE, RECT, REGV, TAP, TRI, row } from "./builders";
 
 /**
- * Row source: the brief's tags. "✓" checked against a published data sheet;
- * "MEM" from memory; "MEM?" from memory with low confidence.
+ * The first reference rows: common receiving, audio, rectifier and regulator
+ * types. Two rows (12AX7, 6SN7GT) were checked against published data-sheet
+ * transcriptions; the others are registered or data-book figures from memory.
  */
-export type RowSource =
-  | `${"REG" | "EU-DS" | "MIL-E-1/REG"} ${"✓" | "MEM" | "MEM?"}`
-  | "MEM"
-  | "MEM?";
-
-/** Heater (or filament) rating; `tapped` is the second wiring of a centre-tapped heater. */
-export interface ReferenceHeater {
-  readonly volts: number;
-  readonly amps: number;
-  /** Directly heated filament rather than an indirectly heated cathode. */
-  readonly filament?: boolean;
-  /** Halves in parallel (the first figures are halves in series). */
-  readonly tapped?: { readonly volts: number; readonly amps: number };
-}
-
-/** Nominal characteristics at a stated operating point (per section for multi-section types). */
-export type NominalCharacteristics =
-  | {
-      readonly kind: "amplifier";
-      readonly plateVolts: number;
-      readonly gridVolts?: number;
-      readonly cathodeResistorOhms?: number;
-      readonly screenVolts?: number;
-      readonly mu?: number;
-      readonly gmMicromho?: number;
-      readonly plateCurrentMa?: number;
-      readonly rpOhms?: number;
-      /** Figures marked "≈" or "?" in the brief. */
-      readonly approximate?: boolean;
-    }
-  | { readonly kind: "rectifier"; readonly maxDcOutputMa?: number; readonly approximate?: boolean }
-  | { readonly kind: "regulator"; readonly regulatedVolts: number; readonly currentRangeMa: readonly [number, number] };
-
-/** One reference row. `aliases` share this row's heater, base and nominal characteristics. */
-export interface ReferenceType {
-  readonly designation: string;
-  readonly aliases: readonly string[];
-  readonly kind: ValveKind;
-  /** null for cold-cathode types (no heater). */
-  readonly heater: ReferenceHeater | null;
-  readonly base: BaseFamily;
-  /** Year of introduction from secondary histories [MEM]. */
-  readonly introduced?: { readonly year: number; readonly source: "MEM" };
-  readonly characteristics?: NominalCharacteristics;
-  readonly hazards: readonly TypeHazard[];
-  /** Large glass envelope: breakage and implosion risk is higher [CTP]. */
-  readonly largeEnvelope?: boolean;
-  readonly source: RowSource;
-  readonly note?: string;
-}
-
-// Compact builders for the table below.
-const H = (volts: number, amps: number, filament = false): ReferenceHeater =>
-  filament ? { volts, amps, filament } : { volts, amps };
-/** 12.6 V centre-tapped heater: `amps` in series, twice that at 6.3 V in parallel. */
-const TAP = (amps: number): ReferenceHeater => ({ volts: 12.6, amps, tapped: { volts: 6.3, amps: Math.round(amps * 2000) / 1000 } });
-const TRI = (plateVolts: number, bias: number | { rk: number }, mu: number, gm: number, ip: number, rp?: number): NominalCharacteristics => ({
-  kind: "amplifier",
-  plateVolts,
-  ...(typeof bias === "number" ? { gridVolts: bias } : { cathodeResistorOhms: bias.rk }),
-  mu,
-  gmMicromho: gm,
-  plateCurrentMa: ip,
-  ...(rp !== undefined ? { rpOhms: rp } : {}),
-});
-const PEN = (plateVolts: number, screenVolts: number, bias: number | { rk: number }, gm: number, ip: number, approximate = false): NominalCharacteristics => ({
-  kind: "amplifier",
-  plateVolts,
-  screenVolts,
-  ...(typeof bias === "number" ? { gridVolts: bias } : { cathodeResistorOhms: bias.rk }),
-  gmMicromho: gm,
-  plateCurrentMa: ip,
-  ...(approximate ? { approximate } : {}),
-});
-const RECT = (maxDcOutputMa?: number, approximate = true): NominalCharacteristics => ({
-  kind: "rectifier",
-  ...(maxDcOutputMa !== undefined ? { maxDcOutputMa } : {}),
-  approximate,
-});
-const REGV = (regulatedVolts: number, min: number, max: number): NominalCharacteristics => ({
-  kind: "regulator",
-  regulatedVolts,
-  currentRangeMa: [min, max],
-});
-const MEM_YEAR = (year: number) => ({ year, source: "MEM" as const });
-
-const MERCURY: TypeHazard = {
-  kind: "mercury-vapour",
-  certainty: "known",
-  note: "Holds liquid mercury; after transport, warm the heater alone before applying high voltage",
-  source: "MEM, verify",
-};
-const PRIMING_SOURCE: TypeHazard = {
-  kind: "radioactive",
-  certainty: "possible",
-  note: "Some cold-cathode regulators carried a small radioactive priming source, not always marked",
-  source: "MEM, verify",
-};
-
-type Row = Omit<ReferenceType, "aliases" | "hazards"> & Partial<Pick<ReferenceType, "aliases" | "hazards">>;
-const row = (r: Row): ReferenceType => ({ ...r, aliases: r.aliases ?? [], hazards: r.hazards ?? [] });
-
-/** Reference rows: common receiving, audio, rectifier and regulator types (at least 45). */
-export const REFERENCE_TYPES: readonly ReferenceType[] = [
+export const CORE_ROWS: readonly ReferenceType[] = [
   // Small-signal triodes. Dual-triode figures are per section.
   row({ designation: "12AX7", aliases: ["ECC83", "12AX7A", "7025"], kind: "dual-triode", heater: TAP(0.15), base: "noval", introduced: MEM_YEAR(1947), characteristics: TRI(250, -2, 100, 1600, 1.2, 62500), source: "REG ✓" }),
   row({ designation: "12AU7", aliases: ["ECC82", "12AU7A"], kind: "dual-triode", heater: TAP(0.15), base: "noval", characteristics: TRI(250, -8.5, 17, 2200, 10.5, 7700), source: "REG MEM" }),
@@ -195,9 +72,9 @@ export const REFERENCE_TYPES: readonly ReferenceType[] = [
   row({ designation: "6AL5", aliases: ["EAA91"], kind: "twin-diode", heater: H(6.3, 0.3), base: "miniature-7-pin", source: "REG MEM" }),
   row({ designation: "6X4", aliases: ["EZ90"], kind: "full-wave-rectifier", heater: H(6.3, 0.6), base: "miniature-7-pin", characteristics: RECT(70), source: "REG MEM" }),
   row({ designation: "6X5GT", kind: "full-wave-rectifier", heater: H(6.3, 0.6), base: "octal", characteristics: RECT(70), source: "REG MEM" }),
-  row({ designation: "5Y3GT", kind: "full-wave-rectifier", heater: H(5, 2), base: "octal", characteristics: RECT(125), source: "REG MEM" }),
+  row({ designation: "5Y3GT", kind: "full-wave-rectifier", heater: H(5, 2, true), base: "octal", characteristics: RECT(125), source: "REG MEM" }),
   row({ designation: "5U4GB", kind: "full-wave-rectifier", heater: H(5, 3, true), base: "octal", characteristics: RECT(275), largeEnvelope: true, source: "REG MEM?" }),
-  row({ designation: "5AR4", aliases: ["GZ34"], kind: "full-wave-rectifier", heater: H(5, 1.9), base: "octal", characteristics: RECT(250), source: "MEM?" }),
+  row({ designation: "5AR4", aliases: ["GZ34"], kind: "full-wave-rectifier", heater: H(5, 1.9), base: "octal", characteristics: RECT(250), source: "MEM?", note: "Indirectly heated, low drop: in place of 5U4GB or 5Y3GT it gives a higher output voltage (lower drop), and draws a different heater current" }),
   row({ designation: "EZ81", aliases: ["6CA4"], kind: "full-wave-rectifier", heater: H(6.3, 1), base: "noval", characteristics: RECT(150), source: "EU-DS MEM" }),
   row({ designation: "35W4", kind: "half-wave-rectifier", heater: H(35, 0.15), base: "miniature-7-pin", characteristics: RECT(100), source: "REG MEM?" }),
   row({ designation: "83", kind: "full-wave-rectifier", heater: H(5, 3, true), base: "four-pin", characteristics: RECT(), hazards: [MERCURY], largeEnvelope: true, source: "REG MEM", note: "Mercury-vapour rectifier" }),
@@ -209,57 +86,3 @@ export const REFERENCE_TYPES: readonly ReferenceType[] = [
   row({ designation: "0D3", aliases: ["VR150"], kind: "voltage-regulator", heater: null, base: "octal", characteristics: REGV(150, 5, 40), hazards: [PRIMING_SOURCE], source: "MEM" }),
 ];
 
-/** Which way a lookup matched a reference row. */
-export type ReferenceMatch = "exact" | "alias" | "stem";
-
-let byName: Map<string, { row: ReferenceType; match: "exact" | "alias" }> | undefined;
-let byStem: Map<string, ReferenceType> | undefined;
-
-function indexes(): { names: NonNullable<typeof byName>; stems: NonNullable<typeof byStem> } {
-  if (!byName || !byStem) {
-    const names = new Map<string, { row: ReferenceType; match: "exact" | "alias" }>();
-    const stems = new Map<string, ReferenceType>();
-    for (const r of REFERENCE_TYPES) {
-      names.set(r.designation, { row: r, match: "exact" });
-      for (const a of r.aliases) names.set(a, { row: r, match: "alias" });
-      for (const name of [r.designation, ...r.aliases]) {
-        const stem = designationStem(name);
-        // Prefer the row named exactly by its stem (6L6 over 6L6GC).
-        if (stem && (!stems.has(stem) || name === stem)) stems.set(stem, r);
-      }
-    }
-    byName = names;
-    byStem = stems;
-  }
-  return { names: byName, stems: byStem };
-}
-
-/**
- * Finds the reference row for a designation by name or alias after
- * normalisation ("ecc 83" -> 12AX7 row), then, for US numbers, by the
- * suffix-free stem ("6L6GB" -> the 6L6 row). Reports how it matched.
- */
-export function findReferenceType(designation: string): { row: ReferenceType; match: ReferenceMatch } | undefined {
-  const n = normaliseDesignation(designation);
-  if (!n.ok) return undefined;
-  const { names, stems } = indexes();
-  const direct = names.get(n.value);
-  if (direct) return direct;
-  const stem = designationStem(n.value);
-  const byStemRow = stem ? stems.get(stem) : undefined;
-  return byStemRow ? { row: byStemRow, match: "stem" } : undefined;
-}
-
-/**
- * The reference row for a designation or any of its aliases, after
- * normalisation; undefined when we have no row. Does not match by stem.
- */
-export function getReferenceType(designation: string): ReferenceType | undefined {
-  const found = findReferenceType(designation);
-  return found && found.match !== "stem" ? found.row : undefined;
-}
-
-/** Every designation and alias in the reference table, for suggestion lists. */
-export function referenceNames(): string[] {
-  return [...indexes().names.keys()];
-}
