@@ -67,7 +67,7 @@ export class SaleLot extends Model<InferAttributes<SaleLot>, InferCreationAttrib
       {
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         saleId: { type: DataTypes.UUID, allowNull: false },
-        lotId: { type: DataTypes.UUID, allowNull: false, unique: true },
+        lotId: { type: DataTypes.UUID, allowNull: false }, // one open or sold sale lot per lot (partial unique index)
         position: { type: DataTypes.INTEGER, allowNull: false },
         consignorId: { type: DataTypes.UUID, allowNull: false },
         phase: { type: DataTypes.STRING(16), allowNull: false, defaultValue: "open" },

@@ -1,7 +1,9 @@
 import Link from "next/link";
 import type { ConsignedLot } from "@/lib/services/consignor-desk";
 import { formatCents } from "@/lib/money/cents";
+import { canRelist } from "@/lib/lots/lifecycle";
 import { When } from "@/components/time/When";
+import { RelistButton } from "./RelistButton";
 
 /** Where a consigned lot is now, in words, with what follows from it (live figures, invoice, claim, relisting). */
 export function StageCell({ lot }: { lot: ConsignedLot }) {
@@ -16,7 +18,12 @@ export function StageCell({ lot }: { lot: ConsignedLot }) {
         </p>
       ) : null}
       {s && s.hammerCents != null ? <p className="text-xs text-flash-700">Hammer <span className="code">{formatCents(s.hammerCents)}</span> in {s.title}</p> : null}
-      {lot.stage === "unsold" ? <p className="text-xs text-flash-700">Closed <When iso={s?.closesAt} style="date" />. The house will talk with you about a later sale.</p> : null}
+      {canRelist(lot.stage) ? (
+        <div className="space-y-1">
+          <p className="text-xs text-flash-700">Closed <When iso={s?.closesAt} style="date" /> without a sale.</p>
+          <RelistButton lotId={lot.id} />
+        </div>
+      ) : null}
       {lot.invoice ? <Link href={`/invoices/${lot.invoice.id}`} className="text-xs underline">Invoice</Link> : null}
       {lot.claimId ? <> · <Link href={`/disputes/${lot.claimId}`} className="text-xs underline">Claim</Link></> : null}
     </div>

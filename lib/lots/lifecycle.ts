@@ -86,5 +86,5 @@ export function proceedsBySale(rows: readonly { saleId: string | null; netCents:
 
 /** Whether the consignor may ask for the lot to be offered again. */
 export function canRelist(stage: LotStage): boolean {
-  return stage === "unsold";
+  return stage === "unsold" || stage === "withdrawn";
 }

@@ -29,59 +29,6 @@ const int = (n: number) => {
  * take no parameters); every one is a UUID, a validated key, a whole number,
  * a timestamp or our own JSON.
  */
-/** The read both paths share: the lot, its sale's clock, the leader's paddle and any earlier bid under this key. */
-const READ = (L: (v: string) => string, saleLotId: string, bidderId: string, key: string) => `
-       SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.extension_count, sl.seq, sl.state, sl.hammer_cents,
-              s.starts_at, s.soft_close_seconds, now() AS db_now, p.number AS leader_paddle,
-              b.seq AS prior_seq, b.outcome AS prior_outcome, b.max_cents AS prior_max
-         FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id
-         LEFT JOIN paddles p ON p.sale_id = sl.sale_id AND p.user_id = sl.leader_id
-         LEFT JOIN bids b ON b.sale_lot_id = sl.id AND b.bidder_id = ${L(bidderId)} AND b.idempotency_key = ${L(key)}
-        WHERE sl.id = ${L(saleLotId)}`;
-
-async function withClient<T>(fn: (client: Client) => Promise<T>): Promise<T> {
-  const manager = db().connectionManager;
-  const client = (await manager.getConnection({ type: "write" })) as Client;
-  try {
-    return await fn(client);
-  } finally {
-    manager.releaseConnection(client as never);
-  }
-}
-
-/** The lot as it is now, without a lock (for the optimistic path and for refusals that stay true). */
-export async function readLot(saleLotId: string, bidderId: string, key: string): Promise<LockedLot | undefined> {
-  return withClient(async (client) => (await client.query<LockedLot>(READ((v) => client.escapeLiteral(v), saleLotId, bidderId, key))).rows[0]);
-}
-
-/**
- * Write an accepted bid in one statement and one round trip, only if the lot
- * has not moved since it was read (same seq, still open, not yet closed):
- * the row is locked just for the statement. "moved" asks the caller to read
- * again; "duplicate" means this key was written meanwhile (a retry racing itself).
- */
-export async function writeIfUnchanged(saleLotId: string, write: BidWrite): Promise<"written" | "moved" | "duplicate"> {
-  const st = write.state;
-  return withClient(async (client) => {
-    try {
-      const r = await client.query(
-        `WITH u AS (
-           UPDATE sale_lots SET seq = $2, state = $3::jsonb, price_cents = $4, bid_count = $5, leader_id = $6, reserve_met = $7,
-                  closes_at = $8, extension_count = $9, updated_at = now()
-            WHERE id = $1 AND seq = $2 - 1 AND phase = 'open' AND closes_at > now() RETURNING id)
-         INSERT INTO bids (sale_lot_id, seq, bidder_id, max_cents, price_after_cents, outcome, idempotency_key, placed_at)
-         SELECT $1, $2, $10, $11, $4, $12, $13, $14 FROM u RETURNING seq`,
-        [saleLotId, write.seq, JSON.stringify(st), st.priceCents, st.bidCount, st.leader?.bidderId ?? null, st.reserveMet,
-          write.closesAt, write.extensionCount, write.bidderId, write.maxCents, write.outcome, write.key, write.placedAt],
-      );
-      return r.rowCount ? "written" : "moved";
-    } catch (e) {
-      if ((e as { code?: string }).code === "23505") return "duplicate";
-      throw e;
-    }
-  });
-}
-
 export async function withLotLock<T>(saleLotId: string, bidderId: string, key: string, decide: (row: LockedLot | undefined) => { write: BidWrite | null; result: T }): Promise<T> {
   const manager = db().connectionManager;
   const client = (await manager.getConnection({ type: "write" })) as Client;
@@ -90,7 +37,14 @@ export async function withLotLock<T>(saleLotId: string, bidderId: string, key: s
   try {
     open = true;
     const res = (await client.query(
-      `BEGIN; ${READ(L, saleLotId, bidderId, key)} FOR UPDATE OF sl`,
+      `BEGIN;
+       SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.extension_count, sl.seq, sl.state, sl.hammer_cents,
+              s.starts_at, s.soft_close_seconds, now() AS db_now, p.number AS leader_paddle,
+              b.seq AS prior_seq, b.outcome AS prior_outcome, b.max_cents AS prior_max
+         FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id
+         LEFT JOIN paddles p ON p.sale_id = sl.sale_id AND p.user_id = sl.leader_id
+         LEFT JOIN bids b ON b.sale_lot_id = sl.id AND b.bidder_id = ${L(bidderId)} AND b.idempotency_key = ${L(key)}
+        WHERE sl.id = ${L(saleLotId)} FOR UPDATE OF sl`,
     )) as unknown as { rows: LockedLot[] }[];
     const { write, result } = decide(res[1]?.rows[0]);
     if (!write) {

@@ -6,7 +6,7 @@ import { extendOnBid } from "../auction/soft-close";
 import { type LotLive } from "../realtime/events";
 import { beginLotWrite, finishLotWrite } from "../realtime/lot-emitter";
 import { db } from "../../models";
-import { readLot, withLotLock, writeIfUnchanged, type BidWrite, type LockedLot } from "./bid-lock";
+import { withLotLock, type LockedLot } from "./bid-lock";
 import { scheduleClose } from "./close-schedule";
 import { liveFrom } from "./live-lot";
 import { queueOutbidNotice } from "./outbid-notices";
@@ -28,18 +28,18 @@ export type BidResult =
   | { accepted: true; outcome: BidOutcome; seq: number; live: LotLive; yourMaxCents: number; leading: boolean; replayed: boolean }
   | { accepted: false; reason: BidRefusal | "not-started"; message: string; minimumCents: number; live: LotLive };
 
+type Row = {
+  id: string; sale_id: string; phase: LotLive["phase"]; closes_at: Date; extension_count: number; seq: number; state: ProxyState;
+  starts_at: Date; soft_close_seconds: number; db_now: Date; hammer_cents: number | null;
+};
+
 const saleOf = new Map<string, string>();
 
-/** Optimistic attempts before a bid waits for the lot's row lock ([SUG] tuned with npm run bench:bids). */
-const OPTIMISTIC_TRIES = 3;
-
 /**
- * Place a maximum bid. The lot is read, the pure rules decide, and the bid is
- * appended with the next sequence number (moving the close on a late bid) in
- * one statement that succeeds only if the lot has not moved since the read;
- * after a few lost races the bid waits for the lot's row lock instead. Only
- * after commit is it broadcast. The same idempotency key from the same bidder
- * returns the first answer.
+ * Place a maximum bid. One transaction takes the lot's row lock, decides
+ * with the pure rules, appends the bid with the next sequence number and
+ * moves the close on a late bid; only after commit is it broadcast. The same
+ * idempotency key from the same bidder returns the first answer.
  */
 export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: number, idempotencyKey: string): Promise<BidResult> {
   const s = db();
@@ -52,51 +52,49 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
   }
   const paddle = await paddleFor(saleId, viewer.id);
 
-  // Under the lot's row lock or optimistically (lib/services/bid-lock): decide with the pure rules, then write.
+  // Most refusals need no lock: the minimum only rises between bids (a house retraction bumps the
+  // lot's seq, and every bid is checked again under the lock), so a maximum below the minimum read
+  // without locking is below it now. Retries of an accepted bid are answered from the log below.
+  const [peek] = await s.query<Row & { prior_seq: number | null }>(
+    `SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.seq, sl.state, sl.hammer_cents,
+            (SELECT seq FROM bids WHERE sale_lot_id = sl.id AND bidder_id = :bidder AND idempotency_key = :key) AS prior_seq
+       FROM sale_lots sl WHERE sl.id = :saleLotId`,
+    { replacements: { saleLotId, bidder: viewer.id, key: idempotencyKey }, type: QueryTypes.SELECT },
+  );
+  if (peek && peek.prior_seq == null && peek.phase === "open" && peek.state.leader?.bidderId !== viewer.id && maxCents < minimumBidFor(peek.state)) {
+    const leader = peek.state.leader ? (await paddlesOf(saleId, [peek.state.leader.bidderId])).get(peek.state.leader.bidderId) ?? null : null;
+    return { accepted: false, reason: "below-minimum", message: REFUSAL_WORDS["below-minimum"], minimumCents: minimumBidFor(peek.state), live: liveFrom(peek, leader) };
+  }
+
+  // Under the lot's row lock (lib/services/bid-lock): decide with the pure rules, then write and commit in one round trip.
   type Done =
     | { kind: "refused"; row: LockedLot; reason: BidRefusal | "not-started"; minimumCents: number }
     | { kind: "replayed"; row: LockedLot; prior: { seq: number; outcome: BidOutcome; max_cents: number } }
     | { kind: "accepted"; row: LockedLot; outcome: BidOutcome; seq: number; previousLeader: string | null; previousLeaderPaddle: number | null; extended: boolean };
-  const decide = (row: LockedLot | undefined): { write: BidWrite | null; result: Done } => {
-    if (!row) throw new ApiError("not_found", "No such lot in a sale");
-    if (row.prior_seq != null) return { write: null, result: { kind: "replayed", row, prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! } } };
-    const nowMs = row.db_now.getTime();
-    if (nowMs < row.starts_at.getTime()) return { write: null, result: { kind: "refused", row, reason: "not-started", minimumCents: minimumBidFor(row.state) } };
-    const previousLeader = row.state.leader?.bidderId ?? null;
-    const decision = placeBid(row.state, { bidderId: viewer.id, maxCents, placedAtMs: nowMs, seq: row.seq + 1 }, { phase: row.phase, closesAtMs: row.closes_at.getTime() });
-    if (!decision.accepted) return { write: null, result: { kind: "refused", row, reason: decision.reason, minimumCents: decision.minimumCents } };
-    const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, { windowSeconds: row.soft_close_seconds, maxExtensions: null });
-    const next = decision.state;
-    const seq = row.seq + 1;
-    return {
-      write: { seq, state: next, closesAt: new Date(clock.closesAtMs), extensionCount: clock.extensionCount, bidderId: viewer.id, maxCents, outcome: decision.outcome, key: idempotencyKey, placedAt: row.db_now },
-      result: {
-        kind: "accepted", outcome: decision.outcome, seq, previousLeader, previousLeaderPaddle: row.leader_paddle, extended: clock.extended,
-        row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
-      },
-    };
-  };
-
   // The write is bracketed so that its broadcast leaves in seq order with this process's other writes of the lot.
   beginLotWrite(saleLotId);
-  let done: Done | undefined;
+  let done: Done;
   let live: LotLive | null = null;
   try {
-    // Optimistic first: read, decide, and write in one statement only if the lot has not moved (a few tries).
-    // Refusals that stay true are answered from the read: a replay, and a non-leader's maximum below the
-    // minimum (the minimum only rises; a house retraction moves the seq). Others are confirmed under the lock.
-    for (let attempt = 0; attempt < OPTIMISTIC_TRIES && !done; attempt++) {
-      const d = decide(await readLot(saleLotId, viewer.id, idempotencyKey));
-      if (!d.write) {
-        const r = d.result;
-        if (r.kind === "replayed" || (r.kind === "refused" && r.reason === "below-minimum" && r.row.state.leader?.bidderId !== viewer.id)) done = r;
-        break;
-      }
-      const w = await writeIfUnchanged(saleLotId, d.write);
-      if (w === "written") done = d.result;
-      else if (w === "duplicate") break;
-    }
-    done ??= await withLotLock<Done>(saleLotId, viewer.id, idempotencyKey, decide);
+    done = await withLotLock<Done>(saleLotId, viewer.id, idempotencyKey, (row) => {
+      if (!row) throw new ApiError("not_found", "No such lot in a sale");
+      if (row.prior_seq != null) return { write: null, result: { kind: "replayed", row, prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! } } };
+      const nowMs = row.db_now.getTime();
+      if (nowMs < row.starts_at.getTime()) return { write: null, result: { kind: "refused", row, reason: "not-started", minimumCents: minimumBidFor(row.state) } };
+      const previousLeader = row.state.leader?.bidderId ?? null;
+      const decision = placeBid(row.state, { bidderId: viewer.id, maxCents, placedAtMs: nowMs, seq: row.seq + 1 }, { phase: row.phase, closesAtMs: row.closes_at.getTime() });
+      if (!decision.accepted) return { write: null, result: { kind: "refused", row, reason: decision.reason, minimumCents: decision.minimumCents } };
+      const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, { windowSeconds: row.soft_close_seconds, maxExtensions: null });
+      const next = decision.state;
+      const seq = row.seq + 1;
+      return {
+        write: { seq, state: next, closesAt: new Date(clock.closesAtMs), extensionCount: clock.extensionCount, bidderId: viewer.id, maxCents, outcome: decision.outcome, key: idempotencyKey, placedAt: row.db_now },
+        result: {
+          kind: "accepted", outcome: decision.outcome, seq, previousLeader, previousLeaderPaddle: row.leader_paddle, extended: clock.extended,
+          row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
+        },
+      };
+    });
     if (done.kind === "accepted") {
       // The new leader is the bidder or the one before: both paddles are known, so nothing is awaited between commit and broadcast.
       const leaderId = done.row.state.leader!.bidderId;

@@ -183,7 +183,7 @@ export async function removeItem(viewer: Viewer, lotId: string, itemId: string):
 /** The sale a lot is (or was) offered in, if any: for the lot page's way to bidding. */
 export async function saleLotOf(lotId: string): Promise<{ saleLotId: string; saleId: string; saleTitle: string; phase: string; hammerCents: number | null; closedAt: string | null } | null> {
   const [row] = await db().query<{ id: string; sale_id: string; title: string; phase: string; hammer_cents: number | null; closed_at: Date | null }>(
-    `SELECT sl.id, sl.sale_id, s.title, sl.phase, sl.hammer_cents, sl.closed_at FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.lot_id = :lotId`,
+    `SELECT sl.id, sl.sale_id, s.title, sl.phase, sl.hammer_cents, sl.closed_at FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.lot_id = :lotId ORDER BY sl.created_at DESC LIMIT 1`,
     { replacements: { lotId }, type: QueryTypes.SELECT },
   );
   return row ? { saleLotId: row.id, saleId: row.sale_id, saleTitle: row.title, phase: row.phase, hammerCents: row.hammer_cents, closedAt: row.closed_at?.toISOString() ?? null } : null;

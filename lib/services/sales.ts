@@ -23,7 +23,8 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
   const sale = await s.transaction(async (t) => {
     const lots = await Lot.findAll({ where: { id: { [Op.in]: input.lots.map((l) => l.lotId) } }, lock: t.LOCK.UPDATE, transaction: t });
     const byId = new Map(lots.map((l) => [l.id, l]));
-    const offered = await SaleLot.findAll({ where: { lotId: { [Op.in]: input.lots.map((l) => l.lotId) } }, attributes: ["lotId"], transaction: t });
+    // A lot that closed unsold or was withdrawn may be offered again; one open or sold is not.
+    const offered = await SaleLot.findAll({ where: { lotId: { [Op.in]: input.lots.map((l) => l.lotId) }, phase: { [Op.in]: ["open", "sold"] } }, attributes: ["lotId"], transaction: t });
     if (offered.length) throw new ApiError("conflict", "Some of these lots are already in a sale", { lots: `${offered.length} already offered` });
     const fields: Record<string, string> = {};
     input.lots.forEach((l, i) => {
@@ -215,7 +216,7 @@ export async function offerableLots() {
   const rows = await db().query<{ id: string; title: string; consignor: string; estimate_low_cents: number | null; estimate_high_cents: number | null; reserve_cents: number | null }>(
     `SELECT l.id, l.title, u.display_name AS consignor, l.estimate_low_cents, l.estimate_high_cents, l.reserve_cents
        FROM lots l JOIN users u ON u.id = l.consignor_id
-      WHERE l.state = 'approved' AND NOT EXISTS (SELECT 1 FROM sale_lots sl WHERE sl.lot_id = l.id) ORDER BY l.approved_at`,
+      WHERE l.state = 'approved' AND NOT EXISTS (SELECT 1 FROM sale_lots sl WHERE sl.lot_id = l.id AND sl.phase IN ('open', 'sold')) ORDER BY l.approved_at`,
     { type: QueryTypes.SELECT },
   );
   return rows.map((r) => ({ id: r.id, title: r.title, consignor: r.consignor, estimateLowCents: r.estimate_low_cents, estimateHighCents: r.estimate_high_cents, reserveCents: r.reserve_cents }));

@@ -23,7 +23,9 @@ export async function refreshCatalogueEntry(lotId: string, t?: Transaction): Pro
     `SELECT l.id, l.title, l.provenance, l.shipping_origin, l.state, l.consignor_id, l.approved_at, l.created_at, l.estimate_low_cents, l.estimate_high_cents,
             sl.id AS sale_lot_id, sl.phase, s.starts_at, sl.closes_at, sl.closed_at, sl.hammer_cents,
             (SELECT p.id FROM lot_photos p WHERE p.lot_id = l.id ORDER BY p.created_at, p.id LIMIT 1) AS thumb
-       FROM lots l LEFT JOIN sale_lots sl ON sl.lot_id = l.id LEFT JOIN sales s ON s.id = sl.sale_id
+       FROM lots l
+       LEFT JOIN LATERAL (SELECT * FROM sale_lots WHERE lot_id = l.id ORDER BY created_at DESC LIMIT 1) sl ON true -- the latest offer (a lot may be relisted)
+       LEFT JOIN sales s ON s.id = sl.sale_id
       WHERE l.id = :lotId`,
     { replacements: { lotId }, type: QueryTypes.SELECT, transaction: t },
   );

@@ -23,8 +23,10 @@ describe("lotStage", () => {
     expect(lotStage({ ...sold, invoiceState: "released" })).toBe("released");
     expect(lotStage({ ...sold, invoiceState: "delivered", claimOpen: true })).toBe("claim");
   });
-  it("only an unsold lot is offered a relisting", () => {
+  it("only a lot that closed without a sale is offered a relisting", () => {
     expect(canRelist("unsold")).toBe(true);
+    expect(canRelist("withdrawn")).toBe(true);
+    expect(canRelist("in-sale")).toBe(false);
     expect(canRelist("released")).toBe(false);
   });
 });
