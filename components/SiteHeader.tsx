@@ -55,9 +55,9 @@ export function SiteHeader({ viewer }: { viewer: Viewer | null }) {
           </div>
         ) : (
           <div className="ml-auto flex items-center gap-3 text-sm md:ml-0">
-            <Link href="/sign-in" className="text-flash-800 underline-offset-4 hover:underline">Sign in</Link>
-            <Link href="/sign-up" className="btn-primary">Open an account</Link>
-            <MenuButton items={items} />
+            <Link href="/sign-in" className="whitespace-nowrap text-flash-800 underline-offset-4 hover:underline">Sign in</Link>
+            <span className="hidden sm:inline"><Link href="/sign-up" className="btn-primary whitespace-nowrap">Open an account</Link></span>
+            <MenuButton items={items}><p className="py-3"><Link href="/sign-up" className="btn-primary">Open an account</Link></p></MenuButton>
           </div>
         )}
       </div>

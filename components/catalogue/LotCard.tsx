@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { LocalTime } from "@/components/LocalTime";
+import { When } from "@/components/time/When";
 import { HAZARD_WORDS } from "@/components/lots/words";
 import { formatCents } from "@/lib/money/cents";
 import type { CatalogueLot } from "@/lib/services/catalogue/search";
@@ -50,8 +50,8 @@ export function LotCard({ lot }: { lot: CatalogueLot }) {
         <p className="text-flash-700">{facts.join(" · ")}{lot.hazards.length ? <> · <span className="text-fault-700">{lot.hazards.map((h) => HAZARD_WORDS[h] ?? h).join(", ")}</span></> : null}</p>
         <div className="flex flex-wrap items-baseline gap-x-4 gap-y-1">
           <Price lot={lot} />
-          {lot.closesAt && lot.status !== "sold" ? <p className="text-flash-600">{lot.status === "upcoming" ? "First bids from" : "Closes"} <LocalTime iso={lot.status === "upcoming" && lot.startsAt ? lot.startsAt : lot.closesAt} /></p> : null}
-          {lot.soldAt && lot.status === "sold" ? <p className="text-flash-600">Sold <LocalTime iso={lot.soldAt} withDate /></p> : null}
+          {lot.closesAt && lot.status !== "sold" ? <p className="text-flash-600">{lot.status === "upcoming" ? "First bids from" : "Closes"} <When iso={lot.status === "upcoming" && lot.startsAt ? lot.startsAt : lot.closesAt} /></p> : null}
+          {lot.soldAt && lot.status === "sold" ? <p className="text-flash-600">Sold <When iso={lot.soldAt} /></p> : null}
           {lot.saleId && lot.saleLotId && lot.status === "live" ? <Link href={`/sales/${lot.saleId}/lots/${lot.saleLotId}`} className="font-medium text-glow-700 underline underline-offset-4">Bid on it</Link> : null}
         </div>
       </div>

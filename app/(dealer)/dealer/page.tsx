@@ -8,6 +8,7 @@ import { requirePageViewer } from "@/lib/auth/guards";
 import { STATE_WORDS } from "@/lib/disputes/rules";
 import { formatCents } from "@/lib/money/cents";
 import { dealerDesk } from "@/lib/services/dealer-desk";
+import { listWantLists } from "@/lib/services/want-lists";
 
 export const metadata = { title: "Dealer desk" };
 
@@ -24,7 +25,7 @@ function Section({ id, title, empty, children }: { id: string; title: string; em
 
 export default async function DealerHome() {
   const viewer = await requirePageViewer("lots.bid", "/dealer");
-  const desk = await dealerDesk(viewer);
+  const [desk, wants] = await Promise.all([dealerDesk(viewer), listWantLists(viewer)]);
   const open = desk.bidding.filter((b) => b.phase === "open");
   return (
     <DeskHome
@@ -32,7 +33,7 @@ export default async function DealerHome() {
       intro="Your bids, your wins and what you owe, in one place. Read a lot's evidence before you bid."
       actions={[
         { href: "/sales", title: "Live sales", text: "Bid on lots as they close; a late bid extends the close." },
-        { href: "/lots", title: "Approved lots", text: "Every approved lot with its evidence and summary." },
+        { href: "/catalogue", title: "Catalogue", text: "Find lots by type and equivalents, grade, matched sets and sale status, with pictures and price history." },
         { href: "/reference", title: "Valve reference", text: "Decode a designation, list its equivalents and nominal figures, or read a date code." },
         { href: "/shelf", title: "Unconfirmed shelf", text: "Tubes whose maker is not yet confirmed, with their best candidate makers." },
       ]}
@@ -85,6 +86,15 @@ export default async function DealerHome() {
               <span className="text-flash-600">{w.phase === "open" ? <>closes <When iso={w.closesAt} style="datetime" /></> : <TimeLeft iso={w.closesAt} phase={w.phase} />}</span>
             </li>
           ))}
+        </Section>
+        <Section id="wants" title="Want lists" empty={wants.length ? null : "No want lists yet: search the catalogue for a type and save the search."}>
+          {wants.slice(0, 8).map((w) => (
+            <li key={w.id} className="flex flex-wrap items-baseline gap-x-3 py-2">
+              <Link href={`/catalogue?q=${encodeURIComponent(w.criteria.designation)}`} className="min-w-0 flex-1 font-medium underline underline-offset-2">{w.name}</Link>
+              <span className="text-flash-700">{w.paused ? "paused" : `${w.hits} lot${w.hits === 1 ? "" : "s"} matched`}</span>
+            </li>
+          ))}
+          {wants.length ? <li className="py-2"><Link href="/dealer/want-lists" className="underline">All want lists</Link></li> : null}
         </Section>
       </div>
     </DeskHome>

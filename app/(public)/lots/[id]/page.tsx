@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { PriceHistory } from "@/components/catalogue/PriceHistory";
-import { LocalTime } from "@/components/LocalTime";
+import { When } from "@/components/time/When";
 import { LotView } from "@/components/lots/LotView";
 import { formatCents } from "@/lib/money/cents";
 import { ApiError } from "@/lib/api/errors";
@@ -36,7 +36,7 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
         : <Link href={`/sign-in?from=${encodeURIComponent(`/lots/${id}`)}`} className="btn-primary">Sign in to bid</Link>}
     </p>
   ) : sale?.phase === "sold" ? (
-    <p className="card text-sm" data-testid="lot-outcome"><Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="underline underline-offset-2">Sold in <strong>{sale.saleTitle}</strong></Link>{sale.hammerCents != null ? <> for <strong className="code">{formatCents(sale.hammerCents)}</strong></> : null}{sale.closedAt ? <> on <LocalTime iso={sale.closedAt} /></> : null}.</p>
+    <p className="card text-sm" data-testid="lot-outcome"><Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="underline underline-offset-2">Sold in <strong>{sale.saleTitle}</strong></Link>{sale.hammerCents != null ? <> for <strong className="code">{formatCents(sale.hammerCents)}</strong></> : null}{sale.closedAt ? <> on <When iso={sale.closedAt} /></> : null}.</p>
   ) : sale ? (
     <p className="card text-sm" data-testid="lot-outcome">Offered in <strong>{sale.saleTitle}</strong>; it closed unsold.</p>
   ) : !viewer ? (
