@@ -1,6 +1,8 @@
 "use client";
 
 import { useRouter } from "next/navigation";
+import { formatWhen } from "@/lib/time/format";
+import { useViewerZone } from "@/components/time/useViewerZone";
 import { useFieldArray, useForm, type Path } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
 import { useApiSubmit } from "@/components/forms/useApiSubmit";
@@ -29,6 +31,7 @@ const orNull = (s: string) => (s.trim() ? s.trim() : null);
 /** The buyer's claim on a delivered lot: what is wrong, on which lines, with the codes, construction and readings they found. */
 export function ClaimForm({ invoiceId, lines, windowEnds }: { invoiceId: string; lines: ClaimLine[]; windowEnds: string }) {
   const router = useRouter();
+  const zone = useViewerZone();
   const { register, control, handleSubmit, watch, setError, formState } = useForm<Values>({ defaultValues: { reason: "", remedy: "", statement: "", items: [] } });
   const { fields, append, remove } = useFieldArray({ control, name: "items" });
   const { message, run } = useApiSubmit<Values>(setError);
@@ -83,7 +86,7 @@ export function ClaimForm({ invoiceId, lines, windowEnds }: { invoiceId: string;
           </select>
         </Field>
         <div className="sm:col-span-2">
-          <Field id="statement" label="Your statement" hint={`Say what you found and how you tested. Claims close with the inspection window, ${windowEnds.slice(0, 16).replace("T", " ")} UTC.`} error={e.statement?.message}>
+          <Field id="statement" label="Your statement" hint={`Say what you found and how you tested. Claims close with the inspection window, ${formatWhen(windowEnds, zone, "datetime")}.`} error={e.statement?.message}>
             <textarea id="statement" rows={4} className="input" {...register("statement")} />
           </Field>
         </div>

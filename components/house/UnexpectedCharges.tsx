@@ -1,9 +1,9 @@
 import Link from "next/link";
+import { When } from "@/components/time/When";
 import { formatCents } from "@/lib/money/cents";
 import { UNEXPECTED_WHY_WORDS } from "@/lib/money/unexpected";
 import type { UnexpectedCharge } from "@/lib/services/unexpected-charges";
 
-const when = (iso: string) => `${iso.slice(0, 16).replace("T", " ")} UTC`;
 
 function Refund({ c }: { c: UnexpectedCharge }) {
   return c.state === "refunded" ? <span className="code break-all">{c.refundId}</span> : <span className="text-fault-700">due{c.lastError ? `: ${c.lastError}` : ""}</span>;
@@ -29,7 +29,7 @@ export function UnexpectedCharges({ charges }: { charges: UnexpectedCharge[] }) 
                     <td className="code px-3 py-2">{formatCents(c.feeCents)}</td>
                     <td className="px-3 py-2">{UNEXPECTED_WHY_WORDS[c.why]}</td>
                     <td className="px-3 py-2"><Refund c={c} /></td>
-                    <td className="px-3 py-2">{when(c.detectedAt)}</td>
+                    <td className="px-3 py-2"><When iso={c.detectedAt} /></td>
                   </tr>
                 ))}
               </tbody>
@@ -41,7 +41,7 @@ export function UnexpectedCharges({ charges }: { charges: UnexpectedCharge[] }) 
                 <p className="flex justify-between gap-2"><Link href={`/invoices/${c.invoiceId}`} className="code underline">{c.invoiceNumber}</Link><span className="code font-semibold">{formatCents(c.amountCents)}</span></p>
                 <p>{UNEXPECTED_WHY_WORDS[c.why]}</p>
                 <p className="text-flash-600">Payment <span className="code break-all">{c.paymentIntentId}</span> · fee kept {formatCents(c.feeCents)}</p>
-                <p className="text-flash-600">Refund <Refund c={c} /> · seen {when(c.detectedAt)}</p>
+                <p className="text-flash-600">Refund <Refund c={c} /> · seen <When iso={c.detectedAt} /></p>
               </li>
             ))}
           </ul>

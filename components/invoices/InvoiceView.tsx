@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { When } from "@/components/time/When";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -70,9 +71,9 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
       {inv.lastPaymentError && inv.state === "awaiting-payment" ? <FormAlert>Last attempt: {inv.lastPaymentError}</FormAlert> : null}
       {inv.isBuyer && inv.state === "awaiting-payment" ? <PayForm invoiceId={inv.id} totalText={formatCents(inv.totalCents)} onPaid={setMessage} /> : null}
       <ol className="card space-y-1 text-sm">
-        <li>Paid: {inv.paidAt ? inv.paidAt.slice(0, 16).replace("T", " ") + " UTC" : "not yet"}</li>
+        <li>Paid: {inv.paidAt ? <When iso={inv.paidAt} /> : "not yet"}</li>
         <li>Shipped: {inv.shippedAt ? `${inv.shippedAt.slice(0, 10)} with ${inv.carrier}, tracking ${inv.tracking}` : "not yet"}</li>
-        <li>Delivered: {inv.deliveredAt ? inv.deliveredAt.slice(0, 10) : "not yet"}{inv.inspectionEndsAt ? ` · inspection window ends ${inv.inspectionEndsAt.slice(0, 16).replace("T", " ")} UTC` : ""}</li>
+        <li>Delivered: {inv.deliveredAt ? <When iso={inv.deliveredAt} style="date" /> : "not yet"}{inv.inspectionEndsAt ? <> · inspection window ends <When iso={inv.inspectionEndsAt} /></> : null}</li>
         <li>Released to the consignor: {inv.releasedAt ? inv.releasedAt.slice(0, 10) : "not yet"}</li>
       </ol>
       {inv.isBuyer && inv.state === "delivered" && inv.inspectionEndsAt && Date.parse(inv.inspectionEndsAt) > Date.now() ? (

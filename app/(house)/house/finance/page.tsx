@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { When } from "@/components/time/When";
 import { ReconcileButton } from "@/components/house/ReconcileButton";
 import { UnexpectedCharges } from "@/components/house/UnexpectedCharges";
 import { INVOICE_STATE_WORDS } from "@/components/invoices/words";
@@ -37,7 +38,7 @@ export default async function FinancePage() {
           <div className="flex items-center justify-between"><h2 id="rec-h" className="font-semibold">Reconciliation with the processor</h2><ReconcileButton /></div>
           {last ? (
             <>
-              <p className={`text-sm font-medium ${last.ok ? "text-sound-700" : "text-fault-700"}`}>{last.ok ? "Ledger and processor agree" : `${last.differences.length} difference(s) found`} · {last.ranAt.slice(0, 16).replace("T", " ")} UTC</p>
+              <p className={`text-sm font-medium ${last.ok ? "text-sound-700" : "text-fault-700"}`}>{last.ok ? "Ledger and processor agree" : `${last.differences.length} difference(s) found`} · <When iso={last.ranAt} /></p>
               <table className="w-full text-sm">
                 <thead className="text-left text-flash-600"><tr><th className="py-1 font-medium" /><th className="py-1 text-right font-medium">Ledger</th><th className="py-1 text-right font-medium">Processor</th></tr></thead>
                 <tbody>
@@ -59,7 +60,7 @@ export default async function FinancePage() {
           <h2 id="ignored-h" className="text-lg font-semibold">Processor messages set aside</h2>
           <p className="text-sm text-flash-600">Signed messages that were not ours to act on, kept with the reason.</p>
           <ul className="card space-y-1 text-sm">
-            {ignored.map((e) => <li key={e.eventId}><span className="code">{e.eventId}</span> · {e.type} · {e.reason ?? "no reason kept"} · {e.receivedAt.slice(0, 16).replace("T", " ")} UTC</li>)}
+            {ignored.map((e) => <li key={e.eventId}><span className="code">{e.eventId}</span> · {e.type} · {e.reason ?? "no reason kept"} · <When iso={e.receivedAt} /></li>)}
           </ul>
         </section>
       ) : null}

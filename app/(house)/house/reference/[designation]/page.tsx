@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { When } from "@/components/time/When";
 import { notFound } from "next/navigation";
 import { ReferenceEditForm } from "@/components/house/ReferenceEditForm";
 import { requirePageViewer } from "@/lib/auth/guards";
@@ -50,7 +51,7 @@ export default async function EditReferencePage({ params }: { params: Promise<{ 
           <ol className="space-y-2">
             {history.map((h) => (
               <li key={h.revision} className="card text-sm">
-                <p><strong>Revision {h.revision}</strong> · {h.changedBy} · {h.at.slice(0, 16).replace("T", " ")} UTC</p>
+                <p><strong>Revision {h.revision}</strong> · {h.changedBy} · <When iso={h.at} /></p>
                 <p className="text-flash-700">{h.reason}</p>
               </li>
             ))}
