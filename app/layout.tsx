@@ -11,6 +11,13 @@ export const metadata: Metadata = {
   description: "A live exchange for wholesale lots of vintage vacuum tubes, with the evidence to bid on them.",
 };
 
+/**
+ * Every page is rendered per request: the header shows who is signed in, and pages read live lots and prices.
+ * (Without this a page with no other request data would be prerendered at build time, signed out, and with
+ * the database of the build machine.)
+ */
+export const dynamic = "force-dynamic";
+
 export default async function RootLayout({ children }: { children: React.ReactNode }) {
   const viewer = await currentViewer().catch(() => null);
   return (
