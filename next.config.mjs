@@ -1,6 +1,17 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pg-boss", "bcryptjs", "nodemailer", "umzug", "sharp", "pdfkit", "stripe"],
+  serverExternalPackages: [
+    "sequelize",
+    "pg",
+    "pg-hstore",
+    "pg-boss",
+    "bcryptjs",
+    "nodemailer",
+    "umzug",
+    "sharp",
+    "pdfkit",
+    "stripe",
+  ],
   poweredByHeader: false,
   reactStrictMode: true,
   typedRoutes: false,

@@ -23,18 +23,27 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   return (
     <html lang="en" className={`${sans.variable} ${mono.variable}`}>
       <body className="flex min-h-screen flex-col">
-        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:px-3 focus:py-2">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:px-3 focus:py-2"
+        >
           Skip to content
         </a>
         <Providers>
           <SiteHeader viewer={viewer} />
-          <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8">{children}</main>
+          <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8">
+            {children}
+          </main>
         </Providers>
         <footer className="border-t border-flash-200 bg-white">
           <div className="mx-auto flex max-w-6xl flex-wrap gap-x-6 gap-y-2 px-4 py-4 text-sm text-flash-600">
             <span>Getterline Exchange</span>
-            <Link href="/cautions" className="underline underline-offset-2">Safety cautions: high voltage, glass and hazardous materials</Link>
-            <Link href="/reference" className="underline underline-offset-2">Valve reference</Link>
+            <Link href="/cautions" className="underline underline-offset-2">
+              Safety cautions: high voltage, glass and hazardous materials
+            </Link>
+            <Link href="/reference" className="underline underline-offset-2">
+              Valve reference
+            </Link>
           </div>
         </footer>
       </body>

@@ -3,7 +3,17 @@ import Link from "next/link";
 export type DeskAction = { href: string; title: string; text: string };
 
 /** A role's home: who you are here and the work you can start from it. */
-export function DeskHome({ title, intro, actions, children }: { title: string; intro: string; actions: DeskAction[]; children?: React.ReactNode }) {
+export function DeskHome({
+  title,
+  intro,
+  actions,
+  children,
+}: {
+  title: string;
+  intro: string;
+  actions: DeskAction[];
+  children?: React.ReactNode;
+}) {
   return (
     <div className="space-y-6">
       <header className="space-y-2">

@@ -5,20 +5,48 @@ import { usePathname } from "next/navigation";
 import { useEffect, useState } from "react";
 
 /** The header's links behind one button on narrow screens; closes when a page is chosen or Escape is pressed. */
-export function MenuButton({ items, children }: { items: { href: string; label: string }[]; children?: React.ReactNode }) {
+export function MenuButton({
+  items,
+  children,
+}: {
+  items: { href: string; label: string }[];
+  children?: React.ReactNode;
+}) {
   const [open, setOpen] = useState(false);
   const path = usePathname();
   useEffect(() => setOpen(false), [path]);
   return (
-    <div className="md:hidden" onKeyDown={(e) => { if (e.key === "Escape") setOpen(false); }}>
-      <button type="button" className="btn-quiet min-h-10 px-3" aria-expanded={open} aria-controls="phone-menu" onClick={() => setOpen(!open)}>
-        <span aria-hidden="true" className="mr-1">≡</span>Menu
+    <div
+      className="md:hidden"
+      onKeyDown={(e) => {
+        if (e.key === "Escape") setOpen(false);
+      }}
+    >
+      <button
+        type="button"
+        className="btn-quiet min-h-10 px-3"
+        aria-expanded={open}
+        aria-controls="phone-menu"
+        onClick={() => setOpen(!open)}
+      >
+        <span aria-hidden="true" className="mr-1">
+          ≡
+        </span>
+        Menu
       </button>
       {open ? (
-        <nav id="phone-menu" aria-label="Main" className="absolute inset-x-0 top-full z-30 border-b border-flash-200 bg-white px-4 py-2 shadow-md">
+        <nav
+          id="phone-menu"
+          aria-label="Main"
+          className="absolute inset-x-0 top-full z-30 border-b border-flash-200 bg-white px-4 py-2 shadow-md"
+        >
           <ul className="divide-y divide-flash-100">
             {items.map((i) => (
-              <li key={i.href}><Link href={i.href} className="block py-3 text-flash-800">{i.label}</Link></li>
+              <li key={i.href}>
+                <Link href={i.href} className="block py-3 text-flash-800">
+                  {i.label}
+                </Link>
+              </li>
             ))}
           </ul>
           {children}

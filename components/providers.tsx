@@ -6,7 +6,8 @@ import { useState, type ReactNode } from "react";
 /** Client-side data fetching (TanStack Query) for lists and live panels. */
 export function Providers({ children }: { children: ReactNode }) {
   const [client] = useState(
-    () => new QueryClient({ defaultOptions: { queries: { staleTime: 10_000, retry: 1, refetchOnWindowFocus: false } } }),
+    () =>
+      new QueryClient({ defaultOptions: { queries: { staleTime: 10_000, retry: 1, refetchOnWindowFocus: false } } }),
   );
   return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
 }

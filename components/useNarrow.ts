@@ -10,7 +10,11 @@ import { useSyncExternalStore } from "react";
 export function useNarrow(px = 768): boolean {
   const q = `(max-width: ${px - 1}px)`;
   return useSyncExternalStore(
-    (cb) => { const m = window.matchMedia(q); m.addEventListener("change", cb); return () => m.removeEventListener("change", cb); },
+    (cb) => {
+      const m = window.matchMedia(q);
+      m.addEventListener("change", cb);
+      return () => m.removeEventListener("change", cb);
+    },
     () => window.matchMedia(q).matches,
     () => false,
   );

@@ -16,7 +16,15 @@ export async function up({ context: qi }: Ctx): Promise<void> {
       `INSERT INTO valve_types (designation, aliases, data, source, revision, created_at, updated_at)
        VALUES (:designation, ARRAY[:aliases]::varchar[], :data::jsonb, :source, 1, :now, :now)
        ON CONFLICT (designation) DO NOTHING`,
-      { replacements: { designation, aliases: aliases.length ? [...aliases] : [""], data: JSON.stringify(data), source, now } },
+      {
+        replacements: {
+          designation,
+          aliases: aliases.length ? [...aliases] : [""],
+          data: JSON.stringify(data),
+          source,
+          now,
+        },
+      },
     );
   }
   await qi.sequelize.query(`UPDATE valve_types SET aliases = '{}' WHERE aliases = ARRAY['']::varchar[]`);

@@ -12,7 +12,12 @@ const now = { type: DataTypes.DATE, allowNull: false };
 export async function up({ context: qi }: Ctx): Promise<void> {
   await qi.createTable("lots", {
     id: { type: DataTypes.UUID, primaryKey: true },
-    consignor_id: { type: DataTypes.UUID, allowNull: false, references: { model: "users", key: "id" }, onDelete: "RESTRICT" },
+    consignor_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: "users", key: "id" },
+      onDelete: "RESTRICT",
+    },
     title: { type: DataTypes.STRING(140), allowNull: false },
     provenance: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
     shipping_origin: { type: DataTypes.STRING(140), allowNull: false, defaultValue: "" },
@@ -25,13 +30,22 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     reserve_agreed_at: { type: DataTypes.DATE, allowNull: true },
     submitted_at: { type: DataTypes.DATE, allowNull: true },
     approved_at: { type: DataTypes.DATE, allowNull: true },
-    approved_by: { type: DataTypes.UUID, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" },
+    approved_by: {
+      type: DataTypes.UUID,
+      allowNull: true,
+      references: { model: "users", key: "id" },
+      onDelete: "SET NULL",
+    },
     extra_review: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     created_at: now,
     updated_at: now,
   });
-  await qi.sequelize.query(`ALTER TABLE lots ADD CONSTRAINT lots_state CHECK (state IN ('draft','in-review','needs-changes','approved','declined'))`);
-  await qi.sequelize.query(`ALTER TABLE lots ADD CONSTRAINT lots_money CHECK (coalesce(estimate_low_cents,0) >= 0 AND coalesce(estimate_high_cents,0) >= coalesce(estimate_low_cents,0) AND coalesce(reserve_cents,0) >= 0)`);
+  await qi.sequelize.query(
+    `ALTER TABLE lots ADD CONSTRAINT lots_state CHECK (state IN ('draft','in-review','needs-changes','approved','declined'))`,
+  );
+  await qi.sequelize.query(
+    `ALTER TABLE lots ADD CONSTRAINT lots_money CHECK (coalesce(estimate_low_cents,0) >= 0 AND coalesce(estimate_high_cents,0) >= coalesce(estimate_low_cents,0) AND coalesce(reserve_cents,0) >= 0)`,
+  );
   await qi.addIndex("lots", ["consignor_id"]);
   await qi.addIndex("lots", ["state"]);
 
@@ -59,9 +73,15 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     created_at: now,
     updated_at: now,
   });
-  await qi.sequelize.query(`ALTER TABLE lot_items ADD CONSTRAINT lot_items_quantity CHECK (quantity BETWEEN 1 AND 10000)`);
-  await qi.sequelize.query(`ALTER TABLE lot_items ADD CONSTRAINT lot_items_condition CHECK (condition IN ('new-in-box','new-old-stock','used'))`);
-  await qi.sequelize.query(`ALTER TABLE lot_items ADD CONSTRAINT lot_items_basis CHECK (maker_basis IN ('source-code-confirmed','construction-matched','unconfirmed'))`);
+  await qi.sequelize.query(
+    `ALTER TABLE lot_items ADD CONSTRAINT lot_items_quantity CHECK (quantity BETWEEN 1 AND 10000)`,
+  );
+  await qi.sequelize.query(
+    `ALTER TABLE lot_items ADD CONSTRAINT lot_items_condition CHECK (condition IN ('new-in-box','new-old-stock','used'))`,
+  );
+  await qi.sequelize.query(
+    `ALTER TABLE lot_items ADD CONSTRAINT lot_items_basis CHECK (maker_basis IN ('source-code-confirmed','construction-matched','unconfirmed'))`,
+  );
   await qi.addIndex("lot_items", ["lot_id", "position"]);
   await qi.addIndex("lot_items", ["lot_id", "import_key"], { unique: true });
 
@@ -80,7 +100,12 @@ export async function up({ context: qi }: Ctx): Promise<void> {
   await qi.createTable("lot_photos", {
     id: { type: DataTypes.UUID, primaryKey: true },
     lot_id: { type: DataTypes.UUID, allowNull: false, references: { model: "lots", key: "id" }, onDelete: "CASCADE" },
-    item_id: { type: DataTypes.UUID, allowNull: true, references: { model: "lot_items", key: "id" }, onDelete: "SET NULL" },
+    item_id: {
+      type: DataTypes.UUID,
+      allowNull: true,
+      references: { model: "lot_items", key: "id" },
+      onDelete: "SET NULL",
+    },
     full_key: { type: DataTypes.STRING(200), allowNull: false },
     thumb_key: { type: DataTypes.STRING(200), allowNull: false },
     width: { type: DataTypes.INTEGER, allowNull: false },
@@ -96,7 +121,12 @@ export async function up({ context: qi }: Ctx): Promise<void> {
   await qi.createTable("lot_events", {
     id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true },
     lot_id: { type: DataTypes.UUID, allowNull: false, references: { model: "lots", key: "id" }, onDelete: "CASCADE" },
-    actor_id: { type: DataTypes.UUID, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" },
+    actor_id: {
+      type: DataTypes.UUID,
+      allowNull: true,
+      references: { model: "users", key: "id" },
+      onDelete: "SET NULL",
+    },
     kind: { type: DataTypes.STRING(24), allowNull: false },
     comment: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
     details: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },

@@ -16,14 +16,25 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     starts_at: { type: DataTypes.DATE, allowNull: false },
     soft_close_seconds: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 120 },
     is_demo: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
-    created_by: { type: DataTypes.UUID, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" },
+    created_by: {
+      type: DataTypes.UUID,
+      allowNull: true,
+      references: { model: "users", key: "id" },
+      onDelete: "SET NULL",
+    },
     created_at: now,
     updated_at: now,
   });
   await qi.createTable("sale_lots", {
     id: { type: DataTypes.UUID, primaryKey: true },
     sale_id: { type: DataTypes.UUID, allowNull: false, references: { model: "sales", key: "id" }, onDelete: "CASCADE" },
-    lot_id: { type: DataTypes.UUID, allowNull: false, unique: true, references: { model: "lots", key: "id" }, onDelete: "RESTRICT" },
+    lot_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      unique: true,
+      references: { model: "lots", key: "id" },
+      onDelete: "RESTRICT",
+    },
     position: { type: DataTypes.INTEGER, allowNull: false },
     consignor_id: { type: DataTypes.UUID, allowNull: false },
     phase: { type: DataTypes.STRING(16), allowNull: false, defaultValue: "open" },
@@ -38,19 +49,31 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     reserve_met: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     state: { type: DataTypes.JSONB, allowNull: false },
     closed_at: { type: DataTypes.DATE, allowNull: true },
-    buyer_id: { type: DataTypes.UUID, allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" },
+    buyer_id: {
+      type: DataTypes.UUID,
+      allowNull: true,
+      references: { model: "users", key: "id" },
+      onDelete: "SET NULL",
+    },
     hammer_cents: { type: DataTypes.INTEGER, allowNull: true },
     unsold_reason: { type: DataTypes.STRING(24), allowNull: true },
     created_at: now,
     updated_at: now,
   });
-  await qi.sequelize.query(`ALTER TABLE sale_lots ADD CONSTRAINT sale_lots_phase CHECK (phase IN ('open','sold','unsold','withdrawn'))`);
+  await qi.sequelize.query(
+    `ALTER TABLE sale_lots ADD CONSTRAINT sale_lots_phase CHECK (phase IN ('open','sold','unsold','withdrawn'))`,
+  );
   await qi.addIndex("sale_lots", ["sale_id", "position"]);
   await qi.addIndex("sale_lots", ["phase", "closes_at"]);
 
   await qi.createTable("bids", {
     id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true },
-    sale_lot_id: { type: DataTypes.UUID, allowNull: false, references: { model: "sale_lots", key: "id" }, onDelete: "CASCADE" },
+    sale_lot_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: "sale_lots", key: "id" },
+      onDelete: "CASCADE",
+    },
     seq: { type: DataTypes.INTEGER, allowNull: false },
     bidder_id: { type: DataTypes.UUID, allowNull: false, references: { model: "users", key: "id" } },
     max_cents: { type: DataTypes.INTEGER, allowNull: false },
@@ -75,7 +98,12 @@ export async function up({ context: qi }: Ctx): Promise<void> {
 
   await qi.createTable("watches", {
     user_id: { type: DataTypes.UUID, primaryKey: true, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
-    sale_lot_id: { type: DataTypes.UUID, primaryKey: true, references: { model: "sale_lots", key: "id" }, onDelete: "CASCADE" },
+    sale_lot_id: {
+      type: DataTypes.UUID,
+      primaryKey: true,
+      references: { model: "sale_lots", key: "id" },
+      onDelete: "CASCADE",
+    },
     created_at: now,
   });
 
@@ -91,7 +119,12 @@ export async function up({ context: qi }: Ctx): Promise<void> {
 
   await qi.createTable("outbid_mail", {
     user_id: { type: DataTypes.UUID, primaryKey: true, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
-    sale_lot_id: { type: DataTypes.UUID, primaryKey: true, references: { model: "sale_lots", key: "id" }, onDelete: "CASCADE" },
+    sale_lot_id: {
+      type: DataTypes.UUID,
+      primaryKey: true,
+      references: { model: "sale_lots", key: "id" },
+      onDelete: "CASCADE",
+    },
     last_sent_at: now,
   });
 }

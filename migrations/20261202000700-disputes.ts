@@ -12,16 +12,36 @@ const now = { type: DataTypes.DATE, allowNull: false };
  */
 export async function up({ context: qi }: Ctx): Promise<void> {
   await qi.addColumn("lot_items", "sold_as_set", { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false });
-  await qi.addColumn("invoices", "hammer_refunded_cents", { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
-  await qi.addColumn("invoices", "premium_refunded_cents", { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
-  await qi.addColumn("invoices", "commission_returned_cents", { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
-  await qi.sequelize.query(`ALTER TABLE invoices ADD CONSTRAINT invoices_refunds CHECK (hammer_refunded_cents BETWEEN 0 AND hammer_cents AND premium_refunded_cents BETWEEN 0 AND premium_cents AND commission_returned_cents BETWEEN 0 AND commission_cents)`);
+  await qi.addColumn("invoices", "hammer_refunded_cents", {
+    type: DataTypes.INTEGER,
+    allowNull: false,
+    defaultValue: 0,
+  });
+  await qi.addColumn("invoices", "premium_refunded_cents", {
+    type: DataTypes.INTEGER,
+    allowNull: false,
+    defaultValue: 0,
+  });
+  await qi.addColumn("invoices", "commission_returned_cents", {
+    type: DataTypes.INTEGER,
+    allowNull: false,
+    defaultValue: 0,
+  });
+  await qi.sequelize.query(
+    `ALTER TABLE invoices ADD CONSTRAINT invoices_refunds CHECK (hammer_refunded_cents BETWEEN 0 AND hammer_cents AND premium_refunded_cents BETWEEN 0 AND premium_cents AND commission_returned_cents BETWEEN 0 AND commission_cents)`,
+  );
 
   await qi.sequelize.query(`CREATE SEQUENCE IF NOT EXISTS dispute_numbers START 101`);
   await qi.createTable("disputes", {
     id: { type: DataTypes.UUID, primaryKey: true },
     number: { type: DataTypes.STRING(24), allowNull: false, unique: true },
-    invoice_id: { type: DataTypes.UUID, allowNull: false, unique: true, references: { model: "invoices", key: "id" }, onDelete: "RESTRICT" },
+    invoice_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      unique: true,
+      references: { model: "invoices", key: "id" },
+      onDelete: "RESTRICT",
+    },
     lot_id: { type: DataTypes.UUID, allowNull: false, references: { model: "lots", key: "id" }, onDelete: "RESTRICT" },
     buyer_id: { type: DataTypes.UUID, allowNull: false, references: { model: "users", key: "id" } },
     consignor_id: { type: DataTypes.UUID, allowNull: false, references: { model: "users", key: "id" } },
@@ -49,24 +69,47 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     created_at: now,
     updated_at: now,
   });
-  await qi.sequelize.query(`ALTER TABLE disputes ADD CONSTRAINT disputes_state CHECK (state IN ('awaiting-answer','answered','with-mediator','settling','awaiting-return','closed'))`);
-  await qi.sequelize.query(`ALTER TABLE disputes ADD CONSTRAINT disputes_outcome CHECK (outcome IS NULL OR outcome IN ('dismissed','partial-refund','refund-on-return'))`);
+  await qi.sequelize.query(
+    `ALTER TABLE disputes ADD CONSTRAINT disputes_state CHECK (state IN ('awaiting-answer','answered','with-mediator','settling','awaiting-return','closed'))`,
+  );
+  await qi.sequelize.query(
+    `ALTER TABLE disputes ADD CONSTRAINT disputes_outcome CHECK (outcome IS NULL OR outcome IN ('dismissed','partial-refund','refund-on-return'))`,
+  );
   // Decided once: an outcome always carries who decided and when.
-  await qi.sequelize.query(`ALTER TABLE disputes ADD CONSTRAINT disputes_decided CHECK ((outcome IS NULL) = (decided_at IS NULL) AND (outcome IS NULL) = (decided_by IS NULL))`);
+  await qi.sequelize.query(
+    `ALTER TABLE disputes ADD CONSTRAINT disputes_decided CHECK ((outcome IS NULL) = (decided_at IS NULL) AND (outcome IS NULL) = (decided_by IS NULL))`,
+  );
   await qi.addIndex("disputes", ["state"]);
   await qi.addIndex("disputes", ["buyer_id"]);
   await qi.addIndex("disputes", ["consignor_id"]);
   await qi.addIndex("disputes", ["mediator_id"]);
 
   await qi.createTable("dispute_items", {
-    dispute_id: { type: DataTypes.UUID, allowNull: false, primaryKey: true, references: { model: "disputes", key: "id" }, onDelete: "CASCADE" },
-    lot_item_id: { type: DataTypes.UUID, allowNull: false, primaryKey: true, references: { model: "lot_items", key: "id" }, onDelete: "RESTRICT" },
+    dispute_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      primaryKey: true,
+      references: { model: "disputes", key: "id" },
+      onDelete: "CASCADE",
+    },
+    lot_item_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      primaryKey: true,
+      references: { model: "lot_items", key: "id" },
+      onDelete: "RESTRICT",
+    },
     tubes: { type: DataTypes.INTEGER, allowNull: false },
     report: { type: DataTypes.JSONB, allowNull: false },
   });
   await qi.createTable("dispute_messages", {
     id: { type: DataTypes.UUID, primaryKey: true },
-    dispute_id: { type: DataTypes.UUID, allowNull: false, references: { model: "disputes", key: "id" }, onDelete: "CASCADE" },
+    dispute_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: "disputes", key: "id" },
+      onDelete: "CASCADE",
+    },
     author_id: { type: DataTypes.UUID, allowNull: true, references: { model: "users", key: "id" } },
     author_role: { type: DataTypes.STRING(16), allowNull: false },
     body: { type: DataTypes.TEXT, allowNull: false },
@@ -74,10 +117,17 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     created_at: now,
   });
   await qi.addIndex("dispute_messages", ["dispute_id", "created_at"]);
-  await qi.sequelize.query(`CREATE UNIQUE INDEX dispute_messages_once ON dispute_messages (dispute_id, author_id, client_key) WHERE client_key IS NOT NULL`);
+  await qi.sequelize.query(
+    `CREATE UNIQUE INDEX dispute_messages_once ON dispute_messages (dispute_id, author_id, client_key) WHERE client_key IS NOT NULL`,
+  );
   await qi.createTable("dispute_evidence", {
     id: { type: DataTypes.UUID, primaryKey: true },
-    dispute_id: { type: DataTypes.UUID, allowNull: false, references: { model: "disputes", key: "id" }, onDelete: "CASCADE" },
+    dispute_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: "disputes", key: "id" },
+      onDelete: "CASCADE",
+    },
     author_id: { type: DataTypes.UUID, allowNull: false, references: { model: "users", key: "id" } },
     author_role: { type: DataTypes.STRING(16), allowNull: false },
     lot_item_id: { type: DataTypes.UUID, allowNull: true, references: { model: "lot_items", key: "id" } },
@@ -99,7 +149,9 @@ export async function up({ context: qi }: Ctx): Promise<void> {
       RAISE EXCEPTION 'dispute evidence and messages cannot be changed once posted';
     END $$ LANGUAGE plpgsql`);
   for (const table of ["dispute_items", "dispute_messages", "dispute_evidence"]) {
-    await qi.sequelize.query(`CREATE TRIGGER ${table}_immutable BEFORE UPDATE OR DELETE ON ${table} FOR EACH ROW EXECUTE FUNCTION dispute_record_immutable()`);
+    await qi.sequelize.query(
+      `CREATE TRIGGER ${table}_immutable BEFORE UPDATE OR DELETE ON ${table} FOR EACH ROW EXECUTE FUNCTION dispute_record_immutable()`,
+    );
   }
 }
 
@@ -108,6 +160,7 @@ export async function down({ context: qi }: Ctx): Promise<void> {
   await qi.sequelize.query(`DROP FUNCTION IF EXISTS dispute_record_immutable()`);
   await qi.sequelize.query(`DROP SEQUENCE IF EXISTS dispute_numbers`);
   await qi.sequelize.query(`ALTER TABLE invoices DROP CONSTRAINT IF EXISTS invoices_refunds`);
-  for (const c of ["hammer_refunded_cents", "premium_refunded_cents", "commission_returned_cents"]) await qi.removeColumn("invoices", c);
+  for (const c of ["hammer_refunded_cents", "premium_refunded_cents", "commission_returned_cents"])
+    await qi.removeColumn("invoices", c);
   await qi.removeColumn("lot_items", "sold_as_set");
 }

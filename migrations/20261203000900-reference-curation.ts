@@ -6,7 +6,10 @@ type Ctx = { context: QueryInterface };
 /** Review fixes to first-release rows, applied only where the house has not edited the row. */
 const FIXES: readonly { designation: string; reason: string }[] = [
   { designation: "5Y3GT", reason: "Seed correction: 5Y3GT is directly heated (filament flag) [REG MEM]" },
-  { designation: "5AR4", reason: "Seed correction: in place of 5U4GB/5Y3GT a 5AR4 gives higher output voltage (lower drop) [MEM]" },
+  {
+    designation: "5AR4",
+    reason: "Seed correction: in place of 5U4GB/5Y3GT a 5AR4 gives higher output voltage (lower drop) [MEM]",
+  },
 ];
 
 /**
@@ -16,7 +19,8 @@ const FIXES: readonly { designation: string; reason: string }[] = [
  * service-bench seed rows, added where missing (rows the house has are kept).
  */
 export async function up({ context: qi }: Ctx): Promise<void> {
-  const q = (sql: string, replacements?: Record<string, unknown>) => qi.sequelize.query(sql, replacements ? { replacements } : {});
+  const q = (sql: string, replacements?: Record<string, unknown>) =>
+    qi.sequelize.query(sql, replacements ? { replacements } : {});
   await qi.addColumn("valve_types", "retired_at", { type: DataTypes.DATE, allowNull: true });
   await q(`CREATE TABLE reference_revision (id smallint PRIMARY KEY CHECK (id = 1), revision bigint NOT NULL)`);
   await q(`INSERT INTO reference_revision (id, revision) VALUES (1, 1)`);
@@ -45,14 +49,26 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     const seed = SEED_REFERENCE_TYPES.find((r) => r.designation === fix.designation);
     if (!seed) continue;
     const { designation, aliases: _a, source, ...data } = seed;
-    const [rows] = await q(`SELECT data FROM valve_types WHERE designation = :designation AND revision = 1 AND updated_by IS NULL`, { designation });
+    const [rows] = await q(
+      `SELECT data FROM valve_types WHERE designation = :designation AND revision = 1 AND updated_by IS NULL`,
+      { designation },
+    );
     const before = (rows as { data: unknown }[])[0]?.data;
     if (!before || JSON.stringify(before) === JSON.stringify(data)) continue;
-    await q(`UPDATE valve_types SET data = :data::jsonb, revision = 2, updated_at = :now WHERE designation = :designation`, { designation, data: JSON.stringify(data), now });
+    await q(
+      `UPDATE valve_types SET data = :data::jsonb, revision = 2, updated_at = :now WHERE designation = :designation`,
+      { designation, data: JSON.stringify(data), now },
+    );
     await q(
       `INSERT INTO valve_type_revisions (designation, revision, changed_by, reason, before, after, created_at)
        VALUES (:designation, 2, NULL, :reason, :before::jsonb, :after::jsonb, :now)`,
-      { designation, reason: fix.reason, before: JSON.stringify({ ...(before as object), source }), after: JSON.stringify({ ...data, source }), now },
+      {
+        designation,
+        reason: fix.reason,
+        before: JSON.stringify({ ...(before as object), source }),
+        after: JSON.stringify({ ...data, source }),
+        now,
+      },
     );
   }
 }

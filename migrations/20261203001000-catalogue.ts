@@ -37,19 +37,32 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     search_text: { type: DataTypes.TEXT, allowNull: false },
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await qi.sequelize.query(`ALTER TABLE catalogue_entries ADD CONSTRAINT catalogue_stage CHECK (stage IN ('listed','in-sale','sold'))`);
-  await qi.sequelize.query(`ALTER TABLE catalogue_entries ADD COLUMN search_tsv tsvector GENERATED ALWAYS AS (to_tsvector('simple', search_text)) STORED`);
+  await qi.sequelize.query(
+    `ALTER TABLE catalogue_entries ADD CONSTRAINT catalogue_stage CHECK (stage IN ('listed','in-sale','sold'))`,
+  );
+  await qi.sequelize.query(
+    `ALTER TABLE catalogue_entries ADD COLUMN search_tsv tsvector GENERATED ALWAYS AS (to_tsvector('simple', search_text)) STORED`,
+  );
   await qi.sequelize.query(`CREATE INDEX catalogue_designations ON catalogue_entries USING gin (designations)`);
   await qi.sequelize.query(`CREATE INDEX catalogue_families ON catalogue_entries USING gin (families)`);
   await qi.sequelize.query(`CREATE INDEX catalogue_tsv ON catalogue_entries USING gin (search_tsv)`);
   await qi.sequelize.query(`CREATE INDEX catalogue_newest ON catalogue_entries (listed_at DESC, lot_id DESC)`);
-  await qi.sequelize.query(`CREATE INDEX catalogue_closing ON catalogue_entries (closes_at, lot_id) WHERE stage = 'in-sale'`);
+  await qi.sequelize.query(
+    `CREATE INDEX catalogue_closing ON catalogue_entries (closes_at, lot_id) WHERE stage = 'in-sale'`,
+  );
   await qi.sequelize.query(`CREATE INDEX catalogue_estimate ON catalogue_entries (estimate_low_cents, lot_id)`);
-  await qi.sequelize.query(`CREATE INDEX catalogue_stage_newest ON catalogue_entries (stage, listed_at DESC, lot_id DESC)`);
+  await qi.sequelize.query(
+    `CREATE INDEX catalogue_stage_newest ON catalogue_entries (stage, listed_at DESC, lot_id DESC)`,
+  );
 
   await qi.createTable("want_lists", {
     id: { type: DataTypes.UUID, primaryKey: true },
-    dealer_id: { type: DataTypes.UUID, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
+    dealer_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: "users", key: "id" },
+      onDelete: "CASCADE",
+    },
     name: { type: DataTypes.STRING(80), allowNull: false },
     criteria: { type: DataTypes.JSONB, allowNull: false },
     designations: { type: DataTypes.ARRAY(DataTypes.STRING(40)), allowNull: false },
@@ -58,10 +71,17 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     created_at: { type: DataTypes.DATE, allowNull: false },
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await qi.sequelize.query(`CREATE INDEX want_lists_designations ON want_lists USING gin (designations) WHERE NOT paused`);
+  await qi.sequelize.query(
+    `CREATE INDEX want_lists_designations ON want_lists USING gin (designations) WHERE NOT paused`,
+  );
   await qi.addIndex("want_lists", ["dealer_id"]);
   await qi.createTable("want_list_hits", {
-    want_list_id: { type: DataTypes.UUID, allowNull: false, references: { model: "want_lists", key: "id" }, onDelete: "CASCADE" },
+    want_list_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: "want_lists", key: "id" },
+      onDelete: "CASCADE",
+    },
     lot_id: { type: DataTypes.UUID, allowNull: false, references: { model: "lots", key: "id" }, onDelete: "CASCADE" },
     dealer_id: { type: DataTypes.UUID, allowNull: false },
     summary: { type: DataTypes.STRING(300), allowNull: false },
@@ -69,9 +89,16 @@ export async function up({ context: qi }: Ctx): Promise<void> {
     mailed_at: { type: DataTypes.DATE, allowNull: true },
   });
   await qi.sequelize.query(`ALTER TABLE want_list_hits ADD PRIMARY KEY (want_list_id, lot_id)`);
-  await qi.sequelize.query(`CREATE INDEX want_list_hits_unmailed ON want_list_hits (dealer_id) WHERE mailed_at IS NULL`);
+  await qi.sequelize.query(
+    `CREATE INDEX want_list_hits_unmailed ON want_list_hits (dealer_id) WHERE mailed_at IS NULL`,
+  );
   await qi.createTable("want_list_mail", {
-    dealer_id: { type: DataTypes.UUID, primaryKey: true, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
+    dealer_id: {
+      type: DataTypes.UUID,
+      primaryKey: true,
+      references: { model: "users", key: "id" },
+      onDelete: "CASCADE",
+    },
     digest_enabled: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
     last_digest_at: { type: DataTypes.DATE, allowNull: true },
   });

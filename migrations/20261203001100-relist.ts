@@ -8,7 +8,9 @@ type Ctx = { context: QueryInterface };
  */
 export async function up({ context: qi }: Ctx): Promise<void> {
   await qi.sequelize.query(`ALTER TABLE sale_lots DROP CONSTRAINT IF EXISTS sale_lots_lot_id_key`);
-  await qi.sequelize.query(`CREATE UNIQUE INDEX sale_lots_one_live_per_lot ON sale_lots (lot_id) WHERE phase IN ('open', 'sold')`);
+  await qi.sequelize.query(
+    `CREATE UNIQUE INDEX sale_lots_one_live_per_lot ON sale_lots (lot_id) WHERE phase IN ('open', 'sold')`,
+  );
   await qi.sequelize.query(`CREATE INDEX sale_lots_lot_id ON sale_lots (lot_id)`);
 }
 

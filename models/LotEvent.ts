@@ -1,8 +1,15 @@
 import {
-  DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
 } from "sequelize";
 
-export type LotEventKind = "created" | "submitted" | "changes-requested" | "approved" | "declined" | "amended" | "imported";
+export type LotEventKind =
+  "created" | "submitted" | "changes-requested" | "approved" | "declined" | "amended" | "imported";
 
 /** The dated trail of a lot: submissions, review decisions with comments, amendments after approval. */
 export class LotEvent extends Model<InferAttributes<LotEvent>, InferCreationAttributes<LotEvent>> {
@@ -18,7 +25,14 @@ export class LotEvent extends Model<InferAttributes<LotEvent>, InferCreationAttr
   static initModel(sequelize: Sequelize): typeof LotEvent {
     LotEvent.init(
       {
-        id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true, get() { return Number(this.getDataValue("id")); } },
+        id: {
+          type: DataTypes.BIGINT,
+          autoIncrement: true,
+          primaryKey: true,
+          get() {
+            return Number(this.getDataValue("id"));
+          },
+        },
         lotId: { type: DataTypes.UUID, allowNull: false },
         actorId: { type: DataTypes.UUID, allowNull: true },
         kind: { type: DataTypes.STRING(24), allowNull: false },
@@ -46,7 +60,14 @@ export class LotImport extends Model<InferAttributes<LotImport>, InferCreationAt
   static initModel(sequelize: Sequelize): typeof LotImport {
     LotImport.init(
       {
-        id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true, get() { return Number(this.getDataValue("id")); } },
+        id: {
+          type: DataTypes.BIGINT,
+          autoIncrement: true,
+          primaryKey: true,
+          get() {
+            return Number(this.getDataValue("id"));
+          },
+        },
         lotId: { type: DataTypes.UUID, allowNull: false },
         fingerprint: { type: DataTypes.STRING(64), allowNull: false },
         fileName: { type: DataTypes.STRING(200), allowNull: false, defaultValue: "" },

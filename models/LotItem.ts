@@ -1,6 +1,11 @@
 import type { TubeReading } from "../lib/lots/item";
 import {
-  DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
 } from "sequelize";
 
 export type ItemCondition = "new-in-box" | "new-old-stock" | "used";

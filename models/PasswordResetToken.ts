@@ -1,10 +1,19 @@
 import {
-  DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
 } from "sequelize";
 import type { User } from "./User";
 
 /** A single-use password reset link; only the SHA-256 of the token is stored. */
-export class PasswordResetToken extends Model<InferAttributes<PasswordResetToken>, InferCreationAttributes<PasswordResetToken>> {
+export class PasswordResetToken extends Model<
+  InferAttributes<PasswordResetToken>,
+  InferCreationAttributes<PasswordResetToken>
+> {
   declare id: CreationOptional<number>;
   declare userId: ForeignKey<User["id"]>;
   declare tokenHash: string;
@@ -15,7 +24,14 @@ export class PasswordResetToken extends Model<InferAttributes<PasswordResetToken
   static initModel(sequelize: Sequelize): typeof PasswordResetToken {
     PasswordResetToken.init(
       {
-        id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true, get() { return Number(this.getDataValue("id")); } },
+        id: {
+          type: DataTypes.BIGINT,
+          autoIncrement: true,
+          primaryKey: true,
+          get() {
+            return Number(this.getDataValue("id"));
+          },
+        },
         tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
         expiresAt: { type: DataTypes.DATE, allowNull: false },
         usedAt: { type: DataTypes.DATE, allowNull: true },

@@ -1,5 +1,11 @@
 import {
-  DataTypes, Model, Op, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes,
+  Model,
+  Op,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
 } from "sequelize";
 
 /** One sign-in try, kept for rate limiting across app instances. */
@@ -11,7 +17,11 @@ export class SignInAttempt extends Model<InferAttributes<SignInAttempt>, InferCr
   declare createdAt: CreationOptional<Date>;
 
   /** Failed attempts since `since` for an account and for an address. */
-  static async recentFailures(email: string, ip: string, since: Date): Promise<{ byAccount: number; byAddress: number }> {
+  static async recentFailures(
+    email: string,
+    ip: string,
+    since: Date,
+  ): Promise<{ byAccount: number; byAddress: number }> {
     const [byAccount, byAddress] = await Promise.all([
       SignInAttempt.count({ where: { email, succeeded: false, createdAt: { [Op.gte]: since } } }),
       SignInAttempt.count({ where: { ip, succeeded: false, createdAt: { [Op.gte]: since } } }),
@@ -22,7 +32,14 @@ export class SignInAttempt extends Model<InferAttributes<SignInAttempt>, InferCr
   static initModel(sequelize: Sequelize): typeof SignInAttempt {
     SignInAttempt.init(
       {
-        id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true, get() { return Number(this.getDataValue("id")); } },
+        id: {
+          type: DataTypes.BIGINT,
+          autoIncrement: true,
+          primaryKey: true,
+          get() {
+            return Number(this.getDataValue("id"));
+          },
+        },
         email: { type: DataTypes.STRING(254), allowNull: false },
         ip: { type: DataTypes.STRING(64), allowNull: false },
         succeeded: { type: DataTypes.BOOLEAN, allowNull: false },

@@ -1,5 +1,10 @@
 import {
-  DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
 } from "sequelize";
 import { ROLES, type Role } from "../lib/auth/roles";
 
@@ -23,13 +28,19 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
       {
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         email: {
-          type: DataTypes.STRING(254), allowNull: false, unique: true,
-          set(v: string) { this.setDataValue("email", v.trim().toLowerCase()); },
+          type: DataTypes.STRING(254),
+          allowNull: false,
+          unique: true,
+          set(v: string) {
+            this.setDataValue("email", v.trim().toLowerCase());
+          },
         },
         displayName: { type: DataTypes.STRING(80), allowNull: false },
         passwordHash: { type: DataTypes.STRING(100), allowNull: false },
         roles: {
-          type: DataTypes.ARRAY(DataTypes.STRING(16)), allowNull: false, defaultValue: [],
+          type: DataTypes.ARRAY(DataTypes.STRING(16)),
+          allowNull: false,
+          defaultValue: [],
           validate: {
             known(v: string[]) {
               for (const r of v) if (!(ROLES as readonly string[]).includes(r)) throw new Error(`unknown role ${r}`);

@@ -1,5 +1,12 @@
 import {
-  DataTypes, Model, Op, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type Transaction,
+  DataTypes,
+  Model,
+  Op,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+  type Transaction,
 } from "sequelize";
 import type { ReferenceType } from "../lib/valves/reference-row";
 
@@ -21,12 +28,20 @@ export class ValveType extends Model<InferAttributes<ValveType>, InferCreationAt
 
   /** The row as the pure code's ReferenceType. */
   toReference(): ReferenceType {
-    return { ...this.data, designation: this.designation, aliases: this.aliases, source: this.source as ReferenceType["source"] };
+    return {
+      ...this.data,
+      designation: this.designation,
+      aliases: this.aliases,
+      source: this.source as ReferenceType["source"],
+    };
   }
 
   /** Find by designation or alias (already normalised), retired rows included. */
   static findByName(name: string, transaction?: Transaction): Promise<ValveType | null> {
-    return ValveType.findOne({ where: { [Op.or]: [{ designation: name }, { aliases: { [Op.contains]: [name] } }] }, transaction });
+    return ValveType.findOne({
+      where: { [Op.or]: [{ designation: name }, { aliases: { [Op.contains]: [name] } }] },
+      transaction,
+    });
   }
 
   /** The rows on file (not retired), in designation order. */
@@ -60,7 +75,10 @@ export class ValveType extends Model<InferAttributes<ValveType>, InferCreationAt
 }
 
 /** One recorded change to a reference row: who, when, why, before and after. */
-export class ValveTypeRevision extends Model<InferAttributes<ValveTypeRevision>, InferCreationAttributes<ValveTypeRevision>> {
+export class ValveTypeRevision extends Model<
+  InferAttributes<ValveTypeRevision>,
+  InferCreationAttributes<ValveTypeRevision>
+> {
   declare id: CreationOptional<number>;
   declare designation: string;
   declare revision: number;
@@ -74,7 +92,14 @@ export class ValveTypeRevision extends Model<InferAttributes<ValveTypeRevision>,
   static initModel(sequelize: Sequelize): typeof ValveTypeRevision {
     ValveTypeRevision.init(
       {
-        id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true, get() { return Number(this.getDataValue("id")); } },
+        id: {
+          type: DataTypes.BIGINT,
+          autoIncrement: true,
+          primaryKey: true,
+          get() {
+            return Number(this.getDataValue("id"));
+          },
+        },
         designation: { type: DataTypes.STRING(32), allowNull: false },
         revision: { type: DataTypes.INTEGER, allowNull: false },
         changedBy: { type: DataTypes.UUID, allowNull: true },

@@ -61,4 +61,18 @@ export function db(): Sequelize {
 }
 
 export { Notice, Sale, SaleLot };
-export { Lot, LotEvent, LotImport, LotItem, LotPhoto, Maker, MakerCode, PasswordResetToken, ShelfTube, SignInAttempt, User, ValveType, ValveTypeRevision };
+export {
+  Lot,
+  LotEvent,
+  LotImport,
+  LotItem,
+  LotPhoto,
+  Maker,
+  MakerCode,
+  PasswordResetToken,
+  ShelfTube,
+  SignInAttempt,
+  User,
+  ValveType,
+  ValveTypeRevision,
+};

@@ -36,7 +36,11 @@ for (let i = 0; i < count; i += 1) {
     shorts: rand() < 0.01,
     gas: rand() < 0.01,
   });
-  tubes.push({ id: `demo-${i}`, gm: Math.round(gm * 10) / 10, plateCurrentMa: Math.round(70 * (gm / 95) ** 0.8 * (1 + 0.06 * gauss()) * 10) / 10 });
+  tubes.push({
+    id: `demo-${i}`,
+    gm: Math.round(gm * 10) / 10,
+    plateCurrentMa: Math.round(70 * (gm / 95) ** 0.8 * (1 + 0.06 * gauss()) * 10) / 10,
+  });
 }
 
 const mb = (bytes: number) => `${(bytes / 1048576).toFixed(1)} MB`;
@@ -47,17 +51,25 @@ function time<T>(label: string, run: () => T, describe: (result: T) => string): 
   const result = run();
   const ms = performance.now() - started;
   const after = process.memoryUsage().heapUsed;
-  console.log(`${label.padEnd(34)} ${ms.toFixed(1).padStart(9)} ms   heap ${mb(after)} (Δ ${mb(after - before)})   ${describe(result)}`);
+  console.log(
+    `${label.padEnd(34)} ${ms.toFixed(1).padStart(9)} ms   heap ${mb(after)} (Δ ${mb(after - before)})   ${describe(result)}`,
+  );
 }
 const describeMatch = (r: MatchResult) =>
   `${r.sets.length} sets, ${r.unmatched.length} unmatched, bound ${r.upperBound}, ${r.proven ? "proven largest" : "not proven"}`;
 
 console.log(`${count} synthetic readings, tolerance ${tolerancePct} %, node ${process.version}`);
-time("grading", () => readings.map((r) => gradeReading(r)), (g) => {
-  const tally: Record<string, number> = {};
-  for (const r of g) tally[r.grade] = (tally[r.grade] ?? 0) + 1;
-  return Object.entries(tally).map(([k, v]) => `${k} ${v}`).join(", ");
-});
+time(
+  "grading",
+  () => readings.map((r) => gradeReading(r)),
+  (g) => {
+    const tally: Record<string, number> = {};
+    for (const r of g) tally[r.grade] = (tally[r.grade] ?? 0) + 1;
+    return Object.entries(tally)
+      .map(([k, v]) => `${k} ${v}`)
+      .join(", ");
+  },
+);
 time("pairs, Gm", () => findMatchedPairs(tubes, { tolerancePct }), describeMatch);
 time("pairs, Gm + plate current", () => findMatchedPairs(tubes, { tolerancePct, onPlateCurrent: true }), describeMatch);
 time("quads, Gm", () => findMatchedQuads(tubes, { tolerancePct }), describeMatch);

@@ -30,7 +30,10 @@ const ensureDatabase = (url: string) =>
     }
   });
 
-const dropDatabase = (url: string) => onServer(url, async (c, _name, quoted) => { await c.query(`DROP DATABASE IF EXISTS ${quoted} WITH (FORCE)`); });
+const dropDatabase = (url: string) =>
+  onServer(url, async (c, _name, quoted) => {
+    await c.query(`DROP DATABASE IF EXISTS ${quoted} WITH (FORCE)`);
+  });
 
 async function main(): Promise<void> {
   const cmd = process.argv[2] ?? "up";
@@ -42,8 +45,10 @@ async function main(): Promise<void> {
   try {
     if (cmd === "up") await migrator(s).up();
     else if (cmd === "down") await migrator(s).down();
-    else if (cmd === "seed" || cmd === "fresh") { await migrator(s).up(); await seeder(s).up(); }
-    else if (cmd === "reset") {
+    else if (cmd === "seed" || cmd === "fresh") {
+      await migrator(s).up();
+      await seeder(s).up();
+    } else if (cmd === "reset") {
       await seeder(s).down({ to: 0 });
       await migrator(s).down({ to: 0 });
       await migrator(s).up();
@@ -54,4 +59,7 @@ async function main(): Promise<void> {
   }
 }
 
-main().catch((e) => { console.error(e); process.exit(1); });
+main().catch((e) => {
+  console.error(e);
+  process.exit(1);
+});

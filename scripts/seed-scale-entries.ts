@@ -13,7 +13,22 @@ import { db } from "../models";
 
 const BATCH = 2_000;
 
-type ItemRow = { lot_id: string; id: string; position: number; designation_typed: string; designation: string; designation_known: boolean; quantity: number; label_brand: string; maker_name: string | null; maker_basis: ItemView["makerBasis"]; condition: ItemView["condition"]; vacuum_loss: boolean; hazards: string[]; readings: ItemView["readings"] };
+type ItemRow = {
+  lot_id: string;
+  id: string;
+  position: number;
+  designation_typed: string;
+  designation: string;
+  designation_known: boolean;
+  quantity: number;
+  label_brand: string;
+  maker_name: string | null;
+  maker_basis: ItemView["makerBasis"];
+  condition: ItemView["condition"];
+  vacuum_loss: boolean;
+  hazards: string[];
+  readings: ItemView["readings"];
+};
 
 async function entries(): Promise<number> {
   const reference = await currentReferenceTable();
@@ -22,15 +37,35 @@ async function entries(): Promise<number> {
     const ids = lots.slice(i, i + BATCH).map((l) => l.id);
     const rows = await db().query<ItemRow>(
       `SELECT lot_id, id, position, designation_typed, designation, designation_known, quantity, label_brand, maker_name, maker_basis, condition, vacuum_loss, hazards, readings
-         FROM lot_items WHERE lot_id IN (:ids) ORDER BY lot_id, position`, { replacements: { ids }, type: QueryTypes.SELECT });
+         FROM lot_items WHERE lot_id IN (:ids) ORDER BY lot_id, position`,
+      { replacements: { ids }, type: QueryTypes.SELECT },
+    );
     const byLot = new Map<string, ItemRow[]>();
     for (const r of rows) byLot.set(r.lot_id, [...(byLot.get(r.lot_id) ?? []), r]);
     const computed = ids.map((id) => {
-      const items = (byLot.get(id) ?? []).map((r) => toDomainItem(reference, {
-        id: r.id, position: r.position, designationTyped: r.designation_typed, designation: r.designation, designationKnown: r.designation_known, quantity: r.quantity,
-        labelBrand: r.label_brand, makerName: r.maker_name, makerBasis: r.maker_basis, sourceCode: null, dateCode: null, features: {}, condition: r.condition,
-        vacuumLoss: r.vacuum_loss, soldAsSet: false, defects: [], hazards: r.hazards, readings: r.readings, notes: "",
-      } as ItemView));
+      const items = (byLot.get(id) ?? []).map((r) =>
+        toDomainItem(reference, {
+          id: r.id,
+          position: r.position,
+          designationTyped: r.designation_typed,
+          designation: r.designation,
+          designationKnown: r.designation_known,
+          quantity: r.quantity,
+          labelBrand: r.label_brand,
+          makerName: r.maker_name,
+          makerBasis: r.maker_basis,
+          sourceCode: null,
+          dateCode: null,
+          features: {},
+          condition: r.condition,
+          vacuumLoss: r.vacuum_loss,
+          soldAsSet: false,
+          defects: [],
+          hazards: r.hazards,
+          readings: r.readings,
+          notes: "",
+        } as ItemView),
+      );
       return { lot_id: id, ...aggregateLot(items, summariseLot(items, { reference, comparables: [] })) };
     });
     await db().query(
@@ -48,21 +83,42 @@ async function entries(): Promise<number> {
          JOIN lots l ON l.id = a.lot_id LEFT JOIN sale_lots sl ON sl.lot_id = l.id LEFT JOIN sales s ON s.id = sl.sale_id`,
       { replacements: { rows: JSON.stringify(computed) } },
     );
-    if ((i / BATCH) % 10 === 0) console.log(`seed:scale   catalogue entries ${Math.min(i + BATCH, lots.length).toLocaleString("en")} of ${lots.length.toLocaleString("en")}`);
+    if ((i / BATCH) % 10 === 0)
+      console.log(
+        `seed:scale   catalogue entries ${Math.min(i + BATCH, lots.length).toLocaleString("en")} of ${lots.length.toLocaleString("en")}`,
+      );
   }
   return lots.length;
 }
 
 async function wantLists(count: number): Promise<void> {
   const reference = await currentReferenceTable();
-  const dealers = await db().query<{ id: string }>(`SELECT id FROM users WHERE 'dealer' = ANY(roles) ORDER BY email`, { type: QueryTypes.SELECT });
-  const types = (await db().query<{ designation: string }>(`SELECT DISTINCT designation FROM lot_items`, { type: QueryTypes.SELECT })).map((t) => t.designation).sort();
+  const dealers = await db().query<{ id: string }>(`SELECT id FROM users WHERE 'dealer' = ANY(roles) ORDER BY email`, {
+    type: QueryTypes.SELECT,
+  });
+  const types = (
+    await db().query<{ designation: string }>(`SELECT DISTINCT designation FROM lot_items`, { type: QueryTypes.SELECT })
+  )
+    .map((t) => t.designation)
+    .sort();
   const rows = Array.from({ length: count }, (_, k) => {
     const criteria: WantCriteria = {
-      designation: types[(k * 7) % types.length]!, closeness: CLOSENESS[k % 4]!, minQuantity: 1 + (k % 8), conditions: k % 3 === 0 ? ["new-old-stock", "new-in-box"] : [],
-      makerBases: [], noVacuumLoss: k % 2 === 0, maxEstimateCents: k % 5 === 0 ? 20_000 + (k % 7) * 10_000 : null,
+      designation: types[(k * 7) % types.length]!,
+      closeness: CLOSENESS[k % 4]!,
+      minQuantity: 1 + (k % 8),
+      conditions: k % 3 === 0 ? ["new-old-stock", "new-in-box"] : [],
+      makerBases: [],
+      noVacuumLoss: k % 2 === 0,
+      maxEstimateCents: k % 5 === 0 ? 20_000 + (k % 7) * 10_000 : null,
     };
-    return { dealer: dealers[k % dealers.length]!.id, name: `Scale want list ${k + 1}`, criteria, designations: [...wantedDesignations(criteria, reference).keys()], max: criteria.maxEstimateCents, paused: k % 20 === 0 };
+    return {
+      dealer: dealers[k % dealers.length]!.id,
+      name: `Scale want list ${k + 1}`,
+      criteria,
+      designations: [...wantedDesignations(criteria, reference).keys()],
+      max: criteria.maxEstimateCents,
+      paused: k % 20 === 0,
+    };
   });
   for (let i = 0; i < rows.length; i += BATCH) {
     await db().query(
@@ -83,4 +139,7 @@ async function main(): Promise<void> {
   await db().close();
 }
 
-main().catch((e) => { console.error(e); process.exit(1); });
+main().catch((e) => {
+  console.error(e);
+  process.exit(1);
+});

@@ -2,7 +2,9 @@
 //   "N passed, N failed, N skipped"
 import { existsSync, readFileSync } from "node:fs";
 
-let passed = 0, failed = 0, skipped = 0;
+let passed = 0,
+  failed = 0,
+  skipped = 0;
 const problems = [];
 
 if (existsSync("reports/vitest.json")) {
@@ -10,7 +12,10 @@ if (existsSync("reports/vitest.json")) {
   passed += v.numPassedTests ?? 0;
   failed += v.numFailedTests ?? 0;
   skipped += (v.numPendingTests ?? 0) + (v.numTodoTests ?? 0);
-  if ((v.numFailedTestSuites ?? 0) > 0 && (v.numFailedTests ?? 0) === 0) { failed += v.numFailedTestSuites; problems.push("vitest: a test file failed to load"); }
+  if ((v.numFailedTestSuites ?? 0) > 0 && (v.numFailedTests ?? 0) === 0) {
+    failed += v.numFailedTestSuites;
+    problems.push("vitest: a test file failed to load");
+  }
 } else problems.push("no vitest report");
 
 if (existsSync("reports/playwright.json")) {
@@ -18,7 +23,10 @@ if (existsSync("reports/playwright.json")) {
   passed += (p.stats?.expected ?? 0) + (p.stats?.flaky ?? 0);
   failed += p.stats?.unexpected ?? 0;
   skipped += p.stats?.skipped ?? 0;
-  if ((p.errors ?? []).length) { failed += p.errors.length; problems.push("playwright: errors outside tests"); }
+  if ((p.errors ?? []).length) {
+    failed += p.errors.length;
+    problems.push("playwright: errors outside tests");
+  }
 } else problems.push("no playwright report");
 
 for (const m of problems) console.log(`summary: ${m}`);

@@ -26,9 +26,13 @@ export async function up({ context: qi }: Ctx): Promise<void> {
   await qi.bulkInsert(
     "users",
     DEMO_USERS.map((u) => ({
-      id: randomUUID(), email: u.email, display_name: u.displayName, password_hash: hash,
+      id: randomUUID(),
+      email: u.email,
+      display_name: u.displayName,
+      password_hash: hash,
       roles: qi.sequelize.literal(`ARRAY[${u.roles.map((r) => `'${r}'`).join(",")}]::varchar[]`),
-      created_at: now, updated_at: now,
+      created_at: now,
+      updated_at: now,
     })),
   );
 }

@@ -7,9 +7,17 @@ type Ctx = { context: QueryInterface };
  * codes, every row marked demo. No real maker or real registered code.
  */
 export const DEMO_MAKERS = [
-  { name: "Aldergrove Electron Works", code: "X17", notes: "Demo factory: grey box plates, halo getter on top, three micas" },
+  {
+    name: "Aldergrove Electron Works",
+    code: "X17",
+    notes: "Demo factory: grey box plates, halo getter on top, three micas",
+  },
   { name: "Kestrel Valve Company", code: "X31", notes: "Demo factory: black ribbed plates, D getter at the side" },
-  { name: "Pellham Radio Tube Corp.", code: "X46", notes: "Demo factory: grey dimpled plates, square getter on top, two rivets" },
+  {
+    name: "Pellham Radio Tube Corp.",
+    code: "X46",
+    notes: "Demo factory: grey dimpled plates, square getter on top, two rivets",
+  },
   { name: "Vireo Lamp & Valve", code: "X58", notes: "Demo factory: bright finned plates, disc getter at the bottom" },
 ] as const;
 

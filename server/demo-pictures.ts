@@ -21,7 +21,15 @@ function seedOf(text: string): number {
 const esc = (s: string) => s.replace(/[&<>"]/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;" })[c]!);
 
 /** One valve seen from the side: glass, plates, mica, getter flash (white when `vacuumLoss`), base and pins. */
-function valve(x: number, y: number, w: number, h: number, designation: string, r: () => number, vacuumLoss = false): string {
+function valve(
+  x: number,
+  y: number,
+  w: number,
+  h: number,
+  designation: string,
+  r: () => number,
+  vacuumLoss = false,
+): string {
   const plate = ["#3f3f46", "#52525b", "#6b7280", "#27272a"][Math.floor(r() * 4)];
   const getter = vacuumLoss ? "#f8fafc" : ["#9ca3af", "#a8a29e", "#94a3b8"][Math.floor(r() * 3)];
   const baseH = h * 0.16;
@@ -39,7 +47,13 @@ function valve(x: number, y: number, w: number, h: number, designation: string, 
 }
 
 /** A carton of valves on a bench, its label and count printed on the side. */
-export async function cartonPicture(o: { designation: string; count: number; label: string; key: string; vacuumLoss?: number }): Promise<Buffer> {
+export async function cartonPicture(o: {
+  designation: string;
+  count: number;
+  label: string;
+  key: string;
+  vacuumLoss?: number;
+}): Promise<Buffer> {
   const r = rng(seedOf(o.key));
   const W = 960;
   const H = 720;

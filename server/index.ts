@@ -45,11 +45,20 @@ async function main(): Promise<void> {
   await startQueue(e.DATABASE_URL);
   const stopSweeper = await startClosingWorker();
   await startWantListWorker();
-  void repairCatalogue().then((n) => n && console.log(`[catalogue] ${n} lot(s) added to the catalogue`)).then(() => warmCatalogue())
+  void repairCatalogue()
+    .then((n) => n && console.log(`[catalogue] ${n} lot(s) added to the catalogue`))
+    .then(() => warmCatalogue())
     .catch((err: Error) => console.error("[catalogue] repair failed", err.message));
-  const reconcileTimer = setInterval(() => void import("../lib/services/reconcile").then((m) => m.reconcile()).catch((err: Error) => console.error("[reconcile]", err.message)), 10 * 60_000);
+  const reconcileTimer = setInterval(
+    () =>
+      void import("../lib/services/reconcile")
+        .then((m) => m.reconcile())
+        .catch((err: Error) => console.error("[reconcile]", err.message)),
+    10 * 60_000,
+  );
   reconcileTimer.unref();
-  const stopDemo = process.env.DEMO_LIVE === "1" ? await (await import("./demo-live")).startDemoLife() : () => undefined;
+  const stopDemo =
+    process.env.DEMO_LIVE === "1" ? await (await import("./demo-live")).startDemoLife() : () => undefined;
 
   const upgrade = app.getUpgradeHandler();
   server.on("upgrade", (req, socket, head) => {
@@ -58,17 +67,34 @@ async function main(): Promise<void> {
   });
 
   server.listen(e.PORT, e.HOST, () => {
-    console.log(`getterline: ready on http://localhost:${e.PORT} (${dev ? "development" : "production"}, pid ${process.pid})`);
+    console.log(
+      `getterline: ready on http://localhost:${e.PORT} (${dev ? "development" : "production"}, pid ${process.pid})`,
+    );
   });
 
   const stopper = gracefulShutdown(server, {
-    closeSockets: () => new Promise<void>((r) => { io.close(() => r()); }),
-    closers: [async () => { stopDemo(); stopSweeper(); clearInterval(reconcileTimer); }, () => stopQueue(), () => getSequelize().close(), () => pool.end()],
+    closeSockets: () =>
+      new Promise<void>((r) => {
+        io.close(() => r());
+      }),
+    closers: [
+      async () => {
+        stopDemo();
+        stopSweeper();
+        clearInterval(reconcileTimer);
+      },
+      () => stopQueue(),
+      () => getSequelize().close(),
+      () => pool.end(),
+    ],
     log: (m) => console.log(`getterline: ${m}`),
   });
   const shutdown = async (signal: string) => {
     console.log(`getterline: ${signal} received, shutting down`);
-    setTimeout(() => { console.error("getterline: forced exit after 10 s"); process.exit(1); }, 10_000).unref();
+    setTimeout(() => {
+      console.error("getterline: forced exit after 10 s");
+      process.exit(1);
+    }, 10_000).unref();
     await stopper.shutdown();
     process.exit(0);
   };

@@ -14,7 +14,13 @@ const DIR = path.resolve(process.env.MAIL_CATCHER_DIR ?? ".data/mail");
 mkdirSync(DIR, { recursive: true });
 
 type Stored = {
-  id: string; to: string[]; from: string; subject: string; text: string; html: string | null; receivedAt: string;
+  id: string;
+  to: string[];
+  from: string;
+  subject: string;
+  text: string;
+  html: string | null;
+  receivedAt: string;
   attachments: { filename: string; contentType: string; size: number }[];
 };
 
@@ -34,7 +40,11 @@ const smtp = new SMTPServer({
           subject: mail.subject ?? "",
           text: mail.text ?? "",
           html: typeof mail.html === "string" ? mail.html : null,
-          attachments: mail.attachments.map((a) => ({ filename: a.filename ?? "", contentType: a.contentType, size: a.size })),
+          attachments: mail.attachments.map((a) => ({
+            filename: a.filename ?? "",
+            contentType: a.contentType,
+            size: a.size,
+          })),
           receivedAt: new Date().toISOString(),
         };
         writeFileSync(path.join(DIR, `${id}.json`), JSON.stringify(rec));
@@ -63,7 +73,10 @@ const web = http.createServer((req, res) => {
   };
   if (url.pathname === "/api/messages" && req.method === "GET") {
     const to = url.searchParams.get("to")?.toLowerCase();
-    return json(200, all().filter((m) => !to || m.to.includes(to)));
+    return json(
+      200,
+      all().filter((m) => !to || m.to.includes(to)),
+    );
   }
   if (url.pathname === "/api/messages" && req.method === "DELETE") {
     for (const f of readdirSync(DIR)) rmSync(path.join(DIR, f));
@@ -76,7 +89,10 @@ const web = http.createServer((req, res) => {
   }
   if (url.pathname === "/") {
     const rows = all()
-      .map((m) => `<article><h2>${esc(m.subject)}</h2><p class="meta">To ${esc(m.to.join(", "))} · ${esc(m.receivedAt)}${(m.attachments ?? []).length ? ` · attached: ${esc(m.attachments.map((a) => a.filename).join(", "))}` : ""}</p><pre>${linkify(m.text)}</pre></article>`)
+      .map(
+        (m) =>
+          `<article><h2>${esc(m.subject)}</h2><p class="meta">To ${esc(m.to.join(", "))} · ${esc(m.receivedAt)}${(m.attachments ?? []).length ? ` · attached: ${esc(m.attachments.map((a) => a.filename).join(", "))}` : ""}</p><pre>${linkify(m.text)}</pre></article>`,
+      )
       .join("");
     res.writeHead(200, { "content-type": "text/html; charset=utf-8" });
     return res.end(`<!doctype html><html lang="en"><meta charset="utf-8"><title>Getterline local inbox</title>
@@ -87,7 +103,9 @@ const web = http.createServer((req, res) => {
 });
 
 smtp.listen(SMTP_PORT, "127.0.0.1", () => {
-  web.listen(HTTP_PORT, "127.0.0.1", () => console.log(`mail catcher: SMTP 127.0.0.1:${SMTP_PORT}, inbox http://127.0.0.1:${HTTP_PORT}`));
+  web.listen(HTTP_PORT, "127.0.0.1", () =>
+    console.log(`mail catcher: SMTP 127.0.0.1:${SMTP_PORT}, inbox http://127.0.0.1:${HTTP_PORT}`),
+  );
 });
 
 function stop() {

@@ -73,7 +73,10 @@ async function main(): Promise<void> {
   const stop = (signal: string) => {
     console.log(`s3-fake: ${signal} received, stopping`);
     setTimeout(() => process.exit(1), 5_000).unref();
-    fake.close().then(() => process.exit(0), () => process.exit(1));
+    fake.close().then(
+      () => process.exit(0),
+      () => process.exit(1),
+    );
   };
   process.once("SIGTERM", () => stop("SIGTERM"));
   process.once("SIGINT", () => stop("SIGINT"));

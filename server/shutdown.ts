@@ -18,8 +18,12 @@ export function gracefulShutdown(
   });
   const log = opts.log ?? (() => undefined);
   return {
-    get closing() { return closing; },
-    get inFlight() { return inFlight; },
+    get closing() {
+      return closing;
+    },
+    get inFlight() {
+      return inFlight;
+    },
     async shutdown(): Promise<void> {
       if (closing) return;
       closing = true;

@@ -20,8 +20,16 @@ function flagged(q: CatalogueQuery, key: "noVacuumLoss" | "tested" | "record", v
 function Option({ href, on, label, count }: { href: string; on: boolean; label: string; count?: number }) {
   return (
     <li>
-      <Link href={href} aria-current={on ? "true" : undefined} className={`flex justify-between gap-2 rounded px-1.5 py-1 text-sm hover:bg-flash-100 ${on ? "bg-glow-50 font-semibold text-glow-700" : "text-flash-800"}`}>
-        <span>{on ? "✓ " : ""}{label}</span>{count !== undefined ? <span className="code text-flash-500">{count}</span> : null}
+      <Link
+        href={href}
+        aria-current={on ? "true" : undefined}
+        className={`flex justify-between gap-2 rounded px-1.5 py-1 text-sm hover:bg-flash-100 ${on ? "bg-glow-50 font-semibold text-glow-700" : "text-flash-800"}`}
+      >
+        <span>
+          {on ? "✓ " : ""}
+          {label}
+        </span>
+        {count !== undefined ? <span className="code text-flash-500">{count}</span> : null}
       </Link>
     </li>
   );
@@ -38,7 +46,15 @@ function Group({ title, children }: { title: string; children: React.ReactNode }
 
 function listOptions(q: CatalogueQuery, key: ListKey, counts: Record<string, number>, words: Record<string, string>) {
   const values = [...new Set([...Object.keys(counts), ...(q[key] as string[])])];
-  return values.map((v) => <Option key={v} href={toggled(q, key, v)} on={(q[key] as string[]).includes(v)} label={words[v] ?? v} count={counts[v] ?? 0} />);
+  return values.map((v) => (
+    <Option
+      key={v}
+      href={toggled(q, key, v)}
+      on={(q[key] as string[]).includes(v)}
+      label={words[v] ?? v}
+      count={counts[v] ?? 0}
+    />
+  ));
 }
 
 /** Filters with the count of lots each would leave; every choice is a link, so the address holds the search. */
@@ -54,12 +70,34 @@ export function Filters({ q, facets }: { q: CatalogueQuery; facets: CatalogueFac
         {listOptions(q, "grade", facets.grade, GRADE_WORDS)}
       </Group>
       <Group title="Evidence">
-        <Option href={flagged(q, "noVacuumLoss", "1")} on={q.noVacuumLoss === "1"} label="No white getters" count={facets.noVacuumLoss} />
-        <Option href={toggled(q, "sets", "pairs")} on={q.sets.includes("pairs")} label="Matched pairs" count={facets.pairs} />
-        <Option href={toggled(q, "sets", "quads")} on={q.sets.includes("quads")} label="Matched quads" count={facets.quads} />
-        <Option href={flagged(q, "record", "clean")} on={q.record === "clean"} label="Consignor with no upheld claims" />
+        <Option
+          href={flagged(q, "noVacuumLoss", "1")}
+          on={q.noVacuumLoss === "1"}
+          label="No white getters"
+          count={facets.noVacuumLoss}
+        />
+        <Option
+          href={toggled(q, "sets", "pairs")}
+          on={q.sets.includes("pairs")}
+          label="Matched pairs"
+          count={facets.pairs}
+        />
+        <Option
+          href={toggled(q, "sets", "quads")}
+          on={q.sets.includes("quads")}
+          label="Matched quads"
+          count={facets.quads}
+        />
+        <Option
+          href={flagged(q, "record", "clean")}
+          on={q.record === "clean"}
+          label="Consignor with no upheld claims"
+        />
       </Group>
-      <Group title="Hazards">{listOptions(q, "hazard", facets.hazard, HAZARD_WORDS)}<Option href={toggled(q, "hazard", "none")} on={q.hazard.includes("none")} label="No hazard flags" /></Group>
+      <Group title="Hazards">
+        {listOptions(q, "hazard", facets.hazard, HAZARD_WORDS)}
+        <Option href={toggled(q, "hazard", "none")} on={q.hazard.includes("none")} label="No hazard flags" />
+      </Group>
     </div>
   );
 }

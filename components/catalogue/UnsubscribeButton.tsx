@@ -11,9 +11,22 @@ export function UnsubscribeButton({ u, t }: { u: string; t: string }) {
     <div className="space-y-3">
       {state ? <FormAlert tone={state.tone}>{state.text}</FormAlert> : null}
       {state?.tone !== "sound" ? (
-        <button type="button" className="btn-primary" onClick={() => void apiFetch("/api/want-lists/unsubscribe", { json: { u, t } })
-          .then(() => setState({ tone: "sound", text: "Done: no more want-list e-mails. Matches still appear in your notices in Getterline." }))
-          .catch((e: Error) => setState({ tone: "fault", text: e.message }))}>Stop want-list e-mails</button>
+        <button
+          type="button"
+          className="btn-primary"
+          onClick={() =>
+            void apiFetch("/api/want-lists/unsubscribe", { json: { u, t } })
+              .then(() =>
+                setState({
+                  tone: "sound",
+                  text: "Done: no more want-list e-mails. Matches still appear in your notices in Getterline.",
+                }),
+              )
+              .catch((e: Error) => setState({ tone: "fault", text: e.message }))
+          }
+        >
+          Stop want-list e-mails
+        </button>
       ) : null}
     </div>
   );

@@ -20,4 +20,9 @@ export const RELATION_LABEL: Record<Relation, string> = {
 
 export const GRADE_WORDS: Record<string, string> = { strong: "Strong", good: "Good", fair: "Fair", weak: "Weak" };
 
-export const SORT_WORDS: Record<string, string> = { relevance: "Best match", closing: "Closing soonest", newest: "Newest", estimate: "Lowest estimate" };
+export const SORT_WORDS: Record<string, string> = {
+  relevance: "Best match",
+  closing: "Closing soonest",
+  newest: "Newest",
+  estimate: "Lowest estimate",
+};

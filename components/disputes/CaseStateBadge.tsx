@@ -11,5 +11,12 @@ const TONE: Record<DisputeState, string> = {
 
 /** Where a claim stands, always in words (colour only supports it). */
 export function CaseStateBadge({ state }: { state: DisputeState }) {
-  return <span data-testid="case-state" className={`inline-block rounded-full border px-2.5 py-0.5 text-xs font-medium ${TONE[state]}`}>{STATE_WORDS[state]}</span>;
+  return (
+    <span
+      data-testid="case-state"
+      className={`inline-block rounded-full border px-2.5 py-0.5 text-xs font-medium ${TONE[state]}`}
+    >
+      {STATE_WORDS[state]}
+    </span>
+  );
 }

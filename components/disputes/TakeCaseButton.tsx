@@ -11,8 +11,17 @@ export function TakeCaseButton({ caseId, number }: { caseId: string; number: str
   const { message, run } = useApiSubmit();
   return (
     <span className="inline-flex flex-col gap-1">
-      <button type="button" className="btn-primary" aria-label={`Take claim ${number}`}
-        onClick={() => void run(async () => { await apiFetch(`/api/disputes/${caseId}/take`, { json: {} }); router.push(`/mediation/cases/${caseId}`); })}>
+      <button
+        type="button"
+        className="btn-primary"
+        aria-label={`Take claim ${number}`}
+        onClick={() =>
+          void run(async () => {
+            await apiFetch(`/api/disputes/${caseId}/take`, { json: {} });
+            router.push(`/mediation/cases/${caseId}`);
+          })
+        }
+      >
         Take
       </button>
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}

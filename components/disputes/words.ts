@@ -1,7 +1,12 @@
 import type { CaseRole } from "@/lib/services/disputes";
 
 /** Each author's role in a claim, in words (colour only supports it). */
-export const CASE_ROLE_WORDS: Record<CaseRole, string> = { buyer: "Buyer", consignor: "Consignor", mediator: "Mediator", house: "House" };
+export const CASE_ROLE_WORDS: Record<CaseRole, string> = {
+  buyer: "Buyer",
+  consignor: "Consignor",
+  mediator: "Mediator",
+  house: "House",
+};
 
 export const CASE_ROLE_TONE: Record<CaseRole, string> = {
   buyer: "border-glow-200 bg-glow-50 text-glow-700",

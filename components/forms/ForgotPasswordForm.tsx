@@ -10,7 +10,9 @@ import { Field, FormAlert } from "./Field";
 export function ForgotPasswordForm() {
   const [sent, setSent] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
-  const { register, handleSubmit, formState } = useForm<ResetRequestInput>({ resolver: zodResolver(ResetRequestSchema) });
+  const { register, handleSubmit, formState } = useForm<ResetRequestInput>({
+    resolver: zodResolver(ResetRequestSchema),
+  });
 
   async function onSubmit(values: ResetRequestInput) {
     setProblem(null);
@@ -23,7 +25,11 @@ export function ForgotPasswordForm() {
   }
 
   if (sent) {
-    return <FormAlert tone="sound">If that address has an account, a reset link is on its way. It works once, within an hour.</FormAlert>;
+    return (
+      <FormAlert tone="sound">
+        If that address has an account, a reset link is on its way. It works once, within an hour.
+      </FormAlert>
+    );
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} className="space-y-4" noValidate>
@@ -31,7 +37,9 @@ export function ForgotPasswordForm() {
       <Field id="email" label="E-mail" error={formState.errors.email?.message}>
         <input id="email" type="email" autoComplete="email" className="input" {...register("email")} />
       </Field>
-      <button type="submit" className="btn-primary w-full justify-center" disabled={formState.isSubmitting}>Send reset link</button>
+      <button type="submit" className="btn-primary w-full justify-center" disabled={formState.isSubmitting}>
+        Send reset link
+      </button>
     </form>
   );
 }

@@ -30,7 +30,9 @@ export function ResetPasswordForm({ token }: { token: string }) {
     return (
       <div className="space-y-3">
         <FormAlert tone="sound">Your password is set. Sign in with it now.</FormAlert>
-        <Link href="/sign-in" className="btn-primary">Sign in</Link>
+        <Link href="/sign-in" className="btn-primary">
+          Sign in
+        </Link>
       </div>
     );
   }
@@ -45,7 +47,9 @@ export function ResetPasswordForm({ token }: { token: string }) {
       <Field id="confirm" label="The same again" error={e.confirm?.message}>
         <input id="confirm" type="password" autoComplete="new-password" className="input" {...register("confirm")} />
       </Field>
-      <button type="submit" className="btn-primary w-full justify-center" disabled={formState.isSubmitting}>Set password</button>
+      <button type="submit" className="btn-primary w-full justify-center" disabled={formState.isSubmitting}>
+        Set password
+      </button>
     </form>
   );
 }

@@ -23,7 +23,12 @@ export function SignInForm({ from }: { from?: string }) {
     const res = await fetch("/api/auth/callback/credentials", {
       method: "POST",
       headers: { "content-type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({ ...values, csrfToken: csrf.csrfToken, callbackUrl: safeCallbackPath(from) ?? "/", json: "true" }),
+      body: new URLSearchParams({
+        ...values,
+        csrfToken: csrf.csrfToken,
+        callbackUrl: safeCallbackPath(from) ?? "/",
+        json: "true",
+      }),
     });
     const body = (await res.json().catch(() => ({}))) as { url?: string; error?: { message?: string } };
     if (res.status === 429) return setProblem(body.error?.message ?? "Too many attempts; wait a while and try again.");
@@ -41,10 +46,24 @@ export function SignInForm({ from }: { from?: string }) {
     <form onSubmit={handleSubmit(onSubmit)} className="space-y-4" noValidate>
       {problem ? <FormAlert>{problem}</FormAlert> : null}
       <Field id="email" label="E-mail" error={e.email?.message}>
-        <input id="email" type="email" autoComplete="email" className="input" aria-invalid={!!e.email} {...register("email")} />
+        <input
+          id="email"
+          type="email"
+          autoComplete="email"
+          className="input"
+          aria-invalid={!!e.email}
+          {...register("email")}
+        />
       </Field>
       <Field id="password" label="Password" error={e.password?.message}>
-        <input id="password" type="password" autoComplete="current-password" className="input" aria-invalid={!!e.password} {...register("password")} />
+        <input
+          id="password"
+          type="password"
+          autoComplete="current-password"
+          className="input"
+          aria-invalid={!!e.password}
+          {...register("password")}
+        />
       </Field>
       <button type="submit" className="btn-primary w-full justify-center" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Signing in…" : "Sign in"}

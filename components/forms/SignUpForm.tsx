@@ -17,12 +17,22 @@ export function SignUpForm() {
   const { message, run } = useApiSubmit<SignUpInput>(setError);
 
   async function onSubmit(values: SignUpInput) {
-    if (!(await run(async () => { await apiFetch("/api/account/sign-up", { json: values }); }))) return;
+    if (
+      !(await run(async () => {
+        await apiFetch("/api/account/sign-up", { json: values });
+      }))
+    )
+      return;
     const csrf = await fetch("/api/auth/csrf").then((r) => r.json() as Promise<{ csrfToken: string }>);
     await fetch("/api/auth/callback/credentials", {
       method: "POST",
       headers: { "content-type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({ email: values.email, password: values.password, csrfToken: csrf.csrfToken, json: "true" }),
+      body: new URLSearchParams({
+        email: values.email,
+        password: values.password,
+        csrfToken: csrf.csrfToken,
+        json: "true",
+      }),
     });
     router.push(values.role === "dealer" ? "/dealer" : "/consignor");
     router.refresh();
@@ -37,11 +47,19 @@ export function SignUpForm() {
         <div className="mt-2 grid gap-2 sm:grid-cols-2">
           <label className="flex cursor-pointer items-start gap-2 rounded-md border border-flash-300 bg-white p-3 text-sm has-[:checked]:border-glow-600">
             <input type="radio" value="dealer" className="mt-1" {...register("role")} />
-            <span><strong>Buy as a dealer</strong><br />Bid on lots in live sales.</span>
+            <span>
+              <strong>Buy as a dealer</strong>
+              <br />
+              Bid on lots in live sales.
+            </span>
           </label>
           <label className="flex cursor-pointer items-start gap-2 rounded-md border border-flash-300 bg-white p-3 text-sm has-[:checked]:border-glow-600">
             <input type="radio" value="consignor" className="mt-1" {...register("role")} />
-            <span><strong>Consign valves</strong><br />List a box or a drawer of stock.</span>
+            <span>
+              <strong>Consign valves</strong>
+              <br />
+              List a box or a drawer of stock.
+            </span>
           </label>
         </div>
         {e.role ? <p className="field-error">{e.role.message}</p> : null}

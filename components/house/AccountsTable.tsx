@@ -1,8 +1,16 @@
 "use client";
 
 import {
-  columnFilteringFeature, createColumnHelper, createFilteredRowModel, createSortedRowModel, filterFn_includesString,
-  globalFilteringFeature, rowSortingFeature, sortFn_alphanumeric, tableFeatures, useTable,
+  columnFilteringFeature,
+  createColumnHelper,
+  createFilteredRowModel,
+  createSortedRowModel,
+  filterFn_includesString,
+  globalFilteringFeature,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  tableFeatures,
+  useTable,
 } from "@tanstack/react-table";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
@@ -35,15 +43,24 @@ export function AccountsTable({ selfId }: { selfId: string }) {
     queryFn: () => apiFetch<{ accounts: Account[] }>("/api/admin/users"),
   });
   const save = useMutation({
-    mutationFn: (v: { id: string; roles: Role[] }) => apiFetch<{ account: Account }>(`/api/admin/users/${v.id}`, { method: "PATCH", json: { roles: v.roles } }),
+    mutationFn: (v: { id: string; roles: Role[] }) =>
+      apiFetch<{ account: Account }>(`/api/admin/users/${v.id}`, { method: "PATCH", json: { roles: v.roles } }),
     onSuccess: async (r) => {
       setMessage(`Roles saved for ${r.account.displayName}.`);
       await qc.invalidateQueries({ queryKey: ["admin-users"] });
-      setPending((p) => { const n = { ...p }; delete n[r.account.id]; return n; });
+      setPending((p) => {
+        const n = { ...p };
+        delete n[r.account.id];
+        return n;
+      });
     },
     onError: (e, v) => {
       setMessage(e instanceof Error ? e.message : "Could not save");
-      setPending((p) => { const n = { ...p }; delete n[v.id]; return n; });
+      setPending((p) => {
+        const n = { ...p };
+        delete n[v.id];
+        return n;
+      });
     },
   });
 
@@ -82,25 +99,40 @@ export function AccountsTable({ selfId }: { selfId: string }) {
     }),
   ]);
 
-  const table = useTable(
-    {
-      features,
-      columns,
-      data: data?.accounts ?? EMPTY,
-      globalFilterFn: "includesString",
-      state: { globalFilter: filter },
-      onGlobalFilterChange: (u) => setFilter(typeof u === "function" ? u(filter) : u),
-    },
-  );
+  const table = useTable({
+    features,
+    columns,
+    data: data?.accounts ?? EMPTY,
+    globalFilterFn: "includesString",
+    state: { globalFilter: filter },
+    onGlobalFilterChange: (u) => setFilter(typeof u === "function" ? u(filter) : u),
+  });
 
   if (isLoading) return <p className="text-flash-600">Loading accounts…</p>;
-  if (error) return <p role="alert" className="text-fault-700">{error.message}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-fault-700">
+        {error.message}
+      </p>
+    );
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-3">
-        <label htmlFor="account-filter" className="label">Find</label>
-        <input id="account-filter" className="input max-w-xs" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Name or e-mail" />
-        {message ? <p role="status" className="text-sm text-flash-700">{message}</p> : null}
+        <label htmlFor="account-filter" className="label">
+          Find
+        </label>
+        <input
+          id="account-filter"
+          className="input max-w-xs"
+          value={filter}
+          onChange={(e) => setFilter(e.target.value)}
+          placeholder="Name or e-mail"
+        />
+        {message ? (
+          <p role="status" className="text-sm text-flash-700">
+            {message}
+          </p>
+        ) : null}
       </div>
       <div className="overflow-x-auto rounded-lg border border-flash-200 bg-white">
         <table className="min-w-full text-sm">
@@ -108,11 +140,28 @@ export function AccountsTable({ selfId }: { selfId: string }) {
             {table.getHeaderGroups().map((g) => (
               <tr key={g.id}>
                 {g.headers.map((h) => (
-                  <th key={h.id} scope="col" className="px-3 py-2 font-medium" aria-sort={h.column.getIsSorted() === "asc" ? "ascending" : h.column.getIsSorted() === "desc" ? "descending" : undefined}>
+                  <th
+                    key={h.id}
+                    scope="col"
+                    className="px-3 py-2 font-medium"
+                    aria-sort={
+                      h.column.getIsSorted() === "asc"
+                        ? "ascending"
+                        : h.column.getIsSorted() === "desc"
+                          ? "descending"
+                          : undefined
+                    }
+                  >
                     {h.column.getCanSort() ? (
-                      <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1">
+                      <button
+                        type="button"
+                        onClick={h.column.getToggleSortingHandler()}
+                        className="inline-flex items-center gap-1"
+                      >
                         <table.FlexRender header={h} />
-                        <span aria-hidden="true">{h.column.getIsSorted() === "asc" ? "▲" : h.column.getIsSorted() === "desc" ? "▼" : ""}</span>
+                        <span aria-hidden="true">
+                          {h.column.getIsSorted() === "asc" ? "▲" : h.column.getIsSorted() === "desc" ? "▼" : ""}
+                        </span>
                       </button>
                     ) : (
                       <table.FlexRender header={h} />
@@ -126,7 +175,9 @@ export function AccountsTable({ selfId }: { selfId: string }) {
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-t border-flash-200">
                 {row.getAllCells().map((c) => (
-                  <td key={c.id} className="px-3 py-2 align-top"><table.FlexRender cell={c} /></td>
+                  <td key={c.id} className="px-3 py-2 align-top">
+                    <table.FlexRender cell={c} />
+                  </td>
                 ))}
               </tr>
             ))}

@@ -23,7 +23,8 @@ export function AmendmentForm({ lotId, items }: { lotId: string; items: { id: st
     try {
       await apiFetch(`/api/house/lots/${lotId}/amendments`, {
         json: {
-          itemId: itemId || null, description,
+          itemId: itemId || null,
+          description,
           ...(itemId && quantity ? { quantity: Number(quantity) } : {}),
           ...(itemId && condition ? { condition } : {}),
           ...(itemId && vacuum ? { vacuumLoss: vacuum === "lost" } : {}),
@@ -44,29 +45,56 @@ export function AmendmentForm({ lotId, items }: { lotId: string; items: { id: st
       <Field id="amend-item" label="Item (optional)">
         <select id="amend-item" className="input" value={itemId} onChange={(e) => setItemId(e.target.value)}>
           <option value="">The lot as a whole</option>
-          {items.map((i) => <option key={i.id} value={i.id}>{i.label}</option>)}
+          {items.map((i) => (
+            <option key={i.id} value={i.id}>
+              {i.label}
+            </option>
+          ))}
         </select>
       </Field>
       {itemId ? (
         <div className="grid gap-3 sm:grid-cols-3">
-          <Field id="amend-qty" label="New quantity"><input id="amend-qty" type="number" min={1} className="input" value={quantity} onChange={(e) => setQuantity(e.target.value)} /></Field>
+          <Field id="amend-qty" label="New quantity">
+            <input
+              id="amend-qty"
+              type="number"
+              min={1}
+              className="input"
+              value={quantity}
+              onChange={(e) => setQuantity(e.target.value)}
+            />
+          </Field>
           <Field id="amend-cond" label="New condition">
             <select id="amend-cond" className="input" value={condition} onChange={(e) => setCondition(e.target.value)}>
               <option value="">Unchanged</option>
-              {CONDITION_VALUES.map((c) => <option key={c} value={c}>{CONDITION_WORDS[c]}</option>)}
+              {CONDITION_VALUES.map((c) => (
+                <option key={c} value={c}>
+                  {CONDITION_WORDS[c]}
+                </option>
+              ))}
             </select>
           </Field>
           <Field id="amend-vac" label="Getter">
             <select id="amend-vac" className="input" value={vacuum} onChange={(e) => setVacuum(e.target.value)}>
-              <option value="">Unchanged</option><option value="lost">White (vacuum lost)</option><option value="ok">Silver (vacuum kept)</option>
+              <option value="">Unchanged</option>
+              <option value="lost">White (vacuum lost)</option>
+              <option value="ok">Silver (vacuum kept)</option>
             </select>
           </Field>
         </div>
       ) : null}
       <Field id="amend-desc" label="What changed and why">
-        <textarea id="amend-desc" rows={2} className="input" value={description} onChange={(e) => setDescription(e.target.value)} />
+        <textarea
+          id="amend-desc"
+          rows={2}
+          className="input"
+          value={description}
+          onChange={(e) => setDescription(e.target.value)}
+        />
       </Field>
-      <button type="submit" className="btn-quiet" disabled={description.trim().length < 5}>Record amendment</button>
+      <button type="submit" className="btn-quiet" disabled={description.trim().length < 5}>
+        Record amendment
+      </button>
     </form>
   );
 }

@@ -20,7 +20,18 @@ export function ReferenceAddForm({ designation }: { designation: string }) {
   const router = useRouter();
   const { register, handleSubmit, formState, setError } = useForm<ReferenceAddInput>({
     resolver: zodResolver(ReferenceAddSchema),
-    defaultValues: { designation, aliases: "", kind: "pentode", base: "noval", coldCathode: false, heaterVolts: null, heaterAmps: null, source: "MEM", note: "", reason: "" },
+    defaultValues: {
+      designation,
+      aliases: "",
+      kind: "pentode",
+      base: "noval",
+      coldCathode: false,
+      heaterVolts: null,
+      heaterAmps: null,
+      source: "MEM",
+      note: "",
+      reason: "",
+    },
   });
   const { message, run } = useApiSubmit<ReferenceAddInput>(setError);
   const e = formState.errors;
@@ -45,24 +56,54 @@ export function ReferenceAddForm({ designation }: { designation: string }) {
         </Field>
         <Field id="kind" label="Kind" error={e.kind?.message}>
           <select id="kind" className="input" {...register("kind")}>
-            {VALVE_KINDS.map((k) => <option key={k} value={k}>{k.replace(/-/g, " ")}</option>)}
+            {VALVE_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {k.replace(/-/g, " ")}
+              </option>
+            ))}
           </select>
         </Field>
         <Field id="base" label="Base" error={e.base?.message}>
           <select id="base" className="input" {...register("base")}>
-            {Object.entries(BASE_FAMILY_LABELS).map(([k, label]) => <option key={k} value={k}>{label}</option>)}
+            {Object.entries(BASE_FAMILY_LABELS).map(([k, label]) => (
+              <option key={k} value={k}>
+                {label}
+              </option>
+            ))}
           </select>
         </Field>
-        <Field id="heaterVolts" label="Heater voltage (V)" hint="Leave empty if you have no data sheet" error={e.heaterVolts?.message}>
-          <input id="heaterVolts" inputMode="decimal" className="input code" {...register("heaterVolts", { setValueAs: toNumber })} />
+        <Field
+          id="heaterVolts"
+          label="Heater voltage (V)"
+          hint="Leave empty if you have no data sheet"
+          error={e.heaterVolts?.message}
+        >
+          <input
+            id="heaterVolts"
+            inputMode="decimal"
+            className="input code"
+            {...register("heaterVolts", { setValueAs: toNumber })}
+          />
         </Field>
         <Field id="heaterAmps" label="Heater current (A)" error={e.heaterAmps?.message}>
-          <input id="heaterAmps" inputMode="decimal" className="input code" {...register("heaterAmps", { setValueAs: toNumber })} />
+          <input
+            id="heaterAmps"
+            inputMode="decimal"
+            className="input code"
+            {...register("heaterAmps", { setValueAs: toNumber })}
+          />
         </Field>
       </div>
-      <label className="flex items-center gap-2 text-sm"><input type="checkbox" {...register("coldCathode")} /> Cold cathode (no heater)</label>
+      <label className="flex items-center gap-2 text-sm">
+        <input type="checkbox" {...register("coldCathode")} /> Cold cathode (no heater)
+      </label>
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field id="source" label="Source tag" hint="REG, EU-DS, MIL-E-1 with ✓ or MEM; CTP; MEM" error={e.source?.message}>
+        <Field
+          id="source"
+          label="Source tag"
+          hint="REG, EU-DS, MIL-E-1 with ✓ or MEM; CTP; MEM"
+          error={e.source?.message}
+        >
           <input id="source" className="input code" {...register("source")} />
         </Field>
         <Field id="note" label="Note" error={e.note?.message}>
@@ -72,7 +113,9 @@ export function ReferenceAddForm({ designation }: { designation: string }) {
       <Field id="reason" label="Why add it" error={e.reason?.message}>
         <textarea id="reason" rows={2} className="input" {...register("reason")} />
       </Field>
-      <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>Add type</button>
+      <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>
+        Add type
+      </button>
     </form>
   );
 }

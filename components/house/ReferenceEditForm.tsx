@@ -26,7 +26,15 @@ const NUMBERS: { name: NumField; label: string; unit: string }[] = [
 const toNumber = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
 
 /** The house corrects one reference row; the server keeps who, when, why, before and after. */
-export function ReferenceEditForm({ designation, revision, initial }: { designation: string; revision: number; initial: ReferenceEditInput }) {
+export function ReferenceEditForm({
+  designation,
+  revision,
+  initial,
+}: {
+  designation: string;
+  revision: number;
+  initial: ReferenceEditInput;
+}) {
   const router = useRouter();
   const { register, handleSubmit, formState, setError, reset } = useForm<ReferenceEditInput>({
     resolver: zodResolver(ReferenceEditSchema),
@@ -36,7 +44,10 @@ export function ReferenceEditForm({ designation, revision, initial }: { designat
 
   async function onSubmit(values: ReferenceEditInput) {
     await run(async () => {
-      await apiFetch(`/api/valves/types/${encodeURIComponent(designation)}`, { method: "PATCH", json: { ...values, expectedRevision: revision } });
+      await apiFetch(`/api/valves/types/${encodeURIComponent(designation)}`, {
+        method: "PATCH",
+        json: { ...values, expectedRevision: revision },
+      });
       reset({ ...values, reason: "" });
       router.refresh();
       return `Saved as revision ${revision + 1}.`;
@@ -49,8 +60,18 @@ export function ReferenceEditForm({ designation, revision, initial }: { designat
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
         {NUMBERS.map((n) => (
-          <Field key={n.name} id={n.name} label={`${n.label}${n.unit ? ` (${n.unit})` : ""}`} error={e[n.name]?.message}>
-            <input id={n.name} inputMode="decimal" className="input code" {...register(n.name, { setValueAs: toNumber })} />
+          <Field
+            key={n.name}
+            id={n.name}
+            label={`${n.label}${n.unit ? ` (${n.unit})` : ""}`}
+            error={e[n.name]?.message}
+          >
+            <input
+              id={n.name}
+              inputMode="decimal"
+              className="input code"
+              {...register(n.name, { setValueAs: toNumber })}
+            />
           </Field>
         ))}
       </div>
@@ -62,10 +83,17 @@ export function ReferenceEditForm({ designation, revision, initial }: { designat
           <input id="note" className="input" {...register("note")} />
         </Field>
       </div>
-      <Field id="reason" label="Why this change" hint="Name the data sheet or handbook you checked." error={e.reason?.message}>
+      <Field
+        id="reason"
+        label="Why this change"
+        hint="Name the data sheet or handbook you checked."
+        error={e.reason?.message}
+      >
         <textarea id="reason" rows={2} className="input" {...register("reason")} />
       </Field>
-      <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>Save correction</button>
+      <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>
+        Save correction
+      </button>
     </form>
   );
 }

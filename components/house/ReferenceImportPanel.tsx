@@ -5,7 +5,11 @@ import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
 import { apiFetch } from "@/lib/client/api";
 
-type Result = { applied: boolean; lines: { line: number; designation: string; action: "add" | "change" | "unchanged" }[]; errors: { line: number; column?: string; message: string }[] };
+type Result = {
+  applied: boolean;
+  lines: { line: number; designation: string; action: "add" | "change" | "unchanged" }[];
+  errors: { line: number; column?: string; message: string }[];
+};
 
 /**
  * Reference CSV in and out: export the table, paste or choose a file,
@@ -29,26 +33,70 @@ export function ReferenceImportPanel() {
       setProblem(e instanceof Error ? e.message : "Something went wrong");
     }
   }
-  const counts = result ? (["add", "change", "unchanged"] as const).map((a) => `${result.lines.filter((l) => l.action === a).length} ${a}`).join(", ") : "";
+  const counts = result
+    ? (["add", "change", "unchanged"] as const)
+        .map((a) => `${result.lines.filter((l) => l.action === a).length} ${a}`)
+        .join(", ")
+    : "";
 
   return (
     <section className="card space-y-3" aria-labelledby="ref-csv-h">
-      <h2 id="ref-csv-h" className="font-semibold">CSV import and export</h2>
-      <p className="text-sm"><a className="underline" href="/api/valves/types/export">Download the table as CSV</a>. Edit it, then preview and apply; a file with any bad line changes nothing, and importing the same file twice changes nothing the second time.</p>
-      <label htmlFor="ref-csv" className="label">CSV</label>
-      <input type="file" accept=".csv,text/csv" aria-label="Choose a CSV file" onChange={async (e) => { const f = e.target.files?.[0]; if (f) setCsv(await f.text()); }} />
+      <h2 id="ref-csv-h" className="font-semibold">
+        CSV import and export
+      </h2>
+      <p className="text-sm">
+        <a className="underline" href="/api/valves/types/export">
+          Download the table as CSV
+        </a>
+        . Edit it, then preview and apply; a file with any bad line changes nothing, and importing the same file twice
+        changes nothing the second time.
+      </p>
+      <label htmlFor="ref-csv" className="label">
+        CSV
+      </label>
+      <input
+        type="file"
+        accept=".csv,text/csv"
+        aria-label="Choose a CSV file"
+        onChange={async (e) => {
+          const f = e.target.files?.[0];
+          if (f) setCsv(await f.text());
+        }}
+      />
       <textarea id="ref-csv" rows={5} className="input code" value={csv} onChange={(e) => setCsv(e.target.value)} />
-      <label htmlFor="ref-reason" className="label">Why</label>
+      <label htmlFor="ref-reason" className="label">
+        Why
+      </label>
       <input id="ref-reason" className="input" value={reason} onChange={(e) => setReason(e.target.value)} />
       <div className="flex gap-2">
-        <button type="button" className="btn-quiet" onClick={() => void send(false)}>Preview</button>
-        <button type="button" className="btn-primary" disabled={!result || result.errors.length > 0 || result.applied} onClick={() => void send(true)}>Apply</button>
+        <button type="button" className="btn-quiet" onClick={() => void send(false)}>
+          Preview
+        </button>
+        <button
+          type="button"
+          className="btn-primary"
+          disabled={!result || result.errors.length > 0 || result.applied}
+          onClick={() => void send(true)}
+        >
+          Apply
+        </button>
       </div>
       {problem ? <FormAlert>{problem}</FormAlert> : null}
       {result?.errors.length ? (
-        <ul className="text-sm text-fault-700" aria-label="Errors">{result.errors.map((x, i) => <li key={i}>Line {x.line}{x.column ? ` (${x.column})` : ""}: {x.message}</li>)}</ul>
+        <ul className="text-sm text-fault-700" aria-label="Errors">
+          {result.errors.map((x, i) => (
+            <li key={i}>
+              Line {x.line}
+              {x.column ? ` (${x.column})` : ""}: {x.message}
+            </li>
+          ))}
+        </ul>
       ) : null}
-      {result && !result.errors.length ? <p role="status" className="text-sm">{result.applied ? "Applied" : "Preview"}: {counts}.</p> : null}
+      {result && !result.errors.length ? (
+        <p role="status" className="text-sm">
+          {result.applied ? "Applied" : "Preview"}: {counts}.
+        </p>
+      ) : null}
     </section>
   );
 }

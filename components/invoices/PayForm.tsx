@@ -19,7 +19,15 @@ type Outcome = { status: "succeeded" } | { status: "requires_action"; redirectUr
  * processor's confirmation to arrive. `onPaid` carries the words for the
  * invoice to keep once this form has gone (paid here, or elsewhere).
  */
-export function PayForm({ invoiceId, totalText, onPaid }: { invoiceId: string; totalText: string; onPaid: (m: { tone: "sound"; text: string }) => void }) {
+export function PayForm({
+  invoiceId,
+  totalText,
+  onPaid,
+}: {
+  invoiceId: string;
+  totalText: string;
+  onPaid: (m: { tone: "sound"; text: string }) => void;
+}) {
   const qc = useQueryClient();
   const attempt = useRef<string>(crypto.randomUUID());
   const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
@@ -31,7 +39,9 @@ export function PayForm({ invoiceId, totalText, onPaid }: { invoiceId: string; t
   async function onSubmit(values: CardPayment) {
     setMessage(null);
     try {
-      const r = await apiFetch<Outcome>(`/api/invoices/${invoiceId}/pay`, { json: { ...values, attemptKey: attempt.current } });
+      const r = await apiFetch<Outcome>(`/api/invoices/${invoiceId}/pay`, {
+        json: { ...values, attemptKey: attempt.current },
+      });
       if (r.status === "requires_action") {
         setMessage({ tone: "sound", text: "Your card asks you to confirm the payment; taking you there…" });
         window.location.assign(r.redirectUrl);
@@ -58,26 +68,48 @@ export function PayForm({ invoiceId, totalText, onPaid }: { invoiceId: string; t
   return (
     <form onSubmit={handleSubmit(onSubmit)} className="card space-y-3" noValidate aria-label="Pay by card">
       <h2 className="text-lg font-semibold">Pay {totalText} by card</h2>
-      <p className="text-sm text-flash-700">The house holds your payment in escrow until you have received and inspected the tubes.</p>
+      <p className="text-sm text-flash-700">
+        The house holds your payment in escrow until you have received and inspected the tubes.
+      </p>
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
       <input type="hidden" {...register("attemptKey")} />
       <div className="grid gap-3 sm:grid-cols-4">
         <div className="sm:col-span-2">
           <Field id="card-number" label="Card number" error={e.number?.message}>
-            <input id="card-number" inputMode="numeric" autoComplete="cc-number" className="input code" {...register("number")} />
+            <input
+              id="card-number"
+              inputMode="numeric"
+              autoComplete="cc-number"
+              className="input code"
+              {...register("number")}
+            />
           </Field>
         </div>
         <Field id="card-month" label="Expiry month" error={e.expMonth?.message}>
-          <input id="card-month" inputMode="numeric" autoComplete="cc-exp-month" className="input" {...register("expMonth")} />
+          <input
+            id="card-month"
+            inputMode="numeric"
+            autoComplete="cc-exp-month"
+            className="input"
+            {...register("expMonth")}
+          />
         </Field>
         <Field id="card-year" label="Expiry year" error={e.expYear?.message}>
-          <input id="card-year" inputMode="numeric" autoComplete="cc-exp-year" className="input" {...register("expYear")} />
+          <input
+            id="card-year"
+            inputMode="numeric"
+            autoComplete="cc-exp-year"
+            className="input"
+            {...register("expYear")}
+          />
         </Field>
         <Field id="card-cvc" label="Security code" error={e.cvc?.message}>
           <input id="card-cvc" inputMode="numeric" autoComplete="cc-csc" className="input" {...register("cvc")} />
         </Field>
       </div>
-      <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>Pay now</button>
+      <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>
+        Pay now
+      </button>
     </form>
   );
 }

@@ -23,28 +23,56 @@ export function NoticeBell() {
       setTimeout(() => setFlash(null), 8000);
     };
     s.on("notice.created", on);
-    return () => { s.off("notice.created", on); };
+    return () => {
+      s.off("notice.created", on);
+    };
   }, [qc]);
   const unread = data?.notices.filter((n) => !n.read).length ?? 0;
   return (
     <div className="relative">
-      <button type="button" className="text-sm text-flash-700 underline-offset-4 hover:underline" aria-expanded={open}
-        onClick={async () => { setOpen(!open); if (!open && unread) { await apiFetch("/api/notices/read", { method: "POST" }); void qc.invalidateQueries({ queryKey: ["notices"] }); } }}>
-        Notices{unread ? <span className="ml-1 rounded-full bg-glow-600 px-1.5 text-xs text-white">{unread}</span> : null}
+      <button
+        type="button"
+        className="text-sm text-flash-700 underline-offset-4 hover:underline"
+        aria-expanded={open}
+        onClick={async () => {
+          setOpen(!open);
+          if (!open && unread) {
+            await apiFetch("/api/notices/read", { method: "POST" });
+            void qc.invalidateQueries({ queryKey: ["notices"] });
+          }
+        }}
+      >
+        Notices
+        {unread ? <span className="ml-1 rounded-full bg-glow-600 px-1.5 text-xs text-white">{unread}</span> : null}
       </button>
-      {flash ? <p role="status" className="absolute right-0 top-7 z-20 w-72 rounded-md border border-glow-400 bg-glow-50 p-2 text-sm shadow">{flash}</p> : null}
+      {flash ? (
+        <p
+          role="status"
+          className="absolute right-0 top-7 z-20 w-72 rounded-md border border-glow-400 bg-glow-50 p-2 text-sm shadow"
+        >
+          {flash}
+        </p>
+      ) : null}
       {open ? (
         <div className="absolute right-0 top-7 z-10 w-80 rounded-md border border-flash-200 bg-white p-2 text-sm shadow">
           {data?.notices.length ? (
             <ul className="max-h-80 space-y-1 overflow-auto">
               {data.notices.map((n) => (
                 <li key={n.id} className="border-b border-flash-100 pb-1">
-                  {n.href ? <Link href={n.href} className="underline">{n.text}</Link> : n.text}
+                  {n.href ? (
+                    <Link href={n.href} className="underline">
+                      {n.text}
+                    </Link>
+                  ) : (
+                    n.text
+                  )}
                   <When iso={n.at} className="block text-xs text-flash-500" />
                 </li>
               ))}
             </ul>
-          ) : <p className="text-flash-600">No notices yet.</p>}
+          ) : (
+            <p className="text-flash-600">No notices yet.</p>
+          )}
         </div>
       ) : null}
     </div>

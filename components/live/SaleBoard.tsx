@@ -27,7 +27,12 @@ type Filter = (typeof FILTERS)[number]["key"];
 
 function standingFor(l: Row, you: You): Standing {
   const bidding = you.ceilings[l.saleLotId] != null;
-  return standingOf({ phase: l.phase, ownLot: false, bidding, leading: bidding && you.paddle != null && l.leaderPaddle === you.paddle });
+  return standingOf({
+    phase: l.phase,
+    ownLot: false,
+    bidding,
+    leading: bidding && you.paddle != null && l.leaderPaddle === you.paddle,
+  });
 }
 
 /**
@@ -38,39 +43,71 @@ function standingFor(l: Row, you: You): Standing {
 export function SaleBoard({ initial }: { initial: Data }) {
   const qc = useQueryClient();
   const key = ["sale", initial.sale.id];
-  const { data } = useQuery({ queryKey: key, queryFn: () => apiFetch<Data>(`/api/sales/${initial.sale.id}`), initialData: initial });
+  const { data } = useQuery({
+    queryKey: key,
+    queryFn: () => apiFetch<Data>(`/api/sales/${initial.sale.id}`),
+    initialData: initial,
+  });
   const [filter, setFilter] = useState<Filter>("all");
   const now = useNow();
-  useLotEvents(saleRoom(initial.sale.id), (lotId) => qc.getQueryData<Data>(key)?.lots.find((l) => l.saleLotId === lotId)?.seq ?? null, (p) => {
-    qc.setQueryData<Data>(key, (old) => old && { ...old, lots: old.lots.map((l) => (l.saleLotId === p.saleLotId && p.seq > l.seq ? { ...l, ...p } : l)) });
-  }, () => void qc.invalidateQueries({ queryKey: key }));
+  useLotEvents(
+    saleRoom(initial.sale.id),
+    (lotId) => qc.getQueryData<Data>(key)?.lots.find((l) => l.saleLotId === lotId)?.seq ?? null,
+    (p) => {
+      qc.setQueryData<Data>(
+        key,
+        (old) =>
+          old && {
+            ...old,
+            lots: old.lots.map((l) => (l.saleLotId === p.saleLotId && p.seq > l.seq ? { ...l, ...p } : l)),
+          },
+      );
+    },
+    () => void qc.invalidateQueries({ queryKey: key }),
+  );
 
-  const rows = data.lots.map((l) => ({ ...l, standing: standingFor(l, data.you) })).filter((l) => {
-    if (filter === "soon") return l.phase === "open" && now != null && Date.parse(l.closesAt) - now <= 15 * 60_000;
-    if (filter === "leading") return l.standing === "leading";
-    if (filter === "outbid") return l.standing === "outbid";
-    if (filter === "watched") return data.you.watched.includes(l.saleLotId);
-    return true;
-  });
+  const rows = data.lots
+    .map((l) => ({ ...l, standing: standingFor(l, data.you) }))
+    .filter((l) => {
+      if (filter === "soon") return l.phase === "open" && now != null && Date.parse(l.closesAt) - now <= 15 * 60_000;
+      if (filter === "leading") return l.standing === "leading";
+      if (filter === "outbid") return l.standing === "outbid";
+      if (filter === "watched") return data.you.watched.includes(l.saleLotId);
+      return true;
+    });
   const href = (l: Row) => `/sales/${l.saleId}/lots/${l.saleLotId}`;
   return (
     <div className="space-y-3">
       <div role="group" aria-label="Show" className="flex flex-wrap gap-2 text-sm">
         {FILTERS.map((f) => (
-          <button key={f.key} type="button" aria-pressed={filter === f.key} onClick={() => setFilter(f.key)}
-            className={`rounded-full border px-3 py-1 ${filter === f.key ? "border-glow-600 bg-glow-50 font-medium text-glow-800" : "border-flash-300 bg-white text-flash-700"}`}>{f.label}</button>
+          <button
+            key={f.key}
+            type="button"
+            aria-pressed={filter === f.key}
+            onClick={() => setFilter(f.key)}
+            className={`rounded-full border px-3 py-1 ${filter === f.key ? "border-glow-600 bg-glow-50 font-medium text-glow-800" : "border-flash-300 bg-white text-flash-700"}`}
+          >
+            {f.label}
+          </button>
         ))}
       </div>
       <ul className="space-y-2 sm:hidden" aria-label="Lots">
         {rows.map((l) => (
           <li key={l.saleLotId} className="card space-y-1 p-3" data-testid={`card-${l.saleLotId}`}>
-            <Link href={href(l)} className="font-medium underline underline-offset-2">{l.position}. {l.title}</Link>
+            <Link href={href(l)} className="font-medium underline underline-offset-2">
+              {l.position}. {l.title}
+            </Link>
             <div className="flex items-baseline justify-between gap-2">
               <span className="code text-lg font-semibold">{l.bidCount ? formatCents(l.priceCents) : "No bids"}</span>
-              <span data-testid={`left-${l.saleLotId}`}><TimeLeft iso={l.closesAt} phase={l.phase} /></span>
+              <span data-testid={`left-${l.saleLotId}`}>
+                <TimeLeft iso={l.closesAt} phase={l.phase} />
+              </span>
             </div>
             <p className="flex justify-between text-xs text-flash-600">
-              <span>{l.bidCount} {l.bidCount === 1 ? "bid" : "bids"} · {l.bidCount === 0 ? "reserve —" : l.reserveMet ? "reserve reached" : "reserve not reached"}</span>
+              <span>
+                {l.bidCount} {l.bidCount === 1 ? "bid" : "bids"} ·{" "}
+                {l.bidCount === 0 ? "reserve —" : l.reserveMet ? "reserve reached" : "reserve not reached"}
+              </span>
               <span className="font-medium text-flash-800">{STANDING_SHORT[l.standing]}</span>
             </p>
           </li>
@@ -79,20 +116,36 @@ export function SaleBoard({ initial }: { initial: Data }) {
       <div className="hidden overflow-x-auto rounded-lg border border-flash-200 bg-white sm:block">
         <table className="min-w-full text-sm">
           <thead className="bg-flash-100 text-left text-flash-700">
-            <tr>{["#", "Lot", "Consignor", "Price", "Bids", "Leader", "Reserve", "Time left", "My standing"].map((h) => <th key={h} scope="col" className="px-3 py-2 font-medium">{h}</th>)}</tr>
+            <tr>
+              {["#", "Lot", "Consignor", "Price", "Bids", "Leader", "Reserve", "Time left", "My standing"].map((h) => (
+                <th key={h} scope="col" className="px-3 py-2 font-medium">
+                  {h}
+                </th>
+              ))}
+            </tr>
           </thead>
           <tbody>
             {rows.map((l) => (
               <tr key={l.saleLotId} className="border-t border-flash-200">
                 <td className="px-3 py-2">{l.position}</td>
-                <td className="px-3 py-2"><Link href={href(l)} className="font-medium underline underline-offset-2">{l.title}</Link></td>
+                <td className="px-3 py-2">
+                  <Link href={href(l)} className="font-medium underline underline-offset-2">
+                    {l.title}
+                  </Link>
+                </td>
                 <td className="px-3 py-2">{l.consignor}</td>
-                <td className="code px-3 py-2" data-testid={`price-${l.saleLotId}`}>{l.bidCount ? formatCents(l.priceCents) : "—"}</td>
+                <td className="code px-3 py-2" data-testid={`price-${l.saleLotId}`}>
+                  {l.bidCount ? formatCents(l.priceCents) : "—"}
+                </td>
                 <td className="px-3 py-2">{l.bidCount}</td>
                 <td className="px-3 py-2">{l.leaderPaddle ? `Paddle ${l.leaderPaddle}` : "—"}</td>
                 <td className="px-3 py-2">{l.bidCount === 0 ? "" : l.reserveMet ? "Reached" : "Not reached"}</td>
-                <td className="px-3 py-2"><TimeLeft iso={l.closesAt} phase={l.phase} /></td>
-                <td className="px-3 py-2" data-testid={`standing-${l.saleLotId}`}>{STANDING_SHORT[l.standing]}</td>
+                <td className="px-3 py-2">
+                  <TimeLeft iso={l.closesAt} phase={l.phase} />
+                </td>
+                <td className="px-3 py-2" data-testid={`standing-${l.saleLotId}`}>
+                  {STANDING_SHORT[l.standing]}
+                </td>
               </tr>
             ))}
           </tbody>

@@ -10,7 +10,12 @@ import { joinRooms, liveSocket } from "./socket";
  * missing seq waits up to GAP_WAIT_MS for it before `onGap` refetches.
  * `seqOf(lotId)` reads the seq the page currently shows.
  */
-export function useLotEvents(room: string, seqOf: (saleLotId: string) => number | null, onApply: (p: LotLive) => void, onResync: () => void) {
+export function useLotEvents(
+  room: string,
+  seqOf: (saleLotId: string) => number | null,
+  onApply: (p: LotLive) => void,
+  onResync: () => void,
+) {
   const cb = useRef({ seqOf, onApply, onResync });
   cb.current = { seqOf, onApply, onResync };
   useEffect(() => {
@@ -25,19 +30,33 @@ export function useLotEvents(room: string, seqOf: (saleLotId: string) => number 
       const shown = cb.current.seqOf(p.saleLotId);
       if (shown == null) return;
       let q = queues.get(p.saleLotId);
-      if (!q) { q = createSequencer<LotLive>(shown); queues.set(p.saleLotId, q); }
+      if (!q) {
+        q = createSequencer<LotLive>(shown);
+        queues.set(p.saleLotId, q);
+      }
       q.reset(shown);
       for (const e of q.push(p)) cb.current.onApply(e);
       const t = timers.get(p.saleLotId);
-      if (t) { clearTimeout(t); timers.delete(p.saleLotId); }
+      if (t) {
+        clearTimeout(t);
+        timers.delete(p.saleLotId);
+      }
       if (q.waiting()) {
-        timers.set(p.saleLotId, setTimeout(() => {
-          timers.delete(p.saleLotId);
-          if (queues.get(p.saleLotId)?.waiting()) { queues.delete(p.saleLotId); cb.current.onResync(); }
-        }, GAP_WAIT_MS));
+        timers.set(
+          p.saleLotId,
+          setTimeout(() => {
+            timers.delete(p.saleLotId);
+            if (queues.get(p.saleLotId)?.waiting()) {
+              queues.delete(p.saleLotId);
+              cb.current.onResync();
+            }
+          }, GAP_WAIT_MS),
+        );
       }
     };
-    const batch = (b: { events: { live: LotLive }[] }) => { for (const e of b.events) on(e.live); };
+    const batch = (b: { events: { live: LotLive }[] }) => {
+      for (const e of b.events) on(e.live);
+    };
     const s = liveSocket();
     s.on("lot.bid", on);
     s.on("lot.closed", on);

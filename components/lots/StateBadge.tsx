@@ -10,5 +10,9 @@ const TONE: Record<string, string> = {
 
 /** A lot's state, always in words (colour only supports it). */
 export function StateBadge({ state }: { state: string }) {
-  return <span className={`inline-block rounded-full border px-2.5 py-0.5 text-xs font-medium ${TONE[state] ?? ""}`}>{LOT_STATE_WORDS[state] ?? state}</span>;
+  return (
+    <span className={`inline-block rounded-full border px-2.5 py-0.5 text-xs font-medium ${TONE[state] ?? ""}`}>
+      {LOT_STATE_WORDS[state] ?? state}
+    </span>
+  );
 }

@@ -20,10 +20,17 @@ const tickSubs = new Set<() => void>();
 let timer: ReturnType<typeof setInterval> | null = null;
 function subscribeTick(cb: () => void) {
   tickSubs.add(cb);
-  if (!timer) timer = setInterval(() => { nowCache = Date.now(); for (const s of tickSubs) s(); }, 1000);
+  if (!timer)
+    timer = setInterval(() => {
+      nowCache = Date.now();
+      for (const s of tickSubs) s();
+    }, 1000);
   return () => {
     tickSubs.delete(cb);
-    if (!tickSubs.size && timer) { clearInterval(timer); timer = null; }
+    if (!tickSubs.size && timer) {
+      clearInterval(timer);
+      timer = null;
+    }
   };
 }
 const clientNow = () => {

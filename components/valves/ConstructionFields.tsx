@@ -5,10 +5,27 @@ import { FEATURE_FIELDS } from "@/lib/valves/construction-text";
 import type { FeatureKey } from "@/lib/valves/construction";
 
 const GROUPS: { title: string; keys: FeatureKey[] }[] = [
-  { title: "Plates", keys: ["plateShape", "plateSurface", "plateColour", "plateLength", "plateOpenings", "plateFastening", "plateFastenerCount"] },
+  {
+    title: "Plates",
+    keys: [
+      "plateShape",
+      "plateSurface",
+      "plateColour",
+      "plateLength",
+      "plateOpenings",
+      "plateFastening",
+      "plateFastenerCount",
+    ],
+  },
   { title: "Getter", keys: ["getterShape", "getterPosition", "flashPlace"] },
-  { title: "Micas and supports", keys: ["micaCount", "micaOutline", "micaCoating", "micaSpringClips", "supportRodFinish"] },
-  { title: "Envelope, base and markings", keys: ["bulbShape", "exhaustTip", "baseMaterial", "baseColour", "metalSkirt", "markingMethod"] },
+  {
+    title: "Micas and supports",
+    keys: ["micaCount", "micaOutline", "micaCoating", "micaSpringClips", "supportRodFinish"],
+  },
+  {
+    title: "Envelope, base and markings",
+    keys: ["bulbShape", "exhaustTip", "baseMaterial", "baseColour", "metalSkirt", "markingMethod"],
+  },
 ];
 
 const words = (v: string) => v.replace(/-/g, " ");
@@ -18,7 +35,13 @@ const words = (v: string) => v.replace(/-/g, " ");
  * `features.<name>`. Leave a feature blank when it cannot be seen.
  */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export function ConstructionFields({ register, prefix = "features" }: { register: UseFormRegister<any>; prefix?: string }) {
+export function ConstructionFields({
+  register,
+  prefix = "features",
+}: {
+  register: UseFormRegister<any>;
+  prefix?: string;
+}) {
   return (
     <div className="space-y-3">
       {GROUPS.map((g) => (
@@ -29,15 +52,27 @@ export function ConstructionFields({ register, prefix = "features" }: { register
               const f = FEATURE_FIELDS[k];
               const id = prefix === "features" ? `feat-${k}` : `${prefix.replace(/\W/g, "-")}-feat-${k}`;
               const options =
-                f.choice.kind === "enum" ? f.choice.values
-                : f.choice.kind === "count" ? Array.from({ length: f.choice.max - f.choice.min + 1 }, (_, i) => String(f.choice.kind === "count" ? f.choice.min + i : i))
-                : ["yes", "no"];
+                f.choice.kind === "enum"
+                  ? f.choice.values
+                  : f.choice.kind === "count"
+                    ? Array.from({ length: f.choice.max - f.choice.min + 1 }, (_, i) =>
+                        String(f.choice.kind === "count" ? f.choice.min + i : i),
+                      )
+                    : ["yes", "no"];
               return (
                 <label key={k} htmlFor={id} className="text-sm">
                   <span className="block text-flash-700">{f.label}</span>
-                  <select id={id} className="input mt-0.5 py-1.5" {...register(`${prefix}.${k}`, { setValueAs: (v: string) => v ?? "" })}>
+                  <select
+                    id={id}
+                    className="input mt-0.5 py-1.5"
+                    {...register(`${prefix}.${k}`, { setValueAs: (v: string) => v ?? "" })}
+                  >
                     <option value="">not seen</option>
-                    {options.map((o) => <option key={o} value={o}>{words(o)}</option>)}
+                    {options.map((o) => (
+                      <option key={o} value={o}>
+                        {words(o)}
+                      </option>
+                    ))}
                   </select>
                 </label>
               );

@@ -20,46 +20,83 @@ export function DateCodeAnswer({ data }: { data: Answer }) {
     <section aria-labelledby="code-h" className="space-y-4">
       <h2 id="code-h" className="text-xl font-semibold">
         Code <span className="code">{data.code}</span>
-        {data.type ? <span className="text-base font-normal text-flash-600"> on a <span className="code">{data.type.designation}</span>{data.type.introducedYear ? ` (introduced ${data.type.introducedYear})` : ""}</span> : null}
+        {data.type ? (
+          <span className="text-base font-normal text-flash-600">
+            {" "}
+            on a <span className="code">{data.type.designation}</span>
+            {data.type.introducedYear ? ` (introduced ${data.type.introducedYear})` : ""}
+          </span>
+        ) : null}
       </h2>
       <div className="card space-y-3">
         <h3 className="font-semibold">As a year-week date code</h3>
         {eia.ok ? (
           <>
-            {eia.sourceCode ? <p className="text-sm">Source code printed with it: <span className="code">{eia.sourceCode}</span></p> : null}
+            {eia.sourceCode ? (
+              <p className="text-sm">
+                Source code printed with it: <span className="code">{eia.sourceCode}</span>
+              </p>
+            ) : null}
             {eia.readings.length ? (
               <ol className="space-y-2">
                 {eia.readings.map((r) => (
                   <li key={`${r.form}-${r.year}-${r.week}`} className="rounded-md border border-flash-200 px-3 py-2">
-                    <p><span className="mr-2 inline-block rounded bg-flash-100 px-1.5 text-xs font-semibold">#{r.rank}</span><strong>{r.year}</strong>, week {r.week} <span className="text-sm text-flash-600">({r.form})</span></p>
-                    <ul className="mt-1 list-disc pl-5 text-sm text-flash-700">{r.reasons.map((x) => <li key={x}>{x}</li>)}</ul>
+                    <p>
+                      <span className="mr-2 inline-block rounded bg-flash-100 px-1.5 text-xs font-semibold">
+                        #{r.rank}
+                      </span>
+                      <strong>{r.year}</strong>, week {r.week}{" "}
+                      <span className="text-sm text-flash-600">({r.form})</span>
+                    </p>
+                    <ul className="mt-1 list-disc pl-5 text-sm text-flash-700">
+                      {r.reasons.map((x) => (
+                        <li key={x}>{x}</li>
+                      ))}
+                    </ul>
                   </li>
                 ))}
               </ol>
-            ) : <p className="text-sm text-fault-700">No reading survives.</p>}
+            ) : (
+              <p className="text-sm text-fault-700">No reading survives.</p>
+            )}
             {eia.flags.length ? (
-              <ul className="text-sm text-flash-800">{eia.flags.map((f) => <li key={f}>• {FLAG_WORDS[f] ?? f}</li>)}</ul>
+              <ul className="text-sm text-flash-800">
+                {eia.flags.map((f) => (
+                  <li key={f}>• {FLAG_WORDS[f] ?? f}</li>
+                ))}
+              </ul>
             ) : null}
           </>
         ) : (
-          <p role="status" className="text-sm text-fault-700">Not a year-week code: {eia.error.message}</p>
+          <p role="status" className="text-sm text-fault-700">
+            Not a year-week code: {eia.error.message}
+          </p>
         )}
         {eia.rejected.length ? (
           <details className="text-sm">
             <summary className="cursor-pointer text-flash-700">Readings ruled out ({eia.rejected.length})</summary>
             <ul className="mt-1 list-disc pl-5 text-flash-700">
-              {eia.rejected.map((r, i) => <li key={i}>{r.reading.year ?? "?"}{r.reading.week ? ` wk ${r.reading.week}` : ""} ({r.reading.form}): {r.reason}</li>)}
+              {eia.rejected.map((r, i) => (
+                <li key={i}>
+                  {r.reading.year ?? "?"}
+                  {r.reading.week ? ` wk ${r.reading.week}` : ""} ({r.reading.form}): {r.reason}
+                </li>
+              ))}
             </ul>
           </details>
         ) : null}
       </div>
       {data.source?.ok ? (
         <div className="card space-y-2">
-          <h3 className="font-semibold">As a source code: <span className="code">{data.source.code}</span></h3>
+          <h3 className="font-semibold">
+            As a source code: <span className="code">{data.source.code}</span>
+          </h3>
           {data.source.found ? (
             <p className="text-sm">
               Registered to <strong>{data.source.entries.map((e) => e.makerName).join(", ")}</strong>
-              {data.source.demoOnly ? <span className="ml-1 rounded bg-flash-100 px-1.5 text-xs">demo registry</span> : null}
+              {data.source.demoOnly ? (
+                <span className="ml-1 rounded bg-flash-100 px-1.5 text-xs">demo registry</span>
+              ) : null}
             </p>
           ) : (
             <p className="text-sm text-flash-700">Not in the house registry.</p>
@@ -73,11 +110,18 @@ export function DateCodeAnswer({ data }: { data: Answer }) {
           {european.ok ? (
             <ol className="space-y-1 text-sm">
               {european.readings.map((r) => (
-                <li key={`${r.scheme}-${r.year}-${r.month}`}>#{r.rank} <strong>{r.year}</strong>, month {r.month} <span className="text-flash-600">({r.scheme === "A-L" ? "letters A–L" : "letters skipping I"})</span></li>
+                <li key={`${r.scheme}-${r.year}-${r.month}`}>
+                  #{r.rank} <strong>{r.year}</strong>, month {r.month}{" "}
+                  <span className="text-flash-600">({r.scheme === "A-L" ? "letters A–L" : "letters skipping I"})</span>
+                </li>
               ))}
             </ol>
-          ) : <p className="text-sm text-flash-700">{european.error.message}</p>}
-          <p className="text-xs text-flash-500">Month-letter schemes differ between factories; treat these as leads, not proof.</p>
+          ) : (
+            <p className="text-sm text-flash-700">{european.error.message}</p>
+          )}
+          <p className="text-xs text-flash-500">
+            Month-letter schemes differ between factories; treat these as leads, not proof.
+          </p>
         </div>
       ) : null}
     </section>

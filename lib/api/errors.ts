@@ -57,7 +57,9 @@ export class ApiError extends Error {
 }
 
 /** Turn a zod error's issues into { "field.path": "message" } (first message per field). */
-export function fieldsFromIssues(issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }>): Record<string, string> {
+export function fieldsFromIssues(
+  issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }>,
+): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const i of issues) {
     const key = i.path.map(String).join(".") || "_";

@@ -18,7 +18,10 @@ type RouteOptions = {
 export function errorResponse(e: unknown): NextResponse {
   if (e instanceof ApiError) return NextResponse.json(e.toBody(), { status: e.status, headers: e.headers });
   console.error("[api] unexpected error", e);
-  return NextResponse.json({ error: { code: "internal", message: "Something went wrong on our side" } }, { status: 500 });
+  return NextResponse.json(
+    { error: { code: "internal", message: "Something went wrong on our side" } },
+    { status: 500 },
+  );
 }
 
 /**
@@ -31,12 +34,16 @@ export function route<P = Record<string, string>>(
 ) {
   return async (req: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
     try {
-      const configured = env().TRUSTED_ORIGINS.split(",").map((s) => s.trim());
+      const configured = env()
+        .TRUSTED_ORIGINS.split(",")
+        .map((s) => s.trim());
       configured.push(new URL(env().NEXTAUTH_URL).origin);
       if (isCrossSite(req.method, req.headers, allowedOriginsFor(req.headers.get("host"), configured))) {
         throw new ApiError("cross_site", "Cross-site requests are refused");
       }
-      const viewer = opts.public ? await viewerFromRequest(req).catch(() => null) : assertCan(await viewerFromRequest(req), opts.permission);
+      const viewer = opts.public
+        ? await viewerFromRequest(req).catch(() => null)
+        : assertCan(await viewerFromRequest(req), opts.permission);
       const params = (await context?.params) ?? ({} as P);
       const out = await handler({ req, params, viewer });
       return out instanceof Response ? out : NextResponse.json(out);
@@ -47,13 +54,19 @@ export function route<P = Record<string, string>>(
 }
 
 /** Read and validate a JSON body: 415 for the wrong type, 413 over `maxBytes`, 400 otherwise. */
-export async function readJson<S extends z.ZodType>(req: NextRequest, schema: S, maxBytes = 64 * 1024): Promise<z.infer<S>> {
+export async function readJson<S extends z.ZodType>(
+  req: NextRequest,
+  schema: S,
+  maxBytes = 64 * 1024,
+): Promise<z.infer<S>> {
   const type = req.headers.get("content-type") ?? "";
-  if (!type.includes("application/json")) throw new ApiError("unsupported_media_type", "Send the body as application/json");
+  if (!type.includes("application/json"))
+    throw new ApiError("unsupported_media_type", "Send the body as application/json");
   const declared = Number(req.headers.get("content-length") ?? "0");
   if (declared > maxBytes) throw new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
   const text = await req.text();
-  if (Buffer.byteLength(text) > maxBytes) throw new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
+  if (Buffer.byteLength(text) > maxBytes)
+    throw new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
   let raw: unknown;
   try {
     raw = JSON.parse(text);
@@ -73,6 +86,7 @@ export function parseParams<S extends z.ZodType>(schema: S, raw: unknown): z.inf
 /** Validate any input with its schema; 400 with per-field messages on failure. */
 export function parseWith<S extends z.ZodType>(schema: S, raw: unknown): z.infer<S> {
   const r = schema.safeParse(raw);
-  if (!r.success) throw new ApiError("validation_failed", "Some fields need attention", fieldsFromIssues(r.error.issues));
+  if (!r.success)
+    throw new ApiError("validation_failed", "Some fields need attention", fieldsFromIssues(r.error.issues));
   return r.data;
 }

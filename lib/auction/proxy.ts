@@ -90,7 +90,10 @@ export function validateLotTerms(terms: LotTerms): string[] {
   if (!Number.isSafeInteger(terms.openingCents) || terms.openingCents <= 0) {
     problems.push("opening price must be whole cents > 0");
   }
-  if (terms.reserveCents !== null && (!Number.isSafeInteger(terms.reserveCents) || terms.reserveCents < terms.openingCents)) {
+  if (
+    terms.reserveCents !== null &&
+    (!Number.isSafeInteger(terms.reserveCents) || terms.reserveCents < terms.openingCents)
+  ) {
     problems.push("reserve must be whole cents at or above the opening price (or none)");
   }
   try {

@@ -44,7 +44,10 @@ export function validateSoftClose(settings: SoftCloseSettings): string[] {
   if (!Number.isSafeInteger(settings.windowSeconds) || settings.windowSeconds <= 0) {
     problems.push("windowSeconds must be a whole number > 0");
   }
-  if (settings.maxExtensions !== null && (!Number.isSafeInteger(settings.maxExtensions) || settings.maxExtensions < 0)) {
+  if (
+    settings.maxExtensions !== null &&
+    (!Number.isSafeInteger(settings.maxExtensions) || settings.maxExtensions < 0)
+  ) {
     problems.push("maxExtensions must be a whole number ≥ 0 or null");
   }
   return problems;

@@ -34,7 +34,12 @@ export function canBidIn(phase: LotPhase, standing: Standing): boolean {
 
 /** The dealer's own last action, as the bid answer told it (stays only while it still agrees with the lot). */
 export type LastAction =
-  | { kind: "bid"; outcome: "first-bid" | "new-leader" | "outbid-by-proxy" | "max-raised"; seq: number; maxCents: number }
+  | {
+      kind: "bid";
+      outcome: "first-bid" | "new-leader" | "outbid-by-proxy" | "max-raised";
+      seq: number;
+      maxCents: number;
+    }
   | { kind: "refused"; seq: number; message: string };
 
 /**
@@ -45,10 +50,19 @@ export type LastAction =
  */
 export type PanelMessage = { standing: Standing; tone: "lead" | "behind" | "neutral" | "done"; key: string };
 
-export function panelMessage(s: StandingInput & { seq: number }, last: LastAction | null): PanelMessage & { last: LastAction | null } {
+export function panelMessage(
+  s: StandingInput & { seq: number },
+  last: LastAction | null,
+): PanelMessage & { last: LastAction | null } {
   const standing = standingOf(s);
-  const tone: PanelMessage["tone"] = standing === "leading" || standing === "won" ? "lead" : standing === "outbid" || standing === "lost" ? "behind"
-    : standing === "unsold" ? "done" : "neutral";
+  const tone: PanelMessage["tone"] =
+    standing === "leading" || standing === "won"
+      ? "lead"
+      : standing === "outbid" || standing === "lost"
+        ? "behind"
+        : standing === "unsold"
+          ? "done"
+          : "neutral";
   let keep: LastAction | null = null;
   if (last && s.phase === "open" && last.seq === s.seq) {
     if (last.kind === "refused") keep = last;

@@ -8,7 +8,8 @@ export const SIGN_IN_WINDOW_MS = 15 * 60 * 1000;
 export const ACCOUNT_MAX_FAILURES = 9;
 export const ADDRESS_MAX_FAILURES = 30;
 
-export type ThrottleDecision = { allowed: true } | { allowed: false; scope: "account" | "address"; retryAfterSeconds: number };
+export type ThrottleDecision =
+  { allowed: true } | { allowed: false; scope: "account" | "address"; retryAfterSeconds: number };
 
 export function throttleDecision(
   failures: { byAccount: number; byAddress: number },

@@ -11,7 +11,10 @@ export type CatalogueSort = (typeof SORTS)[number];
 const CursorSchema = z.object({
   s: z.enum(SORTS),
   /** The sort key of the last lot shown: a number (rank, epoch ms, cents) or null where the lot has none. */
-  k: z.array(z.union([z.number().finite(), z.null()])).min(1).max(3),
+  k: z
+    .array(z.union([z.number().finite(), z.null()]))
+    .min(1)
+    .max(3),
   id: z.uuid(),
 });
 export type Cursor = z.infer<typeof CursorSchema>;

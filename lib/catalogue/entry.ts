@@ -32,7 +32,11 @@ export function aggregateLot(items: readonly LotItem[], summary: LotSummary): Ca
     designations: sorted(items.map((i) => i.designation.normalised).filter((d): d is string => Boolean(d))),
     families: sorted(summary.families.map((f) => f.key)),
     conditions: sorted(items.map((i) => i.condition)),
-    makerBases: sorted(Object.entries(summary.attribution).filter(([, tubes]) => tubes > 0).map(([basis]) => basis)),
+    makerBases: sorted(
+      Object.entries(summary.attribution)
+        .filter(([, tubes]) => tubes > 0)
+        .map(([basis]) => basis),
+    ),
     grades: BANDS.filter((b) => summary.tests[b] > 0),
     hazards: sorted(summary.hazards.map((h) => h.kind).filter((k) => FILTERED_HAZARDS.has(k))),
     tested: summary.tests.tested > 0,

@@ -21,10 +21,18 @@ export function priceSeries(comparables: readonly ComparableSale[], families: re
         const month = c.soldAt.slice(0, 7);
         byMonth.set(month, [...(byMonth.get(month) ?? []), c.pricePerTubeCents]);
       }
-      const months = [...byMonth.entries()].sort(([a], [b]) => a.localeCompare(b)).map(([month, prices]) => {
-        const sorted = [...prices].sort((a, b) => a - b);
-        return { month, sales: sorted.length, medianCents: Math.round(percentile(sorted, 0.5)), lowCents: sorted[0]!, highCents: sorted.at(-1)! };
-      });
+      const months = [...byMonth.entries()]
+        .sort(([a], [b]) => a.localeCompare(b))
+        .map(([month, prices]) => {
+          const sorted = [...prices].sort((a, b) => a - b);
+          return {
+            month,
+            sales: sorted.length,
+            medianCents: Math.round(percentile(sorted, 0.5)),
+            lowCents: sorted[0]!,
+            highCents: sorted.at(-1)!,
+          };
+        });
       out.push({ family, condition, months, sales: months.reduce((n, m) => n + m.sales, 0) });
     }
   }

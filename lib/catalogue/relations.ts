@@ -12,7 +12,15 @@ import type { ReferenceTable } from "../valves/reference-table";
 export type Relation = "same" | LinkKind;
 
 /** Closest first. */
-export const RELATION_ORDER: readonly Relation[] = ["same", "exact", "premium", "near", "caveat", "sibling-heater", "different-base"];
+export const RELATION_ORDER: readonly Relation[] = [
+  "same",
+  "exact",
+  "premium",
+  "near",
+  "caveat",
+  "sibling-heater",
+  "different-base",
+];
 
 export const RELATION_WORDS: Record<Relation, string> = {
   same: "the type searched for",
@@ -37,7 +45,10 @@ export function designationTerm(typed: string, table: ReferenceTable): Designati
   const eq = findEquivalents(n.value);
   const self = eq.resolvedAs ?? n.value;
   if (!isKnownDesignation(table, n.value) && !isKnownDesignation(table, self) && eq.matches.length === 0) return null;
-  const related = new Map<string, Relation>([[self, "same"], [n.value, "same"]]);
+  const related = new Map<string, Relation>([
+    [self, "same"],
+    [n.value, "same"],
+  ]);
   for (const m of eq.matches) if (!related.has(m.designation)) related.set(m.designation, m.link);
   return { typed, designation: self, related };
 }

@@ -29,7 +29,10 @@ export type WantCriteria = {
 };
 
 /** Every designation the list wants, each with its relation to the list's type; empty when the type is unknown. */
-export function wantedDesignations(c: Pick<WantCriteria, "designation" | "closeness">, table: ReferenceTable): Map<string, Relation> {
+export function wantedDesignations(
+  c: Pick<WantCriteria, "designation" | "closeness">,
+  table: ReferenceTable,
+): Map<string, Relation> {
   const term = designationTerm(c.designation, table);
   const out = new Map<string, Relation>();
   if (!term) return out;
@@ -38,7 +41,13 @@ export function wantedDesignations(c: Pick<WantCriteria, "designation" | "closen
   return out;
 }
 
-export type ItemForMatching = { designation: string | null; quantity: number; condition: string; makerBasis: string; vacuumLoss: boolean };
+export type ItemForMatching = {
+  designation: string | null;
+  quantity: number;
+  condition: string;
+  makerBasis: string;
+  vacuumLoss: boolean;
+};
 export type LotForMatching = { estimateLowCents: number | null; items: readonly ItemForMatching[] };
 
 /**
@@ -46,8 +55,13 @@ export type LotForMatching = { estimateLowCents: number | null; items: readonly 
  * getters left out when asked), and an estimate within the list's maximum (a lot without an estimate is
  * offered). Returns the tubes that count.
  */
-export function meetsWantList(c: WantCriteria, wanted: ReadonlyMap<string, Relation>, lot: LotForMatching): { matched: boolean; tubes: number } {
-  if (c.maxEstimateCents !== null && lot.estimateLowCents !== null && lot.estimateLowCents > c.maxEstimateCents) return { matched: false, tubes: 0 };
+export function meetsWantList(
+  c: WantCriteria,
+  wanted: ReadonlyMap<string, Relation>,
+  lot: LotForMatching,
+): { matched: boolean; tubes: number } {
+  if (c.maxEstimateCents !== null && lot.estimateLowCents !== null && lot.estimateLowCents > c.maxEstimateCents)
+    return { matched: false, tubes: 0 };
   let tubes = 0;
   for (const i of lot.items) {
     if (!i.designation || !wanted.has(i.designation)) continue;

@@ -3,12 +3,21 @@
  * shape and are thrown as ApiClientError, so forms can show field messages.
  */
 export class ApiClientError extends Error {
-  constructor(readonly status: number, readonly code: string, message: string, readonly fields?: Record<string, string>, readonly details?: Record<string, unknown>) {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string>,
+    readonly details?: Record<string, unknown>,
+  ) {
     super(message);
   }
 }
 
-export async function apiFetch<T>(path: string, init: { method?: string; json?: unknown; signal?: AbortSignal } = {}): Promise<T> {
+export async function apiFetch<T>(
+  path: string,
+  init: { method?: string; json?: unknown; signal?: AbortSignal } = {},
+): Promise<T> {
   const res = await fetch(path, {
     method: init.method ?? (init.json === undefined ? "GET" : "POST"),
     headers: init.json === undefined ? undefined : { "content-type": "application/json" },
@@ -19,7 +28,13 @@ export async function apiFetch<T>(path: string, init: { method?: string; json?: 
   const body = await res.json().catch(() => null);
   if (!res.ok) {
     const err = body?.error;
-    throw new ApiClientError(res.status, err?.code ?? "unknown", err?.message ?? `Request failed (${res.status})`, err?.fields, err?.details);
+    throw new ApiClientError(
+      res.status,
+      err?.code ?? "unknown",
+      err?.message ?? `Request failed (${res.status})`,
+      err?.fields,
+      err?.details,
+    );
   }
   return body as T;
 }

@@ -19,7 +19,10 @@ function runner(sequelize: Sequelize, folder: "migrations" | "seeders") {
       }),
     },
     context: sequelize.getQueryInterface(),
-    storage: new SequelizeStorage({ sequelize, tableName: folder === "migrations" ? "schema_migrations" : "schema_seeds" }),
+    storage: new SequelizeStorage({
+      sequelize,
+      tableName: folder === "migrations" ? "schema_migrations" : "schema_seeds",
+    }),
     logger: process.env.MIGRATE_QUIET ? undefined : console,
   });
 }

@@ -47,9 +47,11 @@ export interface Ruling {
 export function defaultLineValues(items: readonly ManifestItem[], hammerCents: number): LineValue[] {
   const tubes = items.reduce((n, i) => n + i.quantity, 0);
   const perTube = Math.max(1, Math.round(hammerCents / Math.max(1, tubes)));
-  return items.map((i) => (i.soldAsSet && i.quantity >= 2
-    ? { itemId: i.id, valueCents: perTube * i.quantity, singleValueCents: perTube }
-    : { itemId: i.id, valueCents: perTube }));
+  return items.map((i) =>
+    i.soldAsSet && i.quantity >= 2
+      ? { itemId: i.id, valueCents: perTube * i.quantity, singleValueCents: perTube }
+      : { itemId: i.id, valueCents: perTube },
+  );
 }
 
 const lineId = (i: ManifestItem) => `line-${i.position}`;
@@ -61,14 +63,24 @@ export function buildManifest(items: readonly ManifestItem[], values: readonly L
     const v = byItem.get(i.id);
     if (!v) throw new RangeError(`line ${i.position} has no reference value`);
     if (i.soldAsSet && i.quantity >= 2) {
-      return { lineId: lineId(i), kind: "matched-set", tubeCount: i.quantity, setValueCents: v.valueCents, singleValueCents: v.singleValueCents ?? Math.floor(v.valueCents / i.quantity) };
+      return {
+        lineId: lineId(i),
+        kind: "matched-set",
+        tubeCount: i.quantity,
+        setValueCents: v.valueCents,
+        singleValueCents: v.singleValueCents ?? Math.floor(v.valueCents / i.quantity),
+      };
     }
     return { lineId: lineId(i), kind: "singles", quantity: i.quantity, unitValueCents: v.valueCents };
   });
 }
 
 /** Claim items for the upheld rulings, valued against the manifest by lib/money. */
-export function claimsFromRulings(items: readonly ManifestItem[], lines: readonly ManifestLine[], rulings: readonly Ruling[]): ClaimItem[] {
+export function claimsFromRulings(
+  items: readonly ManifestItem[],
+  lines: readonly ManifestLine[],
+  rulings: readonly Ruling[],
+): ClaimItem[] {
   const itemById = new Map(items.map((i) => [i.id, i]));
   const lineById = new Map(lines.map((l) => [l.lineId, l]));
   const claims: ClaimItem[] = [];
@@ -79,11 +91,18 @@ export function claimsFromRulings(items: readonly ManifestItem[], lines: readonl
     const line = lineById.get(lineId(item))!;
     if (line.kind === "matched-set") {
       if (r.tubes > line.tubeCount) throw new RangeError(`line ${item.position}: the set has ${line.tubeCount} tubes`);
-      claims.push(r.worthCents === undefined
-        ? setDefectClaim(line, line.tubeCount - r.tubes)
-        : { kind: "set-adjustment", lineId: line.lineId, actualSetValueCents: r.worthCents });
+      claims.push(
+        r.worthCents === undefined
+          ? setDefectClaim(line, line.tubeCount - r.tubes)
+          : { kind: "set-adjustment", lineId: line.lineId, actualSetValueCents: r.worthCents },
+      );
     } else {
-      claims.push({ kind: "price-adjustment", lineId: line.lineId, count: r.tubes, actualUnitValueCents: r.worthCents ?? 0 });
+      claims.push({
+        kind: "price-adjustment",
+        lineId: line.lineId,
+        count: r.tubes,
+        actualUnitValueCents: r.worthCents ?? 0,
+      });
     }
   }
   return claims;
@@ -104,17 +123,34 @@ export interface SaleAmounts {
  * the rest is undisputed. A later partial refund on the same line values can
  * never exceed what is held, because it values the same tubes at most in full.
  */
-export function undisputedShare(sale: SaleAmounts, items: readonly ManifestItem[], lines: readonly LineValue[], claimed: readonly { itemId: string; tubes: number }[]): { held: SaleAmounts; undisputed: SaleAmounts } {
+export function undisputedShare(
+  sale: SaleAmounts,
+  items: readonly ManifestItem[],
+  lines: readonly LineValue[],
+  claimed: readonly { itemId: string; tubes: number }[],
+): { held: SaleAmounts; undisputed: SaleAmounts } {
   const manifest = buildManifest(items, lines);
-  const asFull = claimsFromRulings(items, manifest, claimed.map((c) => {
-    const item = items.find((i) => i.id === c.itemId);
-    const isSet = Boolean(item?.soldAsSet && item.quantity >= 2);
-    return { itemId: c.itemId, upheld: true, tubes: isSet ? item!.quantity : c.tubes, worthCents: 0 };
-  }));
+  const asFull = claimsFromRulings(
+    items,
+    manifest,
+    claimed.map((c) => {
+      const item = items.find((i) => i.id === c.itemId);
+      const isSet = Boolean(item?.soldAsSet && item.quantity >= 2);
+      return { itemId: c.itemId, upheld: true, tubes: isSet ? item!.quantity : c.tubes, worthCents: 0 };
+    }),
+  );
   const s = settlePartialRefund(sale, manifest, asFull);
-  const held = { hammerCents: s.hammerRefundCents, premiumCents: s.premiumRefundCents, commissionCents: s.commissionReductionCents };
+  const held = {
+    hammerCents: s.hammerRefundCents,
+    premiumCents: s.premiumRefundCents,
+    commissionCents: s.commissionReductionCents,
+  };
   return {
     held,
-    undisputed: { hammerCents: sale.hammerCents - held.hammerCents, premiumCents: sale.premiumCents - held.premiumCents, commissionCents: sale.commissionCents - held.commissionCents },
+    undisputed: {
+      hammerCents: sale.hammerCents - held.hammerCents,
+      premiumCents: sale.premiumCents - held.premiumCents,
+      commissionCents: sale.commissionCents - held.commissionCents,
+    },
   };
 }

@@ -115,7 +115,8 @@ export interface ClaimableInvoice {
  */
 export function openingRefusal(inv: ClaimableInvoice, nowMs: number, reason?: DisputeReason): string | null {
   if (inv.state === "disputed") return "A claim is already open on this lot.";
-  if (inv.state === "released") return "The payment has been released to the consignor: the inspection window is over, so a claim can no longer be opened.";
+  if (inv.state === "released")
+    return "The payment has been released to the consignor: the inspection window is over, so a claim can no longer be opened.";
   if (inv.state === "refunded" || inv.state === "cancelled") return "This invoice is closed.";
   if (inv.state !== "delivered" || inv.deliveredAtMs == null || inv.inspectionEndsAtMs == null) {
     return "A claim can be opened once the lot is delivered, during its inspection window.";
@@ -166,17 +167,26 @@ export interface TrackRecord {
 const n = (x: number) => x.toLocaleString("en-US");
 
 /** A consignor's record from their counts. */
-export function trackRecord(c: { tubesSold: number; tubesDisputed: number; tubesUpheld: number; upheldMisattributionClaims: number }): TrackRecord {
+export function trackRecord(c: {
+  tubesSold: number;
+  tubesDisputed: number;
+  tubesUpheld: number;
+  upheldMisattributionClaims: number;
+}): TrackRecord {
   const per = c.tubesSold > 0 ? Math.round((c.tubesUpheld * 1000) / c.tubesSold) : null;
-  const words = c.tubesSold === 0
-    ? "No tubes sold here yet: no record."
-    : c.tubesDisputed === 0
-      ? `${n(c.tubesSold)} tubes sold; none disputed.`
-      : `${n(c.tubesSold)} tubes sold; ${n(c.tubesDisputed)} disputed, ${n(c.tubesUpheld)} of them upheld against the listing.`;
+  const words =
+    c.tubesSold === 0
+      ? "No tubes sold here yet: no record."
+      : c.tubesDisputed === 0
+        ? `${n(c.tubesSold)} tubes sold; none disputed.`
+        : `${n(c.tubesSold)} tubes sold; ${n(c.tubesDisputed)} disputed, ${n(c.tubesUpheld)} of them upheld against the listing.`;
   return { ...c, upheldPerThousand: per, words };
 }
 
 /** True when a consignor's next lots should go to extra review. */
-export function needsExtraReview(upheldMisattributionClaims: number, threshold: number = DISPUTE_SETTINGS.extraReviewAfterUpheld): boolean {
+export function needsExtraReview(
+  upheldMisattributionClaims: number,
+  threshold: number = DISPUTE_SETTINGS.extraReviewAfterUpheld,
+): boolean {
   return upheldMisattributionClaims >= threshold;
 }

@@ -8,7 +8,12 @@ import PgBoss from "pg-boss";
  */
 const g = globalThis as unknown as { __getterlineBoss?: PgBoss };
 
-export const QUEUES = { lotClose: "lot-close", outbidNotice: "outbid-notice", wantListMatch: "want-list-match", wantListDigest: "want-list-digest" } as const;
+export const QUEUES = {
+  lotClose: "lot-close",
+  outbidNotice: "outbid-notice",
+  wantListMatch: "want-list-match",
+  wantListDigest: "want-list-digest",
+} as const;
 
 /** Start pg-boss and create its queues (a send to a queue that does not exist is silently dropped). */
 export async function startQueue(connectionString: string): Promise<PgBoss> {
@@ -16,7 +21,8 @@ export async function startQueue(connectionString: string): Promise<PgBoss> {
   const boss = new PgBoss({ connectionString, max: 4, application_name: "getterline-jobs", supervise: true });
   boss.on("error", (e: Error) => console.error("[jobs]", e.message));
   await boss.start();
-  for (const name of Object.values(QUEUES)) await boss.createQueue(name, { name, retryLimit: 5, retryDelay: 2, expireInSeconds: 60 });
+  for (const name of Object.values(QUEUES))
+    await boss.createQueue(name, { name, retryLimit: 5, retryDelay: 2, expireInSeconds: 60 });
   g.__getterlineBoss = boss;
   return boss;
 }

@@ -32,7 +32,12 @@ export function comparablesFromSoldLots(table: ReferenceTable, lines: readonly S
     const tubes = group.reduce((n, l) => n + l.quantity, 0);
     const [first] = group;
     if (families.size !== 1 || conditions.size !== 1 || tubes <= 0 || !first || first.netHammerCents < 0) continue;
-    out.push({ typeFamily: [...families][0]!, condition: first.condition, pricePerTubeCents: Math.round(first.netHammerCents / tubes), soldAt: first.soldAt });
+    out.push({
+      typeFamily: [...families][0]!,
+      condition: first.condition,
+      pricePerTubeCents: Math.round(first.netHammerCents / tubes),
+      soldAt: first.soldAt,
+    });
   }
   return out;
 }

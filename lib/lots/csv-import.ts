@@ -103,7 +103,10 @@ function canonical(value: unknown): string {
   if (Array.isArray(value)) return `[${value.map(canonical).join(",")}]`;
   if (value && typeof value === "object") {
     const entries = Object.entries(value as Record<string, unknown>).filter(([, v]) => v !== undefined);
-    return `{${entries.sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([k, v]) => `${JSON.stringify(k)}:${canonical(v)}`).join(",")}}`;
+    return `{${entries
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+      .map(([k, v]) => `${JSON.stringify(k)}:${canonical(v)}`)
+      .join(",")}}`;
   }
   return JSON.stringify(value ?? null);
 }
@@ -131,9 +134,11 @@ function syntaxMessage(e: unknown): CsvIssue {
   const err = e as { code?: string; lines?: number };
   const line = typeof err.lines === "number" ? err.lines : 0;
   const what =
-    err.code === "CSV_QUOTE_NOT_CLOSED" ? "a quoted field is never closed (look for an opening quote on or before this line)"
-    : err.code === "CSV_INVALID_CLOSING_QUOTE" ? "text follows a closing quote; double any quote inside a quoted field"
-    : "the file could not be read as CSV";
+    err.code === "CSV_QUOTE_NOT_CLOSED"
+      ? "a quoted field is never closed (look for an opening quote on or before this line)"
+      : err.code === "CSV_INVALID_CLOSING_QUOTE"
+        ? "text follows a closing quote; double any quote inside a quoted field"
+        : "the file could not be read as CSV";
   return { line: 0, message: `The file is not valid CSV near line ${line}: ${what}. Nothing was imported.` };
 }
 
@@ -152,14 +157,20 @@ export function parseLotCsv(table: ReferenceTable, text: string, options: ParseL
   }
   const normalised = text.replace(/^\uFEFF/, "").replace(/\r\n?/g, "\n");
   let newlines = 0;
-  for (let i = normalised.indexOf("\n"); i !== -1 && newlines <= maxRows + 1; i = normalised.indexOf("\n", i + 1)) newlines += 1;
+  for (let i = normalised.indexOf("\n"); i !== -1 && newlines <= maxRows + 1; i = normalised.indexOf("\n", i + 1))
+    newlines += 1;
   if (newlines > maxRows && countDataRows(normalised, maxRows) > maxRows) {
-    return refuse(`The file has more than ${fmt(maxRows)} data rows. Split it into files of at most ${fmt(maxRows)} rows and import each.`);
+    return refuse(
+      `The file has more than ${fmt(maxRows)} data rows. Split it into files of at most ${fmt(maxRows)} rows and import each.`,
+    );
   }
 
   let records: { raw: string; record: string[] }[];
   try {
-    records = parse(normalised, { raw: true, relax_column_count: true, skip_empty_lines: true }) as { raw: string; record: string[] }[];
+    records = parse(normalised, { raw: true, relax_column_count: true, skip_empty_lines: true }) as {
+      raw: string;
+      record: string[];
+    }[];
   } catch (e) {
     return { ...refuse(""), errors: [syntaxMessage(e)] };
   }
@@ -178,7 +189,13 @@ export function parseLotCsv(table: ReferenceTable, text: string, options: ParseL
   const order = names.map((_, i) => i).sort((a, b) => (names[a] < names[b] ? -1 : names[a] > names[b] ? 1 : a - b));
   const body = located.filter((r) => r.fields.some((f) => f.trim() !== ""));
   const fingerprint = sha256(
-    canonical([order.map((i) => names[i]), ...body.map((r) => [...order.map((i) => cleanText(r.fields[i] ?? "")), ...r.fields.slice(names.length).map(cleanText)])]),
+    canonical([
+      order.map((i) => names[i]),
+      ...body.map((r) => [
+        ...order.map((i) => cleanText(r.fields[i] ?? "")),
+        ...r.fields.slice(names.length).map(cleanText),
+      ]),
+    ]),
   );
 
   const errors: CsvIssue[] = [];
@@ -186,13 +203,15 @@ export function parseLotCsv(table: ReferenceTable, text: string, options: ParseL
   const unknownColumns: string[] = [];
   names.forEach((name, i) => {
     if (name === "") warnings.push({ line: 1, message: `column ${i + 1} has no name; ignored` });
-    else if (names.indexOf(name) !== i) errors.push({ line: 1, column: name, message: `column "${name}" appears more than once` });
+    else if (names.indexOf(name) !== i)
+      errors.push({ line: 1, column: name, message: `column "${name}" appears more than once` });
     else if (!IMPORT_COLUMN_NAMES.includes(name)) {
       unknownColumns.push(name);
       warnings.push({ line: 1, column: name, message: `unknown column "${name}" ignored` });
     }
   });
-  if (!names.includes("designation")) errors.push({ line: 1, column: "designation", message: "the header has no designation column" });
+  if (!names.includes("designation"))
+    errors.push({ line: 1, column: "designation", message: "the header has no designation column" });
   if (errors.length > 0) return { rows: [], errors, warnings, unknownColumns, fingerprint, rowKeys: [] };
 
   const rows: ParsedRow[] = [];
@@ -200,7 +219,10 @@ export function parseLotCsv(table: ReferenceTable, text: string, options: ParseL
   const cache = newRowCache(table);
   for (const r of body) {
     if (r.fields.length !== names.length) {
-      errors.push({ line: r.line, message: `expected ${names.length} fields as in the header, found ${r.fields.length}` });
+      errors.push({
+        line: r.line,
+        message: `expected ${names.length} fields as in the header, found ${r.fields.length}`,
+      });
       continue;
     }
     const fields = new Map<string, string>();

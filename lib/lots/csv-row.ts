@@ -10,7 +10,14 @@ import type { TestMeasure } from "../valves/grading";
 import type { HazardKind } from "../valves/index-types";
 import { validateSourceCodeFormat } from "../valves/source-code";
 import { MAX_BUNDLE_QTY, MAX_NOTES_LENGTH, MAX_TEXT_LENGTH, NO_WORDS, YES_WORDS } from "./csv-columns";
-import { describeDesignation, type AttributionBasis, type ItemCondition, type ItemDesignation, type LotItem, type TubeReading } from "./item";
+import {
+  describeDesignation,
+  type AttributionBasis,
+  type ItemCondition,
+  type ItemDesignation,
+  type LotItem,
+  type TubeReading,
+} from "./item";
 
 /** A problem on one line; `column` names the CSV column when there is one. */
 export interface CsvIssue {
@@ -27,11 +34,18 @@ export interface RowContent {
 }
 
 const CONDITIONS: Readonly<Record<string, ItemCondition>> = {
-  nib: "new-in-box", "new-in-box": "new-in-box", nos: "new-old-stock", "new-old-stock": "new-old-stock", used: "used",
+  nib: "new-in-box",
+  "new-in-box": "new-in-box",
+  nos: "new-old-stock",
+  "new-old-stock": "new-old-stock",
+  used: "used",
 };
 const BASES: Readonly<Record<string, AttributionBasis>> = {
-  confirmed: "source-code-confirmed", "source-code-confirmed": "source-code-confirmed",
-  construction: "construction-matched", "construction-matched": "construction-matched", unconfirmed: "unconfirmed",
+  confirmed: "source-code-confirmed",
+  "source-code-confirmed": "source-code-confirmed",
+  construction: "construction-matched",
+  "construction-matched": "construction-matched",
+  unconfirmed: "unconfirmed",
 };
 const MEASURES: readonly TestMeasure[] = ["gm", "emission", "plate-current"];
 const DECLARABLE: readonly HazardKind[] = ["mercury-vapour", "radioactive", "beryllium-oxide"];
@@ -68,7 +82,8 @@ export function readLotRow(
   cache: RowCache,
 ): RowContent | null {
   const before = errors.length;
-  const err = (column: string | undefined, message: string) => errors.push({ line, ...(column ? { column } : {}), message });
+  const err = (column: string | undefined, message: string) =>
+    errors.push({ line, ...(column ? { column } : {}), message });
   const text = (column: string, max = MAX_TEXT_LENGTH): string | null => {
     const raw = fields.get(column) ?? "";
     if (CONTROL.test(raw)) {
@@ -104,7 +119,11 @@ export function readLotRow(
     if (positive && n <= 0) err(column, "must be above 0");
     return n;
   };
-  const list = (column: string): string[] => (text(column) ?? "").split(";").map(cleanText).filter((s) => s !== "");
+  const list = (column: string): string[] =>
+    (text(column) ?? "")
+      .split(";")
+      .map(cleanText)
+      .filter((s) => s !== "");
 
   const typed = text("designation");
   if (typed === null) err("designation", "is required");
@@ -115,14 +134,21 @@ export function readLotRow(
     designation = { ...known, ...(known.candidates ? { candidates: [...known.candidates] } : {}) };
   }
   if (designation?.status === "unknown-flagged") {
-    const near = designation.candidates?.length ? ` Did you mean ${designation.candidates.slice(0, 3).join(", ")}?` : "";
-    warnings.push({ line, column: "designation", message: `${designation.reviewNote} Imported and flagged for review.${near}` });
+    const near = designation.candidates?.length
+      ? ` Did you mean ${designation.candidates.slice(0, 3).join(", ")}?`
+      : "";
+    warnings.push({
+      line,
+      column: "designation",
+      message: `${designation.reviewNote} Imported and flagged for review.${near}`,
+    });
   }
 
   const qtyText = text("qty");
   let quantity = 1;
   if (qtyText !== null) {
-    if (!/^\d+$/.test(qtyText) || Number(qtyText) < 1 || Number(qtyText) > MAX_BUNDLE_QTY) err("qty", `"${qtyText}" is not a whole number from 1 to ${MAX_BUNDLE_QTY}`);
+    if (!/^\d+$/.test(qtyText) || Number(qtyText) < 1 || Number(qtyText) > MAX_BUNDLE_QTY)
+      err("qty", `"${qtyText}" is not a whole number from 1 to ${MAX_BUNDLE_QTY}`);
     else quantity = Number(qtyText);
   }
   const condition = oneOf("condition", CONDITIONS, "used" as ItemCondition, "nib, nos, used");
@@ -131,16 +157,28 @@ export function readLotRow(
   const basisGiven = (fields.get("maker_basis") ?? "").trim() !== "";
   const basis = oneOf("maker_basis", BASES, "unconfirmed" as AttributionBasis, "confirmed, construction, unconfirmed");
   const source = text("source_code");
-  if (basis !== "unconfirmed" && makerName === null) err("maker_basis", `"${fields.get("maker_basis")?.trim()}" needs a maker`);
-  if (basis === "source-code-confirmed" && source === null) err("maker_basis", "confirmed needs the source_code that confirms it");
+  if (basis !== "unconfirmed" && makerName === null)
+    err("maker_basis", `"${fields.get("maker_basis")?.trim()}" needs a maker`);
+  if (basis === "source-code-confirmed" && source === null)
+    err("maker_basis", "confirmed needs the source_code that confirms it");
   if (source !== null) {
     const f = validateSourceCodeFormat(source);
-    if (!f.ok) warnings.push({ line, column: "source_code", message: `"${source}" does not look like a source code: ${f.reason}` });
+    if (!f.ok)
+      warnings.push({
+        line,
+        column: "source_code",
+        message: `"${source}" does not look like a source code: ${f.reason}`,
+      });
   }
   const date = text("date_code");
   const readable = date === null ? true : (cache.dateCodeReadable.get(date) ?? readDateCode(date).ok);
   if (date !== null) cache.dateCodeReadable.set(date, readable);
-  if (!readable) warnings.push({ line, column: "date_code", message: `"${date}" could not be read as a date code; kept as printed` });
+  if (!readable)
+    warnings.push({
+      line,
+      column: "date_code",
+      message: `"${date}" could not be read as a date code; kept as printed`,
+    });
   const other = text("other_code");
 
   const features = new Map<string, string>(); // a Map, so names like "constructor" are plain names
@@ -185,7 +223,10 @@ export function readLotRow(
   if (tested && measureText === undefined) err("measure", "is required on a row with readings");
   if (sectionGiven && chart === undefined) err("chart_new", "is required with section readings, to work out % of new");
   if (!tested && (measureText !== undefined || chart !== undefined || plateCurrentMa !== undefined)) {
-    err(measureText !== undefined ? "measure" : chart !== undefined ? "chart_new" : "plate_current_ma", "is given but the row has no section reading and no failed check");
+    err(
+      measureText !== undefined ? "measure" : chart !== undefined ? "chart_new" : "plate_current_ma",
+      "is given but the row has no section reading and no failed check",
+    );
   }
   if (measure === "emission" && plateCurrentMa !== undefined) err("plate_current_ma", "is not read on an emission run");
   if (tested && quantity !== 1) err("qty", "must be 1 (or empty) on a row with readings: one row per tested tube");
@@ -194,12 +235,40 @@ export function readLotRow(
   const notes = text("notes", MAX_NOTES_LENGTH);
   if (errors.length > before || designation === null) return null;
   const readings: TubeReading[] = tested
-    ? [{ tubeNo: 1, sections, measure: measure!, ...(chart !== undefined ? { chartNewValue: chart } : {}), ...(plateCurrentMa !== undefined ? { plateCurrentMa } : {}), shorts, leakage, gas }]
+    ? [
+        {
+          tubeNo: 1,
+          sections,
+          measure: measure!,
+          ...(chart !== undefined ? { chartNewValue: chart } : {}),
+          ...(plateCurrentMa !== undefined ? { plateCurrentMa } : {}),
+          shorts,
+          leakage,
+          gas,
+        },
+      ]
     : [];
-  if (!basisGiven && makerName !== null) warnings.push({ line, column: "maker_basis", message: "maker given without maker_basis: recorded as unconfirmed" });
-  const codes = { ...(source !== null ? { source } : {}), ...(date !== null ? { date } : {}), ...(other !== null ? { other } : {}) };
+  if (!basisGiven && makerName !== null)
+    warnings.push({ line, column: "maker_basis", message: "maker given without maker_basis: recorded as unconfirmed" });
+  const codes = {
+    ...(source !== null ? { source } : {}),
+    ...(date !== null ? { date } : {}),
+    ...(other !== null ? { other } : {}),
+  };
   return {
-    item: { designation, quantity, labelBrand, attributedMaker: { makerName, basis }, codes, construction, condition, vacuumLoss, defects, hazards, readings },
+    item: {
+      designation,
+      quantity,
+      labelBrand,
+      attributedMaker: { makerName, basis },
+      codes,
+      construction,
+      condition,
+      vacuumLoss,
+      defects,
+      hazards,
+      readings,
+    },
     tubeRef,
     notes,
   };

@@ -86,9 +86,16 @@ export interface EstimateOptions {
  * Values each group from comparables by the rule in this file's header.
  * Prices that are not non-negative integer cents are ignored.
  */
-export function estimateLot(groups: readonly EstimateGroup[], comparables: readonly ComparableSale[], options: EstimateOptions = {}): LotEstimate {
+export function estimateLot(
+  groups: readonly EstimateGroup[],
+  comparables: readonly ComparableSale[],
+  options: EstimateOptions = {},
+): LotEstimate {
   const usable = comparables.filter(
-    (c) => Number.isSafeInteger(c.pricePerTubeCents) && c.pricePerTubeCents >= 0 && (!options.since || c.soldAt >= options.since),
+    (c) =>
+      Number.isSafeInteger(c.pricePerTubeCents) &&
+      c.pricePerTubeCents >= 0 &&
+      (!options.since || c.soldAt >= options.since),
   );
   const parts: FamilyEstimate[] = [];
   const missing = new Map<string, { familyKey: string; familyLabel: string; tubes: number }>();

@@ -98,7 +98,13 @@ export interface LotItem {
 export function describeDesignation(table: ReferenceTable, typed: string): ItemDesignation {
   const d = decodeDesignation(table, typed);
   if (d.ok && d.knownType) return { typed, normalised: d.normalised, status: "known" };
-  if (d.ok) return { typed, normalised: d.normalised, status: "decoded", ...(d.candidates.length ? { candidates: [...d.candidates] } : {}) };
+  if (d.ok)
+    return {
+      typed,
+      normalised: d.normalised,
+      status: "decoded",
+      ...(d.candidates.length ? { candidates: [...d.candidates] } : {}),
+    };
   const normalised = d.normalised ?? null;
   const candidates = [...d.candidates];
   const reviewNote = `"${typed.slice(0, 40)}" could not be read as a designation: ${d.message}`;

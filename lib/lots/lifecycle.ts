@@ -4,9 +4,23 @@
  * and release, to a claim. Pure: plain data in, a stage and figures out.
  */
 export type LotStage =
-  | "draft" | "with-house" | "changes-asked" | "declined" | "approved"
-  | "scheduled" | "in-sale" | "unsold" | "withdrawn"
-  | "sold-awaiting-payment" | "paid" | "shipped" | "delivered" | "released" | "claim" | "refunded" | "cancelled";
+  | "draft"
+  | "with-house"
+  | "changes-asked"
+  | "declined"
+  | "approved"
+  | "scheduled"
+  | "in-sale"
+  | "unsold"
+  | "withdrawn"
+  | "sold-awaiting-payment"
+  | "paid"
+  | "shipped"
+  | "delivered"
+  | "released"
+  | "claim"
+  | "refunded"
+  | "cancelled";
 
 export interface LifeInput {
   lotState: "draft" | "in-review" | "needs-changes" | "approved" | "declined" | string;
@@ -48,13 +62,20 @@ export function lotStage(i: LifeInput): LotStage {
   if (i.sale.phase === "withdrawn") return "withdrawn";
   if (i.claimOpen || i.invoiceState === "disputed") return "claim";
   switch (i.invoiceState) {
-    case "paid-held": return "paid";
-    case "shipped": return "shipped";
-    case "delivered": return "delivered";
-    case "released": return "released";
-    case "refunded": return "refunded";
-    case "cancelled": return "cancelled";
-    default: return "sold-awaiting-payment";
+    case "paid-held":
+      return "paid";
+    case "shipped":
+      return "shipped";
+    case "delivered":
+      return "delivered";
+    case "released":
+      return "released";
+    case "refunded":
+      return "refunded";
+    case "cancelled":
+      return "cancelled";
+    default:
+      return "sold-awaiting-payment";
   }
 }
 
@@ -78,7 +99,9 @@ export function netProceeds(p: ProceedsInput): number {
 }
 
 /** Sum per sale: `{ saleId → cents }`, from lots that carry a sale and a net figure. */
-export function proceedsBySale(rows: readonly { saleId: string | null; netCents: number | null }[]): Map<string, number> {
+export function proceedsBySale(
+  rows: readonly { saleId: string | null; netCents: number | null }[],
+): Map<string, number> {
   const out = new Map<string, number>();
   for (const r of rows) if (r.saleId && r.netCents != null) out.set(r.saleId, (out.get(r.saleId) ?? 0) + r.netCents);
   return out;

@@ -22,13 +22,22 @@ export interface LotHazardFlag {
   tubes: number;
 }
 
-const CERTAINTY_ORDER: Readonly<Record<HazardNotice["certainty"], number>> = { always: 0, known: 1, declared: 2, possible: 3 };
+const CERTAINTY_ORDER: Readonly<Record<HazardNotice["certainty"], number>> = {
+  always: 0,
+  known: 1,
+  declared: 2,
+  possible: 3,
+};
 
 /**
  * Hazard flags for the items, in a fixed kind order. `tubesOf` gives the
  * tube count of an item (quantity, or more readings than quantity).
  */
-export function lotHazardFlags(table: ReferenceTable, items: readonly LotItem[], tubesOf: (item: LotItem) => number): LotHazardFlag[] {
+export function lotHazardFlags(
+  table: ReferenceTable,
+  items: readonly LotItem[],
+  tubesOf: (item: LotItem) => number,
+): LotHazardFlag[] {
   const flags = new Map<HazardKind, LotHazardFlag & { byType: Map<string, HazardNotice["certainty"]> }>();
   for (const item of items) {
     const designation = item.designation.normalised ?? item.designation.typed;
@@ -37,7 +46,15 @@ export function lotHazardFlags(table: ReferenceTable, items: readonly LotItem[],
       if (n.certainty === "always") continue;
       let flag = flags.get(n.kind);
       if (!flag) {
-        flag = { kind: n.kind, title: n.title, caution: n.caution, source: n.source, types: [], tubes: 0, byType: new Map() };
+        flag = {
+          kind: n.kind,
+          title: n.title,
+          caution: n.caution,
+          source: n.source,
+          types: [],
+          tubes: 0,
+          byType: new Map(),
+        };
         flags.set(n.kind, flag);
       }
       const prev = flag.byType.get(designation);
@@ -51,6 +68,8 @@ export function lotHazardFlags(table: ReferenceTable, items: readonly LotItem[],
     .sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind))
     .map(({ byType, ...flag }) => ({
       ...flag,
-      types: [...byType.entries()].sort(([a], [b]) => a.localeCompare(b)).map(([designation, certainty]) => ({ designation, certainty })),
+      types: [...byType.entries()]
+        .sort(([a], [b]) => a.localeCompare(b))
+        .map(([designation, certainty]) => ({ designation, certainty })),
     }));
 }

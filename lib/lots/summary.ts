@@ -69,7 +69,13 @@ export interface LotSummary {
   /** Attribution mix in tubes. */
   attribution: Record<AttributionBasis, number>;
   hazards: LotHazardFlag[];
-  unknownDesignations: { typed: string; normalised: string | null; tubes: number; itemIndexes: number[]; candidates: string[] }[];
+  unknownDesignations: {
+    typed: string;
+    normalised: string | null;
+    tubes: number;
+    itemIndexes: number[];
+    candidates: string[];
+  }[];
   estimate: LotEstimate;
   /** Tubes valued at zero in the estimate (graded reject or white getter). */
   zeroValuedTubes: number;
@@ -77,7 +83,17 @@ export interface LotSummary {
   issues: string[];
 }
 
-const emptyCounts = (): TestCounts => ({ tested: 0, notTested: 0, strong: 0, good: 0, fair: 0, weak: 0, emissionOk: 0, reject: 0, testedNotGraded: 0 });
+const emptyCounts = (): TestCounts => ({
+  tested: 0,
+  notTested: 0,
+  strong: 0,
+  good: 0,
+  fair: 0,
+  weak: 0,
+  emissionOk: 0,
+  reject: 0,
+  testedNotGraded: 0,
+});
 
 function addCounts(into: TestCounts, from: TestCounts): void {
   for (const k of Object.keys(into) as (keyof TestCounts)[]) into[k] += from[k];
@@ -89,7 +105,8 @@ function chartLookup(values: Record<string, number> | undefined, issues: string[
     const n = normaliseDesignation(name);
     const key = n.ok ? n.value : name;
     const prev = map.get(key);
-    if (prev !== undefined && prev !== value) issues.push(`chart values ${prev} and ${value} both given for ${key}; using ${prev}`);
+    if (prev !== undefined && prev !== value)
+      issues.push(`chart values ${prev} and ${value} both given for ${key}; using ${prev}`);
     else map.set(key, value);
   }
   return map;
@@ -109,7 +126,11 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
   const charts = chartLookup(opts.chartNewValues, issues);
   const families = new Map<string, FamilySummary>();
   const batches = new Map<string, { familyKey: string; measure: TestMeasure; tubes: BatchTube[] }>();
-  const attribution: Record<AttributionBasis, number> = { "source-code-confirmed": 0, "construction-matched": 0, unconfirmed: 0 };
+  const attribution: Record<AttributionBasis, number> = {
+    "source-code-confirmed": 0,
+    "construction-matched": 0,
+    unconfirmed: 0,
+  };
   const unknown = new Map<string, LotSummary["unknownDesignations"][number]>();
   const itemFamily: string[] = [];
   let tubeCount = 0;
@@ -117,11 +138,23 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
 
   items.forEach((item, i) => {
     const tubes = itemTubeCount(item);
-    if (item.readings.length > item.quantity) issues.push(`item ${i + 1}: ${item.readings.length} readings for a quantity of ${item.quantity}; counted as ${tubes} tubes`);
+    if (item.readings.length > item.quantity)
+      issues.push(
+        `item ${i + 1}: ${item.readings.length} readings for a quantity of ${item.quantity}; counted as ${tubes} tubes`,
+      );
     const d = item.designation;
     const fam = typeFamily(opts.reference, d.normalised ?? d.typed);
     itemFamily.push(fam.key);
-    const f = families.get(fam.key) ?? { key: fam.key, label: fam.label, tubes: 0, designations: [], tests: emptyCounts(), pairs: 0, quads: 0, quadsProven: true };
+    const f = families.get(fam.key) ?? {
+      key: fam.key,
+      label: fam.label,
+      tubes: 0,
+      designations: [],
+      tests: emptyCounts(),
+      pairs: 0,
+      quads: 0,
+      quadsProven: true,
+    };
     families.set(fam.key, f);
     f.tubes += tubes;
     const shown = d.normalised ?? d.typed;
@@ -131,7 +164,13 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     if (item.vacuumLoss) vacuumLoss += tubes;
     attribution[item.attributedMaker.basis] += tubes;
     if (d.status === "unknown-flagged") {
-      const u = unknown.get(shown) ?? { typed: d.typed, normalised: d.normalised, tubes: 0, itemIndexes: [], candidates: d.candidates ?? [] };
+      const u = unknown.get(shown) ?? {
+        typed: d.typed,
+        normalised: d.normalised,
+        tubes: 0,
+        itemIndexes: [],
+        candidates: d.candidates ?? [],
+      };
       u.tubes += tubes;
       u.itemIndexes.push(i);
       unknown.set(shown, u);
@@ -188,7 +227,12 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     zeroValuedTubes += zero;
     const f = families.get(itemFamily[i])!;
     const key = `${f.key}\u0000${item.condition}`;
-    const g = groups.get(key) ?? { familyKey: f.key, familyLabel: f.label, condition: item.condition as ItemCondition, tubes: 0 };
+    const g = groups.get(key) ?? {
+      familyKey: f.key,
+      familyLabel: f.label,
+      condition: item.condition as ItemCondition,
+      tubes: 0,
+    };
     g.tubes += tubes - zero;
     groups.set(key, g);
   });
@@ -201,7 +245,11 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     families: familyList,
     tests,
     vacuumLoss,
-    matched: { pairs: familyList.reduce((s, f) => s + f.pairs, 0), quads: familyList.reduce((s, f) => s + f.quads, 0), tolerancePct },
+    matched: {
+      pairs: familyList.reduce((s, f) => s + f.pairs, 0),
+      quads: familyList.reduce((s, f) => s + f.quads, 0),
+      tolerancePct,
+    },
     attribution,
     hazards: lotHazardFlags(opts.reference, items, itemTubeCount),
     unknownDesignations: [...unknown.values()],

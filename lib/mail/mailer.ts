@@ -12,8 +12,13 @@ function transporter(): Transporter {
   if (!g.__getterlineMailer) {
     const e = env();
     g.__getterlineMailer = nodemailer.createTransport({
-      host: e.SMTP_HOST, port: e.SMTP_PORT, secure: false, ignoreTLS: e.SMTP_HOST === "127.0.0.1",
-      connectionTimeout: 5_000, greetingTimeout: 5_000, socketTimeout: 10_000,
+      host: e.SMTP_HOST,
+      port: e.SMTP_PORT,
+      secure: false,
+      ignoreTLS: e.SMTP_HOST === "127.0.0.1",
+      connectionTimeout: 5_000,
+      greetingTimeout: 5_000,
+      socketTimeout: 10_000,
     });
   }
   return g.__getterlineMailer;

@@ -62,8 +62,7 @@ export function divideRounded(numerator: bigint, denominator: bigint, mode: Roun
   const magnitude = negative ? -n : n;
   let quotient = magnitude / d;
   const twiceRemainder = (magnitude % d) * 2n;
-  const roundUp =
-    twiceRemainder > d || (twiceRemainder === d && (mode === "half-up" || quotient % 2n === 1n));
+  const roundUp = twiceRemainder > d || (twiceRemainder === d && (mode === "half-up" || quotient % 2n === 1n));
   if (roundUp) quotient += 1n;
   return negative ? -quotient : quotient;
 }

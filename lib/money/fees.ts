@@ -96,7 +96,11 @@ export function validateCommissionTiers(tiers: readonly CommissionTier[]): strin
 }
 
 /** Buyer's premium = hammer × rate, rounded once (default half-up). */
-export function buyersPremiumCents(hammerCents: number, premiumBp: number, mode: RoundingMode = DEFAULT_ROUNDING): number {
+export function buyersPremiumCents(
+  hammerCents: number,
+  premiumBp: number,
+  mode: RoundingMode = DEFAULT_ROUNDING,
+): number {
   assertCents(hammerCents, "hammerCents");
   return percentOfCents(hammerCents, premiumBp, mode);
 }
@@ -161,7 +165,14 @@ export function invoiceFor(
     (taxBase.hammer ? hammerCents : 0) + (taxBase.premium ? premiumCents : 0) + (taxBase.shipping ? shippingCents : 0);
   const taxCents = percentOfCents(taxableCents, schedule.taxRateBp, mode);
   const totalCents = hammerCents + premiumCents + shippingCents + taxCents;
-  return { hammerCents, premiumCents, shippingCents, taxableCents, taxCents, totalCents: assertCents(totalCents, "total") };
+  return {
+    hammerCents,
+    premiumCents,
+    shippingCents,
+    taxableCents,
+    taxCents,
+    totalCents: assertCents(totalCents, "total"),
+  };
 }
 
 /** What the consignor is owed for one lot. */

@@ -85,7 +85,11 @@ export function claimStandsOnReadings(
   tolerancePct: number = DEFAULT_TESTER_TOLERANCE_PCT,
   hardFail = false,
 ): boolean {
-  for (const [label, v] of [["listedBandMinPct", listedBandMinPct], ["buyerPct", buyerPct], ["tolerancePct", tolerancePct]] as const) {
+  for (const [label, v] of [
+    ["listedBandMinPct", listedBandMinPct],
+    ["buyerPct", buyerPct],
+    ["tolerancePct", tolerancePct],
+  ] as const) {
     if (!Number.isFinite(v) || v < 0) throw new RangeError(`${label} must be a finite number ≥ 0`);
   }
   if (tolerancePct >= 100) throw new RangeError("tolerancePct must be below 100");

@@ -57,5 +57,6 @@ export function nextAttemptStep(intent: IntentView | null, paymentMethodId: stri
 /** The words a buyer reads when their attempt charges nothing because the invoice is paid or being paid. */
 export const ATTEMPT_REFUSALS = {
   paid: "This invoice has already been paid. Nothing more was charged; reload the page to see the payment.",
-  inProgress: "A payment for this invoice is already in progress, perhaps from another tab or device. Nothing more was charged; wait a moment, then reload the page.",
+  inProgress:
+    "A payment for this invoice is already in progress, perhaps from another tab or device. Nothing more was charged; wait a moment, then reload the page.",
 } as const;

@@ -69,7 +69,10 @@ export function lineValueCents(line: ManifestLine): number {
 
 /** V_lot: the sum of the manifest's line values, cents. */
 export function lotValueCents(lines: readonly ManifestLine[]): number {
-  return assertCents(lines.reduce((sum, line) => sum + lineValueCents(line), 0), "lot value");
+  return assertCents(
+    lines.reduce((sum, line) => sum + lineValueCents(line), 0),
+    "lot value",
+  );
 }
 
 const isCount = (n: number, min: number) => Number.isSafeInteger(n) && n >= min;

@@ -58,7 +58,8 @@ export function validateShippingTable(table: ShippingTable): string[] {
     for (const zone of table.zones) {
       const rate = band.ratesCents[zone];
       if (rate === undefined) problems.push(`band ${index}: no rate for zone "${zone}"`);
-      else if (!Number.isSafeInteger(rate) || rate < 0) problems.push(`band ${index}: rate for "${zone}" must be whole cents`);
+      else if (!Number.isSafeInteger(rate) || rate < 0)
+        problems.push(`band ${index}: rate for "${zone}" must be whole cents`);
     }
   });
   return problems;

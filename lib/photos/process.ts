@@ -49,25 +49,39 @@ export type ProcessedPhoto = {
  * its EXIF orientation, so no EXIF (GPS position, camera serial), XMP, IPTC
  * or ICC data survives. Throws PhotoRejected for anything we will not keep.
  */
-export async function processPhoto(input: Buffer, declaredName: string, limits: Partial<PhotoLimits> = {}): Promise<ProcessedPhoto> {
+export async function processPhoto(
+  input: Buffer,
+  declaredName: string,
+  limits: Partial<PhotoLimits> = {},
+): Promise<ProcessedPhoto> {
   const { maxBytes, maxPixels } = { ...DEFAULT_PHOTO_LIMITS, ...limits };
   const name = displayName(declaredName);
   const reject = (code: PhotoRejectionCode, message: string) => new PhotoRejected(code, message, name);
 
   if (input.length === 0) throw reject("empty", `“${name}” is empty (0 bytes).`);
   if (input.length > maxBytes) {
-    throw reject("too-large", `“${name}” is ${megabytes(input.length)}; a photo may be at most ${megabytes(maxBytes)}.`);
+    throw reject(
+      "too-large",
+      `“${name}” is ${megabytes(input.length)}; a photo may be at most ${megabytes(maxBytes)}.`,
+    );
   }
 
   const sniffed = sniffImageType(input);
   if (sniffed.kind === "unknown") {
-    throw reject("not-an-image", `“${name}” is not an image: its contents are not ${ACCEPTED_PHOTO_LABELS}, whatever its name says.`);
+    throw reject(
+      "not-an-image",
+      `“${name}” is not an image: its contents are not ${ACCEPTED_PHOTO_LABELS}, whatever its name says.`,
+    );
   }
   if (sniffed.kind === "unsupported") {
-    throw reject("unsupported-format", `“${name}” is a ${sniffed.label} file; please send ${ACCEPTED_PHOTO_LABELS} (a phone or editor can export JPEG).`);
+    throw reject(
+      "unsupported-format",
+      `“${name}” is a ${sniffed.label} file; please send ${ACCEPTED_PHOTO_LABELS} (a phone or editor can export JPEG).`,
+    );
   }
 
-  const damaged = () => reject("not-an-image", `“${name}” could not be read as a picture; it may be damaged or cut short.`);
+  const damaged = () =>
+    reject("not-an-image", `“${name}” could not be read as a picture; it may be damaged or cut short.`);
   let meta: Metadata;
   try {
     // Reads the header only; the pixel count is checked next, with a message of our own.
@@ -84,7 +98,10 @@ export async function processPhoto(input: Buffer, declaredName: string, limits: 
   }
 
   // rotate() without an angle applies the EXIF orientation; nothing after it asks sharp to keep metadata.
-  const upright = sharp(input, { limitInputPixels: maxPixels }).rotate().flatten({ background: "#ffffff" }).toColourspace("srgb");
+  const upright = sharp(input, { limitInputPixels: maxPixels })
+    .rotate()
+    .flatten({ background: "#ffffff" })
+    .toColourspace("srgb");
   const fit = (side: number) => ({ width: side, height: side, fit: "inside" as const, withoutEnlargement: true });
   let full: { data: Buffer; info: OutputInfo };
   let thumb: { data: Buffer; info: OutputInfo };

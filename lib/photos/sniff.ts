@@ -19,26 +19,41 @@ const AVIF_BRANDS = new Set(["avif", "avis"]);
 const HEIF_BRANDS = new Set(["heic", "heix", "hevc", "hevx", "heim", "heis", "hevm", "hevs", "mif1", "msf1"]);
 
 // An SVG document: optional XML declaration, comments and doctype, then an <svg> root.
-const SVG_ROOT = /^(?:<\?xml[^>]*\?>\s*)?(?:<!--[\s\S]*?-->\s*)*(?:<!DOCTYPE\s+svg[^>]*>\s*)?(?:<!--[\s\S]*?-->\s*)*<svg[\s>]/i;
+const SVG_ROOT =
+  /^(?:<\?xml[^>]*\?>\s*)?(?:<!--[\s\S]*?-->\s*)*(?:<!DOCTYPE\s+svg[^>]*>\s*)?(?:<!--[\s\S]*?-->\s*)*<svg[\s>]/i;
 
 /** Identify an image by content. */
 export function sniffImageType(buf: Buffer): SniffResult {
   if (startsWith(buf, [0xff, 0xd8, 0xff])) return { kind: "accepted", format: "jpeg" };
   if (startsWith(buf, [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) return { kind: "accepted", format: "png" };
-  if (buf.length >= 12 && ascii(buf, 0, 4) === "RIFF" && ascii(buf, 8, 12) === "WEBP") return { kind: "accepted", format: "webp" };
+  if (buf.length >= 12 && ascii(buf, 0, 4) === "RIFF" && ascii(buf, 8, 12) === "WEBP")
+    return { kind: "accepted", format: "webp" };
 
-  if (ascii(buf, 0, 6) === "GIF87a" || ascii(buf, 0, 6) === "GIF89a") return { kind: "unsupported", format: "gif", label: "GIF" };
+  if (ascii(buf, 0, 6) === "GIF87a" || ascii(buf, 0, 6) === "GIF89a")
+    return { kind: "unsupported", format: "gif", label: "GIF" };
   if (startsWith(buf, [0x49, 0x49, 0x2a, 0x00]) || startsWith(buf, [0x4d, 0x4d, 0x00, 0x2a])) {
     return { kind: "unsupported", format: "tiff", label: "TIFF" };
   }
-  if (buf.length >= 14 && ascii(buf, 0, 2) === "BM" && buf.readUInt32LE(6) === 0) return { kind: "unsupported", format: "bmp", label: "BMP" };
-  if (startsWith(buf, [0xff, 0x0a]) || startsWith(buf, [0, 0, 0, 0x0c, 0x4a, 0x58, 0x4c, 0x20, 0x0d, 0x0a, 0x87, 0x0a])) {
+  if (buf.length >= 14 && ascii(buf, 0, 2) === "BM" && buf.readUInt32LE(6) === 0)
+    return { kind: "unsupported", format: "bmp", label: "BMP" };
+  if (
+    startsWith(buf, [0xff, 0x0a]) ||
+    startsWith(buf, [0, 0, 0, 0x0c, 0x4a, 0x58, 0x4c, 0x20, 0x0d, 0x0a, 0x87, 0x0a])
+  ) {
     return { kind: "unsupported", format: "jxl", label: "JPEG XL" };
   }
   const brands = isoBrands(buf);
   if (brands.some((b) => AVIF_BRANDS.has(b))) return { kind: "unsupported", format: "avif", label: "AVIF" };
   if (brands.some((b) => HEIF_BRANDS.has(b))) return { kind: "unsupported", format: "heic", label: "HEIC/HEIF" };
-  if (SVG_ROOT.test(buf.subarray(0, 4096).toString("utf8").replace(/^\uFEFF/, "").trimStart())) {
+  if (
+    SVG_ROOT.test(
+      buf
+        .subarray(0, 4096)
+        .toString("utf8")
+        .replace(/^\uFEFF/, "")
+        .trimStart(),
+    )
+  ) {
     return { kind: "unsupported", format: "svg", label: "SVG" };
   }
   return { kind: "unknown" };

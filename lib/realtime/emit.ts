@@ -11,7 +11,11 @@ export function io(): Io | undefined {
   return (globalThis as { __getterlineIo?: Io }).__getterlineIo;
 }
 
-export function emitTo<E extends keyof ServerToClientEvents>(rooms: string[], event: E, ...args: Parameters<ServerToClientEvents[E]>): void {
+export function emitTo<E extends keyof ServerToClientEvents>(
+  rooms: string[],
+  event: E,
+  ...args: Parameters<ServerToClientEvents[E]>
+): void {
   const server = io();
   if (!server) return;
   (server.to(rooms) as unknown as { emit: (e: string, ...a: unknown[]) => void }).emit(event, ...args);

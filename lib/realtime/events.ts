@@ -31,8 +31,22 @@ export interface ServerToClientEvents {
 
 /** The answer to a bid placed over the socket: the same result as POST /api/sale-lots/:id/bids. */
 export type BidAck =
-  | { ok: true; result: { accepted: true; outcome: string; seq: number; live: LotLive; yourMaxCents: number; leading: boolean; replayed: boolean } }
-  | { ok: false; error: { code: string; message: string; fields?: Record<string, string>; details?: Record<string, unknown> } };
+  | {
+      ok: true;
+      result: {
+        accepted: true;
+        outcome: string;
+        seq: number;
+        live: LotLive;
+        yourMaxCents: number;
+        leading: boolean;
+        replayed: boolean;
+      };
+    }
+  | {
+      ok: false;
+      error: { code: string; message: string; fields?: Record<string, string>; details?: Record<string, unknown> };
+    };
 
 export interface ClientToServerEvents {
   /** Place a maximum bid over the already-authenticated socket (the HTTP route does the same). */

@@ -13,7 +13,14 @@ import { lotRoom, saleRoom, type LotLive } from "./events";
  */
 type Kind = "lot.bid" | "lot.closed";
 type Ev = { kind: Kind; live: LotLive };
-type LotQueue = { last: number | null; inflight: number; held: Map<number, Ev>; out: Ev[]; flushing: boolean; timer: ReturnType<typeof setTimeout> | null };
+type LotQueue = {
+  last: number | null;
+  inflight: number;
+  held: Map<number, Ev>;
+  out: Ev[];
+  flushing: boolean;
+  timer: ReturnType<typeof setTimeout> | null;
+};
 
 /** The longest an event waits for a predecessor before it leaves anyway (a writer stuck after commit). */
 export const HOLD_MAX_MS = 25;
@@ -24,7 +31,10 @@ const lots = (g.__getterlineLotQueues ??= new Map<string, LotQueue>());
 
 function queueOf(saleLotId: string): LotQueue {
   let q = lots.get(saleLotId);
-  if (!q) { q = { last: null, inflight: 0, held: new Map(), out: [], flushing: false, timer: null }; lots.set(saleLotId, q); }
+  if (!q) {
+    q = { last: null, inflight: 0, held: new Map(), out: [], flushing: false, timer: null };
+    lots.set(saleLotId, q);
+  }
   return q;
 }
 
@@ -48,13 +58,23 @@ export function emitLot(kind: Kind, live: LotLive): void {
 }
 
 function release(saleLotId: string, q: LotQueue, force: boolean): void {
-  const take = (seq: number) => { q.out.push(q.held.get(seq)!); q.held.delete(seq); if (q.last == null || seq > q.last) q.last = seq; };
+  const take = (seq: number) => {
+    q.out.push(q.held.get(seq)!);
+    q.held.delete(seq);
+    if (q.last == null || seq > q.last) q.last = seq;
+  };
   for (const seq of [...q.held.keys()].sort((a, b) => a - b)) if (q.last != null && seq <= q.last) take(seq); // stale: let clients drop it
   while (q.last != null && q.held.has(q.last + 1)) take(q.last + 1);
   if (q.held.size && (q.inflight === 0 || force)) for (const seq of [...q.held.keys()].sort((a, b) => a - b)) take(seq);
-  if (q.timer && !q.held.size) { clearTimeout(q.timer); q.timer = null; }
+  if (q.timer && !q.held.size) {
+    clearTimeout(q.timer);
+    q.timer = null;
+  }
   if (q.held.size && !q.timer) {
-    q.timer = setTimeout(() => { q.timer = null; release(saleLotId, q, true); }, HOLD_MAX_MS);
+    q.timer = setTimeout(() => {
+      q.timer = null;
+      release(saleLotId, q, true);
+    }, HOLD_MAX_MS);
     q.timer.unref?.();
   }
   if (q.out.length && !q.flushing) {

@@ -18,7 +18,13 @@ const dummyHash = () => (dummy ??= bcrypt.hash("no-such-account", BCRYPT_ROUNDS)
 export type AccountView = { id: string; email: string; displayName: string; roles: Role[]; createdAt: string };
 
 export function presentAccount(u: User): AccountView {
-  return { id: u.id, email: u.email, displayName: u.displayName, roles: [...u.roles], createdAt: u.createdAt.toISOString() };
+  return {
+    id: u.id,
+    email: u.email,
+    displayName: u.displayName,
+    roles: [...u.roles],
+    createdAt: u.createdAt.toISOString(),
+  };
 }
 
 export const hashPassword = (plain: string) => bcrypt.hash(plain, BCRYPT_ROUNDS);
@@ -28,12 +34,17 @@ export async function signUp(input: SignUpInput): Promise<AccountView> {
   db();
   try {
     const user = await User.create({
-      email: input.email, displayName: input.displayName, passwordHash: await hashPassword(input.password), roles: [input.role],
+      email: input.email,
+      displayName: input.displayName,
+      passwordHash: await hashPassword(input.password),
+      roles: [input.role],
     });
     return presentAccount(user);
   } catch (e) {
     if (e instanceof UniqueConstraintError) {
-      throw new ApiError("conflict", "An account with that e-mail already exists", { email: "Already registered; sign in or reset the password" });
+      throw new ApiError("conflict", "An account with that e-mail already exists", {
+        email: "Already registered; sign in or reset the password",
+      });
     }
     throw e;
   }
@@ -73,7 +84,8 @@ export async function authenticate(input: SignInInput, ip: string): Promise<Acco
   const ok = await bcrypt.compare(input.password, user?.passwordHash ?? (await dummyHash()));
   const succeeded = Boolean(user && ok && !user.disabledAt);
   await SignInAttempt.create({ email, ip, succeeded });
-  if (!succeeded || !user) throw new ApiError("invalid_credentials", "That e-mail and password do not match an account");
+  if (!succeeded || !user)
+    throw new ApiError("invalid_credentials", "That e-mail and password do not match an account");
   return presentAccount(user);
 }
 
@@ -97,7 +109,11 @@ export async function requestPasswordReset(emailRaw: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
   if (!user || user.disabledAt) return;
   const token = randomBytes(32).toString("base64url");
-  await PasswordResetToken.create({ userId: user.id, tokenHash: sha256(token), expiresAt: new Date(Date.now() + RESET_TTL_MS) });
+  await PasswordResetToken.create({
+    userId: user.id,
+    tokenHash: sha256(token),
+    expiresAt: new Date(Date.now() + RESET_TTL_MS),
+  });
   const link = `${env().NEXTAUTH_URL}/reset-password?token=${token}`;
   await sendMail({
     to: user.email,
@@ -112,10 +128,14 @@ export async function confirmPasswordReset(input: ResetConfirmInput): Promise<vo
   await s.transaction(async (t) => {
     const row = await PasswordResetToken.findOne({
       where: { tokenHash: sha256(input.token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
-      lock: t.LOCK.UPDATE, transaction: t,
+      lock: t.LOCK.UPDATE,
+      transaction: t,
     });
     if (!row) throw new ApiError("gone", "This reset link has expired or was already used. Ask for a new one.");
-    await User.update({ passwordHash: await hashPassword(input.password) }, { where: { id: row.userId }, transaction: t });
+    await User.update(
+      { passwordHash: await hashPassword(input.password) },
+      { where: { id: row.userId }, transaction: t },
+    );
     await row.update({ usedAt: new Date() }, { transaction: t });
   });
 }
@@ -134,7 +154,9 @@ export async function setRoles(actorId: string, userId: string, roles: Role[]): 
   if (!user) throw new ApiError("not_found", "No such account");
   const unique = [...new Set(roles)];
   if (actorId === userId && !unique.includes("admin")) {
-    throw new ApiError("conflict", "You cannot remove your own house role", { roles: "Keep the house role on your own account" });
+    throw new ApiError("conflict", "You cannot remove your own house role", {
+      roles: "Keep the house role on your own account",
+    });
   }
   await user.update({ roles: unique });
   return presentAccount(user);

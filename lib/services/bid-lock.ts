@@ -5,15 +5,34 @@ import { db } from "../../models";
 
 /** The lot row as the bid sees it under its lock, with the sale's clock and any earlier bid under this key. */
 export type LockedLot = {
-  id: string; sale_id: string; phase: LotLive["phase"]; closes_at: Date; extension_count: number; seq: number; state: ProxyState;
-  hammer_cents: number | null; starts_at: Date; soft_close_seconds: number; db_now: Date; leader_paddle: number | null;
-  prior_seq: number | null; prior_outcome: BidOutcome | null; prior_max: number | null;
+  id: string;
+  sale_id: string;
+  phase: LotLive["phase"];
+  closes_at: Date;
+  extension_count: number;
+  seq: number;
+  state: ProxyState;
+  hammer_cents: number | null;
+  starts_at: Date;
+  soft_close_seconds: number;
+  db_now: Date;
+  leader_paddle: number | null;
+  prior_seq: number | null;
+  prior_outcome: BidOutcome | null;
+  prior_max: number | null;
 };
 
 /** What an accepted bid writes: the lot's new state and the bid row, under the same lock. */
 export type BidWrite = {
-  seq: number; state: ProxyState; closesAt: Date; extensionCount: number;
-  bidderId: string; maxCents: number; outcome: BidOutcome; key: string; placedAt: Date;
+  seq: number;
+  state: ProxyState;
+  closesAt: Date;
+  extensionCount: number;
+  bidderId: string;
+  maxCents: number;
+  outcome: BidOutcome;
+  key: string;
+  placedAt: Date;
 };
 
 const int = (n: number) => {
@@ -29,7 +48,12 @@ const int = (n: number) => {
  * take no parameters); every one is a UUID, a validated key, a whole number,
  * a timestamp or our own JSON.
  */
-export async function withLotLock<T>(saleLotId: string, bidderId: string, key: string, decide: (row: LockedLot | undefined) => { write: BidWrite | null; result: T }): Promise<T> {
+export async function withLotLock<T>(
+  saleLotId: string,
+  bidderId: string,
+  key: string,
+  decide: (row: LockedLot | undefined) => { write: BidWrite | null; result: T },
+): Promise<T> {
   const manager = db().connectionManager;
   const client = (await manager.getConnection({ type: "write" })) as Client;
   const L = (v: string) => client.escapeLiteral(v);

@@ -25,12 +25,29 @@ export const REFUSAL_WORDS: Record<BidRefusal | "not-started", string> = {
 };
 
 export type BidResult =
-  | { accepted: true; outcome: BidOutcome; seq: number; live: LotLive; yourMaxCents: number; leading: boolean; replayed: boolean }
+  | {
+      accepted: true;
+      outcome: BidOutcome;
+      seq: number;
+      live: LotLive;
+      yourMaxCents: number;
+      leading: boolean;
+      replayed: boolean;
+    }
   | { accepted: false; reason: BidRefusal | "not-started"; message: string; minimumCents: number; live: LotLive };
 
 type Row = {
-  id: string; sale_id: string; phase: LotLive["phase"]; closes_at: Date; extension_count: number; seq: number; state: ProxyState;
-  starts_at: Date; soft_close_seconds: number; db_now: Date; hammer_cents: number | null;
+  id: string;
+  sale_id: string;
+  phase: LotLive["phase"];
+  closes_at: Date;
+  extension_count: number;
+  seq: number;
+  state: ProxyState;
+  starts_at: Date;
+  soft_close_seconds: number;
+  db_now: Date;
+  hammer_cents: number | null;
 };
 
 const saleOf = new Map<string, string>();
@@ -41,11 +58,19 @@ const saleOf = new Map<string, string>();
  * moves the close on a late bid; only after commit is it broadcast. The same
  * idempotency key from the same bidder returns the first answer.
  */
-export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: number, idempotencyKey: string): Promise<BidResult> {
+export async function placeMaxBid(
+  viewer: Viewer,
+  saleLotId: string,
+  maxCents: number,
+  idempotencyKey: string,
+): Promise<BidResult> {
   const s = db();
   let saleId = saleOf.get(saleLotId);
   if (!saleId) {
-    const r = await s.query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT });
+    const r = await s.query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :saleLotId`, {
+      replacements: { saleLotId },
+      type: QueryTypes.SELECT,
+    });
     if (!r[0]) throw new ApiError("not_found", "No such lot in a sale");
     saleId = r[0].sale_id;
     saleOf.set(saleLotId, saleId);
@@ -61,16 +86,38 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
        FROM sale_lots sl WHERE sl.id = :saleLotId`,
     { replacements: { saleLotId, bidder: viewer.id, key: idempotencyKey }, type: QueryTypes.SELECT },
   );
-  if (peek && peek.prior_seq == null && peek.phase === "open" && peek.state.leader?.bidderId !== viewer.id && maxCents < minimumBidFor(peek.state)) {
-    const leader = peek.state.leader ? (await paddlesOf(saleId, [peek.state.leader.bidderId])).get(peek.state.leader.bidderId) ?? null : null;
-    return { accepted: false, reason: "below-minimum", message: REFUSAL_WORDS["below-minimum"], minimumCents: minimumBidFor(peek.state), live: liveFrom(peek, leader) };
+  if (
+    peek &&
+    peek.prior_seq == null &&
+    peek.phase === "open" &&
+    peek.state.leader?.bidderId !== viewer.id &&
+    maxCents < minimumBidFor(peek.state)
+  ) {
+    const leader = peek.state.leader
+      ? ((await paddlesOf(saleId, [peek.state.leader.bidderId])).get(peek.state.leader.bidderId) ?? null)
+      : null;
+    return {
+      accepted: false,
+      reason: "below-minimum",
+      message: REFUSAL_WORDS["below-minimum"],
+      minimumCents: minimumBidFor(peek.state),
+      live: liveFrom(peek, leader),
+    };
   }
 
   // Under the lot's row lock (lib/services/bid-lock): decide with the pure rules, then write and commit in one round trip.
   type Done =
     | { kind: "refused"; row: LockedLot; reason: BidRefusal | "not-started"; minimumCents: number }
     | { kind: "replayed"; row: LockedLot; prior: { seq: number; outcome: BidOutcome; max_cents: number } }
-    | { kind: "accepted"; row: LockedLot; outcome: BidOutcome; seq: number; previousLeader: string | null; previousLeaderPaddle: number | null; extended: boolean };
+    | {
+        kind: "accepted";
+        row: LockedLot;
+        outcome: BidOutcome;
+        seq: number;
+        previousLeader: string | null;
+        previousLeaderPaddle: number | null;
+        extended: boolean;
+      };
   // The write is bracketed so that its broadcast leaves in seq order with this process's other writes of the lot.
   beginLotWrite(saleLotId);
   let done: Done;
@@ -78,19 +125,57 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
   try {
     done = await withLotLock<Done>(saleLotId, viewer.id, idempotencyKey, (row) => {
       if (!row) throw new ApiError("not_found", "No such lot in a sale");
-      if (row.prior_seq != null) return { write: null, result: { kind: "replayed", row, prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! } } };
+      if (row.prior_seq != null)
+        return {
+          write: null,
+          result: {
+            kind: "replayed",
+            row,
+            prior: { seq: row.prior_seq, outcome: row.prior_outcome!, max_cents: row.prior_max! },
+          },
+        };
       const nowMs = row.db_now.getTime();
-      if (nowMs < row.starts_at.getTime()) return { write: null, result: { kind: "refused", row, reason: "not-started", minimumCents: minimumBidFor(row.state) } };
+      if (nowMs < row.starts_at.getTime())
+        return {
+          write: null,
+          result: { kind: "refused", row, reason: "not-started", minimumCents: minimumBidFor(row.state) },
+        };
       const previousLeader = row.state.leader?.bidderId ?? null;
-      const decision = placeBid(row.state, { bidderId: viewer.id, maxCents, placedAtMs: nowMs, seq: row.seq + 1 }, { phase: row.phase, closesAtMs: row.closes_at.getTime() });
-      if (!decision.accepted) return { write: null, result: { kind: "refused", row, reason: decision.reason, minimumCents: decision.minimumCents } };
-      const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, { windowSeconds: row.soft_close_seconds, maxExtensions: null });
+      const decision = placeBid(
+        row.state,
+        { bidderId: viewer.id, maxCents, placedAtMs: nowMs, seq: row.seq + 1 },
+        { phase: row.phase, closesAtMs: row.closes_at.getTime() },
+      );
+      if (!decision.accepted)
+        return {
+          write: null,
+          result: { kind: "refused", row, reason: decision.reason, minimumCents: decision.minimumCents },
+        };
+      const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, {
+        windowSeconds: row.soft_close_seconds,
+        maxExtensions: null,
+      });
       const next = decision.state;
       const seq = row.seq + 1;
       return {
-        write: { seq, state: next, closesAt: new Date(clock.closesAtMs), extensionCount: clock.extensionCount, bidderId: viewer.id, maxCents, outcome: decision.outcome, key: idempotencyKey, placedAt: row.db_now },
+        write: {
+          seq,
+          state: next,
+          closesAt: new Date(clock.closesAtMs),
+          extensionCount: clock.extensionCount,
+          bidderId: viewer.id,
+          maxCents,
+          outcome: decision.outcome,
+          key: idempotencyKey,
+          placedAt: row.db_now,
+        },
         result: {
-          kind: "accepted", outcome: decision.outcome, seq, previousLeader, previousLeaderPaddle: row.leader_paddle, extended: clock.extended,
+          kind: "accepted",
+          outcome: decision.outcome,
+          seq,
+          previousLeader,
+          previousLeaderPaddle: row.leader_paddle,
+          extended: clock.extended,
           row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
         },
       };
@@ -105,20 +190,47 @@ export async function placeMaxBid(viewer: Viewer, saleLotId: string, maxCents: n
   }
 
   if (done.kind === "refused") {
-    const leader = done.row.state.leader ? (await paddlesOf(saleId, [done.row.state.leader.bidderId])).get(done.row.state.leader.bidderId) ?? null : null;
-    return { accepted: false, reason: done.reason, message: REFUSAL_WORDS[done.reason], minimumCents: done.minimumCents, live: liveFrom(done.row, leader) };
+    const leader = done.row.state.leader
+      ? ((await paddlesOf(saleId, [done.row.state.leader.bidderId])).get(done.row.state.leader.bidderId) ?? null)
+      : null;
+    return {
+      accepted: false,
+      reason: done.reason,
+      message: REFUSAL_WORDS[done.reason],
+      minimumCents: done.minimumCents,
+      live: liveFrom(done.row, leader),
+    };
   }
   if (done.kind === "replayed") {
-    const leader = done.row.state.leader ? (await paddlesOf(saleId, [done.row.state.leader.bidderId])).get(done.row.state.leader.bidderId) ?? null : null;
+    const leader = done.row.state.leader
+      ? ((await paddlesOf(saleId, [done.row.state.leader.bidderId])).get(done.row.state.leader.bidderId) ?? null)
+      : null;
     return {
-      accepted: true, outcome: done.prior.outcome, seq: done.prior.seq, live: liveFrom(done.row, leader), yourMaxCents: done.prior.max_cents,
-      leading: done.row.state.leader?.bidderId === viewer.id, replayed: true,
+      accepted: true,
+      outcome: done.prior.outcome,
+      seq: done.prior.seq,
+      live: liveFrom(done.row, leader),
+      yourMaxCents: done.prior.max_cents,
+      leading: done.row.state.leader?.bidderId === viewer.id,
+      replayed: true,
     };
   }
   const leaderId = done.row.state.leader!.bidderId;
-  if (done.extended) void scheduleClose(saleLotId, done.row.closes_at).catch((e: Error) => console.error("[close] reschedule failed", e.message));
+  if (done.extended)
+    void scheduleClose(saleLotId, done.row.closes_at).catch((e: Error) =>
+      console.error("[close] reschedule failed", e.message),
+    );
   // The bidder hears about a proxy outbid in this answer; the notice is for a leader who lost the lead.
   const outbid = done.previousLeader && done.previousLeader !== leaderId ? done.previousLeader : null;
-  if (outbid) void queueOutbidNotice(outbid, live!).catch((e: Error) => console.error("[notice] outbid failed", e.message));
-  return { accepted: true, outcome: done.outcome, seq: done.seq, live: live!, yourMaxCents: maxCents, leading: leaderId === viewer.id, replayed: false };
+  if (outbid)
+    void queueOutbidNotice(outbid, live!).catch((e: Error) => console.error("[notice] outbid failed", e.message));
+  return {
+    accepted: true,
+    outcome: done.outcome,
+    seq: done.seq,
+    live: live!,
+    yourMaxCents: maxCents,
+    leading: leaderId === viewer.id,
+    replayed: false,
+  };
 }

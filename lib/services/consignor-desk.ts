@@ -4,19 +4,53 @@ import { lotStage, netProceeds, proceedsBySale, STAGE_WORDS, type LotStage } fro
 import { db } from "../../models";
 
 export type ConsignedLot = {
-  id: string; title: string; stage: LotStage; stageWords: string; tubes: number; lines: number; updatedAt: string;
-  sale: { id: string; title: string; saleLotId: string; priceCents: number; bidCount: number; reserveMet: boolean; closesAt: string; hammerCents: number | null } | null;
+  id: string;
+  title: string;
+  stage: LotStage;
+  stageWords: string;
+  tubes: number;
+  lines: number;
+  updatedAt: string;
+  sale: {
+    id: string;
+    title: string;
+    saleLotId: string;
+    priceCents: number;
+    bidCount: number;
+    reserveMet: boolean;
+    closesAt: string;
+    hammerCents: number | null;
+  } | null;
   invoice: { id: string; state: string } | null;
   netCents: number | null;
   claimId: string | null;
 };
 
 type Row = {
-  id: string; title: string; state: string; updated_at: Date; lines: string; tubes: string | null;
-  sale_lot_id: string | null; sale_id: string | null; sale_title: string | null; starts_at: Date | null; phase: "open" | "sold" | "unsold" | "withdrawn" | null;
-  price_cents: number | null; bid_count: number | null; reserve_met: boolean | null; closes_at: Date | null; hammer_cents: number | null;
-  invoice_id: string | null; invoice_state: string | null; inv_hammer: number | null; commission_cents: number | null;
-  hammer_refunded_cents: number | null; commission_returned_cents: number | null; claim_id: string | null; claim_open: boolean | null;
+  id: string;
+  title: string;
+  state: string;
+  updated_at: Date;
+  lines: string;
+  tubes: string | null;
+  sale_lot_id: string | null;
+  sale_id: string | null;
+  sale_title: string | null;
+  starts_at: Date | null;
+  phase: "open" | "sold" | "unsold" | "withdrawn" | null;
+  price_cents: number | null;
+  bid_count: number | null;
+  reserve_met: boolean | null;
+  closes_at: Date | null;
+  hammer_cents: number | null;
+  invoice_id: string | null;
+  invoice_state: string | null;
+  inv_hammer: number | null;
+  commission_cents: number | null;
+  hammer_refunded_cents: number | null;
+  commission_returned_cents: number | null;
+  claim_id: string | null;
+  claim_open: boolean | null;
 };
 
 /**
@@ -42,25 +76,51 @@ export async function consignorDesk(viewer: Viewer) {
   const now = Date.now();
   const lots: ConsignedLot[] = rows.map((r) => {
     const stage = lotStage({
-      lotState: r.state, sale: r.phase ? { phase: r.phase, startsAtMs: r.starts_at!.getTime() } : null,
-      invoiceState: r.invoice_state, claimOpen: Boolean(r.claim_open), nowMs: now,
+      lotState: r.state,
+      sale: r.phase ? { phase: r.phase, startsAtMs: r.starts_at!.getTime() } : null,
+      invoiceState: r.invoice_state,
+      claimOpen: Boolean(r.claim_open),
+      nowMs: now,
     });
-    const netCents = r.invoice_id ? netProceeds({
-      hammerCents: r.inv_hammer ?? 0, commissionCents: r.commission_cents ?? 0, hammerRefundedCents: r.hammer_refunded_cents ?? 0,
-      commissionReturnedCents: r.commission_returned_cents ?? 0, cancelled: r.invoice_state === "cancelled",
-    }) : null;
+    const netCents = r.invoice_id
+      ? netProceeds({
+          hammerCents: r.inv_hammer ?? 0,
+          commissionCents: r.commission_cents ?? 0,
+          hammerRefundedCents: r.hammer_refunded_cents ?? 0,
+          commissionReturnedCents: r.commission_returned_cents ?? 0,
+          cancelled: r.invoice_state === "cancelled",
+        })
+      : null;
     return {
-      id: r.id, title: r.title, stage, stageWords: STAGE_WORDS[stage], lines: Number(r.lines), tubes: Number(r.tubes ?? 0), updatedAt: r.updated_at.toISOString(),
-      sale: r.sale_lot_id ? {
-        id: r.sale_id!, title: r.sale_title!, saleLotId: r.sale_lot_id, priceCents: r.price_cents ?? 0, bidCount: r.bid_count ?? 0,
-        reserveMet: Boolean(r.reserve_met), closesAt: r.closes_at!.toISOString(), hammerCents: r.hammer_cents,
-      } : null,
+      id: r.id,
+      title: r.title,
+      stage,
+      stageWords: STAGE_WORDS[stage],
+      lines: Number(r.lines),
+      tubes: Number(r.tubes ?? 0),
+      updatedAt: r.updated_at.toISOString(),
+      sale: r.sale_lot_id
+        ? {
+            id: r.sale_id!,
+            title: r.sale_title!,
+            saleLotId: r.sale_lot_id,
+            priceCents: r.price_cents ?? 0,
+            bidCount: r.bid_count ?? 0,
+            reserveMet: Boolean(r.reserve_met),
+            closesAt: r.closes_at!.toISOString(),
+            hammerCents: r.hammer_cents,
+          }
+        : null,
       invoice: r.invoice_id ? { id: r.invoice_id, state: r.invoice_state! } : null,
       netCents,
       claimId: r.claim_open ? r.claim_id : null,
     };
   });
   const bySale = proceedsBySale(lots.map((l) => ({ saleId: l.sale?.id ?? null, netCents: l.netCents })));
-  const sales = [...bySale.entries()].map(([id, netCents]) => ({ id, title: lots.find((l) => l.sale?.id === id)!.sale!.title, netCents }));
+  const sales = [...bySale.entries()].map(([id, netCents]) => ({
+    id,
+    title: lots.find((l) => l.sale?.id === id)!.sale!.title,
+    netCents,
+  }));
   return { lots, sales };
 }

@@ -39,7 +39,9 @@ export async function readCodeForType(q: DateCodeQueryInput): Promise<DateCodeAn
     ...(q.endOfProduction ? { endOfProductionYear: q.endOfProduction } : {}),
   };
   const eia = readDateCode(q.code, ctx);
-  const european = /\d[A-Za-z]\d?$/.test(q.code.trim()) ? parseEuropeanDateLine(q.code, { ...ctx, schemes: ["A-L", "skip-I"] }) : null;
+  const european = /\d[A-Za-z]\d?$/.test(q.code.trim())
+    ? parseEuropeanDateLine(q.code, { ...ctx, schemes: ["A-L", "skip-I"] })
+    : null;
   const sourceText = eia.ok ? (eia.sourceCode ?? (eia.flags.includes("may-be-source-code") ? eia.digits : null)) : null;
   const source = sourceText ? await lookupRegisteredCode(sourceText) : null;
   return { code: q.code, type, eia, european, source };

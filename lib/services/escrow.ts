@@ -14,12 +14,23 @@ import { post } from "./ledger";
 import { statementCsv, statementFor, statementPdf } from "./statements";
 
 /** Move an invoice from one state to the next under its row lock; 409 from any other state. */
-async function step(invoiceId: string, from: string, fn: (inv: InvoiceRow, t: import("sequelize").Transaction) => Promise<void>) {
+async function step(
+  invoiceId: string,
+  from: string,
+  fn: (inv: InvoiceRow, t: import("sequelize").Transaction) => Promise<void>,
+) {
   const s = db();
   return s.transaction(async (t) => {
-    const [inv] = await s.query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
+    const [inv] = await s.query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, {
+      replacements: { invoiceId },
+      type: QueryTypes.SELECT,
+      transaction: t,
+    });
     if (!inv) throw new ApiError("not_found", "No such invoice");
-    if (inv.state !== from) throw new ApiError("conflict", `The invoice is ${inv.state}, not ${from}`, undefined, undefined, { state: inv.state });
+    if (inv.state !== from)
+      throw new ApiError("conflict", `The invoice is ${inv.state}, not ${from}`, undefined, undefined, {
+        state: inv.state,
+      });
     await fn(inv, t);
     return inv;
   });
@@ -28,9 +39,16 @@ async function step(invoiceId: string, from: string, fn: (inv: InvoiceRow, t: im
 /** The house records the shipment (carrier and tracking number). */
 export async function markShipped(invoiceId: string, carrier: string, tracking: string): Promise<void> {
   const inv = await step(invoiceId, "paid-held", async (_i, t) => {
-    await db().query(`UPDATE invoices SET state = 'shipped', carrier = :carrier, tracking = :tracking, shipped_at = now(), updated_at = now() WHERE id = :invoiceId`, { replacements: { carrier, tracking, invoiceId }, transaction: t });
+    await db().query(
+      `UPDATE invoices SET state = 'shipped', carrier = :carrier, tracking = :tracking, shipped_at = now(), updated_at = now() WHERE id = :invoiceId`,
+      { replacements: { carrier, tracking, invoiceId }, transaction: t },
+    );
   });
-  await mailParty(inv.buyer_id, "Your tubes are on their way", `Your lot (invoice ${inv.number}) has shipped with ${carrier}, tracking ${tracking}.`);
+  await mailParty(
+    inv.buyer_id,
+    "Your tubes are on their way",
+    `Your lot (invoice ${inv.number}) has shipped with ${carrier}, tracking ${tracking}.`,
+  );
 }
 
 /** The house records delivery; the inspection window starts (house setting: 7 days + 1 per 25 tubes, at most 21). */
@@ -38,33 +56,67 @@ export async function markDelivered(invoiceId: string): Promise<Date> {
   let ends = new Date();
   const inv = await step(invoiceId, "shipped", async (i, t) => {
     ends = new Date(inspectionWindowEnd(Date.now(), i.tube_count));
-    await db().query(`UPDATE invoices SET state = 'delivered', delivered_at = now(), inspection_ends_at = :ends, updated_at = now() WHERE id = :invoiceId`, { replacements: { ends, invoiceId }, transaction: t });
+    await db().query(
+      `UPDATE invoices SET state = 'delivered', delivered_at = now(), inspection_ends_at = :ends, updated_at = now() WHERE id = :invoiceId`,
+      { replacements: { ends, invoiceId }, transaction: t },
+    );
   });
-  await mailParty(inv.buyer_id, "Delivered: your inspection window is open",
-    `Invoice ${inv.number} is marked delivered. Inspect and test the tubes by ${ends.toUTCString()}; open a claim before then if anything is not as listed. Otherwise the house pays the consignor at the end of the window.`);
+  await mailParty(
+    inv.buyer_id,
+    "Delivered: your inspection window is open",
+    `Invoice ${inv.number} is marked delivered. Inspect and test the tubes by ${ends.toUTCString()}; open a claim before then if anything is not as listed. Otherwise the house pays the consignor at the end of the window.`,
+  );
   return ends;
 }
 
 /** The buyer accepts the lot before the window ends: release at once. */
 export async function acceptDelivery(viewer: Viewer, invoiceId: string): Promise<void> {
-  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, {
+    replacements: { invoiceId },
+    type: QueryTypes.SELECT,
+  });
   if (!inv || inv.buyer_id !== viewer.id) throw new ApiError("not_found", "No such invoice");
   if (!(await release(invoiceId, "accepted by the buyer"))) {
-    const [now] = await db().query<{ state: string; released_at: Date | null }>(`SELECT state, released_at FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
-    throw new ApiError("conflict", now?.released_at ? `You accepted this lot already: payment was released to the consignor on ${now.released_at.toISOString().slice(0, 10)}` : "This lot cannot be accepted now", undefined, undefined, { state: now?.state ?? inv.state });
+    const [now] = await db().query<{ state: string; released_at: Date | null }>(
+      `SELECT state, released_at FROM invoices WHERE id = :invoiceId`,
+      { replacements: { invoiceId }, type: QueryTypes.SELECT },
+    );
+    throw new ApiError(
+      "conflict",
+      now?.released_at
+        ? `You accepted this lot already: payment was released to the consignor on ${now.released_at.toISOString().slice(0, 10)}`
+        : "This lot cannot be accepted now",
+      undefined,
+      undefined,
+      { state: now?.state ?? inv.state },
+    );
   }
 }
 
 async function payoutAccount(userId: string): Promise<string> {
-  const [row] = await db().query<{ stripe_account_id: string }>(`SELECT stripe_account_id FROM payout_accounts WHERE user_id = :userId`, { replacements: { userId }, type: QueryTypes.SELECT });
+  const [row] = await db().query<{ stripe_account_id: string }>(
+    `SELECT stripe_account_id FROM payout_accounts WHERE user_id = :userId`,
+    { replacements: { userId }, type: QueryTypes.SELECT },
+  );
   if (row) return row.stripe_account_id;
   const user = await User.findByPk(userId, { attributes: ["email", "displayName"] });
   const acct = await stripe().accounts.create(
-    { type: "custom", email: user?.email, capabilities: { transfers: { requested: true } }, metadata: { user_id: userId } },
+    {
+      type: "custom",
+      email: user?.email,
+      capabilities: { transfers: { requested: true } },
+      metadata: { user_id: userId },
+    },
     { idempotencyKey: `payout-account:${userId}` },
   );
-  await db().query(`INSERT INTO payout_accounts (user_id, stripe_account_id, created_at) VALUES (:userId, :acct, now()) ON CONFLICT DO NOTHING`, { replacements: { userId, acct: acct.id } });
-  const [again] = await db().query<{ stripe_account_id: string }>(`SELECT stripe_account_id FROM payout_accounts WHERE user_id = :userId`, { replacements: { userId }, type: QueryTypes.SELECT });
+  await db().query(
+    `INSERT INTO payout_accounts (user_id, stripe_account_id, created_at) VALUES (:userId, :acct, now()) ON CONFLICT DO NOTHING`,
+    { replacements: { userId, acct: acct.id } },
+  );
+  const [again] = await db().query<{ stripe_account_id: string }>(
+    `SELECT stripe_account_id FROM payout_accounts WHERE user_id = :userId`,
+    { replacements: { userId }, type: QueryTypes.SELECT },
+  );
   return again!.stripe_account_id;
 }
 
@@ -77,36 +129,74 @@ async function payoutAccount(userId: string): Promise<string> {
  * by its case's decision (`fromDispute`).
  */
 export async function release(invoiceId: string, why: string, opts: { fromDispute?: boolean } = {}): Promise<boolean> {
-  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, {
+    replacements: { invoiceId },
+    type: QueryTypes.SELECT,
+  });
   if (!inv) throw new ApiError("not_found", "No such invoice");
   if (inv.state === "released") return false;
   const releasable = (state: string) => state === "delivered" || (opts.fromDispute === true && state === "disputed");
   if (!releasable(inv.state)) {
-    throw new ApiError("conflict", inv.state === "disputed" ? "A claim is open on this lot: payment stays held until it is decided" : `The invoice is ${inv.state}; escrow is released only after delivery`);
+    throw new ApiError(
+      "conflict",
+      inv.state === "disputed"
+        ? "A claim is open on this lot: payment stays held until it is decided"
+        : `The invoice is ${inv.state}; escrow is released only after delivery`,
+    );
   }
   const left = remainingFigures(inv);
   const payout = left.hammerCents - left.commissionCents;
   const account = payout > 0 ? await payoutAccount(inv.consignor_id) : null;
   const transfer = account
     ? await stripe().transfers.create(
-      { amount: payout, currency: stripeConfig().CURRENCY, destination: account, transfer_group: `invoice:${inv.id}`, metadata: { invoice_id: inv.id } },
-      { idempotencyKey: `invoice:${inv.id}:release` },
-    )
+        {
+          amount: payout,
+          currency: stripeConfig().CURRENCY,
+          destination: account,
+          transfer_group: `invoice:${inv.id}`,
+          metadata: { invoice_id: inv.id },
+        },
+        { idempotencyKey: `invoice:${inv.id}:release` },
+      )
     : null;
   const released = await db().transaction(async (t) => {
-    const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
+    const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, {
+      replacements: { invoiceId },
+      type: QueryTypes.SELECT,
+      transaction: t,
+    });
     if (!locked || !releasable(locked.state)) return false;
-    if (left.hammerCents + left.premiumCents > 0) await post(t, "escrow-released", invoiceId, escrowReleasedEntries(left));
+    if (left.hammerCents + left.premiumCents > 0)
+      await post(t, "escrow-released", invoiceId, escrowReleasedEntries(left));
     if (transfer) await post(t, "payout-sent", invoiceId, payoutSentEntries(payout), transfer.id);
-    await db().query(`UPDATE invoices SET state = 'released', released_at = now(), transfer_id = :tr, updated_at = now() WHERE id = :invoiceId`, { replacements: { tr: transfer?.id ?? null, invoiceId }, transaction: t });
+    await db().query(
+      `UPDATE invoices SET state = 'released', released_at = now(), transfer_id = :tr, updated_at = now() WHERE id = :invoiceId`,
+      { replacements: { tr: transfer?.id ?? null, invoiceId }, transaction: t },
+    );
     return true;
   });
-  if (released) await mailStatement(inv, left, payout, why).catch((e: Error) => console.error("[mail] statement failed", e.message));
+  if (released)
+    await mailStatement(inv, left, payout, why).catch((e: Error) =>
+      console.error("[mail] statement failed", e.message),
+    );
   return released;
 }
 
 /** What is left of a sale to release after the refunds already paid on it and any undisputed share released early. */
-export function remainingFigures(inv: Pick<InvoiceRow, "hammer_cents" | "premium_cents" | "commission_cents" | "hammer_refunded_cents" | "premium_refunded_cents" | "commission_returned_cents" | "released_hammer_cents" | "released_premium_cents" | "released_commission_cents">) {
+export function remainingFigures(
+  inv: Pick<
+    InvoiceRow,
+    | "hammer_cents"
+    | "premium_cents"
+    | "commission_cents"
+    | "hammer_refunded_cents"
+    | "premium_refunded_cents"
+    | "commission_returned_cents"
+    | "released_hammer_cents"
+    | "released_premium_cents"
+    | "released_commission_cents"
+  >,
+) {
   return {
     hammerCents: inv.hammer_cents - inv.hammer_refunded_cents - inv.released_hammer_cents,
     premiumCents: inv.premium_cents - inv.premium_refunded_cents - inv.released_premium_cents,
@@ -121,49 +211,95 @@ export function remainingFigures(inv: Pick<InvoiceRow, "hammer_cents" | "premium
  * rest stays held for the claim. Returns the payout in cents, and whether this
  * call released it (false when it was released before).
  */
-export async function releaseUndisputed(invoiceId: string, share: { hammerCents: number; premiumCents: number; commissionCents: number }, why: string): Promise<{ payoutCents: number; done: boolean }> {
-  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+export async function releaseUndisputed(
+  invoiceId: string,
+  share: { hammerCents: number; premiumCents: number; commissionCents: number },
+  why: string,
+): Promise<{ payoutCents: number; done: boolean }> {
+  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, {
+    replacements: { invoiceId },
+    type: QueryTypes.SELECT,
+  });
   if (!inv) throw new ApiError("not_found", "No such invoice");
-  if (inv.state !== "disputed") throw new ApiError("conflict", "Only a lot under a claim has an undisputed share to release early");
+  if (inv.state !== "disputed")
+    throw new ApiError("conflict", "Only a lot under a claim has an undisputed share to release early");
   const payout = share.hammerCents - share.commissionCents;
-  if (inv.released_hammer_cents > 0 || inv.released_premium_cents > 0) return { payoutCents: inv.released_hammer_cents - inv.released_commission_cents, done: false }; // done already
+  if (inv.released_hammer_cents > 0 || inv.released_premium_cents > 0)
+    return { payoutCents: inv.released_hammer_cents - inv.released_commission_cents, done: false }; // done already
   if (share.hammerCents + share.premiumCents === 0) return { payoutCents: 0, done: true };
   const account = payout > 0 ? await payoutAccount(inv.consignor_id) : null;
   const transfer = account
     ? await stripe().transfers.create(
-      { amount: payout, currency: stripeConfig().CURRENCY, destination: account, transfer_group: `invoice:${inv.id}`, metadata: { invoice_id: inv.id, share: "undisputed" } },
-      { idempotencyKey: `invoice:${inv.id}:release-undisputed` },
-    )
+        {
+          amount: payout,
+          currency: stripeConfig().CURRENCY,
+          destination: account,
+          transfer_group: `invoice:${inv.id}`,
+          metadata: { invoice_id: inv.id, share: "undisputed" },
+        },
+        { idempotencyKey: `invoice:${inv.id}:release-undisputed` },
+      )
     : null;
   const done = await db().transaction(async (t) => {
-    const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
-    if (!locked || locked.state !== "disputed" || locked.released_hammer_cents > 0 || locked.released_premium_cents > 0) return false;
+    const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, {
+      replacements: { invoiceId },
+      type: QueryTypes.SELECT,
+      transaction: t,
+    });
+    if (!locked || locked.state !== "disputed" || locked.released_hammer_cents > 0 || locked.released_premium_cents > 0)
+      return false;
     await post(t, "escrow-released-undisputed", invoiceId, escrowReleasedEntries(share));
     if (transfer) await post(t, "payout-sent-undisputed", invoiceId, payoutSentEntries(payout), transfer.id);
-    await db().query(`UPDATE invoices SET released_hammer_cents = :h, released_premium_cents = :p, released_commission_cents = :c, updated_at = now() WHERE id = :invoiceId`,
-      { replacements: { h: share.hammerCents, p: share.premiumCents, c: share.commissionCents, invoiceId }, transaction: t });
+    await db().query(
+      `UPDATE invoices SET released_hammer_cents = :h, released_premium_cents = :p, released_commission_cents = :c, updated_at = now() WHERE id = :invoiceId`,
+      {
+        replacements: { h: share.hammerCents, p: share.premiumCents, c: share.commissionCents, invoiceId },
+        transaction: t,
+      },
+    );
     return true;
   });
   if (done) {
-    await mailParty(inv.consignor_id, "Part of your payment is released",
-      `A claim is open on invoice ${inv.number}. The share of the lot it does not touch is released now (${why}): ${formatCents(payout)} is on its way to your payout account (hammer ${formatCents(share.hammerCents)} less commission ${formatCents(share.commissionCents)}). The rest stays held until the claim is decided.`);
+    await mailParty(
+      inv.consignor_id,
+      "Part of your payment is released",
+      `A claim is open on invoice ${inv.number}. The share of the lot it does not touch is released now (${why}): ${formatCents(payout)} is on its way to your payout account (hammer ${formatCents(share.hammerCents)} less commission ${formatCents(share.commissionCents)}). The rest stays held until the claim is decided.`,
+    );
   }
   return { payoutCents: payout, done };
 }
 
 /** Release every delivered invoice whose inspection window has ended without a claim. */
 export async function releaseDue(): Promise<number> {
-  const due = await db().query<{ id: string }>(`SELECT id FROM invoices WHERE state = 'delivered' AND inspection_ends_at <= now() LIMIT 50`, { type: QueryTypes.SELECT });
+  const due = await db().query<{ id: string }>(
+    `SELECT id FROM invoices WHERE state = 'delivered' AND inspection_ends_at <= now() LIMIT 50`,
+    { type: QueryTypes.SELECT },
+  );
   let n = 0;
-  for (const d of due) if (await release(d.id, "inspection window ended").catch((e: Error) => { console.error("[escrow] release failed", e.message); return false; })) n++;
+  for (const d of due)
+    if (
+      await release(d.id, "inspection window ended").catch((e: Error) => {
+        console.error("[escrow] release failed", e.message);
+        return false;
+      })
+    )
+      n++;
   return n;
 }
 
 /** The consignor's statement for the sale, attached as PDF and CSV, with the release explained. */
-async function mailStatement(inv: InvoiceRow, left: ReturnType<typeof remainingFigures>, payout: number, why: string): Promise<void> {
+async function mailStatement(
+  inv: InvoiceRow,
+  left: ReturnType<typeof remainingFigures>,
+  payout: number,
+  why: string,
+): Promise<void> {
   const u = await User.findByPk(inv.consignor_id, { attributes: ["id", "email", "displayName", "roles"] });
   if (!u) return;
-  const [sl] = await db().query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :id`, { replacements: { id: inv.sale_lot_id }, type: QueryTypes.SELECT });
+  const [sl] = await db().query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :id`, {
+    replacements: { id: inv.sale_lot_id },
+    type: QueryTypes.SELECT,
+  });
   const viewer = { id: u.id, email: u.email, name: u.displayName, roles: [...u.roles] };
   const st = await statementFor(viewer, sl!.sale_id);
   await sendMail({
@@ -181,5 +317,7 @@ async function mailParty(userId: string, subject: string, body: string): Promise
   await notify(userId, subject, null).catch((e: Error) => console.error("[notice]", e.message));
   const u = await User.findByPk(userId, { attributes: ["email", "displayName"] });
   if (!u) return;
-  await sendMail({ to: u.email, subject, text: `Hello ${u.displayName},\n\n${body}\n\nGetterline Exchange` }).catch((e: Error) => console.error("[mail]", e.message));
+  await sendMail({ to: u.email, subject, text: `Hello ${u.displayName},\n\n${body}\n\nGetterline Exchange` }).catch(
+    (e: Error) => console.error("[mail]", e.message),
+  );
 }

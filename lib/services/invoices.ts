@@ -37,13 +37,40 @@ export function shippingFor(tubes: number): number {
 }
 
 export type InvoiceRow = {
-  id: string; number: string; sale_lot_id: string; lot_id: string; buyer_id: string; consignor_id: string; state: string;
-  hammer_cents: number; premium_bp: number; premium_cents: number; shipping_cents: number; tax_cents: number; total_cents: number;
-  commission_cents: number; processor_fee_cents: number | null; tube_count: number; due_at: Date; payment_intent_id: string | null;
-  last_payment_error: string | null; paid_at: Date | null; carrier: string | null; tracking: string | null; shipped_at: Date | null;
-  delivered_at: Date | null; inspection_ends_at: Date | null; released_at: Date | null; transfer_id: string | null; created_at: Date;
-  hammer_refunded_cents: number; premium_refunded_cents: number; commission_returned_cents: number;
-  released_hammer_cents: number; released_premium_cents: number; released_commission_cents: number;
+  id: string;
+  number: string;
+  sale_lot_id: string;
+  lot_id: string;
+  buyer_id: string;
+  consignor_id: string;
+  state: string;
+  hammer_cents: number;
+  premium_bp: number;
+  premium_cents: number;
+  shipping_cents: number;
+  tax_cents: number;
+  total_cents: number;
+  commission_cents: number;
+  processor_fee_cents: number | null;
+  tube_count: number;
+  due_at: Date;
+  payment_intent_id: string | null;
+  last_payment_error: string | null;
+  paid_at: Date | null;
+  carrier: string | null;
+  tracking: string | null;
+  shipped_at: Date | null;
+  delivered_at: Date | null;
+  inspection_ends_at: Date | null;
+  released_at: Date | null;
+  transfer_id: string | null;
+  created_at: Date;
+  hammer_refunded_cents: number;
+  premium_refunded_cents: number;
+  commission_returned_cents: number;
+  released_hammer_cents: number;
+  released_premium_cents: number;
+  released_commission_cents: number;
 };
 
 /**
@@ -55,21 +82,36 @@ export type InvoiceRow = {
 export async function invoiceSoldLot(saleLotId: string): Promise<string | null> {
   const s = db();
   const created = await s.transaction(async (t) => {
-    const [sl] = await s.query<{ id: string; lot_id: string; buyer_id: string | null; consignor_id: string; hammer_cents: number | null; phase: string; tubes: string }>(
+    const [sl] = await s.query<{
+      id: string;
+      lot_id: string;
+      buyer_id: string | null;
+      consignor_id: string;
+      hammer_cents: number | null;
+      phase: string;
+      tubes: string;
+    }>(
       `SELECT sl.id, sl.lot_id, sl.buyer_id, sl.consignor_id, sl.hammer_cents, sl.phase,
               (SELECT COALESCE(SUM(quantity), 0) FROM lot_items WHERE lot_id = sl.lot_id) AS tubes
          FROM sale_lots sl WHERE sl.id = :saleLotId FOR UPDATE`,
       { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );
     if (!sl || sl.phase !== "sold" || !sl.buyer_id || sl.hammer_cents == null) return null;
-    const [existing] = await s.query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t });
+    const [existing] = await s.query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :saleLotId`, {
+      replacements: { saleLotId },
+      type: QueryTypes.SELECT,
+      transaction: t,
+    });
     if (existing) return null; // invoiced already (a second-chance invoice is written by offerToUnderbidder)
     const tubes = Number(sl.tubes);
     const shippingCents = shippingFor(tubes);
     const inv = invoiceFor({ hammerCents: sl.hammer_cents, shippingCents }, DEFAULT_FEE_SCHEDULE);
     const commission = sellersCommissionCents(sl.hammer_cents, DEFAULT_COMMISSION_TIERS);
     const id = randomUUID();
-    const [{ n }] = await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, { type: QueryTypes.SELECT, transaction: t }) as [{ n: string }];
+    const [{ n }] = (await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, {
+      type: QueryTypes.SELECT,
+      transaction: t,
+    })) as [{ n: string }];
     await s.query(
       `INSERT INTO invoices (id, number, sale_lot_id, lot_id, buyer_id, consignor_id, state, hammer_cents, premium_bp, premium_cents, shipping_cents, tax_cents, total_cents,
                              commission_cents, tube_count, due_at, created_at, updated_at)
@@ -77,9 +119,21 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
                now() + (:dueDays || ' days')::interval, now(), now())`,
       {
         replacements: {
-          id, number: `GL-${new Date().getUTCFullYear()}-${n}`, saleLotId, lotId: sl.lot_id, buyer: sl.buyer_id, consignor: sl.consignor_id,
-          hammer: inv.hammerCents, bp: DEFAULT_FEE_SCHEDULE.buyersPremiumBp, premium: inv.premiumCents, shipping: inv.shippingCents, tax: inv.taxCents,
-          total: inv.totalCents, commission, tubes, dueDays: String(INVOICE_SETTINGS.dueDays),
+          id,
+          number: `GL-${new Date().getUTCFullYear()}-${n}`,
+          saleLotId,
+          lotId: sl.lot_id,
+          buyer: sl.buyer_id,
+          consignor: sl.consignor_id,
+          hammer: inv.hammerCents,
+          bp: DEFAULT_FEE_SCHEDULE.buyersPremiumBp,
+          premium: inv.premiumCents,
+          shipping: inv.shippingCents,
+          tax: inv.taxCents,
+          total: inv.totalCents,
+          commission,
+          tubes,
+          dueDays: String(INVOICE_SETTINGS.dueDays),
         },
         transaction: t,
       },
@@ -92,7 +146,8 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
   const buyer = await User.findByPk(created.buyerId, { attributes: ["email", "displayName"] });
   if (buyer) {
     await sendMail({
-      to: buyer.email, subject: "Your Getterline invoice",
+      to: buyer.email,
+      subject: "Your Getterline invoice",
       text: `Hello ${buyer.displayName},\n\nYour invoice for the lot you won is ready: ${formatCents(created.total)} due within ${INVOICE_SETTINGS.dueDays} days.\nThe house holds your payment until you have received and inspected the tubes.\n\nPay: ${env().NEXTAUTH_URL}/invoices/${created.id}\n\nGetterline Exchange`,
     }).catch((e: Error) => console.error("[mail] invoice failed", e.message));
   }
@@ -113,7 +168,10 @@ export async function getInvoice(viewer: Viewer, invoiceId: string) {
   if (house || inv.buyer_id === viewer.id || inv.consignor_id === viewer.id) return presentInvoice(inv, viewer);
   // A mediator reads (never changes) the invoice of a case they mediate; any other invoice stays hidden.
   if (can(viewer.roles, "disputes.mediate") && inv.dispute_id) {
-    const [mediated] = await db().query(`SELECT 1 FROM disputes WHERE id = :d AND mediator_id = :me`, { replacements: { d: inv.dispute_id, me: viewer.id }, type: QueryTypes.SELECT });
+    const [mediated] = await db().query(`SELECT 1 FROM disputes WHERE id = :d AND mediator_id = :me`, {
+      replacements: { d: inv.dispute_id, me: viewer.id },
+      type: QueryTypes.SELECT,
+    });
     if (mediated) return { ...presentInvoice(inv, viewer), readOnly: true as const };
   }
   throw new ApiError("not_found", "No such invoice");
@@ -122,20 +180,47 @@ export async function getInvoice(viewer: Viewer, invoiceId: string) {
 /** A charge this invoice did not owe, refunded automatically (lib/services/unexpected-charges.ts). */
 type UnexpectedOnInvoice = { amountCents: number; state: "refund-due" | "refunded"; refundedAt: string | null };
 
-export function presentInvoice(inv: InvoiceRow & { title?: string; sale_id?: string; dispute_id?: string | null; unexpected?: UnexpectedOnInvoice[] }, viewer: Viewer) {
+export function presentInvoice(
+  inv: InvoiceRow & {
+    title?: string;
+    sale_id?: string;
+    dispute_id?: string | null;
+    unexpected?: UnexpectedOnInvoice[];
+  },
+  viewer: Viewer,
+) {
   const buyerView = viewer.roles.includes("admin") || inv.buyer_id === viewer.id;
   return {
-    id: inv.id, number: inv.number, title: inv.title ?? "", saleId: inv.sale_id, saleLotId: inv.sale_lot_id, lotId: inv.lot_id, state: inv.state,
-    hammerCents: inv.hammer_cents, premiumBp: inv.premium_bp, premiumCents: inv.premium_cents, shippingCents: inv.shipping_cents, taxCents: inv.tax_cents,
-    totalCents: inv.total_cents, tubeCount: inv.tube_count, dueAt: inv.due_at.toISOString(), paidAt: inv.paid_at?.toISOString() ?? null,
-    carrier: inv.carrier, tracking: inv.tracking, shippedAt: inv.shipped_at?.toISOString() ?? null, deliveredAt: inv.delivered_at?.toISOString() ?? null,
-    inspectionEndsAt: inv.inspection_ends_at?.toISOString() ?? null, releasedAt: inv.released_at?.toISOString() ?? null,
-    lastPaymentError: buyerView ? inv.last_payment_error : null, isBuyer: inv.buyer_id === viewer.id, isConsignor: inv.consignor_id === viewer.id,
+    id: inv.id,
+    number: inv.number,
+    title: inv.title ?? "",
+    saleId: inv.sale_id,
+    saleLotId: inv.sale_lot_id,
+    lotId: inv.lot_id,
+    state: inv.state,
+    hammerCents: inv.hammer_cents,
+    premiumBp: inv.premium_bp,
+    premiumCents: inv.premium_cents,
+    shippingCents: inv.shipping_cents,
+    taxCents: inv.tax_cents,
+    totalCents: inv.total_cents,
+    tubeCount: inv.tube_count,
+    dueAt: inv.due_at.toISOString(),
+    paidAt: inv.paid_at?.toISOString() ?? null,
+    carrier: inv.carrier,
+    tracking: inv.tracking,
+    shippedAt: inv.shipped_at?.toISOString() ?? null,
+    deliveredAt: inv.delivered_at?.toISOString() ?? null,
+    inspectionEndsAt: inv.inspection_ends_at?.toISOString() ?? null,
+    releasedAt: inv.released_at?.toISOString() ?? null,
+    lastPaymentError: buyerView ? inv.last_payment_error : null,
+    isBuyer: inv.buyer_id === viewer.id,
+    isConsignor: inv.consignor_id === viewer.id,
     commissionCents: buyerView && !viewer.roles.includes("admin") ? undefined : inv.commission_cents,
     refundedCents: inv.hammer_refunded_cents + inv.premium_refunded_cents,
     commissionReturnedCents: buyerView && !viewer.roles.includes("admin") ? undefined : inv.commission_returned_cents,
     disputeId: inv.dispute_id ?? null,
-    unexpectedCharges: buyerView ? inv.unexpected ?? [] : [],
+    unexpectedCharges: buyerView ? (inv.unexpected ?? []) : [],
   };
 }
 
@@ -155,7 +240,14 @@ export async function listInvoices(viewer: Viewer) {
  * it is overdue. Each is sent once (the count is kept on the invoice).
  */
 export async function sendReminders(): Promise<number> {
-  const due = await db().query<{ id: string; number: string; buyer_id: string; total_cents: number; due_at: Date; reminders_sent: number }>(
+  const due = await db().query<{
+    id: string;
+    number: string;
+    buyer_id: string;
+    total_cents: number;
+    due_at: Date;
+    reminders_sent: number;
+  }>(
     `UPDATE invoices SET reminders_sent = reminders_sent + 1, updated_at = now()
       WHERE state = 'awaiting-payment' AND ((reminders_sent = 0 AND due_at - interval '2 days' <= now()) OR (reminders_sent = 1 AND due_at <= now()))
       RETURNING id, number, buyer_id, total_cents, due_at, reminders_sent`,
@@ -166,7 +258,8 @@ export async function sendReminders(): Promise<number> {
     if (!u) continue;
     const overdue = inv.reminders_sent >= 2;
     await sendMail({
-      to: u.email, subject: overdue ? `Overdue: invoice ${inv.number}` : `Reminder: invoice ${inv.number} is due soon`,
+      to: u.email,
+      subject: overdue ? `Overdue: invoice ${inv.number}` : `Reminder: invoice ${inv.number} is due soon`,
       text: `Hello ${u.displayName},\n\nInvoice ${inv.number} for ${formatCents(inv.total_cents)} ${overdue ? "is now overdue; the house may cancel it and offer the lot to the under-bidder" : `is due on ${inv.due_at.toUTCString()}`}.\n\nPay: ${env().NEXTAUTH_URL}/invoices/${inv.id}\n\nGetterline Exchange`,
     }).catch((e: Error) => console.error("[mail] reminder failed", e.message));
   }

@@ -24,9 +24,12 @@ export function assertCanView(viewer: Viewer | null, lot: Lot | null): Lot {
 export function assertConsignorCanEdit(viewer: Viewer, lot: Lot | null): Lot {
   if (!lot || lot.consignorId !== viewer.id) throw new ApiError("not_found", "No such lot");
   if (!lot.editableByConsignor) {
-    throw new ApiError("conflict", lot.state === "approved"
-      ? "This lot is approved and locked; the house records any correction as an amendment"
-      : `This lot is ${lot.state === "in-review" ? "with the house for review" : lot.state} and cannot be changed now`);
+    throw new ApiError(
+      "conflict",
+      lot.state === "approved"
+        ? "This lot is approved and locked; the house records any correction as an amendment"
+        : `This lot is ${lot.state === "in-review" ? "with the house for review" : lot.state} and cannot be changed now`,
+    );
   }
   return lot;
 }

@@ -18,7 +18,18 @@ import { notify } from "./notices";
 import { startOutbidWorker } from "./outbid-notices";
 import { paddlesOf } from "./paddles";
 
-type Closing = { id: string; sale_id: string; lot_id: string; phase: "open" | "sold" | "unsold" | "withdrawn"; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null; consignor_id: string; due: boolean };
+type Closing = {
+  id: string;
+  sale_id: string;
+  lot_id: string;
+  phase: "open" | "sold" | "unsold" | "withdrawn";
+  seq: number;
+  state: ProxyState;
+  closes_at: Date;
+  hammer_cents: number | null;
+  consignor_id: string;
+  due: boolean;
+};
 
 /**
  * Close a lot exactly once. Under the row lock: a lot already closed is left
@@ -26,7 +37,9 @@ type Closing = { id: string; sale_id: string; lot_id: string; phase: "open" | "s
  * to the leader at the shown price, or left unsold. Mail and broadcasts
  * follow the commit. Safe to run any number of times, from any instance.
  */
-export async function closeSaleLot(saleLotId: string): Promise<"closed" | "already-closed" | "rescheduled" | "missing"> {
+export async function closeSaleLot(
+  saleLotId: string,
+): Promise<"closed" | "already-closed" | "rescheduled" | "missing"> {
   const s = db();
   const result = await s.transaction(async (t) => {
     const [row] = await s.query<Closing>(
@@ -44,13 +57,20 @@ export async function closeSaleLot(saleLotId: string): Promise<"closed" | "alrea
         WHERE id = :saleLotId`,
       {
         replacements: {
-          phase, saleLotId, buyer: outcome.phase === "sold" ? outcome.buyerId : null, hammer: outcome.phase === "sold" ? outcome.hammerCents : null,
+          phase,
+          saleLotId,
+          buyer: outcome.phase === "sold" ? outcome.buyerId : null,
+          hammer: outcome.phase === "sold" ? outcome.hammerCents : null,
           reason: outcome.phase === "unsold" ? outcome.reason : null,
         },
         transaction: t,
       },
     );
-    return { kind: "closed" as const, row: { ...row, phase, seq: row.seq + 1, hammer_cents: outcome.phase === "sold" ? outcome.hammerCents : null }, outcome };
+    return {
+      kind: "closed" as const,
+      row: { ...row, phase, seq: row.seq + 1, hammer_cents: outcome.phase === "sold" ? outcome.hammerCents : null },
+      outcome,
+    };
   });
   if (result.kind === "rescheduled") {
     await scheduleClose(saleLotId, result.closesAt);
@@ -59,17 +79,23 @@ export async function closeSaleLot(saleLotId: string): Promise<"closed" | "alrea
   if (result.kind !== "closed") return result.kind;
   const { row, outcome } = result;
   const leaderId = row.state.leader?.bidderId;
-  const paddle = leaderId ? (await paddlesOf(row.sale_id, [leaderId]).catch(() => new Map<string, number>())).get(leaderId) ?? null : null;
+  const paddle = leaderId
+    ? ((await paddlesOf(row.sale_id, [leaderId]).catch(() => new Map<string, number>())).get(leaderId) ?? null)
+    : null;
   emitLot("lot.closed", liveFrom(row, paddle));
   await lotChanged(row.lot_id, "closed");
-  if (outcome.phase === "sold") await invoiceSoldLot(row.id).catch((e: Error) => console.error("[invoice] failed; the sweeper retries", e.message));
+  if (outcome.phase === "sold")
+    await invoiceSoldLot(row.id).catch((e: Error) => console.error("[invoice] failed; the sweeper retries", e.message));
   await closingMail(row, outcome).catch((e: Error) => console.error("[mail] closing notice failed", e.message));
   return "closed";
 }
 
 async function closingMail(row: Closing, outcome: ReturnType<typeof closeOutcome>): Promise<void> {
   const s = db();
-  const [lot] = await s.query<{ title: string }>(`SELECT title FROM lots WHERE id = :id`, { replacements: { id: row.lot_id }, type: QueryTypes.SELECT });
+  const [lot] = await s.query<{ title: string }>(`SELECT title FROM lots WHERE id = :id`, {
+    replacements: { id: row.lot_id },
+    type: QueryTypes.SELECT,
+  });
   const title = lot?.title ?? "your lot";
   const base = env().NEXTAUTH_URL;
   const consignor = await User.findByPk(row.consignor_id, { attributes: ["email", "displayName"] });
@@ -78,14 +104,34 @@ async function closingMail(row: Closing, outcome: ReturnType<typeof closeOutcome
     const href = `/sales/${row.sale_id}/lots/${row.id}`;
     if (buyer) {
       await notify(buyer.id, `You won "${title}" at ${formatCents(outcome.hammerCents)}.`, href);
-      await sendMail({ to: buyer.email, subject: `You won: ${title}`, text: `Hello ${buyer.displayName},\n\nYou won "${title}" with a hammer price of ${formatCents(outcome.hammerCents)}. The invoice follows separately.\n\n${base}${href}\n\nGetterline Exchange` });
+      await sendMail({
+        to: buyer.email,
+        subject: `You won: ${title}`,
+        text: `Hello ${buyer.displayName},\n\nYou won "${title}" with a hammer price of ${formatCents(outcome.hammerCents)}. The invoice follows separately.\n\n${base}${href}\n\nGetterline Exchange`,
+      });
     }
-    await notify(row.consignor_id, `"${title}" sold for ${formatCents(outcome.hammerCents)}. Settlement follows payment and inspection.`, "/consignor");
-    if (consignor) await sendMail({ to: consignor.email, subject: `Sold: ${title}`, text: `Hello ${consignor.displayName},\n\nYour lot "${title}" sold for ${formatCents(outcome.hammerCents)} (hammer price). Settlement follows once the buyer has paid and inspected the tubes.\n\nGetterline Exchange` });
+    await notify(
+      row.consignor_id,
+      `"${title}" sold for ${formatCents(outcome.hammerCents)}. Settlement follows payment and inspection.`,
+      "/consignor",
+    );
+    if (consignor)
+      await sendMail({
+        to: consignor.email,
+        subject: `Sold: ${title}`,
+        text: `Hello ${consignor.displayName},\n\nYour lot "${title}" sold for ${formatCents(outcome.hammerCents)} (hammer price). Settlement follows once the buyer has paid and inspected the tubes.\n\nGetterline Exchange`,
+      });
   } else if (consignor) {
     await notify(row.consignor_id, `"${title}" closed unsold.`, "/consignor");
-    const why = outcome.reason === "no-bids" ? "it drew no bids" : `the reserve was not met (highest bid ${formatCents(outcome.highBidCents ?? 0)})`;
-    await sendMail({ to: consignor.email, subject: `Unsold: ${title}`, text: `Hello ${consignor.displayName},\n\nYour lot "${title}" closed unsold: ${why}. The house will talk with you about offering it again.\n\nGetterline Exchange` });
+    const why =
+      outcome.reason === "no-bids"
+        ? "it drew no bids"
+        : `the reserve was not met (highest bid ${formatCents(outcome.highBidCents ?? 0)})`;
+    await sendMail({
+      to: consignor.email,
+      subject: `Unsold: ${title}`,
+      text: `Hello ${consignor.displayName},\n\nYour lot "${title}" closed unsold: ${why}. The house will talk with you about offering it again.\n\nGetterline Exchange`,
+    });
   }
 }
 
@@ -109,9 +155,13 @@ export async function sweepDueLots(): Promise<number> {
 export async function startClosingWorker(): Promise<() => void> {
   const boss = queue();
   if (!boss) throw new Error("start the job queue first");
-  await boss.work<{ saleLotId: string }>(QUEUES.lotClose, { pollingIntervalSeconds: 0.5, batchSize: 5 }, async (jobs) => {
-    for (const job of jobs) await closeSaleLot(job.data.saleLotId);
-  });
+  await boss.work<{ saleLotId: string }>(
+    QUEUES.lotClose,
+    { pollingIntervalSeconds: 0.5, batchSize: 5 },
+    async (jobs) => {
+      for (const job of jobs) await closeSaleLot(job.data.saleLotId);
+    },
+  );
   await startOutbidWorker();
   await sweepDueLots();
   const timer = setInterval(() => {
@@ -119,7 +169,9 @@ export async function startClosingWorker(): Promise<() => void> {
     void releaseDue().catch((e: Error) => console.error("[escrow] sweep failed", e.message));
     void sendReminders().catch((e: Error) => console.error("[invoice] reminders failed", e.message));
     void disputeSweep().catch((e: Error) => console.error("[disputes] sweep failed", e.message));
-    void refundDueUnexpectedCharges().catch((e: Error) => console.error("[payments] unexpected-charge sweep failed", e.message));
+    void refundDueUnexpectedCharges().catch((e: Error) =>
+      console.error("[payments] unexpected-charge sweep failed", e.message),
+    );
   }, 10_000);
   timer.unref();
   return () => clearInterval(timer);

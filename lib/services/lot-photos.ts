@@ -14,7 +14,13 @@ export const MAX_PHOTOS_PER_LOT = 60;
 
 export type PhotoView = { id: string; itemId: string | null; caption: string; width: number; height: number };
 
-const present = (p: LotPhoto): PhotoView => ({ id: p.id, itemId: p.itemId, caption: p.caption, width: p.width, height: p.height });
+const present = (p: LotPhoto): PhotoView => ({
+  id: p.id,
+  itemId: p.itemId,
+  caption: p.caption,
+  width: p.width,
+  height: p.height,
+});
 
 /**
  * Add a photo to the consignor's lot: the content decides the type, the image
@@ -22,7 +28,12 @@ const present = (p: LotPhoto): PhotoView => ({ id: p.id, itemId: p.itemId, capti
  * then one row records them. If anything fails nothing is kept; the same
  * image sent twice is stored once.
  */
-export async function addPhoto(viewer: Viewer, lotId: string, file: { name: string; bytes: Buffer }, opts: { itemId?: string | null; caption?: string }): Promise<PhotoView> {
+export async function addPhoto(
+  viewer: Viewer,
+  lotId: string,
+  file: { name: string; bytes: Buffer },
+  opts: { itemId?: string | null; caption?: string },
+): Promise<PhotoView> {
   db();
   assertConsignorCanEdit(viewer, await Lot.findByPk(lotId));
   if (opts.itemId && !(await LotItem.findOne({ where: { id: opts.itemId, lotId }, attributes: ["id"] }))) {
@@ -36,7 +47,10 @@ export async function addPhoto(viewer: Viewer, lotId: string, file: { name: stri
     processed = await processPhoto(file.bytes, file.name, { maxBytes: MAX_PHOTO_BYTES });
   } catch (e) {
     if (e instanceof PhotoRejected) {
-      throw new ApiError(e.code === "too-large" ? "payload_too_large" : e.code === "empty" ? "bad_request" : "unsupported_media_type", e.message);
+      throw new ApiError(
+        e.code === "too-large" ? "payload_too_large" : e.code === "empty" ? "bad_request" : "unsupported_media_type",
+        e.message,
+      );
     }
     throw e;
   }
@@ -49,9 +63,17 @@ export async function addPhoto(viewer: Viewer, lotId: string, file: { name: stri
     await putObject(keys.full, processed.full.buffer, "image/jpeg");
     await putObject(keys.thumb, processed.thumb.buffer, "image/jpeg");
     const row = await LotPhoto.create({
-      id, lotId, itemId: opts.itemId ?? null, fullKey: keys.full, thumbKey: keys.thumb, width: processed.full.width,
-      height: processed.full.height, bytes: processed.full.buffer.length, sha256: processed.sha256,
-      caption: (opts.caption ?? "").slice(0, 200), uploadedBy: viewer.id,
+      id,
+      lotId,
+      itemId: opts.itemId ?? null,
+      fullKey: keys.full,
+      thumbKey: keys.thumb,
+      width: processed.full.width,
+      height: processed.full.height,
+      bytes: processed.full.buffer.length,
+      sha256: processed.sha256,
+      caption: (opts.caption ?? "").slice(0, 200),
+      uploadedBy: viewer.id,
     });
     return present(row);
   } catch (e) {

@@ -20,7 +20,9 @@ const TARGET: Record<ReviewDecision["action"], LotState> = {
 };
 
 async function mailConsignor(lot: Lot, subject: string, body: string): Promise<void> {
-  await notify(lot.consignorId, `${subject}: ${lot.title}`, `/consignor/lots/${lot.id}`).catch((e: Error) => console.error("[notice] lot notice failed", e.message));
+  await notify(lot.consignorId, `${subject}: ${lot.title}`, `/consignor/lots/${lot.id}`).catch((e: Error) =>
+    console.error("[notice] lot notice failed", e.message),
+  );
   const consignor = await User.findByPk(lot.consignorId, { attributes: ["email", "displayName"] });
   if (!consignor) return;
   await sendMail({
@@ -44,8 +46,18 @@ export async function submitLot(viewer: Viewer, lotId: string): Promise<LotView>
     const record = await consignorRecord(viewer.id);
     const extra = lot!.extraReview || needsExtraReview(record.upheldMisattributionClaims);
     await lot!.update({ state: "in-review", submittedAt: new Date(), extraReview: extra }, { transaction: t });
-    const note = extra ? `Extra review: ${record.upheldMisattributionClaims} upheld misattribution claim(s) on earlier lots` : "";
-    await LotEvent.create({ lotId, actorId: viewer.id, kind: "submitted", comment: [resubmission ? "Resubmitted after changes" : "", note].filter(Boolean).join(". ") }, { transaction: t });
+    const note = extra
+      ? `Extra review: ${record.upheldMisattributionClaims} upheld misattribution claim(s) on earlier lots`
+      : "";
+    await LotEvent.create(
+      {
+        lotId,
+        actorId: viewer.id,
+        kind: "submitted",
+        comment: [resubmission ? "Resubmitted after changes" : "", note].filter(Boolean).join(". "),
+      },
+      { transaction: t },
+    );
     return presentLot(lot!, viewer);
   });
 }
@@ -65,27 +77,58 @@ export async function decideLot(admin: Viewer, lotId: string, d: ReviewDecision)
     const now = new Date();
     if (d.action === "approve") {
       if (lot.extraReview && d.comment.trim().length < 20) {
-        throw new ApiError("validation_failed", "This lot is under extra review: say what you checked of its attributions before approving", { comment: "Record the attribution checks (at least 20 characters)" });
+        throw new ApiError(
+          "validation_failed",
+          "This lot is under extra review: say what you checked of its attributions before approving",
+          { comment: "Record the attribution checks (at least 20 characters)" },
+        );
       }
-      await lot.update({
-        state: "approved", estimateLowCents: d.estimateLowCents, estimateHighCents: d.estimateHighCents,
-        reserveCents: d.reserveCents, reserveAgreedAt: now, approvedAt: now, approvedBy: admin.id,
-      }, { transaction: t });
+      await lot.update(
+        {
+          state: "approved",
+          estimateLowCents: d.estimateLowCents,
+          estimateHighCents: d.estimateHighCents,
+          reserveCents: d.reserveCents,
+          reserveAgreedAt: now,
+          approvedAt: now,
+          approvedBy: admin.id,
+        },
+        { transaction: t },
+      );
     } else {
       await lot.update({ state: TARGET[d.action] }, { transaction: t });
     }
-    const details = d.action === "approve"
-      ? { estimateLowCents: d.estimateLowCents, estimateHighCents: d.estimateHighCents, reserveAgreed: true }
-      : {};
-    await LotEvent.create({ lotId, actorId: admin.id, kind: TARGET[d.action] === "needs-changes" ? "changes-requested" : TARGET[d.action] as "approved" | "declined", comment: d.comment, details }, { transaction: t });
+    const details =
+      d.action === "approve"
+        ? { estimateLowCents: d.estimateLowCents, estimateHighCents: d.estimateHighCents, reserveAgreed: true }
+        : {};
+    await LotEvent.create(
+      {
+        lotId,
+        actorId: admin.id,
+        kind:
+          TARGET[d.action] === "needs-changes" ? "changes-requested" : (TARGET[d.action] as "approved" | "declined"),
+        comment: d.comment,
+        details,
+      },
+      { transaction: t },
+    );
     return { lot, changed: true };
   });
   if (changed) {
     if (d.action === "request-changes") {
-      await mailConsignor(lot, `Changes asked on your lot "${lot.title}"`, `The house reviewed your lot and asks for changes:\n\n${d.comment}\n\nMake them and submit the lot again.`);
+      await mailConsignor(
+        lot,
+        `Changes asked on your lot "${lot.title}"`,
+        `The house reviewed your lot and asks for changes:\n\n${d.comment}\n\nMake them and submit the lot again.`,
+      );
     } else if (d.action === "approve") {
       await lotChanged(lot.id, "approved");
-      await mailConsignor(lot, `Your lot "${lot.title}" is approved`, `The house approved your lot with an estimate of ${formatCents(d.estimateLowCents)}–${formatCents(d.estimateHighCents)} and the reserve you agreed (${formatCents(d.reserveCents)}).${d.comment ? `\n\n${d.comment}` : ""}`);
+      await mailConsignor(
+        lot,
+        `Your lot "${lot.title}" is approved`,
+        `The house approved your lot with an estimate of ${formatCents(d.estimateLowCents)}–${formatCents(d.estimateHighCents)} and the reserve you agreed (${formatCents(d.reserveCents)}).${d.comment ? `\n\n${d.comment}` : ""}`,
+      );
     } else {
       await mailConsignor(lot, `Your lot "${lot.title}" was declined`, `The house declined your lot:\n\n${d.comment}`);
     }
@@ -99,7 +142,8 @@ export async function amendLot(admin: Viewer, lotId: string, a: AmendmentInput):
   await s.transaction(async (t) => {
     const lot = await Lot.findByPk(lotId, { lock: t.LOCK.UPDATE, transaction: t });
     if (!lot) throw new ApiError("not_found", "No such lot");
-    if (lot.state !== "approved") throw new ApiError("conflict", "Only approved lots take amendments; others are edited directly");
+    if (lot.state !== "approved")
+      throw new ApiError("conflict", "Only approved lots take amendments; others are edited directly");
     const details: Record<string, unknown> = {};
     if (a.itemId) {
       const item = await LotItem.findOne({ where: { id: a.itemId, lotId }, transaction: t });
@@ -115,7 +159,10 @@ export async function amendLot(admin: Viewer, lotId: string, a: AmendmentInput):
       details.after = patch;
       await item.update(patch, { transaction: t });
     }
-    await LotEvent.create({ lotId, actorId: admin.id, kind: "amended", comment: a.description, details }, { transaction: t });
+    await LotEvent.create(
+      { lotId, actorId: admin.id, kind: "amended", comment: a.description, details },
+      { transaction: t },
+    );
   });
   await lotChanged(lotId, "amended");
 }

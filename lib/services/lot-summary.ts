@@ -1,7 +1,13 @@
 import { QueryTypes } from "sequelize";
 import { comparablesFromSoldLots } from "../lots/comparables";
 import { describeDesignation, type ItemCondition, type LotItem as DomainItem } from "../lots/item";
-import { readingsVsNominal, summariseLot, type ComparableSale, type LotSummary, type NominalPoint } from "../lots/summary";
+import {
+  readingsVsNominal,
+  summariseLot,
+  type ComparableSale,
+  type LotSummary,
+  type NominalPoint,
+} from "../lots/summary";
 import type { HazardKind } from "../valves/index-types";
 import { db } from "../../models";
 import type { ItemView } from "./lots";
@@ -38,7 +44,9 @@ export function comparableSales(): Promise<ComparableSale[]> {
   if (!comparablesCache || Date.now() - comparablesCache.at > COMPARABLES_TTL_MS) {
     const sales = readComparableSales();
     comparablesCache = { at: Date.now(), sales };
-    sales.catch(() => { comparablesCache = null; });
+    sales.catch(() => {
+      comparablesCache = null;
+    });
   }
   return comparablesCache.sales;
 }
@@ -49,14 +57,31 @@ export function forgetComparables(): void {
 }
 
 async function readComparableSales(): Promise<ComparableSale[]> {
-  const rows = await db().query<{ lot_id: string; net: number; sold_at: Date; designation: string; condition: ItemCondition; quantity: number }>(
+  const rows = await db().query<{
+    lot_id: string;
+    net: number;
+    sold_at: Date;
+    designation: string;
+    condition: ItemCondition;
+    quantity: number;
+  }>(
     `SELECT i.lot_id, i.hammer_cents - i.hammer_refunded_cents AS net, i.created_at AS sold_at, li.designation, li.condition, li.quantity
        FROM invoices i JOIN lot_items li ON li.lot_id = i.lot_id
       WHERE i.state <> 'cancelled' AND i.state <> 'refunded' AND i.created_at > now() - interval '2 years'
       ORDER BY i.created_at DESC LIMIT 20000`,
     { type: QueryTypes.SELECT },
   );
-  return comparablesFromSoldLots(await currentReferenceTable(), rows.map((r) => ({ lotId: r.lot_id, netHammerCents: Number(r.net), soldAt: r.sold_at.toISOString(), designation: r.designation, condition: r.condition, quantity: r.quantity })));
+  return comparablesFromSoldLots(
+    await currentReferenceTable(),
+    rows.map((r) => ({
+      lotId: r.lot_id,
+      netHammerCents: Number(r.net),
+      soldAt: r.sold_at.toISOString(),
+      designation: r.designation,
+      condition: r.condition,
+      quantity: r.quantity,
+    })),
+  );
 }
 
 /** The summary dealers read first, and the points for the readings-against-nominal chart. */

@@ -27,7 +27,9 @@ export function normaliseTyped(table: ReferenceTable, typed: string): { designat
 /** Known construction features in our vocabulary's spelling; anything else kept as typed. */
 export function normaliseFeatures(record: Record<string, string>): Record<string, string> {
   const { features, ignored } = featuresFromText(record);
-  const kept = Object.fromEntries(Object.entries(record).filter(([k, v]) => v.trim() !== "" && ignored.some((x) => x === k || x.startsWith(`${k}=`))));
+  const kept = Object.fromEntries(
+    Object.entries(record).filter(([k, v]) => v.trim() !== "" && ignored.some((x) => x === k || x.startsWith(`${k}=`))),
+  );
   return { ...kept, ...featuresToText(features) };
 }
 
@@ -35,10 +37,25 @@ export type ItemView = ReturnType<typeof presentItem>;
 
 export function presentItem(i: LotItem) {
   return {
-    id: i.id, position: i.position, designationTyped: i.designationTyped, designation: i.designation, designationKnown: i.designationKnown,
-    quantity: i.quantity, labelBrand: i.labelBrand, makerName: i.makerName, makerBasis: i.makerBasis, sourceCode: i.sourceCode,
-    dateCode: i.dateCode, features: i.features, condition: i.condition, vacuumLoss: i.vacuumLoss, soldAsSet: i.soldAsSet, defects: i.defects,
-    hazards: i.hazards, readings: i.readings, notes: i.notes,
+    id: i.id,
+    position: i.position,
+    designationTyped: i.designationTyped,
+    designation: i.designation,
+    designationKnown: i.designationKnown,
+    quantity: i.quantity,
+    labelBrand: i.labelBrand,
+    makerName: i.makerName,
+    makerBasis: i.makerBasis,
+    sourceCode: i.sourceCode,
+    dateCode: i.dateCode,
+    features: i.features,
+    condition: i.condition,
+    vacuumLoss: i.vacuumLoss,
+    soldAsSet: i.soldAsSet,
+    defects: i.defects,
+    hazards: i.hazards,
+    readings: i.readings,
+    notes: i.notes,
   };
 }
 
@@ -52,7 +69,9 @@ export function withReference(table: ReferenceTable, i: ItemView) {
     ...i,
     designationKnown: normaliseTyped(table, i.designationTyped).known,
     familyLabel: typeFamily(table, i.designation).label,
-    typeHazards: hazardsForType(table, i.designation, i.hazards as HazardKind[]).notices.filter((n) => n.certainty !== "always"),
+    typeHazards: hazardsForType(table, i.designation, i.hazards as HazardKind[]).notices.filter(
+      (n) => n.certainty !== "always",
+    ),
   };
 }
 
@@ -65,13 +84,23 @@ export type LotView = ReturnType<typeof presentLot>;
 export function presentLot(lot: Lot, viewer: Viewer | null) {
   const reserve = seesReserve(viewer, lot);
   return {
-    id: lot.id, title: lot.title, provenance: lot.provenance, shippingOrigin: lot.shippingOrigin, testerKind: lot.testerKind,
-    testerNotes: lot.testerNotes, state: lot.state as LotState, consignorId: lot.consignorId,
-    consignorName: viewer ? lot.consignor?.displayName ?? null : null, // the public reads the evidence, not who consigned it
-    estimateLowCents: lot.estimateLowCents, estimateHighCents: lot.estimateHighCents,
+    id: lot.id,
+    title: lot.title,
+    provenance: lot.provenance,
+    shippingOrigin: lot.shippingOrigin,
+    testerKind: lot.testerKind,
+    testerNotes: lot.testerNotes,
+    state: lot.state as LotState,
+    consignorId: lot.consignorId,
+    consignorName: viewer ? (lot.consignor?.displayName ?? null) : null, // the public reads the evidence, not who consigned it
+    estimateLowCents: lot.estimateLowCents,
+    estimateHighCents: lot.estimateHighCents,
     reserveCents: reserve ? lot.reserveCents : undefined,
-    submittedAt: lot.submittedAt?.toISOString() ?? null, approvedAt: lot.approvedAt?.toISOString() ?? null,
-    extraReview: lot.extraReview, updatedAt: lot.updatedAt.toISOString(), createdAt: lot.createdAt.toISOString(),
+    submittedAt: lot.submittedAt?.toISOString() ?? null,
+    approvedAt: lot.approvedAt?.toISOString() ?? null,
+    extraReview: lot.extraReview,
+    updatedAt: lot.updatedAt.toISOString(),
+    createdAt: lot.createdAt.toISOString(),
   };
 }
 
@@ -100,13 +129,23 @@ export async function updateLotDetails(viewer: Viewer, lotId: string, input: Lot
 export async function getLot(viewer: Viewer | null, lotId: string) {
   db();
   if (!/^[0-9a-f-]{36}$/i.test(lotId)) throw new ApiError("not_found", "No such lot");
-  const lot = assertCanView(viewer, await Lot.findByPk(lotId, {
-    include: [{ model: User, as: "consignor", attributes: ["id", "displayName"] }],
-  }));
+  const lot = assertCanView(
+    viewer,
+    await Lot.findByPk(lotId, {
+      include: [{ model: User, as: "consignor", attributes: ["id", "displayName"] }],
+    }),
+  );
   const [items, photos, events] = await Promise.all([
     LotItem.findAll({ where: { lotId }, order: [["position", "ASC"]] }),
     LotPhoto.findAll({ where: { lotId }, order: [["createdAt", "ASC"]] }),
-    LotEvent.findAll({ where: { lotId }, order: [["createdAt", "ASC"], ["id", "ASC"]], include: [{ model: User, as: "actor", attributes: ["displayName"] }] }),
+    LotEvent.findAll({
+      where: { lotId },
+      order: [
+        ["createdAt", "ASC"],
+        ["id", "ASC"],
+      ],
+      include: [{ model: User, as: "actor", attributes: ["displayName"] }],
+    }),
   ]);
   // "check type" follows the house's current table, not the table when the item was typed.
   const table = await currentReferenceTable();
@@ -114,7 +153,14 @@ export async function getLot(viewer: Viewer | null, lotId: string) {
     lot: presentLot(lot, viewer),
     items: items.map((i) => withReference(table, presentItem(i))),
     photos: photos.map((p) => ({ id: p.id, itemId: p.itemId, caption: p.caption, width: p.width, height: p.height })),
-    events: events.map((e) => ({ id: e.id, kind: e.kind, comment: e.comment, details: e.details, at: e.createdAt.toISOString(), actor: viewer ? e.actor?.displayName ?? null : null })),
+    events: events.map((e) => ({
+      id: e.id,
+      kind: e.kind,
+      comment: e.comment,
+      details: e.details,
+      at: e.createdAt.toISOString(),
+      actor: viewer ? (e.actor?.displayName ?? null) : null,
+    })),
   };
 }
 
@@ -122,9 +168,15 @@ export async function getLot(viewer: Viewer | null, lotId: string) {
 export async function listLots(viewer: Viewer, scope: "mine" | "approved" | "review") {
   db();
   const where =
-    scope === "mine" ? { consignorId: viewer.id } : scope === "approved" ? { state: "approved" } : { state: { [Op.in]: ["in-review"] } };
+    scope === "mine"
+      ? { consignorId: viewer.id }
+      : scope === "approved"
+        ? { state: "approved" }
+        : { state: { [Op.in]: ["in-review"] } };
   const lots = await Lot.findAll({
-    where, order: scope === "review" ? [["submittedAt", "ASC"]] : [["updatedAt", "DESC"]], limit: 500,
+    where,
+    order: scope === "review" ? [["submittedAt", "ASC"]] : [["updatedAt", "DESC"]],
+    limit: 500,
     include: [{ model: User, as: "consignor", attributes: ["id", "displayName"] }],
   });
   const counts = lots.length
@@ -134,16 +186,33 @@ export async function listLots(viewer: Viewer, scope: "mine" | "approved" | "rev
       )
     : [];
   const by = new Map(counts.map((c) => [c.lot_id, { tubes: Number(c.tubes), lines: Number(c.lines) }]));
-  return lots.map((l) => ({ ...presentLot(l, viewer), tubes: by.get(l.id)?.tubes ?? 0, lines: by.get(l.id)?.lines ?? 0 }));
+  return lots.map((l) => ({
+    ...presentLot(l, viewer),
+    tubes: by.get(l.id)?.tubes ?? 0,
+    lines: by.get(l.id)?.lines ?? 0,
+  }));
 }
 
 function itemValues(table: ReferenceTable, input: ItemInput) {
   const { designation, known } = normaliseTyped(table, input.designation);
   return {
-    designationTyped: input.designation, designation, designationKnown: known, quantity: input.quantity, labelBrand: input.labelBrand,
-    makerName: input.makerName || null, makerBasis: input.makerBasis, sourceCode: input.sourceCode || null, dateCode: input.dateCode || null,
-    features: normaliseFeatures(input.features), condition: input.condition, vacuumLoss: input.vacuumLoss, soldAsSet: input.soldAsSet ?? false, defects: input.defects,
-    hazards: input.hazards, readings: input.readings, notes: input.notes,
+    designationTyped: input.designation,
+    designation,
+    designationKnown: known,
+    quantity: input.quantity,
+    labelBrand: input.labelBrand,
+    makerName: input.makerName || null,
+    makerBasis: input.makerBasis,
+    sourceCode: input.sourceCode || null,
+    dateCode: input.dateCode || null,
+    features: normaliseFeatures(input.features),
+    condition: input.condition,
+    vacuumLoss: input.vacuumLoss,
+    soldAsSet: input.soldAsSet ?? false,
+    defects: input.defects,
+    hazards: input.hazards,
+    readings: input.readings,
+    notes: input.notes,
   };
 }
 
@@ -154,7 +223,10 @@ export async function addItem(viewer: Viewer, lotId: string, input: ItemInput): 
   return s.transaction(async (t) => {
     assertConsignorCanEdit(viewer, await Lot.findByPk(lotId, { lock: t.LOCK.UPDATE, transaction: t }));
     const max = (await LotItem.max("position", { where: { lotId }, transaction: t })) as number | null;
-    const item = await LotItem.create({ lotId, position: (max ?? 0) + 1, ...itemValues(table, input) }, { transaction: t });
+    const item = await LotItem.create(
+      { lotId, position: (max ?? 0) + 1, ...itemValues(table, input) },
+      { transaction: t },
+    );
     return presentItem(item);
   });
 }
@@ -181,10 +253,35 @@ export async function removeItem(viewer: Viewer, lotId: string, itemId: string):
 }
 
 /** The sale a lot is (or was) offered in, if any: for the lot page's way to bidding. */
-export async function saleLotOf(lotId: string): Promise<{ saleLotId: string; saleId: string; saleTitle: string; phase: string; hammerCents: number | null; closedAt: string | null } | null> {
-  const [row] = await db().query<{ id: string; sale_id: string; title: string; phase: string; hammer_cents: number | null; closed_at: Date | null }>(
+export async function saleLotOf(
+  lotId: string,
+): Promise<{
+  saleLotId: string;
+  saleId: string;
+  saleTitle: string;
+  phase: string;
+  hammerCents: number | null;
+  closedAt: string | null;
+} | null> {
+  const [row] = await db().query<{
+    id: string;
+    sale_id: string;
+    title: string;
+    phase: string;
+    hammer_cents: number | null;
+    closed_at: Date | null;
+  }>(
     `SELECT sl.id, sl.sale_id, s.title, sl.phase, sl.hammer_cents, sl.closed_at FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.lot_id = :lotId ORDER BY sl.created_at DESC LIMIT 1`,
     { replacements: { lotId }, type: QueryTypes.SELECT },
   );
-  return row ? { saleLotId: row.id, saleId: row.sale_id, saleTitle: row.title, phase: row.phase, hammerCents: row.hammer_cents, closedAt: row.closed_at?.toISOString() ?? null } : null;
+  return row
+    ? {
+        saleLotId: row.id,
+        saleId: row.sale_id,
+        saleTitle: row.title,
+        phase: row.phase,
+        hammerCents: row.hammer_cents,
+        closedAt: row.closed_at?.toISOString() ?? null,
+      }
+    : null;
 }

@@ -1,5 +1,10 @@
 import { ApiError } from "../api/errors";
-import { lookupSourceCode, parseMakerRegistryCsv, type MakerRegistryEntry, type SourceCodeLookup } from "../valves/source-code";
+import {
+  lookupSourceCode,
+  parseMakerRegistryCsv,
+  type MakerRegistryEntry,
+  type SourceCodeLookup,
+} from "../valves/source-code";
 import { db, Maker, MakerCode } from "../../models";
 
 /** The registry as the pure code reads it: one entry per registered code. */
@@ -15,14 +20,19 @@ export async function lookupRegisteredCode(code: string): Promise<SourceCodeLook
 }
 
 export type ImportRow = MakerRegistryEntry & { change: "new" | "changed" | "unchanged"; previousMaker?: string };
-export type ImportPreview = { rows: ImportRow[]; errors: { line: number; message: string }[]; counts: Record<ImportRow["change"], number> };
+export type ImportPreview = {
+  rows: ImportRow[];
+  errors: { line: number; message: string }[];
+  counts: Record<ImportRow["change"], number>;
+};
 
 /** Largest registry CSV accepted (bytes). */
 export const MAX_REGISTRY_CSV_BYTES = 512 * 1024;
 
 /** Parse a registry CSV and say, row by row, what applying it would change. Writes nothing. */
 export async function previewRegistryImport(csv: string): Promise<ImportPreview> {
-  if (Buffer.byteLength(csv) > MAX_REGISTRY_CSV_BYTES) throw new ApiError("payload_too_large", "The registry file is larger than 512 KB");
+  if (Buffer.byteLength(csv) > MAX_REGISTRY_CSV_BYTES)
+    throw new ApiError("payload_too_large", "The registry file is larger than 512 KB");
   const parsed = parseMakerRegistryCsv(csv);
   const existing = new Map((await registryEntries()).map((e) => [e.code, e]));
   const seen = new Set<string>();
@@ -35,8 +45,16 @@ export async function previewRegistryImport(csv: string): Promise<ImportPreview>
     }
     seen.add(r.code);
     const before = existing.get(r.code);
-    const change = !before ? "new" : before.makerName === r.makerName && before.isDemo === r.isDemo && before.notes === r.notes ? "unchanged" : "changed";
-    rows.push({ ...r, change, ...(before && before.makerName !== r.makerName ? { previousMaker: before.makerName } : {}) });
+    const change = !before
+      ? "new"
+      : before.makerName === r.makerName && before.isDemo === r.isDemo && before.notes === r.notes
+        ? "unchanged"
+        : "changed";
+    rows.push({
+      ...r,
+      change,
+      ...(before && before.makerName !== r.makerName ? { previousMaker: before.makerName } : {}),
+    });
   }
   const counts = { new: 0, changed: 0, unchanged: 0 };
   for (const r of rows) counts[r.change]++;
@@ -50,13 +68,23 @@ export async function previewRegistryImport(csv: string): Promise<ImportPreview>
 export async function applyRegistryImport(csv: string): Promise<ImportPreview> {
   const preview = await previewRegistryImport(csv);
   if (preview.errors.length) {
-    const fields = Object.fromEntries(preview.errors.slice(0, 50).map((e, i) => [`line ${e.line || `?${i}`}`, e.message]));
-    throw new ApiError("validation_failed", `${preview.errors.length} row(s) need fixing; nothing was imported`, fields);
+    const fields = Object.fromEntries(
+      preview.errors.slice(0, 50).map((e, i) => [`line ${e.line || `?${i}`}`, e.message]),
+    );
+    throw new ApiError(
+      "validation_failed",
+      `${preview.errors.length} row(s) need fixing; nothing was imported`,
+      fields,
+    );
   }
   const s = db();
   await s.transaction(async (t) => {
     for (const r of preview.rows.filter((x) => x.change !== "unchanged")) {
-      const [maker] = await Maker.findOrCreate({ where: { name: r.makerName }, defaults: { name: r.makerName, isDemo: r.isDemo }, transaction: t });
+      const [maker] = await Maker.findOrCreate({
+        where: { name: r.makerName },
+        defaults: { name: r.makerName, isDemo: r.isDemo },
+        transaction: t,
+      });
       await MakerCode.upsert({ code: r.code, makerId: maker.id, isDemo: r.isDemo, notes: r.notes }, { transaction: t });
     }
   });

@@ -13,7 +13,12 @@ export const OUTBID_MAIL_EVERY_MS = 15 * 60 * 1000;
 export async function notify(userId: string, text: string, href: string | null): Promise<void> {
   db();
   const n = await Notice.create({ userId, text: text.slice(0, 500), href });
-  emitTo([userRoom(userId)], "notice.created", { id: n.id, text: n.text, ...(href ? { href } : {}), at: n.createdAt.toISOString() });
+  emitTo([userRoom(userId)], "notice.created", {
+    id: n.id,
+    text: n.text,
+    ...(href ? { href } : {}),
+    at: n.createdAt.toISOString(),
+  });
 }
 
 /** Tell a dealer another is now ahead of them: always in the app, by e-mail at most once per lot per window. */
@@ -47,7 +52,13 @@ export async function notifyOutbid(userId: string, saleLotId: string, live: LotL
 export async function listNotices(userId: string, limit = 30) {
   db();
   const rows = await Notice.findAll({ where: { userId }, order: [["createdAt", "DESC"]], limit });
-  return rows.map((n) => ({ id: n.id, text: n.text, href: n.href, read: Boolean(n.readAt), at: n.createdAt.toISOString() }));
+  return rows.map((n) => ({
+    id: n.id,
+    text: n.text,
+    href: n.href,
+    read: Boolean(n.readAt),
+    at: n.createdAt.toISOString(),
+  }));
 }
 
 export async function markNoticesRead(userId: string): Promise<void> {

@@ -12,7 +12,10 @@ type Job = { userId: string; live: LotLive };
 export async function queueOutbidNotice(userId: string, live: LotLive): Promise<void> {
   const boss = queue();
   if (!boss) return notifyOutbid(userId, live.saleLotId, live);
-  await boss.send(QUEUES.outbidNotice, { userId, live } satisfies Job, { id: jobId("outbid", userId, live.saleLotId, String(live.seq)), retryLimit: 3 });
+  await boss.send(QUEUES.outbidNotice, { userId, live } satisfies Job, {
+    id: jobId("outbid", userId, live.saleLotId, String(live.seq)),
+    retryLimit: 3,
+  });
 }
 
 /** Work outbid notices in this process. */

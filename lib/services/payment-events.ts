@@ -11,8 +11,17 @@ import { recordUnexpectedCharge, refundUnexpectedCharge } from "./unexpected-cha
 export type EventOutcome = { outcome: "handled" | "ignored"; reason?: string };
 
 type PaidInvoice = {
-  id: string; number: string; sale_lot_id: string; state: string; paid_at: Date | null; payment_intent_id: string | null;
-  hammer_cents: number; premium_cents: number; shipping_cents: number; tax_cents: number; total_cents: number;
+  id: string;
+  number: string;
+  sale_lot_id: string;
+  state: string;
+  paid_at: Date | null;
+  payment_intent_id: string | null;
+  hammer_cents: number;
+  premium_cents: number;
+  shipping_cents: number;
+  tax_cents: number;
+  total_cents: number;
 };
 
 /**
@@ -31,45 +40,92 @@ export async function recordPaymentSucceeded(pi: ProcessorIntent, invoiceId: str
       { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t },
     );
     if (!inv) return { outcome: "ignored", reason: `names invoice ${invoiceId}, which we do not have` };
-    if (inv.paid_at && inv.payment_intent_id === pi.id) return { outcome: "ignored", reason: `payment already recorded on invoice ${inv.number}` };
+    if (inv.paid_at && inv.payment_intent_id === pi.id)
+      return { outcome: "ignored", reason: `payment already recorded on invoice ${inv.number}` };
     const why = await unexpectedWhy(inv, pi, t);
     if (why) {
-      const fresh = await recordUnexpectedCharge(t, { invoiceId: inv.id, paymentIntentId: pi.id, chargeId: chargeId(pi), amountCents: pi.amount, feeCents: fee, why });
-      return { outcome: "handled", reason: `unexpected charge (${why}) on invoice ${inv.number}${fresh ? "" : ", already recorded"}: refunded automatically`, unexpected: true };
+      const fresh = await recordUnexpectedCharge(t, {
+        invoiceId: inv.id,
+        paymentIntentId: pi.id,
+        chargeId: chargeId(pi),
+        amountCents: pi.amount,
+        feeCents: fee,
+        why,
+      });
+      return {
+        outcome: "handled",
+        reason: `unexpected charge (${why}) on invoice ${inv.number}${fresh ? "" : ", already recorded"}: refunded automatically`,
+        unexpected: true,
+      };
     }
-    await s.query(`UPDATE invoices SET state = 'paid-held', paid_at = now(), payment_intent_id = :pi, processor_fee_cents = :fee, last_payment_error = NULL, updated_at = now() WHERE id = :invoiceId`,
-      { replacements: { pi: pi.id, fee, invoiceId }, transaction: t });
-    await post(t, "payment-captured", invoiceId, paymentCapturedEntries({
-      hammerCents: inv.hammer_cents, premiumCents: inv.premium_cents, shippingCents: inv.shipping_cents, taxableCents: 0, taxCents: inv.tax_cents, totalCents: inv.total_cents,
-    }, fee), pi.id);
+    await s.query(
+      `UPDATE invoices SET state = 'paid-held', paid_at = now(), payment_intent_id = :pi, processor_fee_cents = :fee, last_payment_error = NULL, updated_at = now() WHERE id = :invoiceId`,
+      { replacements: { pi: pi.id, fee, invoiceId }, transaction: t },
+    );
+    await post(
+      t,
+      "payment-captured",
+      invoiceId,
+      paymentCapturedEntries(
+        {
+          hammerCents: inv.hammer_cents,
+          premiumCents: inv.premium_cents,
+          shippingCents: inv.shipping_cents,
+          taxableCents: 0,
+          taxCents: inv.tax_cents,
+          totalCents: inv.total_cents,
+        },
+        fee,
+      ),
+      pi.id,
+    );
     return { outcome: "handled" };
   });
-  if (result.unexpected) await refundUnexpectedCharge(pi.id).catch((e: Error) => console.error("[payments] refund of an unexpected charge failed; the sweeper retries", e.message));
+  if (result.unexpected)
+    await refundUnexpectedCharge(pi.id).catch((e: Error) =>
+      console.error("[payments] refund of an unexpected charge failed; the sweeper retries", e.message),
+    );
   return { outcome: result.outcome, ...(result.reason ? { reason: result.reason } : {}) };
 }
 
 /** Why this successful payment is one the invoice does not owe, or null when it pays the invoice. */
-async function unexpectedWhy(inv: PaidInvoice, pi: ProcessorIntent, t: import("sequelize").Transaction): Promise<UnexpectedWhy | null> {
+async function unexpectedWhy(
+  inv: PaidInvoice,
+  pi: ProcessorIntent,
+  t: import("sequelize").Transaction,
+): Promise<UnexpectedWhy | null> {
   if (inv.paid_at) return "second-payment";
   if (inv.total_cents !== pi.amount) return "wrong-amount";
   if (inv.state === "awaiting-payment") return null;
   if (inv.state !== "cancelled") return "invoice-closed";
   // A cancelled invoice paid late is still paid, unless the lot has since been offered to someone else.
-  const [other] = await db().query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :sl AND id <> :id AND state <> 'cancelled' LIMIT 1`,
-    { replacements: { sl: inv.sale_lot_id, id: inv.id }, type: QueryTypes.SELECT, transaction: t });
+  const [other] = await db().query<{ id: string }>(
+    `SELECT id FROM invoices WHERE sale_lot_id = :sl AND id <> :id AND state <> 'cancelled' LIMIT 1`,
+    { replacements: { sl: inv.sale_lot_id, id: inv.id }, type: QueryTypes.SELECT, transaction: t },
+  );
   return other ? "invoice-closed" : null;
 }
 
 /** A failed attempt is noted for the buyer; the invoice stays payable. */
 export async function recordPaymentFailed(pi: ProcessorIntent, invoiceId: string): Promise<EventOutcome> {
-  const [, meta] = (await db().query(`UPDATE invoices SET last_payment_error = :msg, updated_at = now() WHERE id = :invoiceId AND state = 'awaiting-payment' AND payment_intent_id = :pi`,
-    { replacements: { msg: (pi.last_payment_error?.message ?? "The payment failed").slice(0, 300), invoiceId, pi: pi.id } })) as [unknown, { rowCount?: number }];
-  return meta?.rowCount ? { outcome: "handled" } : { outcome: "ignored", reason: `invoice ${invoiceId} is not awaiting this payment` };
+  const [, meta] = (await db().query(
+    `UPDATE invoices SET last_payment_error = :msg, updated_at = now() WHERE id = :invoiceId AND state = 'awaiting-payment' AND payment_intent_id = :pi`,
+    {
+      replacements: {
+        msg: (pi.last_payment_error?.message ?? "The payment failed").slice(0, 300),
+        invoiceId,
+        pi: pi.id,
+      },
+    },
+  )) as [unknown, { rowCount?: number }];
+  return meta?.rowCount
+    ? { outcome: "handled" }
+    : { outcome: "ignored", reason: `invoice ${invoiceId} is not awaiting this payment` };
 }
 
 function chargeId(pi: ProcessorIntent): string | null {
   const c = pi.latest_charge;
-  return typeof c === "string" ? c : c?.id ?? null;
+  return typeof c === "string" ? c : (c?.id ?? null);
 }
 
 async function processorFee(pi: ProcessorIntent): Promise<number> {

@@ -9,17 +9,28 @@ import type { CardPayment } from "../validation/payments";
 import { db } from "../../models";
 
 export type PayOutcome =
-  | { status: "succeeded" }
-  | { status: "requires_action"; redirectUrl: string }
-  | { status: "processing" };
+  { status: "succeeded" } | { status: "requires_action"; redirectUrl: string } | { status: "processing" };
 
-type PayableInvoice = { id: string; number: string; buyer_id: string; state: string; total_cents: number; payment_intent_id: string | null };
+type PayableInvoice = {
+  id: string;
+  number: string;
+  buyer_id: string;
+  state: string;
+  total_cents: number;
+  payment_intent_id: string | null;
+};
 
 const PAYABLE_COLUMNS = "id, number, buyer_id, state, total_cents, payment_intent_id";
 
 function notPayable(state: string): ApiError {
   const paid = state !== "cancelled";
-  return new ApiError("conflict", paid ? ATTEMPT_REFUSALS.paid : "This invoice was cancelled and can no longer be paid.", undefined, undefined, { state, reason: paid ? "already-paid" : "cancelled" });
+  return new ApiError(
+    "conflict",
+    paid ? ATTEMPT_REFUSALS.paid : "This invoice was cancelled and can no longer be paid.",
+    undefined,
+    undefined,
+    { state, reason: paid ? "already-paid" : "cancelled" },
+  );
 }
 
 /**
@@ -33,7 +44,10 @@ function notPayable(state: string): ApiError {
  * processor's webhook arrives.
  */
 export async function payInvoice(viewer: Viewer, invoiceId: string, card: CardPayment): Promise<PayOutcome> {
-  const [inv] = await db().query<PayableInvoice>(`SELECT ${PAYABLE_COLUMNS} FROM invoices WHERE id = :invoiceId`, { replacements: { invoiceId }, type: QueryTypes.SELECT });
+  const [inv] = await db().query<PayableInvoice>(`SELECT ${PAYABLE_COLUMNS} FROM invoices WHERE id = :invoiceId`, {
+    replacements: { invoiceId },
+    type: QueryTypes.SELECT,
+  });
   if (!inv || inv.buyer_id !== viewer.id) throw new ApiError("not_found", "No such invoice");
   if (inv.state !== "awaiting-payment") throw notPayable(inv.state);
   const sdk = stripe();
@@ -44,21 +58,35 @@ export async function payInvoice(viewer: Viewer, invoiceId: string, card: CardPa
       { idempotencyKey: `invoice:${inv.id}:pm:${card.attemptKey}` },
     );
   } catch (e) {
-    throw new ApiError("validation_failed", (e as Stripe.errors.StripeError).message ?? "The card was not accepted", { number: "Check the card details" });
+    throw new ApiError("validation_failed", (e as Stripe.errors.StripeError).message ?? "The card was not accepted", {
+      number: "Check the card details",
+    });
   }
   const s = db();
   const result = await s.transaction(async (t): Promise<PayOutcome | { refusal: ApiError }> => {
-    const [locked] = await s.query<PayableInvoice>(`SELECT ${PAYABLE_COLUMNS} FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
+    const [locked] = await s.query<PayableInvoice>(
+      `SELECT ${PAYABLE_COLUMNS} FROM invoices WHERE id = :invoiceId FOR UPDATE`,
+      { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t },
+    );
     if (!locked || locked.state !== "awaiting-payment") throw notPayable(locked?.state ?? "cancelled");
     const current = locked.payment_intent_id ? await sdk.paymentIntents.retrieve(locked.payment_intent_id) : null;
-    const step = nextAttemptStep(current && { status: current.status as IntentStatus, paymentMethodId: methodId(current) }, pm.id);
+    const step = nextAttemptStep(
+      current && { status: current.status as IntentStatus, paymentMethodId: methodId(current) },
+      pm.id,
+    );
     switch (step.kind) {
       case "paid":
         return { status: "succeeded" as const };
       case "paid-by-other-attempt":
-        throw new ApiError("conflict", ATTEMPT_REFUSALS.paid, undefined, undefined, { state: locked.state, reason: "already-paid" });
+        throw new ApiError("conflict", ATTEMPT_REFUSALS.paid, undefined, undefined, {
+          state: locked.state,
+          reason: "already-paid",
+        });
       case "in-progress":
-        throw new ApiError("conflict", ATTEMPT_REFUSALS.inProgress, undefined, undefined, { state: locked.state, reason: "in-progress" });
+        throw new ApiError("conflict", ATTEMPT_REFUSALS.inProgress, undefined, undefined, {
+          state: locked.state,
+          reason: "in-progress",
+        });
       case "authenticate":
         return answer(current!);
       case "confirm":
@@ -72,7 +100,7 @@ export async function payInvoice(viewer: Viewer, invoiceId: string, card: CardPa
 }
 
 function methodId(pi: Stripe.PaymentIntent): string | null {
-  return typeof pi.payment_method === "string" ? pi.payment_method : pi.payment_method?.id ?? null;
+  return typeof pi.payment_method === "string" ? pi.payment_method : (pi.payment_method?.id ?? null);
 }
 
 function returnUrl(invoiceId: string): string {
@@ -80,29 +108,62 @@ function returnUrl(invoiceId: string): string {
 }
 
 /** The invoice's intent, made once: the key is the invoice's (and the cancelled intent's, should one be replaced). */
-async function createIntent(t: Transaction, inv: PayableInvoice, replaced: Stripe.PaymentIntent | null): Promise<Stripe.PaymentIntent> {
+async function createIntent(
+  t: Transaction,
+  inv: PayableInvoice,
+  replaced: Stripe.PaymentIntent | null,
+): Promise<Stripe.PaymentIntent> {
   const pi = await stripe().paymentIntents.create(
     {
-      amount: inv.total_cents, currency: stripeConfig().CURRENCY, return_url: returnUrl(inv.id),
-      metadata: { invoice_id: inv.id, invoice_number: inv.number }, transfer_group: `invoice:${inv.id}`,
+      amount: inv.total_cents,
+      currency: stripeConfig().CURRENCY,
+      return_url: returnUrl(inv.id),
+      metadata: { invoice_id: inv.id, invoice_number: inv.number },
+      transfer_group: `invoice:${inv.id}`,
     },
     { idempotencyKey: replaced ? `invoice:${inv.id}:intent:after:${replaced.id}` : `invoice:${inv.id}:intent` },
   );
-  await db().query(`UPDATE invoices SET payment_intent_id = :pi, updated_at = now() WHERE id = :id`, { replacements: { pi: pi.id, id: inv.id }, transaction: t });
+  await db().query(`UPDATE invoices SET payment_intent_id = :pi, updated_at = now() WHERE id = :id`, {
+    replacements: { pi: pi.id, id: inv.id },
+    transaction: t,
+  });
   return pi;
 }
 
 /** Confirm the invoice's intent with this attempt's method; a decline is kept on the invoice for the buyer. */
-async function confirmIntent(t: Transaction, inv: PayableInvoice, pi: Stripe.PaymentIntent, pmId: string): Promise<PayOutcome | { refusal: ApiError }> {
+async function confirmIntent(
+  t: Transaction,
+  inv: PayableInvoice,
+  pi: Stripe.PaymentIntent,
+  pmId: string,
+): Promise<PayOutcome | { refusal: ApiError }> {
   try {
-    const confirmed = await stripe().paymentIntents.confirm(pi.id, { payment_method: pmId, return_url: returnUrl(inv.id) }, { idempotencyKey: `invoice:${inv.id}:confirm:${pmId}` });
-    await db().query(`UPDATE invoices SET last_payment_error = NULL, updated_at = now() WHERE id = :id`, { replacements: { id: inv.id }, transaction: t });
+    const confirmed = await stripe().paymentIntents.confirm(
+      pi.id,
+      { payment_method: pmId, return_url: returnUrl(inv.id) },
+      { idempotencyKey: `invoice:${inv.id}:confirm:${pmId}` },
+    );
+    await db().query(`UPDATE invoices SET last_payment_error = NULL, updated_at = now() WHERE id = :id`, {
+      replacements: { id: inv.id },
+      transaction: t,
+    });
     return answer(confirmed);
   } catch (e) {
     const err = e as Stripe.errors.StripeError;
     if (err.type !== "StripeCardError") throw e;
-    await db().query(`UPDATE invoices SET last_payment_error = :msg, updated_at = now() WHERE id = :id`, { replacements: { msg: (err.message ?? "Declined").slice(0, 300), id: inv.id }, transaction: t });
-    return { refusal: new ApiError("conflict", `The card was declined: ${err.message ?? "no reason given"}. Try another card.`, undefined, undefined, { reason: "declined", declineCode: err.decline_code ?? err.code ?? null }) };
+    await db().query(`UPDATE invoices SET last_payment_error = :msg, updated_at = now() WHERE id = :id`, {
+      replacements: { msg: (err.message ?? "Declined").slice(0, 300), id: inv.id },
+      transaction: t,
+    });
+    return {
+      refusal: new ApiError(
+        "conflict",
+        `The card was declined: ${err.message ?? "no reason given"}. Try another card.`,
+        undefined,
+        undefined,
+        { reason: "declined", declineCode: err.decline_code ?? err.code ?? null },
+      ),
+    };
   }
 }
 
@@ -111,7 +172,9 @@ function answer(pi: Stripe.PaymentIntent): PayOutcome {
   if (pi.status === "succeeded" || pi.status === "requires_capture") return { status: "succeeded" };
   if (pi.status === "requires_action") {
     const next = pi.next_action;
-    const url = next?.redirect_to_url?.url ?? (next as { use_stripe_sdk?: { stripe_js?: string } } | null)?.use_stripe_sdk?.stripe_js;
+    const url =
+      next?.redirect_to_url?.url ??
+      (next as { use_stripe_sdk?: { stripe_js?: string } } | null)?.use_stripe_sdk?.stripe_js;
     if (!url) throw new ApiError("internal", "The card asks for authentication we cannot show");
     return { status: "requires_action", redirectUrl: url };
   }

@@ -24,8 +24,19 @@ async function takenNames(names: readonly string[], except: string | null, t: Tr
   return taken;
 }
 
-async function writeRevision(t: Transaction, designation: string, revision: number, actorId: string, reason: string, before: unknown, after: unknown) {
-  await ValveTypeRevision.create({ designation, revision, changedBy: actorId, reason, before, after }, { transaction: t });
+async function writeRevision(
+  t: Transaction,
+  designation: string,
+  revision: number,
+  actorId: string,
+  reason: string,
+  before: unknown,
+  after: unknown,
+) {
+  await ValveTypeRevision.create(
+    { designation, revision, changedBy: actorId, reason, before, after },
+    { transaction: t },
+  );
 }
 
 /**
@@ -36,10 +47,27 @@ async function writeRevision(t: Transaction, designation: string, revision: numb
 export async function addReferenceType(actorId: string, input: ReferenceAddInput) {
   const n = normaliseDesignation(input.designation);
   if (!n.ok) throw new ApiError("validation_failed", n.message, { designation: n.message });
-  const aliases = [...new Set(input.aliases.split(/[;,]/).map((a) => normaliseDesignation(a)).filter((a) => a.ok).map((a) => a.value))].filter((a) => a !== n.value);
+  const aliases = [
+    ...new Set(
+      input.aliases
+        .split(/[;,]/)
+        .map((a) => normaliseDesignation(a))
+        .filter((a) => a.ok)
+        .map((a) => a.value),
+    ),
+  ].filter((a) => a !== n.value);
   const row: ReferenceType = {
-    designation: n.value, aliases, kind: input.kind, base: input.base, hazards: [], source: input.source,
-    ...(input.coldCathode ? { heater: null } : input.heaterVolts !== null && input.heaterAmps !== null ? { heater: { volts: input.heaterVolts, amps: input.heaterAmps } } : {}),
+    designation: n.value,
+    aliases,
+    kind: input.kind,
+    base: input.base,
+    hazards: [],
+    source: input.source,
+    ...(input.coldCathode
+      ? { heater: null }
+      : input.heaterVolts !== null && input.heaterAmps !== null
+        ? { heater: { volts: input.heaterVolts, amps: input.heaterAmps } }
+        : {}),
     ...(input.note ? { note: input.note } : {}),
   };
   return db().transaction(async (t) => {
@@ -60,7 +88,15 @@ export async function setReferenceRetired(actorId: string, designation: string, 
     if ((row.retiredAt !== null) === retired) return { designation, retired, revision: row.revision };
     const revision = row.revision + 1;
     await row.update({ retiredAt: retired ? new Date() : null, revision, updatedBy: actorId }, { transaction: t });
-    await writeRevision(t, designation, revision, actorId, `${retired ? "Retired" : "Back on file"}: ${reason}`, { retired: !retired }, { retired });
+    await writeRevision(
+      t,
+      designation,
+      revision,
+      actorId,
+      `${retired ? "Retired" : "Back on file"}: ${reason}`,
+      { retired: !retired },
+      { retired },
+    );
     return { designation, retired, revision };
   });
 }
@@ -75,7 +111,15 @@ export async function verifyReferenceType(actorId: string, designation: string, 
     const data = { ...row.data, verification };
     const revision = row.revision + 1;
     await row.update({ data, revision, updatedBy: actorId }, { transaction: t });
-    await writeRevision(t, designation, revision, actorId, `Checked against ${against}`, { verification: row.data.verification ?? null }, { verification });
+    await writeRevision(
+      t,
+      designation,
+      revision,
+      actorId,
+      `Checked against ${against}`,
+      { verification: row.data.verification ?? null },
+      { verification },
+    );
     return { designation, verification, revision };
   });
 }
@@ -94,19 +138,27 @@ export interface ImportLine {
 function merge(prior: ReferenceType, next: ReferenceType, columns: readonly string[]): ReferenceType {
   const has = (c: string) => columns.includes(c);
   const pc = prior.characteristics;
-  let characteristics: NominalCharacteristics | undefined = has("plate_volts") ? next.characteristics : prior.characteristics;
+  let characteristics: NominalCharacteristics | undefined = has("plate_volts")
+    ? next.characteristics
+    : prior.characteristics;
   if (!characteristics && pc && pc.kind !== "amplifier") characteristics = pc;
   if (characteristics?.kind === "amplifier" && pc?.kind === "amplifier") {
     characteristics = {
       ...characteristics,
-      ...(pc.cathodeResistorOhms !== undefined && characteristics.gridVolts === undefined ? { cathodeResistorOhms: pc.cathodeResistorOhms } : {}),
+      ...(pc.cathodeResistorOhms !== undefined && characteristics.gridVolts === undefined
+        ? { cathodeResistorOhms: pc.cathodeResistorOhms }
+        : {}),
       ...(pc.approximate ? { approximate: true } : {}),
     };
   }
   const out: Mutable<ReferenceType> = { ...prior, ...next, hazards: prior.hazards };
   if (characteristics) out.characteristics = characteristics;
   else delete out.characteristics;
-  const kept = { heater: has("heater_volts") || has("cold_cathode"), verification: has("verified_against"), note: has("note") };
+  const kept = {
+    heater: has("heater_volts") || has("cold_cathode"),
+    verification: has("verified_against"),
+    note: has("note"),
+  };
   for (const k of ["heater", "verification", "note"] as const) {
     if (!kept[k]) {
       if (k in prior) (out as Record<string, unknown>)[k] = prior[k];
@@ -121,7 +173,11 @@ const same = (a: ReferenceType, b: ReferenceType) => canonical(a) === canonical(
 
 function canonical(v: unknown): string {
   if (Array.isArray(v)) return `[${v.map(canonical).join(",")}]`;
-  if (v && typeof v === "object") return `{${Object.keys(v).sort().map((k) => `${k}:${canonical((v as Record<string, unknown>)[k])}`).join(",")}}`;
+  if (v && typeof v === "object")
+    return `{${Object.keys(v)
+      .sort()
+      .map((k) => `${k}:${canonical((v as Record<string, unknown>)[k])}`)
+      .join(",")}}`;
   return JSON.stringify(v);
 }
 
@@ -132,22 +188,40 @@ function canonical(v: unknown): string {
  * transaction, each with a revision, and skips unchanged rows, so importing
  * the same file twice changes nothing the second time.
  */
-export async function importReferenceCsv(actorId: string, csv: string, apply: boolean, reason: string): Promise<{ applied: boolean; lines: ImportLine[]; errors: ReferenceCsvError[] }> {
+export async function importReferenceCsv(
+  actorId: string,
+  csv: string,
+  apply: boolean,
+  reason: string,
+): Promise<{ applied: boolean; lines: ImportLine[]; errors: ReferenceCsvError[] }> {
   const parsed = parseReferenceCsv(csv);
   if (parsed.errors.length) return { applied: false, lines: [], errors: parsed.errors };
   return db().transaction(async (t) => {
     const lines: ImportLine[] = [];
     const errors: ReferenceCsvError[] = [];
     for (const { line, row } of parsed.rows) {
-      const existing = await ValveType.findByPk(row.designation, { lock: apply ? t.LOCK.UPDATE : undefined, transaction: t });
+      const existing = await ValveType.findByPk(row.designation, {
+        lock: apply ? t.LOCK.UPDATE : undefined,
+        transaction: t,
+      });
       const taken = await takenNames(row.aliases, row.designation, t);
-      if (taken.length) errors.push({ line, column: "aliases", message: `Already on file for another type: ${taken.join(", ")}` });
+      if (taken.length)
+        errors.push({ line, column: "aliases", message: `Already on file for another type: ${taken.join(", ")}` });
       if (!existing) {
         const other = await ValveType.findByName(row.designation, t);
-        if (other) errors.push({ line, column: "designation", message: `${row.designation} is an alias of ${other.designation}` });
+        if (other)
+          errors.push({
+            line,
+            column: "designation",
+            message: `${row.designation} is an alias of ${other.designation}`,
+          });
       }
       const next = existing ? merge(existing.toReference(), row, parsed.columns) : row;
-      const action: ImportLine["action"] = !existing ? "add" : same(existing.toReference(), next) ? "unchanged" : "change";
+      const action: ImportLine["action"] = !existing
+        ? "add"
+        : same(existing.toReference(), next)
+          ? "unchanged"
+          : "change";
       lines.push({ line, designation: row.designation, action });
       if (!apply || errors.length || action === "unchanged") continue;
       const { designation, aliases, source, data } = split(next);
@@ -155,14 +229,28 @@ export async function importReferenceCsv(actorId: string, csv: string, apply: bo
         const before = { ...existing.data, source: existing.source, aliases: existing.aliases };
         const revision = existing.revision + 1;
         await existing.update({ aliases, data, source, revision, updatedBy: actorId }, { transaction: t });
-        await writeRevision(t, designation, revision, actorId, `CSV import: ${reason}`, before, { ...data, source, aliases });
+        await writeRevision(t, designation, revision, actorId, `CSV import: ${reason}`, before, {
+          ...data,
+          source,
+          aliases,
+        });
       } else {
-        await ValveType.create({ designation, aliases, data, source, revision: 1, updatedBy: actorId }, { transaction: t });
+        await ValveType.create(
+          { designation, aliases, data, source, revision: 1, updatedBy: actorId },
+          { transaction: t },
+        );
         await writeRevision(t, designation, 1, actorId, `CSV import: ${reason}`, {}, { ...data, source, aliases });
       }
     }
     if (errors.length) {
-      if (apply) throw new ApiError("validation_failed", `${errors.length} line(s) refused; nothing was imported`, undefined, undefined, { errors });
+      if (apply)
+        throw new ApiError(
+          "validation_failed",
+          `${errors.length} line(s) refused; nothing was imported`,
+          undefined,
+          undefined,
+          { errors },
+        );
       return { applied: false, lines: [], errors };
     }
     return { applied: apply, lines, errors: [] };

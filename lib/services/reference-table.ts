@@ -1,7 +1,9 @@
 import { referenceTable, type ReferenceTable } from "../valves/reference-table";
 import { db, ValveType } from "../../models";
 
-const g = globalThis as unknown as { __getterlineReference?: { table: ReferenceTable; loading?: Promise<ReferenceTable> } };
+const g = globalThis as unknown as {
+  __getterlineReference?: { table: ReferenceTable; loading?: Promise<ReferenceTable> };
+};
 
 /**
  * The house's reference table as the pure code reads it: the valve_types rows
@@ -16,9 +18,13 @@ export async function currentReferenceTable(): Promise<ReferenceTable> {
   const cached = g.__getterlineReference?.table;
   if (cached && cached.revision === revision) return cached;
   const rows = await ValveType.onFile();
-  const table = referenceTable(rows.map((r) => r.toReference()), revision);
+  const table = referenceTable(
+    rows.map((r) => r.toReference()),
+    revision,
+  );
   // Keep the newest revision if two loads race.
-  if (!g.__getterlineReference || Number(g.__getterlineReference.table.revision) <= Number(revision)) g.__getterlineReference = { table };
+  if (!g.__getterlineReference || Number(g.__getterlineReference.table.revision) <= Number(revision))
+    g.__getterlineReference = { table };
   return table;
 }
 

@@ -19,7 +19,10 @@ export async function askToRelist(viewer: Viewer, lotId: string): Promise<{ aske
     { replacements: { lotId }, type: QueryTypes.SELECT },
   );
   if (!lot || lot.consignor_id !== viewer.id) throw new ApiError("not_found", "No such lot");
-  if (lot.phase !== "unsold" && lot.phase !== "withdrawn") throw new ApiError("conflict", "Only a lot that closed without a sale can be offered again", undefined, { phase: lot.phase ?? "not offered" });
+  if (lot.phase !== "unsold" && lot.phase !== "withdrawn")
+    throw new ApiError("conflict", "Only a lot that closed without a sale can be offered again", undefined, {
+      phase: lot.phase ?? "not offered",
+    });
   const href = `/house/sales/new`;
   const text = `${viewer.name} asks for "${lot.title}" to be offered in a later sale.`;
   // One insert per house account, its id derived from the lot and its close: asking again (a retry, a second tab) adds nothing.
@@ -29,8 +32,12 @@ export async function askToRelist(viewer: Viewer, lotId: string): Promise<{ aske
       WHERE 'admin' = ANY(u.roles)
      ON CONFLICT (id) DO NOTHING
      RETURNING id, user_id, created_at`,
-    { replacements: { seed: `relist:${lotId}:${lot.closed_at?.toISOString() ?? ""}:`, text, href }, type: QueryTypes.SELECT },
+    {
+      replacements: { seed: `relist:${lotId}:${lot.closed_at?.toISOString() ?? ""}:`, text, href },
+      type: QueryTypes.SELECT,
+    },
   );
-  for (const r of rows) emitTo([userRoom(r.user_id)], "notice.created", { id: r.id, text, href, at: r.created_at.toISOString() });
+  for (const r of rows)
+    emitTo([userRoom(r.user_id)], "notice.created", { id: r.id, text, href, at: r.created_at.toISOString() });
   return { asked: true, notified: rows.length };
 }

@@ -21,28 +21,62 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
   const s = db();
   const closes = staggeredCloseTimes(Date.parse(input.firstCloseAt), input.gapSeconds, input.lots.length);
   const sale = await s.transaction(async (t) => {
-    const lots = await Lot.findAll({ where: { id: { [Op.in]: input.lots.map((l) => l.lotId) } }, lock: t.LOCK.UPDATE, transaction: t });
+    const lots = await Lot.findAll({
+      where: { id: { [Op.in]: input.lots.map((l) => l.lotId) } },
+      lock: t.LOCK.UPDATE,
+      transaction: t,
+    });
     const byId = new Map(lots.map((l) => [l.id, l]));
     // A lot that closed unsold or was withdrawn may be offered again; one open or sold is not.
-    const offered = await SaleLot.findAll({ where: { lotId: { [Op.in]: input.lots.map((l) => l.lotId) }, phase: { [Op.in]: ["open", "sold"] } }, attributes: ["lotId"], transaction: t });
-    if (offered.length) throw new ApiError("conflict", "Some of these lots are already in a sale", { lots: `${offered.length} already offered` });
+    const offered = await SaleLot.findAll({
+      where: { lotId: { [Op.in]: input.lots.map((l) => l.lotId) }, phase: { [Op.in]: ["open", "sold"] } },
+      attributes: ["lotId"],
+      transaction: t,
+    });
+    if (offered.length)
+      throw new ApiError("conflict", "Some of these lots are already in a sale", {
+        lots: `${offered.length} already offered`,
+      });
     const fields: Record<string, string> = {};
     input.lots.forEach((l, i) => {
       const lot = byId.get(l.lotId);
       if (!lot || lot.state !== "approved") fields[`lots.${i}`] = "Only approved lots can be offered";
-      else if (lot.reserveCents != null && l.openingCents > lot.reserveCents) fields[`lots.${i}`] = "The opening price is above the agreed reserve";
+      else if (lot.reserveCents != null && l.openingCents > lot.reserveCents)
+        fields[`lots.${i}`] = "The opening price is above the agreed reserve";
     });
     if (Object.keys(fields).length) throw new ApiError("validation_failed", "Some lots cannot be offered", fields);
-    const sale = await Sale.create({ title: input.title, startsAt: new Date(input.startsAt), softCloseSeconds: input.softCloseSeconds, isDemo: opts.isDemo ?? false, createdBy: admin?.id ?? null }, { transaction: t });
-    await SaleLot.bulkCreate(input.lots.map((l, i) => {
-      const lot = byId.get(l.lotId)!;
-      const reserve = lot.reserveCents != null && lot.reserveCents > l.openingCents ? lot.reserveCents : null;
-      return {
-        saleId: sale.id, lotId: lot.id, position: i + 1, consignorId: lot.consignorId, openingCents: l.openingCents,
-        closesAt: new Date(closes[i]!), originalCloseAt: new Date(closes[i]!),
-        state: initialProxyState({ openingCents: l.openingCents, reserveCents: reserve, ladder: DEFAULT_INCREMENT_LADDER, consignorId: lot.consignorId }),
-      };
-    }), { transaction: t });
+    const sale = await Sale.create(
+      {
+        title: input.title,
+        startsAt: new Date(input.startsAt),
+        softCloseSeconds: input.softCloseSeconds,
+        isDemo: opts.isDemo ?? false,
+        createdBy: admin?.id ?? null,
+      },
+      { transaction: t },
+    );
+    await SaleLot.bulkCreate(
+      input.lots.map((l, i) => {
+        const lot = byId.get(l.lotId)!;
+        const reserve = lot.reserveCents != null && lot.reserveCents > l.openingCents ? lot.reserveCents : null;
+        return {
+          saleId: sale.id,
+          lotId: lot.id,
+          position: i + 1,
+          consignorId: lot.consignorId,
+          openingCents: l.openingCents,
+          closesAt: new Date(closes[i]!),
+          originalCloseAt: new Date(closes[i]!),
+          state: initialProxyState({
+            openingCents: l.openingCents,
+            reserveCents: reserve,
+            ladder: DEFAULT_INCREMENT_LADDER,
+            consignorId: lot.consignorId,
+          }),
+        };
+      }),
+      { transaction: t },
+    );
     return sale;
   });
   const saleLots = await SaleLot.findAll({ where: { saleId: sale.id }, attributes: ["id", "closesAt"] });
@@ -51,10 +85,27 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
   return { id: sale.id, lots: saleLots.length };
 }
 
-type LiveRow = { id: string; sale_id: string; lot_id: string; title: string; position: number; phase: LotLive["phase"]; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null; consignor: string; leader_paddle: number | null };
+type LiveRow = {
+  id: string;
+  sale_id: string;
+  lot_id: string;
+  title: string;
+  position: number;
+  phase: LotLive["phase"];
+  seq: number;
+  state: ProxyState;
+  closes_at: Date;
+  hammer_cents: number | null;
+  consignor: string;
+  leader_paddle: number | null;
+};
 
 /** Sale lots with their live state and the leader's paddle (any number of sales, one query). */
-export async function liveRows(where: string, replacements: Record<string, unknown>, order = "sl.position"): Promise<(LotLive & { lotId: string; title: string; position: number; consignor: string })[]> {
+export async function liveRows(
+  where: string,
+  replacements: Record<string, unknown>,
+  order = "sl.position",
+): Promise<(LotLive & { lotId: string; title: string; position: number; consignor: string })[]> {
   const rows = await db().query<LiveRow>(
     `SELECT sl.id, sl.sale_id, sl.lot_id, l.title, sl.position, sl.phase, sl.seq, sl.state, sl.closes_at, sl.hammer_cents, u.display_name AS consignor, p.number AS leader_paddle
        FROM sale_lots sl JOIN lots l ON l.id = sl.lot_id JOIN users u ON u.id = l.consignor_id
@@ -62,20 +113,45 @@ export async function liveRows(where: string, replacements: Record<string, unkno
       WHERE ${where} ORDER BY ${order}`,
     { replacements, type: QueryTypes.SELECT },
   );
-  return rows.map((r) => ({ ...liveFrom(r, r.leader_paddle ?? null), lotId: r.lot_id, title: r.title, position: r.position, consignor: r.consignor }));
+  return rows.map((r) => ({
+    ...liveFrom(r, r.leader_paddle ?? null),
+    lotId: r.lot_id,
+    title: r.title,
+    position: r.position,
+    consignor: r.consignor,
+  }));
 }
 
 /** Sales with counts, newest first. */
 export async function listSales() {
-  return db().query<{ id: string; title: string; starts_at: Date; lots: string; open: string; first_close: Date; last_close: Date; is_demo: boolean }>(
-    `SELECT s.id, s.title, s.starts_at, s.is_demo, COUNT(sl.id) AS lots, COUNT(sl.id) FILTER (WHERE sl.phase = 'open') AS open,
+  return db()
+    .query<{
+      id: string;
+      title: string;
+      starts_at: Date;
+      lots: string;
+      open: string;
+      first_close: Date;
+      last_close: Date;
+      is_demo: boolean;
+    }>(
+      `SELECT s.id, s.title, s.starts_at, s.is_demo, COUNT(sl.id) AS lots, COUNT(sl.id) FILTER (WHERE sl.phase = 'open') AS open,
             MIN(sl.closes_at) AS first_close, MAX(sl.closes_at) AS last_close
        FROM sales s LEFT JOIN sale_lots sl ON sl.sale_id = s.id GROUP BY s.id ORDER BY s.starts_at DESC LIMIT 100`,
-    { type: QueryTypes.SELECT },
-  ).then((rows) => rows.map((r) => ({
-    id: r.id, title: r.title, startsAt: r.starts_at.toISOString(), isDemo: r.is_demo, lots: Number(r.lots), open: Number(r.open),
-    firstClose: r.first_close?.toISOString() ?? null, lastClose: r.last_close?.toISOString() ?? null,
-  })));
+      { type: QueryTypes.SELECT },
+    )
+    .then((rows) =>
+      rows.map((r) => ({
+        id: r.id,
+        title: r.title,
+        startsAt: r.starts_at.toISOString(),
+        isDemo: r.is_demo,
+        lots: Number(r.lots),
+        open: Number(r.open),
+        firstClose: r.first_close?.toISOString() ?? null,
+        lastClose: r.last_close?.toISOString() ?? null,
+      })),
+    );
 }
 
 /** One sale with every lot's live state and, for a viewer, their paddle, ceilings and watched lots. */
@@ -84,15 +160,28 @@ export async function getSale(saleId: string, viewer?: Viewer) {
   const sale = await Sale.findByPk(saleId);
   if (!sale) throw new ApiError("not_found", "No such sale");
   return {
-    sale: { id: sale.id, title: sale.title, startsAt: sale.startsAt.toISOString(), softCloseSeconds: sale.softCloseSeconds, isDemo: sale.isDemo },
+    sale: {
+      id: sale.id,
+      title: sale.title,
+      startsAt: sale.startsAt.toISOString(),
+      softCloseSeconds: sale.softCloseSeconds,
+      isDemo: sale.isDemo,
+    },
     lots: await liveRows("sl.sale_id = :saleId", { saleId }),
     you: viewer ? await yourPlaceIn(saleId, viewer.id) : { paddle: null, ceilings: {}, watched: [] },
   };
 }
 
 /** A dealer's paddle in a sale, their highest standing ceiling per lot and the lots they follow (one query). */
-async function yourPlaceIn(saleId: string, userId: string): Promise<{ paddle: number | null; ceilings: Record<string, number>; watched: string[] }> {
-  const [r] = await db().query<{ paddle: number | null; ceilings: Record<string, number> | null; watched: string[] | null }>(
+async function yourPlaceIn(
+  saleId: string,
+  userId: string,
+): Promise<{ paddle: number | null; ceilings: Record<string, number>; watched: string[] }> {
+  const [r] = await db().query<{
+    paddle: number | null;
+    ceilings: Record<string, number> | null;
+    watched: string[] | null;
+  }>(
     `SELECT (SELECT number FROM paddles WHERE sale_id = :saleId AND user_id = :userId) AS paddle,
             (SELECT jsonb_object_agg(sale_lot_id, m) FROM (SELECT b.sale_lot_id, MAX(b.max_cents) AS m FROM bids b JOIN sale_lots sl ON sl.id = b.sale_lot_id
                WHERE sl.sale_id = :saleId AND b.bidder_id = :userId AND b.retracted_at IS NULL GROUP BY b.sale_lot_id) x) AS ceilings,
@@ -110,30 +199,63 @@ export async function getSaleLot(viewer: Viewer, saleLotId: string) {
   const [live] = await liveRows("sl.id = :saleLotId", { saleLotId });
   if (!live) throw new ApiError("not_found", "No such lot in a sale");
   const s = db();
-  const [sale] = await s.query<{ title: string; starts_at: Date; soft_close_seconds: number }>(`SELECT title, starts_at, soft_close_seconds FROM sales WHERE id = :id`, { replacements: { id: live.saleId }, type: QueryTypes.SELECT });
-  const bids = await s.query<{ id: string; seq: number; bidder_id: string; max_cents: number; price_after_cents: number; outcome: string; placed_at: Date; retracted_at: Date | null; retract_reason: string | null; number: number | null }>(
+  const [sale] = await s.query<{ title: string; starts_at: Date; soft_close_seconds: number }>(
+    `SELECT title, starts_at, soft_close_seconds FROM sales WHERE id = :id`,
+    { replacements: { id: live.saleId }, type: QueryTypes.SELECT },
+  );
+  const bids = await s.query<{
+    id: string;
+    seq: number;
+    bidder_id: string;
+    max_cents: number;
+    price_after_cents: number;
+    outcome: string;
+    placed_at: Date;
+    retracted_at: Date | null;
+    retract_reason: string | null;
+    number: number | null;
+  }>(
     `SELECT b.id, b.seq, b.bidder_id, b.max_cents, b.price_after_cents, b.outcome, b.placed_at, b.retracted_at, b.retract_reason, p.number
        FROM bids b LEFT JOIN paddles p ON p.sale_id = :saleId AND p.user_id = b.bidder_id WHERE b.sale_lot_id = :saleLotId ORDER BY b.seq DESC LIMIT 200`,
     { replacements: { saleId: live.saleId, saleLotId }, type: QueryTypes.SELECT },
   );
-  const [row] = await s.query<{ state: ProxyState; consignor_id: string }>(`SELECT state, consignor_id FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT });
+  const [row] = await s.query<{ state: ProxyState; consignor_id: string }>(
+    `SELECT state, consignor_id FROM sale_lots WHERE id = :saleLotId`,
+    { replacements: { saleLotId }, type: QueryTypes.SELECT },
+  );
   const mine = bids.filter((b) => b.bidder_id === viewer.id && !b.retracted_at);
-  const [watch] = await s.query<{ n: number }>(`SELECT 1 AS n FROM watches WHERE user_id = :u AND sale_lot_id = :l`, { replacements: { u: viewer.id, l: saleLotId }, type: QueryTypes.SELECT });
+  const [watch] = await s.query<{ n: number }>(`SELECT 1 AS n FROM watches WHERE user_id = :u AND sale_lot_id = :l`, {
+    replacements: { u: viewer.id, l: saleLotId },
+    type: QueryTypes.SELECT,
+  });
   const isHouse = viewer.roles.includes("admin");
   // A leader raising their own ceiling is private: no public row unless the price moved.
   const priceBefore = new Map<number, number>();
-  [...bids].reverse().reduce((prev, b) => { priceBefore.set(b.seq, prev); return b.retracted_at ? prev : b.price_after_cents; }, -1);
-  const privateRaise = (b: (typeof bids)[number]) => b.outcome === "max-raised" && priceBefore.get(b.seq) === b.price_after_cents;
+  [...bids].reverse().reduce((prev, b) => {
+    priceBefore.set(b.seq, prev);
+    return b.retracted_at ? prev : b.price_after_cents;
+  }, -1);
+  const privateRaise = (b: (typeof bids)[number]) =>
+    b.outcome === "max-raised" && priceBefore.get(b.seq) === b.price_after_cents;
   return {
     live,
     sale: { title: sale!.title, startsAt: sale!.starts_at.toISOString(), softCloseSeconds: sale!.soft_close_seconds },
     lot: await lotFacts(live.lotId),
-    history: bids.filter((b) => isHouse || b.bidder_id === viewer.id || !privateRaise(b)).map((b) => ({
-      id: isHouse ? String(b.id) : undefined, seq: b.seq, paddle: b.number, priceAfterCents: b.price_after_cents, at: b.placed_at.toISOString(),
-      retracted: Boolean(b.retracted_at), retractReason: b.retract_reason, mine: b.bidder_id === viewer.id, privateRaise: privateRaise(b),
-    })),
+    history: bids
+      .filter((b) => isHouse || b.bidder_id === viewer.id || !privateRaise(b))
+      .map((b) => ({
+        id: isHouse ? String(b.id) : undefined,
+        seq: b.seq,
+        paddle: b.number,
+        priceAfterCents: b.price_after_cents,
+        at: b.placed_at.toISOString(),
+        retracted: Boolean(b.retracted_at),
+        retractReason: b.retract_reason,
+        mine: b.bidder_id === viewer.id,
+        privateRaise: privateRaise(b),
+      })),
     you: {
-      paddle: mine.length ? (await paddlesOf(live.saleId, [viewer.id])).get(viewer.id) ?? null : null,
+      paddle: mine.length ? ((await paddlesOf(live.saleId, [viewer.id])).get(viewer.id) ?? null) : null,
       maxCents: mine.length ? Math.max(...mine.map((b) => b.max_cents)) : null,
       leading: row!.state.leader?.bidderId === viewer.id,
       bidding: mine.length > 0,
@@ -145,7 +267,13 @@ export async function getSaleLot(viewer: Viewer, saleLotId: string) {
 
 /** What a dealer reads beside the bid form: estimate, tube count, conditions and a first photo. */
 async function lotFacts(lotId: string) {
-  const [r] = await db().query<{ estimate_low_cents: number | null; estimate_high_cents: number | null; tubes: string | null; conditions: Record<string, number> | null; photo_id: string | null }>(
+  const [r] = await db().query<{
+    estimate_low_cents: number | null;
+    estimate_high_cents: number | null;
+    tubes: string | null;
+    conditions: Record<string, number> | null;
+    photo_id: string | null;
+  }>(
     `SELECT l.estimate_low_cents, l.estimate_high_cents,
             (SELECT SUM(quantity) FROM lot_items WHERE lot_id = l.id) AS tubes,
             (SELECT jsonb_object_agg(condition, n) FROM (SELECT condition, SUM(quantity)::int AS n FROM lot_items WHERE lot_id = l.id GROUP BY condition) c) AS conditions,
@@ -154,8 +282,11 @@ async function lotFacts(lotId: string) {
     { replacements: { lotId }, type: QueryTypes.SELECT },
   );
   return {
-    estimateLowCents: r?.estimate_low_cents ?? null, estimateHighCents: r?.estimate_high_cents ?? null,
-    tubes: Number(r?.tubes ?? 0), conditions: r?.conditions ?? {}, photoId: r?.photo_id ?? null,
+    estimateLowCents: r?.estimate_low_cents ?? null,
+    estimateHighCents: r?.estimate_high_cents ?? null,
+    tubes: Number(r?.tubes ?? 0),
+    conditions: r?.conditions ?? {},
+    photoId: r?.photo_id ?? null,
   };
 }
 
@@ -163,9 +294,14 @@ async function lotFacts(lotId: string) {
 export async function setWatch(viewer: Viewer, saleLotId: string, on: boolean): Promise<{ watching: boolean }> {
   const s = db();
   if (on) {
-    await s.query(`INSERT INTO watches (user_id, sale_lot_id, created_at) SELECT :u, id, now() FROM sale_lots WHERE id = :l ON CONFLICT DO NOTHING`, { replacements: { u: viewer.id, l: saleLotId } });
+    await s.query(
+      `INSERT INTO watches (user_id, sale_lot_id, created_at) SELECT :u, id, now() FROM sale_lots WHERE id = :l ON CONFLICT DO NOTHING`,
+      { replacements: { u: viewer.id, l: saleLotId } },
+    );
   } else {
-    await s.query(`DELETE FROM watches WHERE user_id = :u AND sale_lot_id = :l`, { replacements: { u: viewer.id, l: saleLotId } });
+    await s.query(`DELETE FROM watches WHERE user_id = :u AND sale_lot_id = :l`, {
+      replacements: { u: viewer.id, l: saleLotId },
+    });
   }
   return { watching: on };
 }
@@ -183,42 +319,88 @@ export async function watchlist(viewer: Viewer) {
 export async function retractBid(admin: Viewer, saleLotId: string, bidId: string, reason: string): Promise<LotLive> {
   const s = db();
   const row = await s.transaction(async (t) => {
-    const [sl] = await s.query<{ id: string; sale_id: string; phase: LotLive["phase"]; seq: number; state: ProxyState; closes_at: Date; hammer_cents: number | null }>(
-      `SELECT id, sale_id, phase, seq, state, closes_at, hammer_cents FROM sale_lots WHERE id = :saleLotId FOR UPDATE`, { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
+    const [sl] = await s.query<{
+      id: string;
+      sale_id: string;
+      phase: LotLive["phase"];
+      seq: number;
+      state: ProxyState;
+      closes_at: Date;
+      hammer_cents: number | null;
+    }>(
+      `SELECT id, sale_id, phase, seq, state, closes_at, hammer_cents FROM sale_lots WHERE id = :saleLotId FOR UPDATE`,
+      { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );
     if (!sl) throw new ApiError("not_found", "No such lot in a sale");
     if (sl.phase !== "open") throw new ApiError("conflict", "The lot has closed; bids can no longer be retracted");
-    const [hit] = await s.query(`UPDATE bids SET retracted_at = now(), retracted_by = :admin, retract_reason = :reason WHERE id = :bidId AND sale_lot_id = :saleLotId AND retracted_at IS NULL RETURNING id`,
-      { replacements: { admin: admin.id, reason, bidId, saleLotId }, type: QueryTypes.SELECT, transaction: t });
+    const [hit] = await s.query(
+      `UPDATE bids SET retracted_at = now(), retracted_by = :admin, retract_reason = :reason WHERE id = :bidId AND sale_lot_id = :saleLotId AND retracted_at IS NULL RETURNING id`,
+      { replacements: { admin: admin.id, reason, bidId, saleLotId }, type: QueryTypes.SELECT, transaction: t },
+    );
     if (!hit) throw new ApiError("not_found", "No such standing bid on this lot");
     const remaining = await s.query<{ bidder_id: string; max_cents: number; placed_at: Date; seq: number }>(
-      `SELECT bidder_id, max_cents, placed_at, seq FROM bids WHERE sale_lot_id = :saleLotId AND retracted_at IS NULL ORDER BY seq`, { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
+      `SELECT bidder_id, max_cents, placed_at, seq FROM bids WHERE sale_lot_id = :saleLotId AND retracted_at IS NULL ORDER BY seq`,
+      { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );
     let state = initialProxyState(sl.state.terms);
     for (const b of remaining) {
-      const d = applyBid(state, { bidderId: b.bidder_id, maxCents: b.max_cents, placedAtMs: b.placed_at.getTime(), seq: b.seq });
+      const d = applyBid(state, {
+        bidderId: b.bidder_id,
+        maxCents: b.max_cents,
+        placedAtMs: b.placed_at.getTime(),
+        seq: b.seq,
+      });
       if (d.accepted) state = d.state;
     }
     const seq = sl.seq + 1;
-    await s.query(`UPDATE sale_lots SET state = :state::jsonb, seq = :seq, price_cents = :price, bid_count = :count, leader_id = :leader, reserve_met = :met, updated_at = now() WHERE id = :saleLotId`,
-      { replacements: { state: JSON.stringify(state), seq, price: state.priceCents, count: state.bidCount, leader: state.leader?.bidderId ?? null, met: state.reserveMet, saleLotId }, transaction: t });
+    await s.query(
+      `UPDATE sale_lots SET state = :state::jsonb, seq = :seq, price_cents = :price, bid_count = :count, leader_id = :leader, reserve_met = :met, updated_at = now() WHERE id = :saleLotId`,
+      {
+        replacements: {
+          state: JSON.stringify(state),
+          seq,
+          price: state.priceCents,
+          count: state.bidCount,
+          leader: state.leader?.bidderId ?? null,
+          met: state.reserveMet,
+          saleLotId,
+        },
+        transaction: t,
+      },
+    );
     return { ...sl, seq, state };
   });
-  const leader = row.state.leader ? (await paddlesOf(row.sale_id, [row.state.leader.bidderId]).catch(() => new Map<string, number>())).get(row.state.leader.bidderId) ?? null : null;
+  const leader = row.state.leader
+    ? ((await paddlesOf(row.sale_id, [row.state.leader.bidderId]).catch(() => new Map<string, number>())).get(
+        row.state.leader.bidderId,
+      ) ?? null)
+    : null;
   const live = liveFrom(row, leader);
   emitLot("lot.bid", live);
   return live;
 }
 
-
 /** Approved lots not yet offered in any sale, for the house's sale form. */
 export async function offerableLots() {
-  const rows = await db().query<{ id: string; title: string; consignor: string; estimate_low_cents: number | null; estimate_high_cents: number | null; reserve_cents: number | null }>(
+  const rows = await db().query<{
+    id: string;
+    title: string;
+    consignor: string;
+    estimate_low_cents: number | null;
+    estimate_high_cents: number | null;
+    reserve_cents: number | null;
+  }>(
     `SELECT l.id, l.title, u.display_name AS consignor, l.estimate_low_cents, l.estimate_high_cents, l.reserve_cents
        FROM lots l JOIN users u ON u.id = l.consignor_id
       WHERE l.state = 'approved' AND NOT EXISTS (SELECT 1 FROM sale_lots sl WHERE sl.lot_id = l.id AND sl.phase IN ('open', 'sold')) ORDER BY l.approved_at`,
     { type: QueryTypes.SELECT },
   );
-  return rows.map((r) => ({ id: r.id, title: r.title, consignor: r.consignor, estimateLowCents: r.estimate_low_cents, estimateHighCents: r.estimate_high_cents, reserveCents: r.reserve_cents }));
+  return rows.map((r) => ({
+    id: r.id,
+    title: r.title,
+    consignor: r.consignor,
+    estimateLowCents: r.estimate_low_cents,
+    estimateHighCents: r.estimate_high_cents,
+    reserveCents: r.reserve_cents,
+  }));
 }
-

@@ -16,16 +16,40 @@ import { post } from "./ledger";
  * posting is reversed) and, if asked, offers the lot to the under-bidder at
  * their last bid with a new invoice.
  */
-export async function cancelUnpaid(invoiceId: string, offerToUnderbidder: boolean): Promise<{ cancelled: true; offeredTo: string | null; newInvoiceId: string | null }> {
+export async function cancelUnpaid(
+  invoiceId: string,
+  offerToUnderbidder: boolean,
+): Promise<{ cancelled: true; offeredTo: string | null; newInvoiceId: string | null }> {
   const s = db();
   const out = await s.transaction(async (t) => {
-    const [inv] = await s.query<InvoiceRow & { due_passed: boolean }>(`SELECT *, due_at <= now() AS due_passed FROM invoices WHERE id = :invoiceId FOR UPDATE`, { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t });
+    const [inv] = await s.query<InvoiceRow & { due_passed: boolean }>(
+      `SELECT *, due_at <= now() AS due_passed FROM invoices WHERE id = :invoiceId FOR UPDATE`,
+      { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t },
+    );
     if (!inv) throw new ApiError("not_found", "No such invoice");
-    if (inv.state !== "awaiting-payment") throw new ApiError("conflict", `Only an unpaid invoice can be cancelled; this one is ${inv.state}`);
+    if (inv.state !== "awaiting-payment")
+      throw new ApiError("conflict", `Only an unpaid invoice can be cancelled; this one is ${inv.state}`);
     if (!inv.due_passed) throw new ApiError("conflict", "The invoice is not yet past its due date");
-    await s.query(`UPDATE invoices SET state = 'cancelled', updated_at = now() WHERE id = :invoiceId`, { replacements: { invoiceId }, transaction: t });
-    const issued = { hammerCents: inv.hammer_cents, premiumCents: inv.premium_cents, shippingCents: inv.shipping_cents, taxableCents: 0, taxCents: inv.tax_cents, totalCents: inv.total_cents };
-    await post(t, "invoice-cancelled", invoiceId, entriesFrom(invoiceIssuedEntries(issued).map((e) => [e.account, e.debitCents ? -e.debitCents : e.creditCents!] as const)));
+    await s.query(`UPDATE invoices SET state = 'cancelled', updated_at = now() WHERE id = :invoiceId`, {
+      replacements: { invoiceId },
+      transaction: t,
+    });
+    const issued = {
+      hammerCents: inv.hammer_cents,
+      premiumCents: inv.premium_cents,
+      shippingCents: inv.shipping_cents,
+      taxableCents: 0,
+      taxCents: inv.tax_cents,
+      totalCents: inv.total_cents,
+    };
+    await post(
+      t,
+      "invoice-cancelled",
+      invoiceId,
+      entriesFrom(
+        invoiceIssuedEntries(issued).map((e) => [e.account, e.debitCents ? -e.debitCents : e.creditCents!] as const),
+      ),
+    );
     if (!offerToUnderbidder) return { offeredTo: null, newInvoiceId: null };
     const [under] = await s.query<{ bidder_id: string; max_cents: number }>(
       `SELECT bidder_id, MAX(max_cents) AS max_cents FROM bids WHERE sale_lot_id = :sl AND retracted_at IS NULL AND bidder_id <> :buyer GROUP BY bidder_id ORDER BY MAX(max_cents) DESC LIMIT 1`,
@@ -35,7 +59,10 @@ export async function cancelUnpaid(invoiceId: string, offerToUnderbidder: boolea
     const hammer = Math.min(under.max_cents, inv.hammer_cents);
     const next = invoiceFor({ hammerCents: hammer, shippingCents: inv.shipping_cents }, DEFAULT_FEE_SCHEDULE);
     const id = randomUUID();
-    const [{ n }] = (await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, { type: QueryTypes.SELECT, transaction: t })) as [{ n: string }];
+    const [{ n }] = (await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, {
+      type: QueryTypes.SELECT,
+      transaction: t,
+    })) as [{ n: string }];
     await s.query(
       `INSERT INTO invoices (id, number, sale_lot_id, lot_id, buyer_id, consignor_id, state, hammer_cents, premium_bp, premium_cents, shipping_cents, tax_cents, total_cents,
                              commission_cents, tube_count, due_at, second_chance, created_at, updated_at)
@@ -43,9 +70,21 @@ export async function cancelUnpaid(invoiceId: string, offerToUnderbidder: boolea
                now() + (:dueDays || ' days')::interval, true, now(), now())`,
       {
         replacements: {
-          id, number: `GL-${new Date().getUTCFullYear()}-${n}`, sl: inv.sale_lot_id, lot: inv.lot_id, buyer: under.bidder_id, consignor: inv.consignor_id,
-          hammer, bp: DEFAULT_FEE_SCHEDULE.buyersPremiumBp, premium: next.premiumCents, shipping: next.shippingCents, tax: next.taxCents, total: next.totalCents,
-          commission: sellersCommissionCents(hammer, DEFAULT_COMMISSION_TIERS), tubes: inv.tube_count, dueDays: String(INVOICE_SETTINGS.dueDays),
+          id,
+          number: `GL-${new Date().getUTCFullYear()}-${n}`,
+          sl: inv.sale_lot_id,
+          lot: inv.lot_id,
+          buyer: under.bidder_id,
+          consignor: inv.consignor_id,
+          hammer,
+          bp: DEFAULT_FEE_SCHEDULE.buyersPremiumBp,
+          premium: next.premiumCents,
+          shipping: next.shippingCents,
+          tax: next.taxCents,
+          total: next.totalCents,
+          commission: sellersCommissionCents(hammer, DEFAULT_COMMISSION_TIERS),
+          tubes: inv.tube_count,
+          dueDays: String(INVOICE_SETTINGS.dueDays),
         },
         transaction: t,
       },
@@ -57,7 +96,8 @@ export async function cancelUnpaid(invoiceId: string, offerToUnderbidder: boolea
     const u = await User.findByPk(out.offeredTo, { attributes: ["email", "displayName"] });
     if (u) {
       await sendMail({
-        to: u.email, subject: "A second chance at a lot you bid on",
+        to: u.email,
+        subject: "A second chance at a lot you bid on",
         text: `Hello ${u.displayName},\n\nThe winner of a lot you bid on did not pay. The house offers it to you at your last bid, ${formatCents((out as { hammer: number }).hammer)} hammer (${formatCents((out as { total: number }).total)} with premium and shipping). If you want it, pay within ${INVOICE_SETTINGS.dueDays} days:\n\n${env().NEXTAUTH_URL}/invoices/${out.newInvoiceId}\n\nIf not, simply let it lapse.\n\nGetterline Exchange`,
       }).catch((e: Error) => console.error("[mail] second chance failed", e.message));
     }

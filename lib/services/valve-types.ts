@@ -30,7 +30,10 @@ export type TypeLookup = {
 };
 
 const present = (row: ValveType): HouseReference => ({
-  ...row.toReference(), revision: row.revision, updatedAt: row.updatedAt.toISOString(), retired: row.retiredAt !== null,
+  ...row.toReference(),
+  revision: row.revision,
+  updatedAt: row.updatedAt.toISOString(),
+  retired: row.retiredAt !== null,
 });
 
 /** The house's current reference row for a designation (name, alias, or US stem), on file only. */
@@ -87,17 +90,28 @@ export async function listReferenceTypes(): Promise<HouseReference[]> {
 export async function referenceHistory(designation: string) {
   db();
   const rows = await ValveTypeRevision.findAll({
-    where: { designation }, order: [["revision", "DESC"]], limit: 200,
+    where: { designation },
+    order: [["revision", "DESC"]],
+    limit: 200,
     include: [{ model: User, as: "changer", attributes: ["displayName"] }],
   });
   return rows.map((r) => ({
-    revision: r.revision, changedBy: r.changer?.displayName ?? "a removed account", reason: r.reason,
-    before: r.before, after: r.after, at: r.createdAt.toISOString(),
+    revision: r.revision,
+    changedBy: r.changer?.displayName ?? "a removed account",
+    reason: r.reason,
+    before: r.before,
+    after: r.after,
+    at: r.createdAt.toISOString(),
   }));
 }
 
 function applyEdit(data: ValveTypeData, e: ReferenceEditInput): ValveTypeData {
-  const heater = e.heaterVolts != null && e.heaterAmps != null ? { ...(data.heater ?? {}), volts: e.heaterVolts, amps: e.heaterAmps } : data.heater === null ? null : undefined;
+  const heater =
+    e.heaterVolts != null && e.heaterAmps != null
+      ? { ...(data.heater ?? {}), volts: e.heaterVolts, amps: e.heaterAmps }
+      : data.heater === null
+        ? null
+        : undefined;
   const prior = data.characteristics;
   const characteristics =
     prior && prior.kind !== "amplifier"
@@ -108,7 +122,9 @@ function applyEdit(data: ValveTypeData, e: ReferenceEditInput): ValveTypeData {
             kind: "amplifier" as const,
             plateVolts: e.plateVolts,
             ...(e.gridVolts != null ? { gridVolts: e.gridVolts } : {}),
-            ...(prior?.kind === "amplifier" && prior.cathodeResistorOhms != null && e.gridVolts == null ? { cathodeResistorOhms: prior.cathodeResistorOhms } : {}),
+            ...(prior?.kind === "amplifier" && prior.cathodeResistorOhms != null && e.gridVolts == null
+              ? { cathodeResistorOhms: prior.cathodeResistorOhms }
+              : {}),
             ...(e.screenVolts != null ? { screenVolts: e.screenVolts } : {}),
             ...(e.mu != null ? { mu: e.mu } : {}),
             ...(e.gmMicromho != null ? { gmMicromho: e.gmMicromho } : {}),
@@ -134,13 +150,21 @@ function applyEdit(data: ValveTypeData, e: ReferenceEditInput): ValveTypeData {
  * rises by one and a revision with before, after, who and why is written in
  * the same transaction. `expectedRevision` stops two editors overwriting each other.
  */
-export async function editReferenceType(actorId: string, designation: string, expectedRevision: number, e: ReferenceEditInput) {
+export async function editReferenceType(
+  actorId: string,
+  designation: string,
+  expectedRevision: number,
+  e: ReferenceEditInput,
+) {
   const s = db();
   return s.transaction(async (t) => {
     const row = await ValveType.findByPk(designation, { lock: t.LOCK.UPDATE, transaction: t });
     if (!row) throw new ApiError("not_found", `No reference row for ${designation}`);
     if (row.revision !== expectedRevision) {
-      throw new ApiError("conflict", `Someone saved revision ${row.revision} since you opened it; reload and apply your change again`);
+      throw new ApiError(
+        "conflict",
+        `Someone saved revision ${row.revision} since you opened it; reload and apply your change again`,
+      );
     }
     const before = { ...row.data, source: row.source };
     const data = applyEdit(row.data, e);

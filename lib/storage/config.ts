@@ -47,6 +47,8 @@ export function storageConfig(source: Record<string, string | undefined> = proce
     region: e.S3_REGION,
     bucket: e.S3_BUCKET,
     forcePathStyle: endpoint !== undefined,
-    credentials: e.S3_ACCESS_KEY_ID ? { accessKeyId: e.S3_ACCESS_KEY_ID, secretAccessKey: e.S3_SECRET_ACCESS_KEY } : undefined,
+    credentials: e.S3_ACCESS_KEY_ID
+      ? { accessKeyId: e.S3_ACCESS_KEY_ID, secretAccessKey: e.S3_SECRET_ACCESS_KEY }
+      : undefined,
   };
 }

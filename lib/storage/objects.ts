@@ -1,4 +1,10 @@
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from "@aws-sdk/client-s3";
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+} from "@aws-sdk/client-s3";
 import { storageConfig } from "./config";
 import { assertObjectKey } from "./keys";
 
@@ -40,7 +46,13 @@ export function objectBucket(): string {
 export async function putObject(key: string, body: Buffer, contentType: string): Promise<void> {
   const { client, bucket } = store();
   await client.send(
-    new PutObjectCommand({ Bucket: bucket, Key: assertObjectKey(key), Body: body, ContentType: contentType, ContentLength: body.length }),
+    new PutObjectCommand({
+      Bucket: bucket,
+      Key: assertObjectKey(key),
+      Body: body,
+      ContentType: contentType,
+      ContentLength: body.length,
+    }),
   );
 }
 

@@ -19,7 +19,10 @@ const g = globalThis as unknown as { __getterlineStripe?: Stripe };
 
 export function stripeConfig() {
   const r = Config.safeParse(process.env);
-  if (!r.success) throw new Error(`Stripe configuration: ${r.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}`);
+  if (!r.success)
+    throw new Error(
+      `Stripe configuration: ${r.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}`,
+    );
   return r.data;
 }
 

@@ -11,7 +11,8 @@ export function formatWhen(iso: string, timeZone: string, style: WhenStyle = "da
   const zone = safeZone(timeZone);
   const opts: Intl.DateTimeFormatOptions = { timeZone: zone };
   if (style !== "time") Object.assign(opts, { day: "numeric", month: "short", year: "numeric" });
-  if (style !== "date") Object.assign(opts, { hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" });
+  if (style !== "date")
+    Object.assign(opts, { hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" });
   if (style === "time") opts.second = "2-digit";
   return new Intl.DateTimeFormat("en-GB", opts).format(d);
 }
@@ -30,6 +31,8 @@ export function safeZone(timeZone: string): string {
 export function formatLeft(ms: number): string {
   if (ms <= 0) return "closing";
   const s = Math.floor(ms / 1000);
-  const h = Math.floor(s / 3600), m = Math.floor((s % 3600) / 60), sec = s % 60;
+  const h = Math.floor(s / 3600),
+    m = Math.floor((s % 3600) / 60),
+    sec = s % 60;
   return h ? `${h} h ${String(m).padStart(2, "0")} min` : m ? `${m} min ${String(sec).padStart(2, "0")} s` : `${sec} s`;
 }

@@ -16,7 +16,8 @@ export const MAX_QUERY_LENGTH = 120;
 export const MAX_QUERY_STRING = 2_000;
 const CONTROL = /[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/;
 
-const many = <T extends readonly [string, ...string[]]>(values: T) => z.array(z.enum(values)).max(values.length).default([]);
+const many = <T extends readonly [string, ...string[]]>(values: T) =>
+  z.array(z.enum(values)).max(values.length).default([]);
 const cents = z.coerce.number().int("Whole cents").min(0).max(100_000_000);
 
 /**
@@ -24,38 +25,54 @@ const cents = z.coerce.number().int("Whole cents").min(0).max(100_000_000);
  * (`family=12AX7&family=6SN7GT`) mean any of them. Unknown parameters are refused, so a typo is told, not
  * ignored.
  */
-export const CatalogueQuerySchema = z.object({
-  q: z.string().trim().max(MAX_QUERY_LENGTH, `Search for at most ${MAX_QUERY_LENGTH} characters`)
-    .refine((s) => !CONTROL.test(s), "The search has control characters in it").default(""),
-  family: z.array(z.string().trim().min(1).max(40)).max(20).default([]),
-  condition: many(CONDITION_VALUES),
-  basis: many(BASIS_VALUES),
-  tested: z.enum(["yes", "no"]).optional(),
-  grade: many(GRADE_BANDS),
-  noVacuumLoss: z.enum(["1"]).optional(),
-  sets: many(SET_FILTERS),
-  hazard: many(HAZARD_FILTERS),
-  status: many(CATALOGUE_STATUSES),
-  estMinCents: cents.optional(),
-  estMaxCents: cents.optional(),
-  record: z.enum(RECORD_FILTERS).optional(),
-  sort: z.enum(SORTS).optional(),
-  cursor: z.string().max(400).optional(),
-  limit: z.coerce.number().int().min(1).max(60).default(24),
-}).strict();
+export const CatalogueQuerySchema = z
+  .object({
+    q: z
+      .string()
+      .trim()
+      .max(MAX_QUERY_LENGTH, `Search for at most ${MAX_QUERY_LENGTH} characters`)
+      .refine((s) => !CONTROL.test(s), "The search has control characters in it")
+      .default(""),
+    family: z.array(z.string().trim().min(1).max(40)).max(20).default([]),
+    condition: many(CONDITION_VALUES),
+    basis: many(BASIS_VALUES),
+    tested: z.enum(["yes", "no"]).optional(),
+    grade: many(GRADE_BANDS),
+    noVacuumLoss: z.enum(["1"]).optional(),
+    sets: many(SET_FILTERS),
+    hazard: many(HAZARD_FILTERS),
+    status: many(CATALOGUE_STATUSES),
+    estMinCents: cents.optional(),
+    estMaxCents: cents.optional(),
+    record: z.enum(RECORD_FILTERS).optional(),
+    sort: z.enum(SORTS).optional(),
+    cursor: z.string().max(400).optional(),
+    limit: z.coerce.number().int().min(1).max(60).default(24),
+  })
+  .strict();
 export type CatalogueQuery = z.infer<typeof CatalogueQuerySchema>;
 
 const MULTI = new Set(["family", "condition", "basis", "grade", "sets", "hazard", "status"]);
 
 /** Reads URL search parameters into the shape the schema checks (repeated names become lists). */
-export function searchParamsToObject(params: URLSearchParams | Record<string, string | string[] | undefined>): Record<string, unknown> {
+export function searchParamsToObject(
+  params: URLSearchParams | Record<string, string | string[] | undefined>,
+): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  const entries: [string, string][] = params instanceof URLSearchParams
-    ? [...params.entries()]
-    : Object.entries(params).flatMap(([k, v]) => (v === undefined ? [] : Array.isArray(v) ? v.map((x) => [k, x] as [string, string]) : [[k, v] as [string, string]]));
+  const entries: [string, string][] =
+    params instanceof URLSearchParams
+      ? [...params.entries()]
+      : Object.entries(params).flatMap(([k, v]) =>
+          v === undefined
+            ? []
+            : Array.isArray(v)
+              ? v.map((x) => [k, x] as [string, string])
+              : [[k, v] as [string, string]],
+        );
   for (const [k, v] of entries) {
     if (MULTI.has(k)) out[k] = [...((out[k] as string[] | undefined) ?? []), v];
-    else if (k in out) out[k] = [out[k] as string, v]; // a single-valued name given twice: the schema refuses it
+    else if (k in out)
+      out[k] = [out[k] as string, v]; // a single-valued name given twice: the schema refuses it
     else out[k] = v;
   }
   return out;

@@ -15,7 +15,10 @@ export const ClaimedItemSchema = z.object({
   designationSeen: text(40).nullable().optional(),
   tubesReceived: z.number().int().min(0).max(10_000).nullable().optional(),
   vacuumLoss: z.boolean().optional(),
-  features: z.record(z.string().max(40), z.string().max(80)).refine((f) => Object.keys(f).length <= 30, "At most 30 features").default({}),
+  features: z
+    .record(z.string().max(40), z.string().max(80))
+    .refine((f) => Object.keys(f).length <= 30, "At most 30 features")
+    .default({}),
   readings: z.array(ReadingSchema).max(100).default([]),
   note: text(1000).optional(),
 });
@@ -25,8 +28,15 @@ export type ClaimedItemInput = z.infer<typeof ClaimedItemSchema>;
 export const OpenDisputeSchema = z.object({
   reason: z.enum(DISPUTE_REASONS, { message: "Choose what is wrong" }),
   remedy: z.enum(REMEDIES, { message: "Choose what you ask for" }),
-  statement: z.string().trim().min(20, "Describe the problem in at least 20 characters").max(4000, "At most 4,000 characters"),
-  items: z.array(ClaimedItemSchema).min(1, "Name at least one item the claim covers").max(200)
+  statement: z
+    .string()
+    .trim()
+    .min(20, "Describe the problem in at least 20 characters")
+    .max(4000, "At most 4,000 characters"),
+  items: z
+    .array(ClaimedItemSchema)
+    .min(1, "Name at least one item the claim covers")
+    .max(200)
     .refine((items) => new Set(items.map((i) => i.itemId)).size === items.length, "Each item once"),
 });
 export type OpenDisputeInput = z.infer<typeof OpenDisputeSchema>;
@@ -39,19 +49,37 @@ export const DisputeMessageSchema = z.object({
 });
 export type DisputeMessageInput = z.infer<typeof DisputeMessageSchema>;
 
-const LineValueSchema = z.object({ itemId: z.uuid(), valueCents: cents.min(1, "A line's value must be above zero"), singleValueCents: cents.optional() });
-const RulingSchema = z.object({ itemId: z.uuid(), upheld: z.boolean(), tubes: z.number().int().min(0).max(10_000), worthCents: cents.optional() });
-const reasons = z.string().trim().min(20, "Give the reasons in at least 20 characters: both parties receive them").max(8000);
+const LineValueSchema = z.object({
+  itemId: z.uuid(),
+  valueCents: cents.min(1, "A line's value must be above zero"),
+  singleValueCents: cents.optional(),
+});
+const RulingSchema = z.object({
+  itemId: z.uuid(),
+  upheld: z.boolean(),
+  tubes: z.number().int().min(0).max(10_000),
+  worthCents: cents.optional(),
+});
+const reasons = z
+  .string()
+  .trim()
+  .min(20, "Give the reasons in at least 20 characters: both parties receive them")
+  .max(8000);
 
 /** The mediator's decision: shared by the workspace form and POST /api/disputes/:id/decision. */
 export const DecisionSchema = z.discriminatedUnion("outcome", [
   z.object({ outcome: z.literal(OUTCOMES[0]), reasons }),
-  z.object({
-    outcome: z.literal(OUTCOMES[1]),
-    reasons,
-    lines: z.array(LineValueSchema).min(1).max(500),
-    rulings: z.array(RulingSchema).min(1).max(200),
-  }).refine((d) => d.rulings.some((r) => r.upheld && r.tubes > 0), { message: "Uphold at least one item, or dismiss the claim", path: ["rulings"] }),
+  z
+    .object({
+      outcome: z.literal(OUTCOMES[1]),
+      reasons,
+      lines: z.array(LineValueSchema).min(1).max(500),
+      rulings: z.array(RulingSchema).min(1).max(200),
+    })
+    .refine((d) => d.rulings.some((r) => r.upheld && r.tubes > 0), {
+      message: "Uphold at least one item, or dismiss the claim",
+      path: ["rulings"],
+    }),
   z.object({ outcome: z.literal(OUTCOMES[2]), reasons }),
 ]);
 export type DecisionInput = z.infer<typeof DecisionSchema>;
@@ -59,7 +87,12 @@ export type DecisionInput = z.infer<typeof DecisionSchema>;
 /** The buyer's return shipment. */
 export const ReturnShipmentSchema = z.object({
   carrier: z.string().trim().min(2, "Name the carrier").max(60),
-  tracking: z.string().trim().min(4, "Enter the tracking number").max(80).regex(/^[A-Za-z0-9 -]+$/, "Letters, digits, spaces and hyphens only"),
+  tracking: z
+    .string()
+    .trim()
+    .min(4, "Enter the tracking number")
+    .max(80)
+    .regex(/^[A-Za-z0-9 -]+$/, "Letters, digits, spaces and hyphens only"),
 });
 export type ReturnShipmentInput = z.infer<typeof ReturnShipmentSchema>;
 

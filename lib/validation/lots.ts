@@ -33,48 +33,87 @@ export const ReadingSchema = z.object({
 export type ReadingInput = z.infer<typeof ReadingSchema>;
 
 /** One line of a lot: shared by the item form, the grid and POST/PATCH /api/lots/:id/items. */
-export const ItemSchema = z.object({
-  designation: z.string().trim().min(1, "Enter the designation as printed").max(40, "At most 40 characters"),
-  quantity: z.number().int("Whole tubes only").min(1, "At least 1").max(10_000),
-  labelBrand: text(120),
-  makerName: text(120).nullable(),
-  makerBasis: z.enum(BASIS_VALUES),
-  sourceCode: text(16).nullable(),
-  dateCode: text(16).nullable(),
-  features: z.record(z.string().max(40), z.string().max(80)).refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
-  condition: z.enum(CONDITION_VALUES, { message: "Choose the condition" }),
-  vacuumLoss: z.boolean(),
-  /** Listed as one matched set (pair, quad…): refunds treat it as one line. */
-  soldAsSet: z.boolean().optional(),
-  defects: z.array(text(200)).max(10),
-  hazards: z.array(z.enum(HAZARD_VALUES)).max(4),
-  readings: z.array(ReadingSchema).max(500),
-  notes: text(1000),
-}).refine((i) => i.readings.every((r) => r.sections.length > 0 || r.shorts || r.leakage || r.gas), { message: "Each reading needs a section value, or a short, leakage or gas failure", path: ["readings"] })
-  .refine((i) => i.readings.every((r) => r.tubeNo <= i.quantity), { message: "A reading names a tube number above the quantity", path: ["readings"] })
-  .refine((i) => !i.soldAsSet || i.quantity >= 2, { message: "A matched set has at least 2 tubes", path: ["soldAsSet"] })
-  .refine((i) => i.makerBasis === "unconfirmed" || Boolean(i.makerName), { message: "Name the maker, or mark it unconfirmed", path: ["makerName"] })
-  .refine((i) => i.makerBasis !== "source-code-confirmed" || Boolean(i.sourceCode), { message: "A source-code confirmation needs the source code", path: ["sourceCode"] });
+export const ItemSchema = z
+  .object({
+    designation: z.string().trim().min(1, "Enter the designation as printed").max(40, "At most 40 characters"),
+    quantity: z.number().int("Whole tubes only").min(1, "At least 1").max(10_000),
+    labelBrand: text(120),
+    makerName: text(120).nullable(),
+    makerBasis: z.enum(BASIS_VALUES),
+    sourceCode: text(16).nullable(),
+    dateCode: text(16).nullable(),
+    features: z
+      .record(z.string().max(40), z.string().max(80))
+      .refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
+    condition: z.enum(CONDITION_VALUES, { message: "Choose the condition" }),
+    vacuumLoss: z.boolean(),
+    /** Listed as one matched set (pair, quad…): refunds treat it as one line. */
+    soldAsSet: z.boolean().optional(),
+    defects: z.array(text(200)).max(10),
+    hazards: z.array(z.enum(HAZARD_VALUES)).max(4),
+    readings: z.array(ReadingSchema).max(500),
+    notes: text(1000),
+  })
+  .refine((i) => i.readings.every((r) => r.sections.length > 0 || r.shorts || r.leakage || r.gas), {
+    message: "Each reading needs a section value, or a short, leakage or gas failure",
+    path: ["readings"],
+  })
+  .refine((i) => i.readings.every((r) => r.tubeNo <= i.quantity), {
+    message: "A reading names a tube number above the quantity",
+    path: ["readings"],
+  })
+  .refine((i) => !i.soldAsSet || i.quantity >= 2, {
+    message: "A matched set has at least 2 tubes",
+    path: ["soldAsSet"],
+  })
+  .refine((i) => i.makerBasis === "unconfirmed" || Boolean(i.makerName), {
+    message: "Name the maker, or mark it unconfirmed",
+    path: ["makerName"],
+  })
+  .refine((i) => i.makerBasis !== "source-code-confirmed" || Boolean(i.sourceCode), {
+    message: "A source-code confirmation needs the source code",
+    path: ["sourceCode"],
+  });
 export type ItemInput = z.infer<typeof ItemSchema>;
 
 /** Blank section boxes in a form arrive as undefined: the form drops them before checking. */
 export function withoutBlankSections(values: ItemInput): ItemInput {
-  return { ...values, readings: values.readings.map((r) => ({ ...r, sections: r.sections.filter((x) => typeof x === "number" && !Number.isNaN(x)) })) };
+  return {
+    ...values,
+    readings: values.readings.map((r) => ({
+      ...r,
+      sections: r.sections.filter((x) => typeof x === "number" && !Number.isNaN(x)),
+    })),
+  };
 }
 
 /** The house's decision on a submitted lot. Money in cents. */
 export const ReviewDecisionSchema = z.discriminatedUnion("action", [
-  z.object({ action: z.literal("request-changes"), comment: z.string().trim().min(5, "Say what needs changing").max(4000) }),
   z.object({
-    action: z.literal("approve"),
-    comment: text(4000),
-    estimateLowCents: z.number().int().min(0),
-    estimateHighCents: z.number().int().min(0),
-    reserveCents: z.number().int().min(0),
-    reserveAgreed: z.literal(true, { message: "Approve only with a reserve the consignor has agreed" }),
-  }).refine((d) => d.estimateHighCents >= d.estimateLowCents, { message: "The high estimate is below the low", path: ["estimateHighCents"] })
-    .refine((d) => d.reserveCents <= d.estimateLowCents, { message: "By convention the reserve is at most the low estimate", path: ["reserveCents"] }),
-  z.object({ action: z.literal("decline"), comment: z.string().trim().min(5, "Say why the lot is declined").max(4000) }),
+    action: z.literal("request-changes"),
+    comment: z.string().trim().min(5, "Say what needs changing").max(4000),
+  }),
+  z
+    .object({
+      action: z.literal("approve"),
+      comment: text(4000),
+      estimateLowCents: z.number().int().min(0),
+      estimateHighCents: z.number().int().min(0),
+      reserveCents: z.number().int().min(0),
+      reserveAgreed: z.literal(true, { message: "Approve only with a reserve the consignor has agreed" }),
+    })
+    .refine((d) => d.estimateHighCents >= d.estimateLowCents, {
+      message: "The high estimate is below the low",
+      path: ["estimateHighCents"],
+    })
+    .refine((d) => d.reserveCents <= d.estimateLowCents, {
+      message: "By convention the reserve is at most the low estimate",
+      path: ["reserveCents"],
+    }),
+  z.object({
+    action: z.literal("decline"),
+    comment: z.string().trim().min(5, "Say why the lot is declined").max(4000),
+  }),
 ]);
 export type ReviewDecision = z.infer<typeof ReviewDecisionSchema>;
 

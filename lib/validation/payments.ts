@@ -5,7 +5,10 @@ import { z } from "zod";
  * payment processor and are never stored or logged by Getterline.
  */
 export const CardPaymentSchema = z.object({
-  number: z.string().transform((s) => s.replace(/[\s-]/g, "")).pipe(z.string().regex(/^\d{12,19}$/, "Enter the card number")),
+  number: z
+    .string()
+    .transform((s) => s.replace(/[\s-]/g, ""))
+    .pipe(z.string().regex(/^\d{12,19}$/, "Enter the card number")),
   expMonth: z.coerce.number().int().min(1, "Month 1–12").max(12, "Month 1–12"),
   expYear: z.coerce.number().int().min(2024, "Enter the year, e.g. 2029").max(2100),
   cvc: z.string().regex(/^\d{3,4}$/, "3 or 4 digits"),

@@ -6,7 +6,9 @@ export const ShelfTubeSchema = z.object({
   labelBrand: z.string().trim().max(120),
   sourceCode: z.string().trim().max(16).nullable(),
   dateCode: z.string().trim().max(16).nullable(),
-  features: z.record(z.string().max(40), z.string().max(80)).refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
+  features: z
+    .record(z.string().max(40), z.string().max(80))
+    .refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
   notes: z.string().trim().max(2000),
   /** Set by the form once per submission, so a retried request adds nothing. */
   clientKey: z.string().trim().min(8).max(64).nullable(),
@@ -15,7 +17,9 @@ export type ShelfTubeInput = z.infer<typeof ShelfTubeSchema>;
 
 /** POST /api/valves/attribution: construction features in, ranked makers out. */
 export const AttributionQuerySchema = z.object({
-  features: z.record(z.string().max(40), z.union([z.string().max(80), z.number(), z.boolean()])).refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
+  features: z
+    .record(z.string().max(40), z.union([z.string().max(80), z.number(), z.boolean()]))
+    .refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
   designation: z.string().trim().max(40).optional(),
   year: z.number().int().min(1900).max(2030).optional(),
 });

@@ -5,7 +5,11 @@ import { VALVE_KINDS, type ValveKind } from "../valves/reference-row";
 import { parseRowSource } from "../valves/sources";
 
 /** A designation as typed (normalised later by the decoder); bounded so a 10 KB string is a 400. */
-export const DesignationParam = z.string().trim().min(1, "Enter a designation").max(40, "A designation is at most 40 characters");
+export const DesignationParam = z
+  .string()
+  .trim()
+  .min(1, "Enter a designation")
+  .max(40, "A designation is at most 40 characters");
 
 /** GET /api/valves/date-codes/{code}?type=… */
 export const DateCodeQuery = z.object({
@@ -20,7 +24,11 @@ const positive = z.number().finite().positive().max(1_000_000);
 /** Correction of a reference row by the house (PATCH /api/valves/types/{designation}). */
 export const ReferenceEditSchema = z.object({
   reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
-  source: z.string().trim().max(40).refine((v) => parseRowSource(v) !== undefined, "Use a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM"),
+  source: z
+    .string()
+    .trim()
+    .max(40)
+    .refine((v) => parseRowSource(v) !== undefined, "Use a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM"),
   heaterVolts: positive.nullable(),
   heaterAmps: positive.nullable(),
   introducedYear: z.number().int().min(1900).max(2030).nullable(),
@@ -41,26 +49,43 @@ export const ReferenceVerifySchema = z.object({
 });
 
 /** The house adds a type (POST /api/valves/types). Figures may be left empty: never invent one to fill a column. */
-export const ReferenceAddSchema = z.object({
-  designation: DesignationParam,
-  aliases: z.string().trim().max(400),
-  kind: z.enum(VALVE_KINDS as [ValveKind, ...ValveKind[]]),
-  base: z.enum(Object.keys(BASE_FAMILY_LABELS) as [BaseFamily, ...BaseFamily[]]),
-  coldCathode: z.boolean(),
-  heaterVolts: positive.nullable(),
-  heaterAmps: positive.nullable(),
-  source: z.string().trim().refine((v) => parseRowSource(v) !== undefined, "Use a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM"),
-  note: z.string().trim().max(500),
-  reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
-}).refine((v) => (v.heaterVolts === null) === (v.heaterAmps === null), { message: "Give heater volts and amps together, or neither", path: ["heaterAmps"] });
+export const ReferenceAddSchema = z
+  .object({
+    designation: DesignationParam,
+    aliases: z.string().trim().max(400),
+    kind: z.enum(VALVE_KINDS as [ValveKind, ...ValveKind[]]),
+    base: z.enum(Object.keys(BASE_FAMILY_LABELS) as [BaseFamily, ...BaseFamily[]]),
+    coldCathode: z.boolean(),
+    heaterVolts: positive.nullable(),
+    heaterAmps: positive.nullable(),
+    source: z
+      .string()
+      .trim()
+      .refine(
+        (v) => parseRowSource(v) !== undefined,
+        "Use a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM",
+      ),
+    note: z.string().trim().max(500),
+    reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
+  })
+  .refine((v) => (v.heaterVolts === null) === (v.heaterAmps === null), {
+    message: "Give heater volts and amps together, or neither",
+    path: ["heaterAmps"],
+  });
 export type ReferenceAddInput = z.infer<typeof ReferenceAddSchema>;
 
 /** Retiring a type (POST /api/valves/types/{designation}/retire). */
-export const ReferenceRetireSchema = z.object({ reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500), retired: z.boolean() });
+export const ReferenceRetireSchema = z.object({
+  reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
+  retired: z.boolean(),
+});
 
 /** CSV import of the reference table (POST /api/valves/types/import): preview first, then apply. */
 export const ReferenceImportSchema = z.object({
-  csv: z.string().min(1, "Paste or choose a CSV file").max(2 * 1024 * 1024, "At most 2 MB"),
+  csv: z
+    .string()
+    .min(1, "Paste or choose a CSV file")
+    .max(2 * 1024 * 1024, "At most 2 MB"),
   apply: z.boolean(),
   reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
 });

@@ -7,7 +7,11 @@ import { BASIS_VALUES, CONDITION_VALUES } from "./lots";
 export const MAX_WANT_LISTS = 100;
 
 export const WantCriteriaSchema = z.object({
-  designation: z.string().trim().min(1, "Name the type you want").max(40)
+  designation: z
+    .string()
+    .trim()
+    .min(1, "Name the type you want")
+    .max(40)
     .refine((d) => normaliseDesignation(d).ok, "Not a designation: check it (e.g. 12AX7, ECC83, 6SN7GT)"),
   closeness: z.enum(CLOSENESS).default("exact"),
   minQuantity: z.coerce.number().int().min(1, "At least 1 tube").max(10_000).default(1),
@@ -25,10 +29,12 @@ export const WantListCreateSchema = z.object({
 export type WantListCreateInput = z.infer<typeof WantListCreateSchema>;
 
 /** PATCH /api/want-lists/:id: pause, resume or rename. */
-export const WantListPatchSchema = z.object({
-  name: z.string().trim().min(1).max(80).optional(),
-  paused: z.boolean().optional(),
-}).refine((p) => p.name !== undefined || p.paused !== undefined, "Nothing to change");
+export const WantListPatchSchema = z
+  .object({
+    name: z.string().trim().min(1).max(80).optional(),
+    paused: z.boolean().optional(),
+  })
+  .refine((p) => p.name !== undefined || p.paused !== undefined, "Nothing to change");
 
 /** POST /api/want-lists/unsubscribe: the link in a digest, without signing in. */
 export const UnsubscribeSchema = z.object({ u: z.uuid(), t: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/) });

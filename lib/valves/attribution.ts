@@ -7,7 +7,13 @@
  * Reference profiles are built only from source-code-confirmed items, never
  * from construction-matched ones, so the library cannot confirm itself.
  */
-import { FEATURE_GROUPS, FEATURE_WEIGHTS, recordedFeatures, type ConstructionFeatures, type FeatureKey } from "./construction";
+import {
+  FEATURE_GROUPS,
+  FEATURE_WEIGHTS,
+  recordedFeatures,
+  type ConstructionFeatures,
+  type FeatureKey,
+} from "./construction";
 
 /** How an attribution was reached (our labels). */
 export type AttributionBasis = "source-code-confirmed" | "construction-matched" | "unconfirmed";
@@ -80,14 +86,22 @@ export const DISTINCT_MARGIN = 0.1;
 const CONFIDENCE_ORDER: Record<Confidence, number> = { low: 0, medium: 1, high: 2 };
 
 /** Turn one reference example into a profile with a single sample. */
-export function profileFromExample(profile: Omit<ReferenceProfile, "features" | "sampleCount">, features: ConstructionFeatures): ReferenceProfile {
+export function profileFromExample(
+  profile: Omit<ReferenceProfile, "features" | "sampleCount">,
+  features: ConstructionFeatures,
+): ReferenceProfile {
   const counts: FeatureCounts = {};
   for (const [key, value] of recordedFeatures(features)) counts[key] = { [value]: 1 };
   return { ...profile, features: counts, sampleCount: 1 };
 }
 
 function compare(features: ConstructionFeatures, profile: ReferenceProfile): Omit<MakerCandidate, "confidence"> {
-  const candidate = { makerId: profile.makerId, makerName: profile.makerName, profileId: profile.profileId, similarity: 0 };
+  const candidate = {
+    makerId: profile.makerId,
+    makerName: profile.makerName,
+    profileId: profile.profileId,
+    similarity: 0,
+  };
   const matching: FeatureKey[] = [];
   const conflicting: FeatureKey[] = [];
   const partial: FeatureKey[] = [];
@@ -105,11 +119,24 @@ function compare(features: ConstructionFeatures, profile: ReferenceProfile): Omi
     else partial.push(key);
   }
   const matchingGroups = [...new Set(matching.map((key) => FEATURE_GROUPS[key]))];
-  return { ...candidate, similarity: weight === 0 ? 0 : agreed / weight, matching, conflicting, partial, matchingGroups, reasons: [] };
+  return {
+    ...candidate,
+    similarity: weight === 0 ? 0 : agreed / weight,
+    matching,
+    conflicting,
+    partial,
+    matchingGroups,
+    reasons: [],
+  };
 }
 
 function baseConfidence(c: Omit<MakerCandidate, "confidence">): Confidence {
-  if (c.matchingGroups.length >= HIGH_CONFIDENCE_GROUPS && c.conflicting.length === 0 && c.similarity >= HIGH_CONFIDENCE_SIMILARITY) return "high";
+  if (
+    c.matchingGroups.length >= HIGH_CONFIDENCE_GROUPS &&
+    c.conflicting.length === 0 &&
+    c.similarity >= HIGH_CONFIDENCE_SIMILARITY
+  )
+    return "high";
   if (c.matchingGroups.length >= 2 && c.similarity >= 0.6 && c.conflicting.length <= 1) return "medium";
   return "low";
 }
@@ -137,7 +164,12 @@ export function rankMakers(
         (compared.conflicting.length ? `; conflicts: ${compared.conflicting.join(", ")}` : ""),
     );
     const era = profile.era;
-    if (options.year !== undefined && era && (options.year < era.from || options.year > era.to) && confidence === "high") {
+    if (
+      options.year !== undefined &&
+      era &&
+      (options.year < era.from || options.year > era.to) &&
+      confidence === "high"
+    ) {
       confidence = "medium";
       candidate.reasons.push(`${options.year} is outside the reference era ${era.from}–${era.to}`);
     }
@@ -152,7 +184,11 @@ export function rankMakers(
       CONFIDENCE_ORDER[b.confidence] - CONFIDENCE_ORDER[a.confidence] ||
       a.makerName.localeCompare(b.makerName),
   );
-  if (ranked.length > 1 && ranked[0].confidence === "high" && ranked[0].similarity - ranked[1].similarity < DISTINCT_MARGIN) {
+  if (
+    ranked.length > 1 &&
+    ranked[0].confidence === "high" &&
+    ranked[0].similarity - ranked[1].similarity < DISTINCT_MARGIN
+  ) {
     ranked[0].confidence = "medium";
     ranked[0].reasons.push(`${ranked[1].makerName}'s reference fits nearly as well`);
   }
@@ -171,7 +207,13 @@ export function buildReferenceProfiles(items: readonly AttributableItem[]): Refe
     const profileId = `${item.makerId}:${item.typeFamily ?? "any"}`;
     let profile = profiles.get(profileId);
     if (!profile) {
-      profile = { profileId, makerId: item.makerId, makerName: item.makerName ?? item.makerId, features: {}, sampleCount: 0 };
+      profile = {
+        profileId,
+        makerId: item.makerId,
+        makerName: item.makerName ?? item.makerId,
+        features: {},
+        sampleCount: 0,
+      };
       if (item.typeFamily) profile.typeFamily = item.typeFamily;
       profiles.set(profileId, profile);
     }
@@ -198,14 +240,20 @@ export function unconfirmedShelf(
   items: readonly AttributableItem[],
   profiles: readonly ReferenceProfile[],
   threshold: { minConfidence?: Confidence; minSimilarity?: number } = {},
-): { proposals: { itemId: string; candidate: MakerCandidate }[]; remaining: { itemId: string; best?: MakerCandidate }[] } {
+): {
+  proposals: { itemId: string; candidate: MakerCandidate }[];
+  remaining: { itemId: string; best?: MakerCandidate }[];
+} {
   const minConfidence = threshold.minConfidence ?? "high";
   const proposals: { itemId: string; candidate: MakerCandidate }[] = [];
   const remaining: { itemId: string; best?: MakerCandidate }[] = [];
   for (const item of items) {
     if (item.basis && item.basis !== "unconfirmed") continue;
     const [top] = rankMakers(item.features, profiles, { typeFamily: item.typeFamily, year: item.year });
-    const enough = top && CONFIDENCE_ORDER[top.confidence] >= CONFIDENCE_ORDER[minConfidence] && top.similarity >= (threshold.minSimilarity ?? 0);
+    const enough =
+      top &&
+      CONFIDENCE_ORDER[top.confidence] >= CONFIDENCE_ORDER[minConfidence] &&
+      top.similarity >= (threshold.minSimilarity ?? 0);
     if (enough) proposals.push({ itemId: item.itemId, candidate: top });
     else remaining.push(top ? { itemId: item.itemId, best: top } : { itemId: item.itemId });
   }
@@ -220,7 +268,11 @@ export function unconfirmedShelf(
  * gives "construction-matched"; else "unconfirmed". The label brand is kept
  * apart: rebranding alone is not misdescription [SUG].
  */
-export function attribute(input: { labelBrand?: string; sourceCodeMaker?: { makerId: string; makerName: string }; ranking?: readonly MakerCandidate[] }): Attribution {
+export function attribute(input: {
+  labelBrand?: string;
+  sourceCodeMaker?: { makerId: string; makerName: string };
+  ranking?: readonly MakerCandidate[];
+}): Attribution {
   const top = input.ranking?.[0];
   const result: Attribution = { basis: "unconfirmed", confidence: null, disputed: false, reasons: [] };
   if (input.labelBrand) {
@@ -229,7 +281,11 @@ export function attribute(input: { labelBrand?: string; sourceCodeMaker?: { make
   }
   const strongTop = top && CONFIDENCE_ORDER[top.confidence] >= CONFIDENCE_ORDER.medium ? top : undefined;
   if (input.sourceCodeMaker) {
-    Object.assign(result, { makerId: input.sourceCodeMaker.makerId, makerName: input.sourceCodeMaker.makerName, basis: "source-code-confirmed" });
+    Object.assign(result, {
+      makerId: input.sourceCodeMaker.makerId,
+      makerName: input.sourceCodeMaker.makerName,
+      basis: "source-code-confirmed",
+    });
     if (strongTop && strongTop.makerId !== input.sourceCodeMaker.makerId) {
       result.confidence = "low";
       result.disputed = true;
@@ -244,7 +300,12 @@ export function attribute(input: { labelBrand?: string; sourceCodeMaker?: { make
     return result;
   }
   if (strongTop) {
-    Object.assign(result, { makerId: strongTop.makerId, makerName: strongTop.makerName, basis: "construction-matched", confidence: strongTop.confidence });
+    Object.assign(result, {
+      makerId: strongTop.makerId,
+      makerName: strongTop.makerName,
+      basis: "construction-matched",
+      confidence: strongTop.confidence,
+    });
     result.reasons.push(...strongTop.reasons);
   }
   return result;

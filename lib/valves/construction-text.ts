@@ -3,12 +3,30 @@
  * name) and as the attribution code reads them (typed values). Pure.
  */
 import {
-  BASE_COLOURS, BASE_MATERIALS, BULB_SHAPES, EXHAUST_TIPS, FEATURE_KEYS, FLASH_PLACES, GETTER_POSITIONS, GETTER_SHAPES,
-  MARKING_METHODS, MICA_COATINGS, MICA_OUTLINES, PLATE_COLOURS, PLATE_FASTENINGS, PLATE_LENGTHS, PLATE_OPENINGS, PLATE_SHAPES,
-  PLATE_SURFACES, SUPPORT_ROD_FINISHES, type ConstructionFeatures, type FeatureKey,
+  BASE_COLOURS,
+  BASE_MATERIALS,
+  BULB_SHAPES,
+  EXHAUST_TIPS,
+  FEATURE_KEYS,
+  FLASH_PLACES,
+  GETTER_POSITIONS,
+  GETTER_SHAPES,
+  MARKING_METHODS,
+  MICA_COATINGS,
+  MICA_OUTLINES,
+  PLATE_COLOURS,
+  PLATE_FASTENINGS,
+  PLATE_LENGTHS,
+  PLATE_OPENINGS,
+  PLATE_SHAPES,
+  PLATE_SURFACES,
+  SUPPORT_ROD_FINISHES,
+  type ConstructionFeatures,
+  type FeatureKey,
 } from "./construction";
 
-type Choice = { kind: "enum"; values: readonly string[] } | { kind: "count"; min: number; max: number } | { kind: "yes-no" };
+type Choice =
+  { kind: "enum"; values: readonly string[] } | { kind: "count"; min: number; max: number } | { kind: "yes-no" };
 
 /** What each feature may hold, and its label in our own words. */
 export const FEATURE_FIELDS: Readonly<Record<FeatureKey, { label: string; choice: Choice }>> = {
@@ -44,17 +62,24 @@ const NO = ["no", "n", "false", "0"];
  * values with spaces or hyphens) into typed features. Unknown names and
  * values outside the vocabulary are returned apart, never guessed.
  */
-export function featuresFromText(record: Readonly<Record<string, string>>): { features: ConstructionFeatures; ignored: string[] } {
+export function featuresFromText(record: Readonly<Record<string, string>>): {
+  features: ConstructionFeatures;
+  ignored: string[];
+} {
   const features: Record<string, unknown> = {};
   const ignored: string[] = [];
   for (const [rawKey, rawValue] of Object.entries(record)) {
     const key = byLower.get(rawKey.replace(/[\s_-]/g, "").toLowerCase());
     const value = rawValue.trim().toLowerCase().replace(/\s+/g, "-");
     if (!value) continue;
-    if (!key) { ignored.push(rawKey); continue; }
+    if (!key) {
+      ignored.push(rawKey);
+      continue;
+    }
     const c = FEATURE_FIELDS[key].choice;
     if (c.kind === "enum" && c.values.includes(value)) features[key] = value;
-    else if (c.kind === "count" && /^\d+$/.test(value) && Number(value) >= c.min && Number(value) <= c.max) features[key] = Number(value);
+    else if (c.kind === "count" && /^\d+$/.test(value) && Number(value) >= c.min && Number(value) <= c.max)
+      features[key] = Number(value);
     else if (c.kind === "yes-no" && (YES.includes(value) || NO.includes(value))) features[key] = YES.includes(value);
     else ignored.push(`${rawKey}=${rawValue}`);
   }

@@ -78,7 +78,9 @@ export type FeatureKey = keyof ConstructionFeatures;
  * matching features, as independent evidence [CTP: "several independent
  * features"; grouping SUG].
  */
-export const FEATURE_GROUPS: Readonly<Record<FeatureKey, "plates" | "getter" | "micas" | "supports" | "envelope" | "markings">> = {
+export const FEATURE_GROUPS: Readonly<
+  Record<FeatureKey, "plates" | "getter" | "micas" | "supports" | "envelope" | "markings">
+> = {
   plateShape: "plates",
   plateSurface: "plates",
   plateColour: "plates",

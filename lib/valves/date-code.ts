@@ -110,20 +110,34 @@ export function judgeYear(year: number, ctx: DateCodeContext): YearVerdict {
   const verdict: YearVerdict = { conflicts: [], supports: [] };
   const end = ctx.endOfProductionYear ?? DEFAULT_END_OF_PRODUCTION_YEAR;
   if (ctx.introducedYear !== undefined && year < ctx.introducedYear) {
-    verdict.conflicts.push({ flag: "predates-type", reason: `${year} is before the type was introduced (${ctx.introducedYear})` });
+    verdict.conflicts.push({
+      flag: "predates-type",
+      reason: `${year} is before the type was introduced (${ctx.introducedYear})`,
+    });
   } else if (ctx.introducedYear === undefined && year < DEFAULT_EARLIEST_YEAR) {
-    verdict.conflicts.push({ flag: "predates-type", reason: `${year} is before ${DEFAULT_EARLIEST_YEAR}, the house's earliest year for an unknown type` });
+    verdict.conflicts.push({
+      flag: "predates-type",
+      reason: `${year} is before ${DEFAULT_EARLIEST_YEAR}, the house's earliest year for an unknown type`,
+    });
   }
   if (year > end) {
-    verdict.conflicts.push({ flag: "after-end-of-production", reason: `${year} is after the configured end of production (${end})` });
+    verdict.conflicts.push({
+      flag: "after-end-of-production",
+      reason: `${year} is after the configured end of production (${end})`,
+    });
   }
   const suffix = ctx.envelopeSuffix?.toUpperCase();
   const suffixYear = ctx.earliestSuffixYear ?? (suffix ? SUFFIX_EARLIEST_YEAR[suffix] : undefined);
   if (suffixYear !== undefined && year < suffixYear) {
-    verdict.conflicts.push({ flag: "predates-suffix", reason: `${year} is before the ${suffix ?? "suffix"} envelope existed (${suffixYear})` });
+    verdict.conflicts.push({
+      flag: "predates-suffix",
+      reason: `${year} is before the ${suffix ?? "suffix"} envelope existed (${suffixYear})`,
+    });
   }
   for (const evidence of ctx.eraEvidence ?? []) {
-    const inside = (evidence.earliest === undefined || year >= evidence.earliest) && (evidence.latest === undefined || year <= evidence.latest);
+    const inside =
+      (evidence.earliest === undefined || year >= evidence.earliest) &&
+      (evidence.latest === undefined || year <= evidence.latest);
     if (evidence.rulesOut && !inside) {
       verdict.conflicts.push({ flag: "contradicts-evidence", reason: `${year} contradicts ${evidence.source}` });
     } else if (!evidence.rulesOut && inside) {
@@ -157,7 +171,9 @@ export function hasIsoWeek53(year: number): boolean {
  * Rank readings: more supporting evidence first; ties go to the year nearest
  * the type's introduction (the earliest surviving year) [SUG], and say so.
  */
-export function rankReadings<T extends { year: number; score: number; rank: number; reasons: string[] }>(readings: T[]): T[] {
+export function rankReadings<T extends { year: number; score: number; rank: number; reasons: string[] }>(
+  readings: T[],
+): T[] {
   const sorted = [...readings].sort((a, b) => b.score - a.score || a.year - b.year);
   sorted.forEach((reading, index) => {
     reading.rank = index + 1;
@@ -219,10 +235,23 @@ export function readDateCode(code: string, ctx: DateCodeContext = {}): DateCodeR
   }
   if (text === "") return { ok: false, input, error: { code: "empty", message: "no date code given" }, rejected };
   if (!/^\d+$/.test(text)) {
-    return { ok: false, input, error: { code: "not-digits", message: `"${text}" is not a date code: EIA date codes are digits only` }, rejected };
+    return {
+      ok: false,
+      input,
+      error: { code: "not-digits", message: `"${text}" is not a date code: EIA date codes are digits only` },
+      rejected,
+    };
   }
   if (text.length !== 3 && text.length !== 4) {
-    return { ok: false, input, error: { code: "wrong-length", message: `"${text}" has ${text.length} digits; EIA date codes have 3 (YWW) or 4 (YYWW)` }, rejected };
+    return {
+      ok: false,
+      input,
+      error: {
+        code: "wrong-length",
+        message: `"${text}" has ${text.length} digits; EIA date codes have 3 (YWW) or 4 (YYWW)`,
+      },
+      rejected,
+    };
   }
   const readings: DateReading[] = [];
   const addReading = (year: number, week: number, form: DateCodeForm, verdict: YearVerdict, extra: string[]) => {
@@ -240,12 +269,21 @@ export function readDateCode(code: string, ctx: DateCodeContext = {}): DateCodeR
       weekValid = true;
       readCentury(first, second, ctx, rejected, flags, addReading);
     } else {
-      rejected.push({ reading: { form: "YYWW", year: 1900 + first, week: second }, reason: `week ${text.slice(2)} cannot exist (weeks run 01–${MAX_WEEK})` });
+      rejected.push({
+        reading: { form: "YYWW", year: 1900 + first, week: second },
+        reason: `week ${text.slice(2)} cannot exist (weeks run 01–${MAX_WEEK})`,
+      });
     }
     if (!validWeek(first)) {
-      rejected.push({ reading: { form: "WWYY", week: first }, reason: `week-first reading impossible: week ${text.slice(0, 2)} cannot exist` });
+      rejected.push({
+        reading: { form: "WWYY", week: first },
+        reason: `week-first reading impossible: week ${text.slice(0, 2)} cannot exist`,
+      });
     } else if (!ctx.considerWeekFirst) {
-      rejected.push({ reading: { form: "WWYY", year: 1900 + second, week: first }, reason: "week-first order is not EIA-476; enable it only for a maker known to print it" });
+      rejected.push({
+        reading: { form: "WWYY", year: 1900 + second, week: first },
+        reason: "week-first order is not EIA-476; enable it only for a maker known to print it",
+      });
     } else {
       const verdict = judgeYear(1900 + second, ctx);
       if (verdict.conflicts.length > 0) {
@@ -260,7 +298,10 @@ export function readDateCode(code: string, ctx: DateCodeContext = {}): DateCodeR
     const week = Number(text.slice(1));
     flags.push("may-be-source-code");
     if (!validWeek(week)) {
-      rejected.push({ reading: { form: "YWW", week }, reason: `week ${text.slice(1)} cannot exist (weeks run 01–${MAX_WEEK})` });
+      rejected.push({
+        reading: { form: "YWW", week },
+        reason: `week ${text.slice(1)} cannot exist (weeks run 01–${MAX_WEEK})`,
+      });
     } else {
       weekValid = true;
       if (ctx.introducedYear === undefined) flags.push("type-introduction-unknown");
@@ -275,7 +316,15 @@ export function readDateCode(code: string, ctx: DateCodeContext = {}): DateCodeR
     }
   }
   if (!weekValid) {
-    return { ok: false, input, error: { code: "invalid-week", message: `"${text}" has no valid week (01–${MAX_WEEK}): not a date code, or misread` }, rejected };
+    return {
+      ok: false,
+      input,
+      error: {
+        code: "invalid-week",
+        message: `"${text}" has no valid week (01–${MAX_WEEK}): not a date code, or misread`,
+      },
+      rejected,
+    };
   }
   if (readings.length === 0) flags.push("no-plausible-year");
   if (readings.length > 1) flags.push("ambiguous-decade");
@@ -316,7 +365,13 @@ export type EuropeanDateResult =
       weekDigit?: number;
       readings: EuropeanDateReading[];
       rejected: { year: number; reason: string }[];
-      flags: ("ambiguous-decade" | "month-scheme-ambiguous" | "no-factory-symbol" | "week-digit-out-of-range" | "no-plausible-year")[];
+      flags: (
+        | "ambiguous-decade"
+        | "month-scheme-ambiguous"
+        | "no-factory-symbol"
+        | "week-digit-out-of-range"
+        | "no-plausible-year"
+      )[];
     }
   | { ok: false; input: string; error: { code: "empty" | "not-a-date-line" | "not-a-month-letter"; message: string } };
 
@@ -337,7 +392,11 @@ export function parseEuropeanDateLine(
   if (text === "") return { ok: false, input, error: { code: "empty", message: "no date line given" } };
   const match = /^(.*?)(\d)([A-Z])(\d)?$/u.exec(text);
   if (!match) {
-    return { ok: false, input, error: { code: "not-a-date-line", message: `"${text}" does not end in year digit + month letter (+ week digit)` } };
+    return {
+      ok: false,
+      input,
+      error: { code: "not-a-date-line", message: `"${text}" does not end in year digit + month letter (+ week digit)` },
+    };
   }
   const [, factorySymbol, yearText, monthLetter, weekText] = match;
   const schemes = ctx.schemes ?? ["A-L"];
@@ -346,7 +405,14 @@ export function parseEuropeanDateLine(
     .filter((m) => m.month > 0)
     .filter((m, i, all) => all.findIndex((other) => other.month === m.month) === i);
   if (months.length === 0) {
-    return { ok: false, input, error: { code: "not-a-month-letter", message: `"${monthLetter}" is not a month letter in scheme ${schemes.join(" or ")}` } };
+    return {
+      ok: false,
+      input,
+      error: {
+        code: "not-a-month-letter",
+        message: `"${monthLetter}" is not a month letter in scheme ${schemes.join(" or ")}`,
+      },
+    };
   }
   const flags: Extract<EuropeanDateResult, { ok: true }>["flags"] = [];
   if (factorySymbol === "") flags.push("no-factory-symbol");
@@ -363,13 +429,26 @@ export function parseEuropeanDateLine(
       continue;
     }
     for (const { scheme, month } of months) {
-      const reasons = [`year digit ${yearText}, decade inferred`, `month letter ${monthLetter} = month ${month} (${scheme})`, ...verdict.supports];
+      const reasons = [
+        `year digit ${yearText}, decade inferred`,
+        `month letter ${monthLetter} = month ${month} (${scheme})`,
+        ...verdict.supports,
+      ];
       readings.push({ year, month, scheme, score: verdict.supports.length, rank: 0, reasons });
     }
   }
   if (readings.length === 0) flags.push("no-plausible-year");
   if (new Set(readings.map((r) => r.year)).size > 1) flags.push("ambiguous-decade");
-  const result: EuropeanDateResult = { ok: true, input, factorySymbol, yearDigit: Number(yearText), monthLetter, readings: rankReadings(readings), rejected, flags };
+  const result: EuropeanDateResult = {
+    ok: true,
+    input,
+    factorySymbol,
+    yearDigit: Number(yearText),
+    monthLetter,
+    readings: rankReadings(readings),
+    rejected,
+    flags,
+  };
   if (weekDigit !== undefined) result.weekDigit = weekDigit;
   return result;
 }

@@ -37,7 +37,13 @@ export interface EquivalentGroup {
   readonly notEquivalent?: readonly { readonly designation: string; readonly note: string; readonly source: string }[];
 }
 
-const m = (designation: string, link: LinkKind, note: string, source = "MEM", extra: Partial<GroupMember> = {}): GroupMember => ({
+const m = (
+  designation: string,
+  link: LinkKind,
+  note: string,
+  source = "MEM",
+  extra: Partial<GroupMember> = {},
+): GroupMember => ({
   designation,
   link,
   note,
@@ -48,7 +54,9 @@ const m = (designation: string, link: LinkKind, note: string, source = "MEM", ex
 /** The equivalents table. Anchors are the most common trade name of each family. */
 export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
   {
-    id: "12ax7", anchor: "12AX7", anchorRatingStep: 0,
+    id: "12ax7",
+    anchor: "12AX7",
+    anchorRatingStep: 0,
     members: [
       m("ECC83", "exact", "European name of the same type"),
       m("12AX7A", "exact", "Controlled heater warm-up for series strings", "MEM", { ratingStep: 1 }),
@@ -61,7 +69,9 @@ export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
     ],
   },
   {
-    id: "12au7", anchor: "12AU7", anchorRatingStep: 0,
+    id: "12au7",
+    anchor: "12AU7",
+    anchorRatingStep: 0,
     members: [
       m("ECC82", "exact", "European name of the same type"),
       m("12AU7A", "exact", "Controlled heater warm-up", "MEM", { ratingStep: 1 }),
@@ -73,7 +83,8 @@ export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
     ],
   },
   {
-    id: "12at7", anchor: "12AT7",
+    id: "12at7",
+    anchor: "12AT7",
     members: [
       m("ECC81", "exact", "European name of the same type"),
       m("6201", "premium", "Special-quality version"),
@@ -82,10 +93,16 @@ export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
     ],
   },
   {
-    id: "6dj8", anchor: "6DJ8",
+    id: "6dj8",
+    anchor: "6DJ8",
     members: [
       m("ECC88", "exact", "European name of the same type; heater 6.3 V 0.365 A", "MEM; heater ✓"),
-      m("6922", "near", "Special-quality version, routinely substituted; heater 0.3 A against 0.365 A", "MEM; heater ✓"),
+      m(
+        "6922",
+        "near",
+        "Special-quality version, routinely substituted; heater 0.3 A against 0.365 A",
+        "MEM; heater ✓",
+      ),
       m("E88CC", "near", "European name of 6922; heater 0.3 A against 0.365 A", "MEM; heater ✓", { sameAs: "6922" }),
       m("7308", "near", "Special-quality version, routinely substituted; heater 0.335 A", "MEM; heater ✓"),
       m("E188CC", "near", "European name of 7308; heater 0.335 A", "MEM; heater ✓", { sameAs: "7308" }),
@@ -94,7 +111,9 @@ export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
     ],
   },
   {
-    id: "6sn7", anchor: "6SN7GT", anchorRatingStep: 0,
+    id: "6sn7",
+    anchor: "6SN7GT",
+    anchorRatingStep: 0,
     members: [
       m("6SN7GTA", "exact", "Higher ratings", "MEM", { ratingStep: 1 }),
       m("6SN7GTB", "exact", "Higher ratings and controlled heater warm-up", "MEM", { ratingStep: 2 }),
@@ -102,7 +121,12 @@ export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
       m("6SN7WGT", "premium", "Ruggedised version, GT bulb"),
       m("5692", "premium", "Special-quality version"),
       m("VT231", "premium", "US military number for the type"),
-      m("12SN7GT", "sibling-heater", "Same pinout, 12.6 V 0.3 A heater against 6.3 V 0.6 A: needs a heater change", "REG ✓/MEM"),
+      m(
+        "12SN7GT",
+        "sibling-heater",
+        "Same pinout, 12.6 V 0.3 A heater against 6.3 V 0.6 A: needs a heater change",
+        "REG ✓/MEM",
+      ),
       m("6CG7", "different-base", "Similar electrically on a noval base, 6.3 V 0.6 A"),
       m("6FQ7", "different-base", "Same as 6CG7 on a noval base", "MEM", { sameAs: "6CG7" }),
       m("6F8G", "different-base", "Similar electrically, octal with a grid top cap"),
@@ -114,20 +138,29 @@ export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
     ],
   },
   {
-    id: "el34", anchor: "EL34",
+    id: "el34",
+    anchor: "EL34",
     members: [
-      m("6CA7", "exact", "Nominally the same type, but some sold as 6CA7 were beam tetrodes with different bulbs and curves"),
+      m(
+        "6CA7",
+        "exact",
+        "Nominally the same type, but some sold as 6CA7 were beam tetrodes with different bulbs and curves",
+      ),
       m("KT77", "caveat", "Substitute with caveats: different construction and curves; check bias"),
       m("E34L", "caveat", "Substitute with caveats: different ratings; check bias"),
     ],
   },
   {
-    id: "el84", anchor: "EL84", anchorRatingStep: 0,
+    id: "el84",
+    anchor: "EL84",
+    anchorRatingStep: 0,
     members: [
       m("6BQ5", "exact", "US name of the same type"),
       m("E84L", "premium", "Special-quality version"),
       m("7189", "premium", "Upward-rated: replaces 6BQ5, not necessarily the reverse", "MEM", { ratingStep: 1 }),
-      m("7189A", "premium", "Upward-rated further: replaces 6BQ5 and 7189, not necessarily the reverse", "MEM", { ratingStep: 2 }),
+      m("7189A", "premium", "Upward-rated further: replaces 6BQ5 and 7189, not necessarily the reverse", "MEM", {
+        ratingStep: 2,
+      }),
     ],
     notEquivalent: [
       { designation: "PL84", note: "A different type, not just EL84 with another heater", source: "MEM" },
@@ -135,7 +168,9 @@ export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
     ],
   },
   {
-    id: "6v6", anchor: "6V6", anchorRatingStep: 0,
+    id: "6v6",
+    anchor: "6V6",
+    anchorRatingStep: 0,
     members: [
       m("6V6G", "exact", "Glass, shouldered bulb", "MEM", { ratingStep: 0 }),
       m("6V6GT", "exact", "Glass tubular bulb", "MEM", { ratingStep: 0 }),
@@ -146,30 +181,55 @@ export const EQUIVALENT_GROUPS: readonly EquivalentGroup[] = [
     ],
   },
   {
-    id: "6l6", anchor: "6L6", anchorRatingStep: 0,
+    id: "6l6",
+    anchor: "6L6",
+    anchorRatingStep: 0,
     members: [
       m("6L6G", "exact", "Glass, shouldered bulb", "MEM", { ratingStep: 0 }),
-      m("6L6GA", "near", "Ratings rise with each suffix; lower-rated versions may not suit high-B+ sockets", "MEM", { ratingStep: 1 }),
-      m("6L6GB", "near", "Ratings rise with each suffix; lower-rated versions may not suit high-B+ sockets", "MEM", { ratingStep: 2 }),
-      m("6L6GC", "near", "Highest-rated glass version (30 W plate): lower-rated versions don't suit 6L6GC sockets at high B+", "MEM; 30 W ✓", { ratingStep: 3 }),
+      m("6L6GA", "near", "Ratings rise with each suffix; lower-rated versions may not suit high-B+ sockets", "MEM", {
+        ratingStep: 1,
+      }),
+      m("6L6GB", "near", "Ratings rise with each suffix; lower-rated versions may not suit high-B+ sockets", "MEM", {
+        ratingStep: 2,
+      }),
+      m(
+        "6L6GC",
+        "near",
+        "Highest-rated glass version (30 W plate): lower-rated versions don't suit 6L6GC sockets at high B+",
+        "MEM; 30 W ✓",
+        { ratingStep: 3 },
+      ),
       m("5881", "premium", "Industrial version, ratings between 6L6GB and 6L6GC", "MEM?", { ratingStep: 2 }),
       m("7581A", "premium", "Industrial upward-rated version", "MEM?", { ratingStep: 4 }),
       m("KT66", "caveat", "Substitute with caveats: about 1.3 A heater against 0.9 A, larger bulb"),
     ],
   },
   {
-    id: "5ar4", anchor: "5AR4",
+    id: "5ar4",
+    anchor: "5AR4",
     members: [
       m("GZ34", "exact", "European name of the same type"),
-      m("5U4GB", "caveat", "5AR4 replaces it only with caveats: higher DC output, different heater current (1.9 A against 3 A)"),
-      m("5Y3GT", "caveat", "5AR4 replaces it only with caveats: much higher DC output, different heater current (1.9 A against 2 A)"),
+      m(
+        "5U4GB",
+        "caveat",
+        "5AR4 replaces it only with caveats: higher DC output, different heater current (1.9 A against 3 A)",
+      ),
+      m(
+        "5Y3GT",
+        "caveat",
+        "5AR4 replaces it only with caveats: much higher DC output, different heater current (1.9 A against 2 A)",
+      ),
     ],
   },
   {
-    id: "kt88", anchor: "KT88",
+    id: "kt88",
+    anchor: "KT88",
     members: [
       m("6550", "near", "Same pinout; ratings, size and bias differ: rebias after swapping", "CTP", { ratingStep: 0 }),
-      m("6550A", "near", "Improved 6550; ratings, size and bias differ from KT88: rebias", "CTP", { sameAs: "6550", ratingStep: 1 }),
+      m("6550A", "near", "Improved 6550; ratings, size and bias differ from KT88: rebias", "CTP", {
+        sameAs: "6550",
+        ratingStep: 1,
+      }),
     ],
   },
   { id: "ef86", anchor: "EF86", members: [m("6267", "exact", "US number of the same type")] },
@@ -214,12 +274,22 @@ export interface EquivalentsResult {
   readonly resolvedAs?: string;
   readonly matches: readonly EquivalentMatch[];
   /** Types that look related but are not equivalents, with why. */
-  readonly notEquivalent: readonly { readonly designation: string; readonly note: string; readonly source: string; readonly groupId: string }[];
+  readonly notEquivalent: readonly {
+    readonly designation: string;
+    readonly note: string;
+    readonly source: string;
+    readonly groupId: string;
+  }[];
 }
 
 /** Closeness order: lower is closer. A pair linked through an anchor is no closer than its weaker link. */
 const LINK_ORDER: Readonly<Record<LinkKind, number>> = {
-  exact: 0, premium: 1, near: 2, caveat: 3, "sibling-heater": 4, "different-base": 5,
+  exact: 0,
+  premium: 1,
+  near: 2,
+  caveat: 3,
+  "sibling-heater": 4,
+  "different-base": 5,
 };
 
 /**
@@ -267,7 +337,15 @@ function relate(g: EquivalentGroup, query: string, other: string): EquivalentMat
   const os = stepOf(g, other);
   let direction: ReplacementDirection = link === "exact" ? "both-ways" : "check";
   if (qs !== undefined && os !== undefined) direction = os > qs ? "upgrade" : os < qs ? "downgrade" : direction;
-  return { designation: other, link, note, source: sources.join("; ") || "MEM", groupId: g.id, anchor: g.anchor, direction };
+  return {
+    designation: other,
+    link,
+    note,
+    source: sources.join("; ") || "MEM",
+    groupId: g.id,
+    anchor: g.anchor,
+    direction,
+  };
 }
 
 function groupNames(g: EquivalentGroup): string[] {
@@ -311,7 +389,9 @@ export function findEquivalents(designation: string): EquivalentsResult {
     query: designation,
     normalised: n.value,
     ...(name && name !== n.value ? { resolvedAs: name } : {}),
-    matches: [...matches.values()].sort((a, b) => LINK_ORDER[a.link] - LINK_ORDER[b.link] || a.designation.localeCompare(b.designation)),
+    matches: [...matches.values()].sort(
+      (a, b) => LINK_ORDER[a.link] - LINK_ORDER[b.link] || a.designation.localeCompare(b.designation),
+    ),
     notEquivalent: warnings,
   };
 }

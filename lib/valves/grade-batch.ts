@@ -3,7 +3,14 @@
  * that pass: the computation behind POST /api/valves/grade and a lot's test
  * summary. Pure: readings in, grades and sets out.
  */
-import { gradeReading, HOUSE_DEFAULT_THRESHOLDS, type Grade, type GradeResult, type GradeThresholds, type TestMeasure } from "./grading";
+import {
+  gradeReading,
+  HOUSE_DEFAULT_THRESHOLDS,
+  type Grade,
+  type GradeResult,
+  type GradeThresholds,
+  type TestMeasure,
+} from "./grading";
 import { findMatchedPairs, findMatchedQuads, type MatchResult } from "./matching";
 
 /** One tube in a batch; `chartNewValue` falls back to the batch's. */
@@ -29,7 +36,7 @@ export interface BatchInput {
   tubes: BatchTube[];
 }
 
-export type BatchGrade = GradeResult & { id: string } | { id: string; grade: "not-graded"; error: string };
+export type BatchGrade = (GradeResult & { id: string }) | { id: string; grade: "not-graded"; error: string };
 
 export interface BatchResult {
   grades: BatchGrade[];
@@ -45,7 +52,15 @@ const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
 /** Grade every tube, then match the tubes that pass on Gm (mean of sections). */
 export function gradeBatch(input: BatchInput): BatchResult {
   const thresholds: GradeThresholds = { ...HOUSE_DEFAULT_THRESHOLDS, ...input.thresholds };
-  const counts: BatchResult["counts"] = { strong: 0, good: 0, fair: 0, weak: 0, "emission-ok": 0, reject: 0, "not-graded": 0 };
+  const counts: BatchResult["counts"] = {
+    strong: 0,
+    good: 0,
+    fair: 0,
+    weak: 0,
+    "emission-ok": 0,
+    reject: 0,
+    "not-graded": 0,
+  };
   const grades: BatchGrade[] = input.tubes.map((t) => {
     const chart = t.chartNewValue ?? input.chartNewValue;
     if (chart === undefined && t.sections.length > 0) {
@@ -54,7 +69,16 @@ export function gradeBatch(input: BatchInput): BatchResult {
     }
     try {
       const g = gradeReading(
-        { measure: input.measure, sections: t.sections, chartNewValue: chart ?? 1, shorts: t.shorts, leakage: t.leakage, gas: t.gas, vacuumLoss: t.vacuumLoss, openHeater: t.openHeater },
+        {
+          measure: input.measure,
+          sections: t.sections,
+          chartNewValue: chart ?? 1,
+          shorts: t.shorts,
+          leakage: t.leakage,
+          gas: t.gas,
+          vacuumLoss: t.vacuumLoss,
+          openHeater: t.openHeater,
+        },
         thresholds,
       );
       counts[g.grade]++;
@@ -66,14 +90,26 @@ export function gradeBatch(input: BatchInput): BatchResult {
   });
 
   if (input.measure !== "gm") {
-    return { grades, counts, pairs: null, quads: null, matchingNote: "Only Gm readings are matched; emission and plate-current runs are graded but not matched." };
+    return {
+      grades,
+      counts,
+      pairs: null,
+      quads: null,
+      matchingNote: "Only Gm readings are matched; emission and plate-current runs are graded but not matched.",
+    };
   }
   const byId = new Map(input.tubes.map((t) => [t.id, t]));
   const passing = grades
-    .filter((g): g is GradeResult & { id: string } => g.grade !== "reject" && g.grade !== "not-graded" && g.grade !== "weak")
+    .filter(
+      (g): g is GradeResult & { id: string } => g.grade !== "reject" && g.grade !== "not-graded" && g.grade !== "weak",
+    )
     .map((g) => byId.get(g.id)!)
     .filter((t) => t.sections.length > 0 && (!input.onPlateCurrent || (t.plateCurrentMa ?? 0) > 0))
-    .map((t) => ({ id: t.id, gm: mean(t.sections), ...(t.plateCurrentMa ? { plateCurrentMa: t.plateCurrentMa } : {}) }));
+    .map((t) => ({
+      id: t.id,
+      gm: mean(t.sections),
+      ...(t.plateCurrentMa ? { plateCurrentMa: t.plateCurrentMa } : {}),
+    }));
   const opts = { tolerancePct: input.tolerancePct, onPlateCurrent: input.onPlateCurrent };
   return {
     grades,

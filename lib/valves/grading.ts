@@ -84,7 +84,8 @@ export class GradingInputError extends Error {
 
 /** Reading ÷ chart "new" value × 100 [CTP]. */
 export function percentOfNew(reading: number, chartNewValue: number): number {
-  if (!Number.isFinite(reading) || reading < 0) throw new GradingInputError(`reading must be a number ≥ 0, got ${reading}`);
+  if (!Number.isFinite(reading) || reading < 0)
+    throw new GradingInputError(`reading must be a number ≥ 0, got ${reading}`);
   if (!Number.isFinite(chartNewValue) || chartNewValue <= 0) {
     throw new GradingInputError(`chart "new" value must be a positive number, got ${chartNewValue}`);
   }
@@ -92,7 +93,10 @@ export function percentOfNew(reading: number, chartNewValue: number): number {
 }
 
 /** The Gm/plate-current band for a % of new, under the given thresholds. */
-export function bandForPercent(pct: number, thresholds: GradeThresholds = HOUSE_DEFAULT_THRESHOLDS): "strong" | "good" | "fair" | "weak" | "reject" {
+export function bandForPercent(
+  pct: number,
+  thresholds: GradeThresholds = HOUSE_DEFAULT_THRESHOLDS,
+): "strong" | "good" | "fair" | "weak" | "reject" {
   if (thresholds.rejectBelowPct !== undefined && pct < thresholds.rejectBelowPct) return "reject";
   if (pct >= thresholds.strongMinPct) return "strong";
   if (pct >= thresholds.goodMinPct) return "good";
@@ -129,26 +133,41 @@ function checkThresholds(t: GradeThresholds): void {
  * rejects the tube regardless of the reading [CTP]. Otherwise the weakest
  * section's % of new picks the band; emission readings only pass or fail.
  */
-export function gradeReading(reading: TesterReading, thresholds: GradeThresholds = HOUSE_DEFAULT_THRESHOLDS): GradeResult {
+export function gradeReading(
+  reading: TesterReading,
+  thresholds: GradeThresholds = HOUSE_DEFAULT_THRESHOLDS,
+): GradeResult {
   checkThresholds(thresholds);
   const hardFails = HARD_FAIL_CHECKS.filter(([key]) => reading[key] === true).map(([, fail]) => fail);
-  const reasons = HARD_FAIL_CHECKS.filter(([key]) => reading[key] === true).map(([, , text]) => `${text}: rejected regardless of reading`);
+  const reasons = HARD_FAIL_CHECKS.filter(([key]) => reading[key] === true).map(
+    ([, , text]) => `${text}: rejected regardless of reading`,
+  );
   if (reading.sections.length === 0 && hardFails.length === 0) {
     throw new GradingInputError("no section readings and no hard failure: nothing to grade");
   }
-  const charts = Array.isArray(reading.chartNewValue) ? reading.chartNewValue : reading.sections.map(() => reading.chartNewValue as number);
+  const charts = Array.isArray(reading.chartNewValue)
+    ? reading.chartNewValue
+    : reading.sections.map(() => reading.chartNewValue as number);
   if (charts.length !== reading.sections.length) {
     throw new GradingInputError(`${reading.sections.length} section readings but ${charts.length} chart values`);
   }
   const percents = reading.sections.map((value, i) => percentOfNew(value, charts[i]));
   const worst = percents.length > 0 ? Math.min(...percents) : null;
-  const result: GradeResult = { measure: reading.measure, grade: "reject", percentOfNew: percents, worstPercentOfNew: worst, hardFails, reasons };
+  const result: GradeResult = {
+    measure: reading.measure,
+    grade: "reject",
+    percentOfNew: percents,
+    worstPercentOfNew: worst,
+    hardFails,
+    reasons,
+  };
 
   if (percents.length >= 2) {
     const spreadPct = sectionSpreadPct(percents);
     const tolerancePct = thresholds.sectionBalanceMaxSpreadPct;
     result.sectionBalance = { spreadPct, tolerancePct, withinTolerance: spreadPct <= tolerancePct };
-    if (spreadPct > tolerancePct) reasons.push(`sections unbalanced: spread ${spreadPct.toFixed(1)} % exceeds ${tolerancePct} %`);
+    if (spreadPct > tolerancePct)
+      reasons.push(`sections unbalanced: spread ${spreadPct.toFixed(1)} % exceeds ${tolerancePct} %`);
   }
   if (hardFails.length > 0 || worst === null) return result;
 
@@ -160,6 +179,8 @@ export function gradeReading(reading: TesterReading, thresholds: GradeThresholds
   }
   result.grade = bandForPercent(worst, thresholds);
   const label = reading.measure === "gm" ? "Gm" : "plate current";
-  reasons.push(`${percents.length > 1 ? "weakest section " : ""}${label} ${worst.toFixed(1)} % of new → ${result.grade}`);
+  reasons.push(
+    `${percents.length > 1 ? "weakest section " : ""}${label} ${worst.toFixed(1)} % of new → ${result.grade}`,
+  );
   return result;
 }

@@ -75,9 +75,7 @@ export interface HazardReport {
  * 872A is a mercury-vapour rectifier like 866A.
  */
 export const EXTRA_TYPE_HAZARDS: Readonly<Record<string, readonly TypeHazard[]>> = {
-  "872A": [
-    { kind: "mercury-vapour", certainty: "known", note: "Mercury-vapour rectifier", source: "MEM, verify" },
-  ],
+  "872A": [{ kind: "mercury-vapour", certainty: "known", note: "Mercury-vapour rectifier", source: "MEM, verify" }],
 };
 
 function notice(kind: HazardKind, certainty: HazardNotice["certainty"], note?: string, source?: string): HazardNotice {
@@ -92,7 +90,11 @@ function notice(kind: HazardKind, certainty: HazardNotice["certainty"], note?: s
  * source...) that our data does not list. Unknown types get the general
  * notices and advice to check the data sheet.
  */
-export function hazardsForType(table: ReferenceTable, designation: string, declared: readonly HazardKind[] = []): HazardReport {
+export function hazardsForType(
+  table: ReferenceTable,
+  designation: string,
+  declared: readonly HazardKind[] = [],
+): HazardReport {
   const n = normaliseDesignation(designation);
   const key = n.ok ? n.value : designation;
   const found = n.ok ? findReferenceType(table, key) : undefined;
@@ -101,7 +103,11 @@ export function hazardsForType(table: ReferenceTable, designation: string, decla
   const notices: HazardNotice[] = [notice("high-voltage", "always")];
   notices.push(
     row?.largeEnvelope
-      ? { ...notice("glass", "always"), caution: `${HAZARD_CAUTIONS.glass.caution} ${LARGE_ENVELOPE_CAUTION}`, note: "Large envelope" }
+      ? {
+          ...notice("glass", "always"),
+          caution: `${HAZARD_CAUTIONS.glass.caution} ${LARGE_ENVELOPE_CAUTION}`,
+          note: "Large envelope",
+        }
       : notice("glass", "always"),
   );
   for (const h of typeHazards) notices.push(notice(h.kind, h.certainty, h.note, h.source));
@@ -115,6 +121,9 @@ export function hazardsForType(table: ReferenceTable, designation: string, decla
     notices,
     ...(known
       ? {}
-      : { advice: "This type is not in our lists, so type-specific hazards are unknown: check its data sheet for beryllium-oxide, radioactive or mercury warnings." }),
+      : {
+          advice:
+            "This type is not in our lists, so type-specific hazards are unknown: check its data sheet for beryllium-oxide, radioactive or mercury warnings.",
+        }),
   };
 }

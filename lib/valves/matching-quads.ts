@@ -71,7 +71,9 @@ export function searchQuads(input: QuadSearchInput, exactLimit = DEFAULT_EXACT_Q
     partStart = i;
     if (part.length < SIZE) continue;
     const bound = Math.min(
-      ...criteria.map((values, c) => countRatioWindows(Float64Array.from(part, (m) => values[m]).sort(), SIZE, ratios[c])),
+      ...criteria.map((values, c) =>
+        countRatioWindows(Float64Array.from(part, (m) => values[m]).sort(), SIZE, ratios[c]),
+      ),
     );
     if (bound === 0) continue;
     // Heuristic first; a small part it cannot prove goes to the exact search,
@@ -135,7 +137,8 @@ function lowestFirstQuads(
     else first = next[p];
     if (next[p] < n) prev[next[p]] = prev[p];
   };
-  const within = (anchor: number, other: number) => (ratio >= 1 ? key[other] <= key[anchor] * ratio : key[other] >= key[anchor] * ratio);
+  const within = (anchor: number, other: number) =>
+    ratio >= 1 ? key[other] <= key[anchor] * ratio : key[other] >= key[anchor] * ratio;
   const sets: number[][] = [];
   const pool: number[] = [];
   while (first < n) {

@@ -81,7 +81,8 @@ function prepare(readings: readonly MatchReading[], options: MatchOptions): Prep
   const { tolerancePct } = options;
   const ipTol = options.plateCurrentTolerancePct ?? tolerancePct;
   for (const tol of [tolerancePct, ipTol]) {
-    if (!Number.isFinite(tol) || tol <= 0 || tol >= 100) throw new MatchingInputError(`tolerance must be above 0 and below 100 %, got ${tol}`);
+    if (!Number.isFinite(tol) || tol <= 0 || tol >= 100)
+      throw new MatchingInputError(`tolerance must be above 0 and below 100 %, got ${tol}`);
   }
   const ids = new Set<string>();
   for (const r of readings) {
@@ -97,12 +98,22 @@ function prepare(readings: readonly MatchReading[], options: MatchOptions): Prep
   return { readings, gm, ip, gmTol: tolerancePct, ipTol };
 }
 
-function shape(p: Prepared, groups: number[][], setSize: 2 | 4, method: MatchResult["method"], upperBound: number, proven: boolean): MatchResult {
+function shape(
+  p: Prepared,
+  groups: number[][],
+  setSize: 2 | 4,
+  method: MatchResult["method"],
+  upperBound: number,
+  proven: boolean,
+): MatchResult {
   const inSet = new Uint8Array(p.readings.length);
   const sets = groups.map((group) => {
     const members = [...group].sort((a, b) => p.gm[a] - p.gm[b]);
     for (const m of members) inSet[m] = 1;
-    const set: MatchedSet = { ids: members.map((m) => p.readings[m].id), gmSpreadPct: spreadPct(members.map((m) => p.gm[m])) };
+    const set: MatchedSet = {
+      ids: members.map((m) => p.readings[m].id),
+      gmSpreadPct: spreadPct(members.map((m) => p.gm[m])),
+    };
     if (p.ip) set.plateCurrentSpreadPct = spreadPct(members.map((m) => (p.ip as Float64Array)[m]));
     return { set, key: p.gm[members[0]] };
   });

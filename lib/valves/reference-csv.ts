@@ -8,17 +8,44 @@ import { z } from "zod";
 import { BASE_FAMILY_LABELS } from "./designation/base-families";
 import { normaliseDesignation } from "./designation/normalise";
 import type { BaseFamily } from "./index-types";
-import { VALVE_KINDS, type NominalCharacteristics, type ReferenceHeater, type ReferenceType, type ValveKind } from "./reference-row";
+import {
+  VALVE_KINDS,
+  type NominalCharacteristics,
+  type ReferenceHeater,
+  type ReferenceType,
+  type ValveKind,
+} from "./reference-row";
 import { parseRowSource } from "./sources";
 
 /** Columns, in file order. */
 export const REFERENCE_CSV_COLUMNS = [
-  "designation", "aliases", "kind", "base", "heater_volts", "heater_amps", "parallel_volts", "parallel_amps", "filament", "cold_cathode",
-  "plate_volts", "grid_volts", "screen_volts", "mu", "gm_umho", "plate_ma", "rp_ohms", "source", "verified_against", "verified_by", "verified_on", "note",
+  "designation",
+  "aliases",
+  "kind",
+  "base",
+  "heater_volts",
+  "heater_amps",
+  "parallel_volts",
+  "parallel_amps",
+  "filament",
+  "cold_cathode",
+  "plate_volts",
+  "grid_volts",
+  "screen_volts",
+  "mu",
+  "gm_umho",
+  "plate_ma",
+  "rp_ohms",
+  "source",
+  "verified_against",
+  "verified_by",
+  "verified_on",
+  "note",
 ] as const;
 
-
-const num = z.union([z.literal(""), z.coerce.number().finite().min(-1000).max(1_000_000)]).transform((v) => (v === "" ? undefined : v));
+const num = z
+  .union([z.literal(""), z.coerce.number().finite().min(-1000).max(1_000_000)])
+  .transform((v) => (v === "" ? undefined : v));
 const yesNo = z.enum(["", "yes", "no"]).transform((v) => v === "yes");
 const text = (max: number) => z.string().trim().max(max);
 
@@ -27,12 +54,31 @@ export const ReferenceCsvLine = z.object({
   designation: z.string().trim().min(1, "is required").max(32),
   aliases: text(400),
   kind: z.enum(VALVE_KINDS as [ValveKind, ...ValveKind[]], { message: "is not a kind we use" }),
-  base: z.enum(Object.keys(BASE_FAMILY_LABELS) as [BaseFamily, ...BaseFamily[]], { message: "is not a base family we use" }),
-  heater_volts: num, heater_amps: num, parallel_volts: num, parallel_amps: num,
-  filament: yesNo, cold_cathode: yesNo,
-  plate_volts: num, grid_volts: num, screen_volts: num, mu: num, gm_umho: num, plate_ma: num, rp_ohms: num,
-  source: z.string().trim().refine((s) => parseRowSource(s) !== undefined, "must be a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM"),
-  verified_against: text(200), verified_by: text(120),
+  base: z.enum(Object.keys(BASE_FAMILY_LABELS) as [BaseFamily, ...BaseFamily[]], {
+    message: "is not a base family we use",
+  }),
+  heater_volts: num,
+  heater_amps: num,
+  parallel_volts: num,
+  parallel_amps: num,
+  filament: yesNo,
+  cold_cathode: yesNo,
+  plate_volts: num,
+  grid_volts: num,
+  screen_volts: num,
+  mu: num,
+  gm_umho: num,
+  plate_ma: num,
+  rp_ohms: num,
+  source: z
+    .string()
+    .trim()
+    .refine(
+      (s) => parseRowSource(s) !== undefined,
+      "must be a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM",
+    ),
+  verified_against: text(200),
+  verified_by: text(120),
   verified_on: z.union([z.literal(""), z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date (YYYY-MM-DD)")]),
   note: text(500),
 });
@@ -55,11 +101,23 @@ const key = (v: string) => {
   return n.ok ? n.value : undefined;
 };
 
-function toRow(l: z.infer<typeof ReferenceCsvLine>, line: number, errors: ReferenceCsvError[]): ReferenceType | undefined {
+function toRow(
+  l: z.infer<typeof ReferenceCsvLine>,
+  line: number,
+  errors: ReferenceCsvError[],
+): ReferenceType | undefined {
   const designation = key(l.designation);
-  if (!designation) return void errors.push({ line, column: "designation", message: `"${l.designation}" cannot be read as a designation` });
+  if (!designation)
+    return void errors.push({
+      line,
+      column: "designation",
+      message: `"${l.designation}" cannot be read as a designation`,
+    });
   const aliases: string[] = [];
-  for (const a of l.aliases.split(";").map((s) => s.trim()).filter(Boolean)) {
+  for (const a of l.aliases
+    .split(";")
+    .map((s) => s.trim())
+    .filter(Boolean)) {
     const k = key(a);
     if (!k) errors.push({ line, column: "aliases", message: `"${a}" cannot be read as a designation` });
     else if (k !== designation && !aliases.includes(k)) aliases.push(k);
@@ -68,9 +126,12 @@ function toRow(l: z.infer<typeof ReferenceCsvLine>, line: number, errors: Refere
   if (l.cold_cathode) heater = null;
   else if (l.heater_volts !== undefined && l.heater_amps !== undefined) {
     heater = {
-      volts: l.heater_volts, amps: l.heater_amps,
+      volts: l.heater_volts,
+      amps: l.heater_amps,
       ...(l.filament ? { filament: true } : {}),
-      ...(l.parallel_volts !== undefined && l.parallel_amps !== undefined ? { tapped: { volts: l.parallel_volts, amps: l.parallel_amps } } : {}),
+      ...(l.parallel_volts !== undefined && l.parallel_amps !== undefined
+        ? { tapped: { volts: l.parallel_volts, amps: l.parallel_amps } }
+        : {}),
     };
   } else if (l.heater_volts !== undefined || l.heater_amps !== undefined) {
     errors.push({ line, column: "heater_amps", message: "give heater volts and amps together, or neither" });
@@ -79,7 +140,8 @@ function toRow(l: z.infer<typeof ReferenceCsvLine>, line: number, errors: Refere
     l.plate_volts === undefined
       ? undefined
       : {
-          kind: "amplifier", plateVolts: l.plate_volts,
+          kind: "amplifier",
+          plateVolts: l.plate_volts,
           ...(l.grid_volts !== undefined ? { gridVolts: l.grid_volts } : {}),
           ...(l.screen_volts !== undefined ? { screenVolts: l.screen_volts } : {}),
           ...(l.mu !== undefined ? { mu: l.mu } : {}),
@@ -88,14 +150,24 @@ function toRow(l: z.infer<typeof ReferenceCsvLine>, line: number, errors: Refere
           ...(l.rp_ohms !== undefined ? { rpOhms: l.rp_ohms } : {}),
         };
   const verified = [l.verified_against, l.verified_by, l.verified_on];
-  if (verified.some(Boolean) && !verified.every(Boolean)) errors.push({ line, column: "verified_against", message: "a check needs the data sheet, who checked and the date" });
+  if (verified.some(Boolean) && !verified.every(Boolean))
+    errors.push({
+      line,
+      column: "verified_against",
+      message: "a check needs the data sheet, who checked and the date",
+    });
   return {
-    designation, aliases, kind: l.kind, base: l.base,
+    designation,
+    aliases,
+    kind: l.kind,
+    base: l.base,
     ...(heater !== undefined ? { heater } : {}),
     ...(characteristics ? { characteristics } : {}),
     hazards: [],
     source: l.source,
-    ...(verified.every(Boolean) ? { verification: { against: l.verified_against, by: l.verified_by, on: l.verified_on } } : {}),
+    ...(verified.every(Boolean)
+      ? { verification: { against: l.verified_against, by: l.verified_by, on: l.verified_on } }
+      : {}),
     ...(l.note ? { note: l.note } : {}),
   };
 }
@@ -107,19 +179,32 @@ function toRow(l: z.infer<typeof ReferenceCsvLine>, line: number, errors: Refere
  * alias may appear once in a file. `columns` lists the header, so that an
  * import can keep what a file leaves out.
  */
-export function parseReferenceCsv(csv: string, maxRows = 5000): { rows: ReferenceCsvRow[]; errors: ReferenceCsvError[]; columns: string[] } {
+export function parseReferenceCsv(
+  csv: string,
+  maxRows = 5000,
+): { rows: ReferenceCsvRow[]; errors: ReferenceCsvError[]; columns: string[] } {
   const errors: ReferenceCsvError[] = [];
   let records: string[][];
   try {
     records = parse(csv, { bom: true, skip_empty_lines: true, relax_column_count: true, trim: true }) as string[][];
   } catch (e) {
-    return { rows: [], columns: [], errors: [{ line: (e as { lines?: number }).lines ?? 1, message: `Not readable as CSV: ${(e as Error).message.slice(0, 200)}` }] };
+    return {
+      rows: [],
+      columns: [],
+      errors: [
+        {
+          line: (e as { lines?: number }).lines ?? 1,
+          message: `Not readable as CSV: ${(e as Error).message.slice(0, 200)}`,
+        },
+      ],
+    };
   }
   if (records.length === 0) return { rows: [], columns: [], errors: [{ line: 1, message: "The file is empty" }] };
   const header = records[0]!.map((h) => h.toLowerCase());
   const unknown = header.filter((h) => !(REFERENCE_CSV_COLUMNS as readonly string[]).includes(h));
   if (unknown.length) errors.push({ line: 1, message: `Unknown column(s): ${unknown.join(", ")}` });
-  for (const need of ["designation", "kind", "base", "source"]) if (!header.includes(need)) errors.push({ line: 1, column: need, message: "column is missing" });
+  for (const need of ["designation", "kind", "base", "source"])
+    if (!header.includes(need)) errors.push({ line: 1, column: need, message: "column is missing" });
   if (records.length - 1 > maxRows) errors.push({ line: 1, message: `At most ${maxRows} rows per file` });
   if (errors.length) return { rows: [], errors, columns: header };
   const rows: ReferenceCsvRow[] = [];
@@ -129,14 +214,16 @@ export function parseReferenceCsv(csv: string, maxRows = 5000): { rows: Referenc
     const fields = Object.fromEntries(REFERENCE_CSV_COLUMNS.map((c) => [c, cells[header.indexOf(c)] ?? ""]));
     const parsed = ReferenceCsvLine.safeParse(fields);
     if (!parsed.success) {
-      for (const issue of parsed.error.issues) errors.push({ line, column: String(issue.path[0] ?? ""), message: issue.message });
+      for (const issue of parsed.error.issues)
+        errors.push({ line, column: String(issue.path[0] ?? ""), message: issue.message });
       return;
     }
     const row = toRow(parsed.data, line, errors);
     if (!row) return;
     for (const name of [row.designation, ...row.aliases]) {
       const prev = seen.get(name);
-      if (prev !== undefined) errors.push({ line, column: "designation", message: `${name} already appears on line ${prev}` });
+      if (prev !== undefined)
+        errors.push({ line, column: "designation", message: `${name} already appears on line ${prev}` });
       else seen.set(name, line);
     }
     rows.push({ line, row });
@@ -146,7 +233,7 @@ export function parseReferenceCsv(csv: string, maxRows = 5000): { rows: Referenc
 
 const csvCell = (v: string | number | undefined | null): string => {
   const s = v === undefined || v === null ? "" : String(v);
-  return /[",\n\r]/.test(s) || /^[=+\-@]/.test(s) && Number.isNaN(Number(s)) ? `"${s.replace(/"/g, '""')}"` : s;
+  return /[",\n\r]/.test(s) || (/^[=+\-@]/.test(s) && Number.isNaN(Number(s))) ? `"${s.replace(/"/g, '""')}"` : s;
 };
 
 /** The rows as CSV with REFERENCE_CSV_COLUMNS; parseReferenceCsv reads it back to the same rows (hazards aside). */
@@ -155,11 +242,34 @@ export function referenceCsv(rows: readonly ReferenceType[]): string {
   for (const r of rows) {
     const a = r.characteristics?.kind === "amplifier" ? r.characteristics : undefined;
     const v = r.verification;
-    lines.push([
-      r.designation, r.aliases.join(";"), r.kind, r.base, r.heater?.volts, r.heater?.amps, r.heater?.tapped?.volts, r.heater?.tapped?.amps,
-      r.heater?.filament ? "yes" : "", r.heater === null ? "yes" : "",
-      a?.plateVolts, a?.gridVolts, a?.screenVolts, a?.mu, a?.gmMicromho, a?.plateCurrentMa, a?.rpOhms, r.source, v?.against, v?.by, v?.on, r.note,
-    ].map(csvCell).join(","));
+    lines.push(
+      [
+        r.designation,
+        r.aliases.join(";"),
+        r.kind,
+        r.base,
+        r.heater?.volts,
+        r.heater?.amps,
+        r.heater?.tapped?.volts,
+        r.heater?.tapped?.amps,
+        r.heater?.filament ? "yes" : "",
+        r.heater === null ? "yes" : "",
+        a?.plateVolts,
+        a?.gridVolts,
+        a?.screenVolts,
+        a?.mu,
+        a?.gmMicromho,
+        a?.plateCurrentMa,
+        a?.rpOhms,
+        r.source,
+        v?.against,
+        v?.by,
+        v?.on,
+        r.note,
+      ]
+        .map(csvCell)
+        .join(","),
+    );
   }
   return `${lines.join("\n")}\n`;
 }

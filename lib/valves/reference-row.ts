@@ -95,10 +95,27 @@ export interface ReferenceType {
   readonly note?: string;
 }
 
-
 /** Kinds a row may have (ValveKind), for validation. */
 export const VALVE_KINDS: readonly ValveKind[] = [
-  "triode", "dual-triode", "power-triode", "dual-power-triode", "duo-diode-triode", "diode-duo-diode-triode", "pentode",
-  "remote-cutoff-pentode", "power-pentode", "beam-tetrode", "triode-pentode", "pentagrid-converter", "triode-heptode", "triode-hexode",
-  "duo-diode-pentode", "damper-diode", "twin-diode", "full-wave-rectifier", "half-wave-rectifier", "voltage-regulator", "tuning-indicator",
+  "triode",
+  "dual-triode",
+  "power-triode",
+  "dual-power-triode",
+  "duo-diode-triode",
+  "diode-duo-diode-triode",
+  "pentode",
+  "remote-cutoff-pentode",
+  "power-pentode",
+  "beam-tetrode",
+  "triode-pentode",
+  "pentagrid-converter",
+  "triode-heptode",
+  "triode-hexode",
+  "duo-diode-pentode",
+  "damper-diode",
+  "twin-diode",
+  "full-wave-rectifier",
+  "half-wave-rectifier",
+  "voltage-regulator",
+  "tuning-indicator",
 ];

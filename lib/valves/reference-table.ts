@@ -39,7 +39,10 @@ export function referenceTable(rows: readonly ReferenceType[], revision: string)
  * normalisation ("ecc 83" -> 12AX7 row), then, for US numbers, by the
  * suffix-free stem ("6L6GB" -> the 6L6 row). Reports how it matched.
  */
-export function findReferenceType(table: ReferenceTable, designation: string): { row: ReferenceType; match: ReferenceMatch } | undefined {
+export function findReferenceType(
+  table: ReferenceTable,
+  designation: string,
+): { row: ReferenceType; match: ReferenceMatch } | undefined {
   const n = normaliseDesignation(designation);
   if (!n.ok) return undefined;
   const direct = table.byName.get(n.value);

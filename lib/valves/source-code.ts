@@ -18,8 +18,7 @@ export interface MakerRegistryEntry {
 
 /** Result of checking the printed form of a source code. */
 export type SourceCodeFormat =
-  | { ok: true; code: string; prefix?: "EIA" | "RMA"; dateCode?: string }
-  | { ok: false; input: string; reason: string };
+  { ok: true; code: string; prefix?: "EIA" | "RMA"; dateCode?: string } | { ok: false; input: string; reason: string };
 
 /** Result of looking a source code up in the registry. */
 export type SourceCodeLookup =
@@ -142,7 +141,8 @@ export function parseMakerRegistryCsv(text: string): { rows: MakerRegistryEntry[
   const { records, errors: syntaxErrors } = parseCsvRecords(text.replace(/^\uFEFF/, ""));
   errors.push(...syntaxErrors);
   const header = records.shift();
-  if (!header) return { rows, errors: [...errors, { line: 1, message: "the file is empty: a header row is required" }] };
+  if (!header)
+    return { rows, errors: [...errors, { line: 1, message: "the file is empty: a header row is required" }] };
 
   const names = header.fields.map((name) => name.trim().toLowerCase());
   const missing = REGISTRY_COLUMNS.filter((column) => !names.includes(column));
@@ -165,7 +165,10 @@ export function parseMakerRegistryCsv(text: string): { rows: MakerRegistryEntry[
     }
     const format = validateSourceCodeFormat(parsed.data.code);
     if (!format.ok || format.dateCode) {
-      errors.push({ line: record.line, message: `code "${parsed.data.code}": ${format.ok ? "remove the date part" : format.reason}` });
+      errors.push({
+        line: record.line,
+        message: `code "${parsed.data.code}": ${format.ok ? "remove the date part" : format.reason}`,
+      });
       continue;
     }
     const earlier = seen.get(format.code);
@@ -244,7 +247,8 @@ function parseCsvRecords(text: string): { records: { line: number; fields: strin
   // records containing a syntax error are dropped so they never import half-read
   const badLines = new Set(errors.map((error) => error.line));
   const unique = errors.filter(
-    (error, index) => errors.findIndex((other) => other.line === error.line && other.message === error.message) === index,
+    (error, index) =>
+      errors.findIndex((other) => other.line === error.line && other.message === error.message) === index,
   );
   return { records: records.filter((record, index) => index === 0 || !badLines.has(record.line)), errors: unique };
 }

@@ -27,7 +27,8 @@ export const SOURCES: readonly SourceEntry[] = [
   {
     tag: "MIL-E-1",
     title: "US military electron-tube specification",
-    publication: "MIL-E-1, Electron Tubes, general specification and its individual type sheets (US Department of Defense), editions 1950s–1970s.",
+    publication:
+      "MIL-E-1, Electron Tubes, general specification and its individual type sheets (US Department of Defense), editions 1950s–1970s.",
     kind: "publication",
   },
   {
@@ -40,13 +41,15 @@ export const SOURCES: readonly SourceEntry[] = [
   {
     tag: "PE",
     title: "European designation scheme",
-    publication: "The joint European valve designation system of 1934, continued as the Pro Electron type designation scheme (Pro Electron, Brussels, from 1966).",
+    publication:
+      "The joint European valve designation system of 1934, continued as the Pro Electron type designation scheme (Pro Electron, Brussels, from 1966).",
     kind: "publication",
   },
   {
     tag: "LS53",
     title: "Radio designer's handbook, 4th edition",
-    publication: "F. Langford-Smith (ed.), radio designer's handbook, 4th edition, 1953 (the title begins with a maker's name, omitted here); chapter on valve designations and characteristics.",
+    publication:
+      "F. Langford-Smith (ed.), radio designer's handbook, 4th edition, 1953 (the title begins with a maker's name, omitted here); chapter on valve designations and characteristics.",
     kind: "publication",
   },
   {
@@ -64,7 +67,8 @@ export const SOURCES: readonly SourceEntry[] = [
   {
     tag: "CTP",
     title: "Common trade practice",
-    publication: "Common practice among dealers and service technicians; a rule of thumb with no single published source.",
+    publication:
+      "Common practice among dealers and service technicians; a rule of thumb with no single published source.",
     kind: "common-practice",
   },
   {
@@ -76,7 +80,8 @@ export const SOURCES: readonly SourceEntry[] = [
   {
     tag: "MEM",
     title: "From memory",
-    publication: "Recalled from memory by the compiler; verify against the data sheet named by the row's other tag before relying on it.",
+    publication:
+      "Recalled from memory by the compiler; verify against the data sheet named by the row's other tag before relying on it.",
     kind: "from-memory",
   },
 ];
@@ -121,6 +126,11 @@ export function describeRowSource(source: string): string {
   const p = parseRowSource(source);
   if (!p) return source;
   const where = p.tags.length ? p.tags.join(" / ") : "no publication named";
-  const how = { checked: "checked against a published data sheet", memory: "from memory (verify)", "memory-low": "from memory, low confidence", stated: "as published" }[p.mark];
+  const how = {
+    checked: "checked against a published data sheet",
+    memory: "from memory (verify)",
+    "memory-low": "from memory, low confidence",
+    stated: "as published",
+  }[p.mark];
   return `${where}, ${how}`;
 }

@@ -43,20 +43,44 @@ export class SocketBidClient implements BidSender {
 
   static async open(port: number, saleLotId: string, cookies: string[]): Promise<SocketBidClient> {
     const c = new SocketBidClient(saleLotId);
-    c.sockets = await Promise.all(cookies.map((cookie) => new Promise<Socket>((resolve, reject) => {
-      const s = connect(`http://127.0.0.1:${port}`, { path: "/socket.io", transports: ["websocket"], forceNew: true, extraHeaders: { cookie } });
-      s.once("session.ready", () => resolve(s));
-      s.once("connect_error", reject);
-    })));
+    c.sockets = await Promise.all(
+      cookies.map(
+        (cookie) =>
+          new Promise<Socket>((resolve, reject) => {
+            const s = connect(`http://127.0.0.1:${port}`, {
+              path: "/socket.io",
+              transports: ["websocket"],
+              forceNew: true,
+              extraHeaders: { cookie },
+            });
+            s.once("session.ready", () => resolve(s));
+            s.once("connect_error", reject);
+          }),
+      ),
+    );
     return c;
   }
 
   async bid(dealer: number, maxCents: number, key: string, timeoutMs = 30_000): Promise<BidAnswer> {
     try {
-      const ack = (await this.sockets[dealer]!.timeout(timeoutMs).emitWithAck("bid.place", { saleLotId: this.saleLotId, maxCents, idempotencyKey: key })) as Record<string, any>;
-      if (ack.ok) return { kind: "accepted", seq: Number(ack.result.seq), minimumCents: Number(ack.result.live?.minimumCents ?? 0), replayed: Boolean(ack.result.replayed) };
+      const ack = (await this.sockets[dealer]!.timeout(timeoutMs).emitWithAck("bid.place", {
+        saleLotId: this.saleLotId,
+        maxCents,
+        idempotencyKey: key,
+      })) as Record<string, any>;
+      if (ack.ok)
+        return {
+          kind: "accepted",
+          seq: Number(ack.result.seq),
+          minimumCents: Number(ack.result.live?.minimumCents ?? 0),
+          replayed: Boolean(ack.result.replayed),
+        };
       if (ack.error?.code === "conflict" && ack.error.details?.reason) {
-        return { kind: "refused", reason: String(ack.error.details.reason), minimumCents: Number(ack.error.details.minimumCents ?? 0) };
+        return {
+          kind: "refused",
+          reason: String(ack.error.details.reason),
+          minimumCents: Number(ack.error.details.minimumCents ?? 0),
+        };
       }
       return { kind: "error", status: 0, message: String(ack.error?.code ?? "unexpected answer") };
     } catch (e) {
@@ -72,7 +96,12 @@ export class SocketBidClient implements BidSender {
 /** A keep-alive HTTP client for the bid route, one cookie per dealer. */
 export class BidClient implements BidSender {
   private agent: http.Agent;
-  constructor(private port: number, private saleLotId: string, private cookies: string[], maxSockets: number) {
+  constructor(
+    private port: number,
+    private saleLotId: string,
+    private cookies: string[],
+    maxSockets: number,
+  ) {
     this.agent = new http.Agent({ keepAlive: true, maxSockets, maxFreeSockets: maxSockets });
   }
 
@@ -80,25 +109,51 @@ export class BidClient implements BidSender {
   bid(dealer: number, maxCents: number, key: string, timeoutMs = 30_000): Promise<BidAnswer> {
     const body = JSON.stringify({ maxCents, idempotencyKey: key });
     return new Promise((resolve) => {
-      const req = http.request({
-        host: "127.0.0.1", port: this.port, method: "POST", path: `/api/sale-lots/${this.saleLotId}/bids`, agent: this.agent,
-        headers: { cookie: this.cookies[dealer]!, "content-type": "application/json", "content-length": Buffer.byteLength(body), accept: "application/json" },
-        timeout: timeoutMs,
-      }, (res) => {
-        const chunks: Buffer[] = [];
-        res.on("data", (c: Buffer) => chunks.push(c));
-        res.on("end", () => {
-          const status = res.statusCode ?? 0;
-          let j: Record<string, any>;
-          try { j = JSON.parse(Buffer.concat(chunks).toString("utf8")) as Record<string, any>; } catch { return resolve({ kind: "error", status, message: "not json" }); }
-          if (status === 200 && j.accepted === true) return resolve({ kind: "accepted", seq: Number(j.seq), minimumCents: Number(j.live?.minimumCents ?? 0), replayed: Boolean(j.replayed) });
-          if (status === 409 && j.error?.details?.reason) {
-            return resolve({ kind: "refused", reason: String(j.error.details.reason), minimumCents: Number(j.error.details.minimumCents ?? j.error.details.live?.minimumCents ?? 0) });
-          }
-          resolve({ kind: "error", status, message: String(j.error?.code ?? "unexpected answer") });
-        });
-        res.on("error", (e) => resolve({ kind: "error", status: 0, message: e.message }));
-      });
+      const req = http.request(
+        {
+          host: "127.0.0.1",
+          port: this.port,
+          method: "POST",
+          path: `/api/sale-lots/${this.saleLotId}/bids`,
+          agent: this.agent,
+          headers: {
+            cookie: this.cookies[dealer]!,
+            "content-type": "application/json",
+            "content-length": Buffer.byteLength(body),
+            accept: "application/json",
+          },
+          timeout: timeoutMs,
+        },
+        (res) => {
+          const chunks: Buffer[] = [];
+          res.on("data", (c: Buffer) => chunks.push(c));
+          res.on("end", () => {
+            const status = res.statusCode ?? 0;
+            let j: Record<string, any>;
+            try {
+              j = JSON.parse(Buffer.concat(chunks).toString("utf8")) as Record<string, any>;
+            } catch {
+              return resolve({ kind: "error", status, message: "not json" });
+            }
+            if (status === 200 && j.accepted === true)
+              return resolve({
+                kind: "accepted",
+                seq: Number(j.seq),
+                minimumCents: Number(j.live?.minimumCents ?? 0),
+                replayed: Boolean(j.replayed),
+              });
+            if (status === 409 && j.error?.details?.reason) {
+              return resolve({
+                kind: "refused",
+                reason: String(j.error.details.reason),
+                minimumCents: Number(j.error.details.minimumCents ?? j.error.details.live?.minimumCents ?? 0),
+              });
+            }
+            resolve({ kind: "error", status, message: String(j.error?.code ?? "unexpected answer") });
+          });
+          res.on("error", (e) => resolve({ kind: "error", status: 0, message: e.message }));
+        },
+      );
       req.on("timeout", () => req.destroy(new Error("timeout")));
       req.on("error", (e) => resolve({ kind: "error", status: 0, message: e.message }));
       req.end(body);
@@ -131,7 +186,14 @@ function record(ledger: Ledger, phase: string, dealer: number, key: string, sent
  * dealers do when they bid in earnest), with a fresh key, as fast as answers
  * come back, until the deadline. Returns when every request has been answered.
  */
-export async function saturate(client: BidSender, ledger: Ledger, dealers: number, seconds: number, phase = "saturation", abort: () => boolean = () => false): Promise<{ elapsedMs: number; sent: number }> {
+export async function saturate(
+  client: BidSender,
+  ledger: Ledger,
+  dealers: number,
+  seconds: number,
+  phase = "saturation",
+  abort: () => boolean = () => false,
+): Promise<{ elapsedMs: number; sent: number }> {
   const start = now();
   const deadline = start + seconds * 1000;
   let sent = 0;
@@ -163,7 +225,15 @@ export async function saturate(client: BidSender, ledger: Ledger, dealers: numbe
  * the minimum and accepted (outbid by proxy) instead of refused. Records how
  * late each send was against its schedule.
  */
-export async function openLoop(client: BidSender, ledger: Ledger, dealers: number, seconds: number, rate: number, incrementCents: number, abort: () => boolean = () => false): Promise<{ sent: number; sendLagMs: number[] }> {
+export async function openLoop(
+  client: BidSender,
+  ledger: Ledger,
+  dealers: number,
+  seconds: number,
+  rate: number,
+  incrementCents: number,
+  abort: () => boolean = () => false,
+): Promise<{ sent: number; sendLagMs: number[] }> {
   const interval = 1000 / rate;
   const total = Math.max(1, Math.round(seconds * rate));
   const start = now() + 20;

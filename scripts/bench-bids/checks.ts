@@ -11,7 +11,8 @@ export function percentile(values: number[], p: number): number {
   return sorted[rank - 1]!;
 }
 
-export const round = (x: number, digits = 1) => (Number.isFinite(x) ? Math.round(x * 10 ** digits) / 10 ** digits : null);
+export const round = (x: number, digits = 1) =>
+  Number.isFinite(x) ? Math.round(x * 10 ** digits) / 10 ** digits : null;
 
 export type Audit = {
   /** Accepted bids missing from some watcher or from the table (each bid once). */
@@ -36,9 +37,16 @@ export type Audit = {
 };
 
 /** Cross-check every accepted answer against the watchers' receipts and the bids table. */
-export function audit(accepted: Accepted[], receipts: Receipts, watchers: number, table: { rows: BidRow[]; lotSeq: number; dupKeys: number }): Audit {
+export function audit(
+  accepted: Accepted[],
+  receipts: Receipts,
+  watchers: number,
+  table: { rows: BidRow[]; lotSeq: number; dupKeys: number },
+): Audit {
   const examples: string[] = [];
-  const note = (m: string) => { if (examples.length < 10) examples.push(m); };
+  const note = (m: string) => {
+    if (examples.length < 10) examples.push(m);
+  };
   const got = (seq: number) => receipts.counts[seq - receipts.from] ?? 0;
 
   const bySeq = new Map<number, BidRow>(table.rows.map((r) => [r.seq, r]));
@@ -51,12 +59,22 @@ export function audit(accepted: Accepted[], receipts: Receipts, watchers: number
     const notBroadcast = got(a.seq) < watchers;
     const row = bySeq.get(a.seq);
     const notStored = !row || row.idempotency_key !== a.key;
-    if (notBroadcast) { lostBroadcast++; note(`seq ${a.seq} reached ${got(a.seq)} of ${watchers} watchers`); }
-    if (notStored) { lostTable++; note(`seq ${a.seq} (key ${a.key}) is not in the bids table`); }
+    if (notBroadcast) {
+      lostBroadcast++;
+      note(`seq ${a.seq} reached ${got(a.seq)} of ${watchers} watchers`);
+    }
+    if (notStored) {
+      lostTable++;
+      note(`seq ${a.seq} (key ${a.key}) is not in the bids table`);
+    }
     if (notBroadcast || notStored) lost++;
   }
   let dupAnswers = 0;
-  for (const [seq, n] of answeredSeqs) if (n > 1) { dupAnswers += n - 1; note(`seq ${seq} answered as accepted ${n} times`); }
+  for (const [seq, n] of answeredSeqs)
+    if (n > 1) {
+      dupAnswers += n - 1;
+      note(`seq ${seq} answered as accepted ${n} times`);
+    }
   const dupBroadcast = receipts.dupes.reduce((s, n) => s + n, 0);
   if (dupBroadcast) note(`${dupBroadcast} extra broadcast copies`);
 
@@ -64,15 +82,30 @@ export function audit(accepted: Accepted[], receipts: Receipts, watchers: number
   const maxSeq = table.rows.length ? table.rows[table.rows.length - 1]!.seq : 0;
   for (let s = 1, i = 0; s <= maxSeq; s++) {
     if (table.rows[i]?.seq === s) i++;
-    else { gaps++; note(`seq ${s} missing from the bids table`); }
+    else {
+      gaps++;
+      note(`seq ${s} missing from the bids table`);
+    }
   }
   if (table.lotSeq !== maxSeq) note(`sale_lots.seq is ${table.lotSeq} but the highest bid seq is ${maxSeq}`);
 
   let unanswered = 0;
   for (const r of table.rows) if (!answeredSeqs.has(r.seq)) unanswered++;
   let phantom = 0;
-  for (let i = 0; i < receipts.counts.length; i++) if (receipts.counts[i]! > 0 && !bySeq.has(receipts.from + i)) phantom++;
+  for (let i = 0; i < receipts.counts.length; i++)
+    if (receipts.counts[i]! > 0 && !bySeq.has(receipts.from + i)) phantom++;
   if (phantom) note(`${phantom} broadcast seqs have no bids row`);
 
-  return { lost, lostBroadcast, lostTable, dupBroadcast, dupAnswers, dupKeys: table.dupKeys, gaps: gaps + (table.lotSeq !== maxSeq ? 1 : 0), unanswered, phantom, examples };
+  return {
+    lost,
+    lostBroadcast,
+    lostTable,
+    dupBroadcast,
+    dupAnswers,
+    dupKeys: table.dupKeys,
+    gaps: gaps + (table.lotSeq !== maxSeq ? 1 : 0),
+    unanswered,
+    phantom,
+    examples,
+  };
 }

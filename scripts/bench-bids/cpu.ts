@@ -75,22 +75,44 @@ export class CpuMeter {
   private timer: NodeJS.Timeout;
   pids: Partial<Record<"app" | "watchers" | "pgbench", number>> = {};
 
-  constructor(private dataDir: string, private database: string) {
+  constructor(
+    private dataDir: string,
+    private database: string,
+  ) {
     this.timer = setInterval(() => this.sample(), 500);
     this.timer.unref();
   }
 
   private sample(): void {
-    const own: [Component, number | undefined][] = [["app", this.pids.app], ["watchers", this.pids.watchers], ["pgbench", this.pids.pgbench]];
-    for (const [component, pid] of own) if (pid) { const secs = procSeconds(pid); if (secs) this.last.set(pid, { component, secs }); }
-    for (const pid of postgresPids(this.dataDir, this.database)) { const secs = procSeconds(pid); if (secs) this.last.set(pid, { component: "postgres", secs }); }
+    const own: [Component, number | undefined][] = [
+      ["app", this.pids.app],
+      ["watchers", this.pids.watchers],
+      ["pgbench", this.pids.pgbench],
+    ];
+    for (const [component, pid] of own)
+      if (pid) {
+        const secs = procSeconds(pid);
+        if (secs) this.last.set(pid, { component, secs });
+      }
+    for (const pid of postgresPids(this.dataDir, this.database)) {
+      const secs = procSeconds(pid);
+      if (secs) this.last.set(pid, { component: "postgres", secs });
+    }
   }
 
   /** Totals so far (taken now). Compare two snapshots over one phase. */
   snapshot(): CpuSnapshot {
     this.sample();
     const u = process.cpuUsage();
-    const out: CpuSnapshot = { at: Date.now(), app: 0, postgres: 0, watchers: 0, bench: (u.user + u.system) / 1e6, pgbench: 0, machine: machineBusySeconds() };
+    const out: CpuSnapshot = {
+      at: Date.now(),
+      app: 0,
+      postgres: 0,
+      watchers: 0,
+      bench: (u.user + u.system) / 1e6,
+      pgbench: 0,
+      machine: machineBusySeconds(),
+    };
     for (const { component, secs } of this.last.values()) out[component] += secs;
     return out;
   }

@@ -31,21 +31,52 @@ export function bidScript(saleLotId: string, bidderId: string): string {
 }
 
 /** Run pgbench with `clients` connections for `seconds` (no vacuum, simple protocol like the app's); returns its TPS. */
-export function runPgbench(opts: { database: string; saleLotId: string; bidderId: string; clients: number; seconds: number; dir: string; onStart?: (pid: number) => void }): Promise<{ tps: number; transactions: number; output: string }> {
+export function runPgbench(opts: {
+  database: string;
+  saleLotId: string;
+  bidderId: string;
+  clients: number;
+  seconds: number;
+  dir: string;
+  onStart?: (pid: number) => void;
+}): Promise<{ tps: number; transactions: number; output: string }> {
   const file = path.join(opts.dir, "bid.sql");
   fs.writeFileSync(file, bidScript(opts.saleLotId, opts.bidderId));
   const args = [
-    "-n", "-M", "simple", "-c", String(opts.clients), "-j", String(Math.min(2, opts.clients)), "-T", String(opts.seconds), "-f", file,
-    "-h", CLUSTER.host, "-p", String(CLUSTER.port), "-U", CLUSTER.user, opts.database,
+    "-n",
+    "-M",
+    "simple",
+    "-c",
+    String(opts.clients),
+    "-j",
+    String(Math.min(2, opts.clients)),
+    "-T",
+    String(opts.seconds),
+    "-f",
+    file,
+    "-h",
+    CLUSTER.host,
+    "-p",
+    String(CLUSTER.port),
+    "-U",
+    CLUSTER.user,
+    opts.database,
   ];
   return new Promise((resolve, reject) => {
     const child = spawn(PGBENCH, args, { stdio: ["ignore", "pipe", "pipe"] });
     if (child.pid) opts.onStart?.(child.pid);
     let out = "";
-    child.stdout.on("data", (d: Buffer) => { out += d.toString(); });
-    child.stderr.on("data", (d: Buffer) => { out += d.toString(); });
+    child.stdout.on("data", (d: Buffer) => {
+      out += d.toString();
+    });
+    child.stderr.on("data", (d: Buffer) => {
+      out += d.toString();
+    });
     const timer = setTimeout(() => child.kill("SIGKILL"), (opts.seconds + 60) * 1000);
-    child.on("error", (e) => { clearTimeout(timer); reject(e); });
+    child.on("error", (e) => {
+      clearTimeout(timer);
+      reject(e);
+    });
     child.on("exit", (code) => {
       clearTimeout(timer);
       const tps = /tps = ([\d.]+) \(without initial connection time\)/.exec(out);

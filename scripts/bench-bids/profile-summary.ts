@@ -39,7 +39,12 @@ export function summarise(file: string, top = 25, window?: Window): string {
   for (const n of prof.nodes) for (const c of n.children ?? []) parent.set(c, n.id);
   const key = (n: Node) => {
     const { functionName, url, lineNumber } = n.callFrame;
-    const where = url ? `${url.replace(/^file:\/\//, "").replace(/^.*node_modules\//, "nm/").replace(/^\/work\/[^/]+\//, "")}:${lineNumber + 1}` : "";
+    const where = url
+      ? `${url
+          .replace(/^file:\/\//, "")
+          .replace(/^.*node_modules\//, "nm/")
+          .replace(/^\/work\/[^/]+\//, "")}:${lineNumber + 1}`
+      : "";
     return `${functionName || "(anonymous)"} ${where}`.trim();
   };
   const self = new Map<number, number>();
@@ -52,7 +57,9 @@ export function summarise(file: string, top = 25, window?: Window): string {
     if (us > 0) self.set(id, (self.get(id) ?? 0) + us);
   });
   const total = [...self.values()].reduce((a, b) => a + b, 0);
-  const idle = [...self.entries()].filter(([id]) => byId.get(id)!.callFrame.functionName === "(idle)").reduce((a, [, v]) => a + v, 0);
+  const idle = [...self.entries()]
+    .filter(([id]) => byId.get(id)!.callFrame.functionName === "(idle)")
+    .reduce((a, [, v]) => a + v, 0);
   const fn = new Map<string, number>();
   const pkg = new Map<string, number>();
   const incl = new Map<string, number>();
@@ -68,20 +75,35 @@ export function summarise(file: string, top = 25, window?: Window): string {
     for (let cur: number | undefined = id; cur !== undefined; cur = parent.get(cur)) {
       const f = byId.get(cur)!.callFrame;
       const fo = origin(f.url, f.functionName);
-      if (f.url && !fo.startsWith("node:") && !fo.startsWith("(")) { owner = fo; break; }
+      if (f.url && !fo.startsWith("node:") && !fo.startsWith("(")) {
+        owner = fo;
+        break;
+      }
     }
     lib.set(owner, (lib.get(owner) ?? 0) + us);
     const seen = new Set<string>();
     for (let cur: number | undefined = id; cur !== undefined; cur = parent.get(cur)) {
       const ck = key(byId.get(cur)!);
-      if (seen.has(ck) || ck.startsWith("(root)") || ck.startsWith("(idle)") || ck.startsWith("(program)") || ck.startsWith("(garbage")) continue;
+      if (
+        seen.has(ck) ||
+        ck.startsWith("(root)") ||
+        ck.startsWith("(idle)") ||
+        ck.startsWith("(program)") ||
+        ck.startsWith("(garbage")
+      )
+        continue;
       seen.add(ck);
       incl.set(ck, (incl.get(ck) ?? 0) + us);
     }
   }
   const busy = total - idle;
-  const line = (k: string, us: number) => `${(us / 1000).toFixed(0).padStart(8)} ms ${((100 * us) / Math.max(1, busy)).toFixed(1).padStart(5)} %  ${k}`;
-  const sorted = (m: Map<string, number>, n = top) => [...m.entries()].filter(([k]) => !k.startsWith("(idle)")).sort((a, b) => b[1] - a[1]).slice(0, n);
+  const line = (k: string, us: number) =>
+    `${(us / 1000).toFixed(0).padStart(8)} ms ${((100 * us) / Math.max(1, busy)).toFixed(1).padStart(5)} %  ${k}`;
+  const sorted = (m: Map<string, number>, n = top) =>
+    [...m.entries()]
+      .filter(([k]) => !k.startsWith("(idle)"))
+      .sort((a, b) => b[1] - a[1])
+      .slice(0, n);
   return [
     `profile ${path.basename(file)}${window ? ` during ${window.label}` : ""}: ${(total / 1000).toFixed(0)} ms sampled, ${(busy / 1000).toFixed(0)} ms busy (${((100 * busy) / Math.max(1, total)).toFixed(0)} % of one core); percentages are of busy time`,
     "self time by origin:",
@@ -97,6 +119,9 @@ export function summarise(file: string, top = 25, window?: Window): string {
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
   const file = process.argv[2];
-  if (!file) { console.error("usage: profile-summary.ts <file.cpuprofile> [top]"); process.exit(2); }
+  if (!file) {
+    console.error("usage: profile-summary.ts <file.cpuprofile> [top]");
+    process.exit(2);
+  }
   console.log(summarise(file, Number(process.argv[3] ?? 25)));
 }

@@ -27,7 +27,12 @@ export async function ensureBuild(cwd: string, log: (m: string) => void): Promis
   const id = path.join(cwd, ".next", "BUILD_ID");
   if (fs.existsSync(id)) return;
   log("no production build in .next: running `npx next build` (takes ~30 s)");
-  const r = spawnSync("npx", ["next", "build"], { cwd, encoding: "utf8", timeout: 600_000, maxBuffer: 64 * 1024 * 1024 });
+  const r = spawnSync("npx", ["next", "build"], {
+    cwd,
+    encoding: "utf8",
+    timeout: 600_000,
+    maxBuffer: 64 * 1024 * 1024,
+  });
   const out = `${r.stdout ?? ""}${r.stderr ?? ""}`;
   if (r.status === 0) return;
   if (/Another next build process is already running/.test(out)) {
@@ -43,7 +48,10 @@ export async function ensureBuild(cwd: string, log: (m: string) => void): Promis
 }
 
 export type AppServer = {
-  port: number; child: ChildProcess; logFile: string; stop: () => Promise<void>;
+  port: number;
+  child: ChildProcess;
+  logFile: string;
+  stop: () => Promise<void>;
   /** How the app ended if it is no longer running ("SIGTERM", "1"), or null while it runs. */
   exited: () => string | null;
 };
@@ -54,10 +62,21 @@ export type AppServer = {
  * fatal), and wait until /api/health answers 200.
  */
 export async function startServer(opts: {
-  cwd: string; port: number; databaseUrl: string; smtpPort: number; logFile: string; cpuProfDir?: string; readyTimeoutMs?: number;
+  cwd: string;
+  port: number;
+  databaseUrl: string;
+  smtpPort: number;
+  logFile: string;
+  cpuProfDir?: string;
+  readyTimeoutMs?: number;
 }): Promise<AppServer> {
   const out = fs.openSync(opts.logFile, "a");
-  const args = [...(opts.cpuProfDir ? ["--cpu-prof", `--cpu-prof-dir=${opts.cpuProfDir}`] : []), "--import", "tsx", "server/index.ts"];
+  const args = [
+    ...(opts.cpuProfDir ? ["--cpu-prof", `--cpu-prof-dir=${opts.cpuProfDir}`] : []),
+    "--import",
+    "tsx",
+    "server/index.ts",
+  ];
   const child = spawn(process.execPath, args, {
     cwd: opts.cwd,
     env: {
@@ -78,17 +97,24 @@ export async function startServer(opts: {
   fs.closeSync(out);
   let exited: string | null = null;
   let stopping = false;
-  const exit = new Promise<void>((resolve) => child.once("exit", (code, signal) => {
-    exited = `${code ?? signal}`;
-    if (!stopping) console.error(`bench-bids: the app under test exited by itself or was stopped from outside (${exited}); see ${opts.logFile}`);
-    resolve();
-  }));
+  const exit = new Promise<void>((resolve) =>
+    child.once("exit", (code, signal) => {
+      exited = `${code ?? signal}`;
+      if (!stopping)
+        console.error(
+          `bench-bids: the app under test exited by itself or was stopped from outside (${exited}); see ${opts.logFile}`,
+        );
+      resolve();
+    }),
+  );
 
   const stop = async () => {
     if (exited !== null) return;
     stopping = true;
     child.kill("SIGTERM");
-    const t = setTimeout(() => { if (exited === null) child.kill("SIGKILL"); }, 15_000);
+    const t = setTimeout(() => {
+      if (exited === null) child.kill("SIGKILL");
+    }, 15_000);
     await exit;
     clearTimeout(t);
   };
@@ -96,9 +122,15 @@ export async function startServer(opts: {
   const deadline = Date.now() + (opts.readyTimeoutMs ?? 120_000);
   for (;;) {
     if (exited !== null) throw new Error(`the app exited during start (${exited}); see ${opts.logFile}`);
-    if (Date.now() > deadline) { await stop(); throw new Error(`the app did not become healthy in time; see ${opts.logFile}`); }
+    if (Date.now() > deadline) {
+      await stop();
+      throw new Error(`the app did not become healthy in time; see ${opts.logFile}`);
+    }
     const status = await new Promise<number>((resolve) => {
-      const req = http.get({ host: "127.0.0.1", port: opts.port, path: "/api/health", timeout: 2_000 }, (res) => { res.resume(); resolve(res.statusCode ?? 0); });
+      const req = http.get({ host: "127.0.0.1", port: opts.port, path: "/api/health", timeout: 2_000 }, (res) => {
+        res.resume();
+        resolve(res.statusCode ?? 0);
+      });
       req.on("timeout", () => req.destroy());
       req.on("error", () => resolve(0));
     });

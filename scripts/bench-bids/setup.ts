@@ -58,13 +58,24 @@ export async function dropDatabase(name: string): Promise<void> {
 export function migrate(cwd: string, url: string, timeoutMs = 180_000): Promise<void> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, ["--import", "tsx", "scripts/migrate.ts", "up"], {
-      cwd, env: { ...process.env, DATABASE_URL: url }, stdio: ["ignore", "pipe", "pipe"],
+      cwd,
+      env: { ...process.env, DATABASE_URL: url },
+      stdio: ["ignore", "pipe", "pipe"],
     });
     let out = "";
-    child.stdout.on("data", (d: Buffer) => { out += d.toString(); });
-    child.stderr.on("data", (d: Buffer) => { out += d.toString(); });
-    const timer = setTimeout(() => { child.kill("SIGKILL"); }, timeoutMs);
-    child.on("error", (e) => { clearTimeout(timer); reject(e); });
+    child.stdout.on("data", (d: Buffer) => {
+      out += d.toString();
+    });
+    child.stderr.on("data", (d: Buffer) => {
+      out += d.toString();
+    });
+    const timer = setTimeout(() => {
+      child.kill("SIGKILL");
+    }, timeoutMs);
+    child.on("error", (e) => {
+      clearTimeout(timer);
+      reject(e);
+    });
     child.on("exit", (code, signal) => {
       clearTimeout(timer);
       if (code === 0) resolve();
@@ -100,7 +111,10 @@ export async function seed(url: string, dealers: number, watchers: number): Prom
         const b = k * 5;
         return `($${b + 1}, $${b + 2}, $${b + 3}, $${b + 4}, $${b + 5}::varchar[], now(), now())`;
       });
-      await c.query(`INSERT INTO users (id, email, display_name, password_hash, roles, created_at, updated_at) VALUES ${rows.join(",")}`, values);
+      await c.query(
+        `INSERT INTO users (id, email, display_name, password_hash, roles, created_at, updated_at) VALUES ${rows.join(",")}`,
+        values,
+      );
     }
 
     const saleId = randomUUID();
@@ -118,7 +132,12 @@ export async function seed(url: string, dealers: number, watchers: number): Prom
          VALUES ($1, $2, $3, 'Synthetic benchmark lot', 'Nowhere', 'untested', '', 'approved', 1000, 5000, NULL, now(), now(), now(), NULL, false, now(), now())`,
         [lotId, consignor.id, title],
       );
-      const state = initialProxyState({ openingCents: OPENING_CENTS, reserveCents: null, ladder: flatLadder(INCREMENT_CENTS), consignorId: consignor.id });
+      const state = initialProxyState({
+        openingCents: OPENING_CENTS,
+        reserveCents: null,
+        ladder: flatLadder(INCREMENT_CENTS),
+        consignorId: consignor.id,
+      });
       const saleLotId = randomUUID();
       await c.query(
         `INSERT INTO sale_lots (id, sale_id, lot_id, position, consignor_id, phase, opening_cents, closes_at, original_close_at,
@@ -145,11 +164,17 @@ export async function sessionCookie(u: BenchUser, secret: string): Promise<strin
 export type BidRow = { seq: number; bidder_id: string; idempotency_key: string };
 
 /** Every bid row of a lot, in sequence order. */
-export async function bidRows(url: string, saleLotId: string): Promise<{ rows: BidRow[]; lotSeq: number; dupKeys: number }> {
+export async function bidRows(
+  url: string,
+  saleLotId: string,
+): Promise<{ rows: BidRow[]; lotSeq: number; dupKeys: number }> {
   const c = new pg.Client({ connectionString: url });
   await c.connect();
   try {
-    const r = await c.query<BidRow>(`SELECT seq, bidder_id, idempotency_key FROM bids WHERE sale_lot_id = $1 ORDER BY seq`, [saleLotId]);
+    const r = await c.query<BidRow>(
+      `SELECT seq, bidder_id, idempotency_key FROM bids WHERE sale_lot_id = $1 ORDER BY seq`,
+      [saleLotId],
+    );
     const l = await c.query<{ seq: number }>(`SELECT seq FROM sale_lots WHERE id = $1`, [saleLotId]);
     const d = await c.query<{ n: string }>(
       `SELECT count(*) AS n FROM (SELECT idempotency_key FROM bids WHERE sale_lot_id = $1 GROUP BY idempotency_key HAVING count(*) > 1) x`,

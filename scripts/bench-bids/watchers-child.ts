@@ -34,11 +34,16 @@ let dupes = new Uint32Array(4096);
 function grow(seq: number): void {
   if (seq < counts.length) return;
   const size = Math.max(counts.length * 2, seq + 1);
-  const c = new Uint32Array(size); c.set(counts); counts = c;
-  const a = new Float64Array(size); a.set(lastArrival); lastArrival = a;
-  const d = new Uint32Array(size); d.set(dupes); dupes = d;
+  const c = new Uint32Array(size);
+  c.set(counts);
+  counts = c;
+  const a = new Float64Array(size);
+  a.set(lastArrival);
+  lastArrival = a;
+  const d = new Uint32Array(size);
+  d.set(dupes);
+  dupes = d;
 }
-
 
 const sockets: Socket[] = [];
 let disconnects = 0;
@@ -54,55 +59,96 @@ let batches = 0;
 async function startAll(url: string, saleLotId: string, cookies: string[], batch: number): Promise<void> {
   const room = `lot:${saleLotId}`;
   const started = now();
-  const one = (cookie: string) => new Promise<void>((resolve, reject) => {
-    const seen = new SeqSet();
-    let highest = -1;
-    const s = connect(url, {
-      path: "/socket.io", transports: ["websocket"], forceNew: true, reconnection: true, reconnectionDelay: 200,
-      extraHeaders: { cookie }, timeout: 20_000,
-    });
-    sockets.push(s);
-    let first = true;
-    const timer = setTimeout(() => reject(new Error("watcher did not connect and join within 30 s")), 30_000);
-    s.on("connect", () => {
-      // Join (and re-join after any reconnect) the lot's room; resolve on the first ack.
-      s.timeout(20_000).emit("room.join", { room }, (err: Error | null, r?: { ok: boolean; error?: string }) => {
-        if (!first) return;
-        first = false;
-        clearTimeout(timer);
-        if (err || !r?.ok) reject(new Error(`room.join refused: ${err?.message ?? r?.error}`));
-        else resolve();
+  const one = (cookie: string) =>
+    new Promise<void>((resolve, reject) => {
+      const seen = new SeqSet();
+      let highest = -1;
+      const s = connect(url, {
+        path: "/socket.io",
+        transports: ["websocket"],
+        forceNew: true,
+        reconnection: true,
+        reconnectionDelay: 200,
+        extraHeaders: { cookie },
+        timeout: 20_000,
+      });
+      sockets.push(s);
+      let first = true;
+      const timer = setTimeout(() => reject(new Error("watcher did not connect and join within 30 s")), 30_000);
+      s.on("connect", () => {
+        // Join (and re-join after any reconnect) the lot's room; resolve on the first ack.
+        s.timeout(20_000).emit("room.join", { room }, (err: Error | null, r?: { ok: boolean; error?: string }) => {
+          if (!first) return;
+          first = false;
+          clearTimeout(timer);
+          if (err || !r?.ok) reject(new Error(`room.join refused: ${err?.message ?? r?.error}`));
+          else resolve();
+        });
+      });
+      s.on("connect_error", () => {
+        connectErrors++;
+      });
+      s.on("disconnect", (reason) => {
+        if (reason !== "io client disconnect") disconnects++;
+      });
+      // A client's sequencer (lib/realtime/sequencer): one ahead of a gap waits GAP_WAIT_MS for the missing seq, then refetches.
+      let applied = -1;
+      const held = new Set<number>();
+      let gapTimer: ReturnType<typeof setTimeout> | null = null;
+      const settle = () => {
+        while (held.has(applied + 1)) {
+          held.delete(applied + 1);
+          applied += 1;
+        }
+        if (gapTimer) {
+          clearTimeout(gapTimer);
+          gapTimer = null;
+        }
+        if (held.size)
+          gapTimer = setTimeout(() => {
+            gapTimer = null;
+            if (held.size) {
+              refetches++;
+              applied = Math.max(...held);
+              held.clear();
+            }
+          }, GAP_WAIT_MS);
+      };
+      const onLot = (p: { saleLotId: string; seq: number }) => {
+        const at = now();
+        if (p.saleLotId !== saleLotId) {
+          otherEvents++;
+          return;
+        }
+        const seq = p.seq;
+        grow(seq);
+        if (seq > maxSeq) maxSeq = seq;
+        if (seen.add(seq)) {
+          dupes[seq]!++;
+          return;
+        }
+        if (highest >= 0 && seq < highest) {
+          outOfOrder++;
+          if (orderExamples.length < 10) orderExamples.push(`${seq} after ${highest}`);
+        } else if (highest >= 0 && seq > highest + 1) {
+          jumps++;
+          if (orderExamples.length < 10) orderExamples.push(`${seq} skipping from ${highest}`);
+        }
+        if (seq > highest) highest = seq;
+        counts[seq]!++;
+        if (at > lastArrival[seq]!) lastArrival[seq] = at;
+        if (applied < 0) applied = seq - 1;
+        if (seq > applied) {
+          held.add(seq);
+          settle();
+        }
+      };
+      s.on("lot.bid", onLot);
+      s.on("lot.batch", (b: { events: { live: { saleLotId: string; seq: number } }[] }) => {
+        batches++;
+        for (const e of b.events) onLot(e.live);
       });
     });
-    s.on("connect_error", () => { connectErrors++; });
-    s.on("disconnect", (reason) => { if (reason !== "io client disconnect") disconnects++; });
-    // A client's sequencer (lib/realtime/sequencer): one ahead of a gap waits GAP_WAIT_MS for the missing seq, then refetches.
-    let applied = -1;
-    const held = new Set<number>();
-    let gapTimer: ReturnType<typeof setTimeout> | null = null;
-    const settle = () => {
-      while (held.has(applied + 1)) { held.delete(applied + 1); applied += 1; }
-      if (gapTimer) { clearTimeout(gapTimer); gapTimer = null; }
-      if (held.size) gapTimer = setTimeout(() => { gapTimer = null; if (held.size) { refetches++; applied = Math.max(...held); held.clear(); } }, GAP_WAIT_MS);
-    };
-    const onLot = (p: { saleLotId: string; seq: number }) => {
-      const at = now();
-      if (p.saleLotId !== saleLotId) { otherEvents++; return; }
-      const seq = p.seq;
-      grow(seq);
-      if (seq > maxSeq) maxSeq = seq;
-      if (seen.add(seq)) { dupes[seq]!++; return; }
-      if (highest >= 0 && seq < highest) { outOfOrder++; if (orderExamples.length < 10) orderExamples.push(`${seq} after ${highest}`); }
-      else if (highest >= 0 && seq > highest + 1) { jumps++; if (orderExamples.length < 10) orderExamples.push(`${seq} skipping from ${highest}`); }
-      if (seq > highest) highest = seq;
-      counts[seq]!++;
-      if (at > lastArrival[seq]!) lastArrival[seq] = at;
-      if (applied < 0) applied = seq - 1;
-      if (seq > applied) { held.add(seq); settle(); }
-    };
-    s.on("lot.bid", onLot);
-    s.on("lot.batch", (b: { events: { live: { saleLotId: string; seq: number } }[] }) => { batches++; for (const e of b.events) onLot(e.live); });
-  });
   for (let i = 0; i < cookies.length; i += batch) await Promise.all(cookies.slice(i, i + batch).map(one));
   send({ type: "ready", connected: sockets.filter((s) => s.connected).length, ms: now() - started });
 }
@@ -114,11 +160,22 @@ process.on("message", (m: FromParent) => {
     const to = Math.min(m.to, counts.length - 1);
     const n = Math.max(0, to - m.from + 1);
     send({
-      type: "result", id: m.id, from: m.from,
+      type: "result",
+      id: m.id,
+      from: m.from,
       counts: Array.from(counts.subarray(m.from, m.from + n)),
       lastArrival: Array.from(lastArrival.subarray(m.from, m.from + n)),
       dupes: Array.from(dupes.subarray(m.from, m.from + n)),
-      maxSeq, outOfOrder, jumps, refetches, batches, orderExamples, disconnects, connectErrors, otherEvents, connected: sockets.filter((s) => s.connected).length,
+      maxSeq,
+      outOfOrder,
+      jumps,
+      refetches,
+      batches,
+      orderExamples,
+      disconnects,
+      connectErrors,
+      otherEvents,
+      connected: sockets.filter((s) => s.connected).length,
     });
   } else if (m.type === "stop") {
     for (const s of sockets) s.disconnect();

@@ -3,7 +3,12 @@ import { createAdapter } from "@socket.io/postgres-adapter";
 import type pg from "pg";
 import { Server } from "socket.io";
 import { viewerFromCookieHeader } from "../../lib/auth/guards";
-import type { ClientToServerEvents, InterServerEvents, ServerToClientEvents, SocketData } from "../../lib/realtime/events";
+import type {
+  ClientToServerEvents,
+  InterServerEvents,
+  ServerToClientEvents,
+  SocketData,
+} from "../../lib/realtime/events";
 import { joinableRoom, userRoom, type BidAck } from "../../lib/realtime/events";
 import { ApiError, fieldsFromIssues } from "../../lib/api/errors";
 import { can } from "../../lib/auth/roles";
@@ -18,14 +23,31 @@ import { SocketBidSchema } from "../../lib/validation/sales";
  */
 async function placeBidOverSocket(userId: string, raw: unknown): Promise<BidAck> {
   const parsed = SocketBidSchema.safeParse(raw);
-  if (!parsed.success) return { ok: false, error: { code: "validation_failed", message: "Some fields need attention", fields: fieldsFromIssues(parsed.error.issues) } };
+  if (!parsed.success)
+    return {
+      ok: false,
+      error: {
+        code: "validation_failed",
+        message: "Some fields need attention",
+        fields: fieldsFromIssues(parsed.error.issues),
+      },
+    };
   try {
     const roles = await currentRoles(userId);
     if (!roles) return { ok: false, error: { code: "unauthenticated", message: "Sign in first" } };
-    if (!can(roles, "lots.bid")) return { ok: false, error: { code: "forbidden", message: "Your account's roles do not allow this" } };
+    if (!can(roles, "lots.bid"))
+      return { ok: false, error: { code: "forbidden", message: "Your account's roles do not allow this" } };
     const { saleLotId, maxCents, idempotencyKey } = parsed.data;
     const r = await placeMaxBid({ id: userId, email: "", name: "", roles }, saleLotId, maxCents, idempotencyKey);
-    if (!r.accepted) return { ok: false, error: { code: "conflict", message: r.message, details: { reason: r.reason, minimumCents: r.minimumCents, live: r.live } } };
+    if (!r.accepted)
+      return {
+        ok: false,
+        error: {
+          code: "conflict",
+          message: r.message,
+          details: { reason: r.reason, minimumCents: r.minimumCents, live: r.live },
+        },
+      };
     return { ok: true, result: r };
   } catch (e) {
     if (e instanceof ApiError) return { ok: false, error: { code: e.code, message: e.message } };
@@ -81,7 +103,8 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
     void socket.join(userRoom(socket.data.userId));
     socket.emit("session.ready", { userId: socket.data.userId, roles: socket.data.roles });
     socket.on("room.join", ({ room }, ack) => {
-      if (typeof room !== "string" || !joinableRoom(room)) return ack?.({ ok: false, error: "That room cannot be joined" });
+      if (typeof room !== "string" || !joinableRoom(room))
+        return ack?.({ ok: false, error: "That room cannot be joined" });
       void socket.join(room);
       ack?.({ ok: true });
     });

@@ -10,7 +10,15 @@ import { LIST_PARAMS, page } from "./lists";
 import { applyMetadata, bool, hash, onlyParams, oneOf, str } from "./params";
 
 const IGNORED = ["individual", "company", "tos_acceptance", "external_account", "settings", "documents"];
-const PROFILE_FIELDS = ["name", "url", "mcc", "product_description", "support_email", "support_phone", "support_url"] as const;
+const PROFILE_FIELDS = [
+  "name",
+  "url",
+  "mcc",
+  "product_description",
+  "support_email",
+  "support_phone",
+  "support_url",
+] as const;
 
 function capabilities(p: ParamHash, existing: Stripe.Account.Capabilities = {}): Stripe.Account.Capabilities {
   const caps = hash(p, "capabilities");
@@ -26,7 +34,10 @@ function capabilities(p: ParamHash, existing: Stripe.Account.Capabilities = {}):
   return out as Stripe.Account.Capabilities;
 }
 
-function businessProfile(p: ParamHash, existing: Stripe.Account.BusinessProfile | null | undefined): Stripe.Account.BusinessProfile {
+function businessProfile(
+  p: ParamHash,
+  existing: Stripe.Account.BusinessProfile | null | undefined,
+): Stripe.Account.BusinessProfile {
   const base: Stripe.Account.BusinessProfile = existing ?? {
     mcc: null,
     minority_owned_business_designation: null,
@@ -52,7 +63,19 @@ function businessProfile(p: ParamHash, existing: Stripe.Account.BusinessProfile 
 /** POST /v1/accounts */
 export const createAccount: Handler = (ctx) => {
   const p = ctx.params;
-  onlyParams(p, ["type", "controller", "country", "email", "business_type", "business_profile", "capabilities", "default_currency", "metadata", "expand", ...IGNORED]);
+  onlyParams(p, [
+    "type",
+    "controller",
+    "country",
+    "email",
+    "business_type",
+    "business_profile",
+    "capabilities",
+    "default_currency",
+    "metadata",
+    "expand",
+    ...IGNORED,
+  ]);
   const type = oneOf(p, "type", ["custom", "express", "standard"] as const);
   const controller = hash(p, "controller");
   if (!type && !controller) throw invalid("Missing required param: type (or controller).", "type", "parameter_missing");
@@ -65,10 +88,14 @@ export const createAccount: Handler = (ctx) => {
     id: newId("acct"),
     object: "account",
     business_profile: businessProfile(p, null),
-    business_type: oneOf(p, "business_type", ["company", "government_entity", "individual", "non_profit"] as const) ?? null,
+    business_type:
+      oneOf(p, "business_type", ["company", "government_entity", "individual", "non_profit"] as const) ?? null,
     capabilities: capabilities(p),
     charges_enabled: true,
-    controller: { type: effectiveType === "standard" ? "account" : "application", is_controller: effectiveType !== "standard" },
+    controller: {
+      type: effectiveType === "standard" ? "account" : "application",
+      is_controller: effectiveType !== "standard",
+    },
     country,
     created: ctx.now,
     default_currency: defaultCurrency,
@@ -91,7 +118,12 @@ export const createAccount: Handler = (ctx) => {
     tos_acceptance: { date: null, ip: null, user_agent: null },
     type: effectiveType,
   };
-  account.external_accounts = { object: "list", data: [], has_more: false, url: `/v1/accounts/${account.id}/external_accounts` };
+  account.external_accounts = {
+    object: "list",
+    data: [],
+    has_more: false,
+    url: `/v1/accounts/${account.id}/external_accounts`,
+  };
   ctx.state.accounts[account.id] = account;
   return account;
 };

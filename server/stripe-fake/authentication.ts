@@ -23,7 +23,12 @@ function superseded(pi: Stripe.PaymentIntent, auth: string): FakeError {
  * buyer. With `auth` (the id in the page's address), only that authentication may end; without it, the
  * current one (code and tests).
  */
-export function completeAuthentication(ctx: Ctx, id: string, outcome: "succeed" | "fail", auth?: string): Stripe.PaymentIntent {
+export function completeAuthentication(
+  ctx: Ctx,
+  id: string,
+  outcome: "succeed" | "fail",
+  auth?: string,
+): Stripe.PaymentIntent {
   const pi = findIntent(ctx, id);
   if (auth !== undefined && ctx.state.authentications[pi.id] !== auth) throw superseded(pi, auth);
   if (pi.status !== "requires_action") throw unexpectedState(pi, "authenticate", ["requires_action"]);

@@ -18,9 +18,24 @@ const DECLINED = "Your card was declined.";
 export const TEST_CARDS: Readonly<Record<string, CardBehaviour>> = {
   "4242424242424242": { kind: "succeed" },
   "4000000000000002": { kind: "decline", code: "card_declined", declineCode: "generic_decline", message: DECLINED },
-  "4000000000009995": { kind: "decline", code: "card_declined", declineCode: "insufficient_funds", message: "Your card has insufficient funds." },
-  "4000000000000069": { kind: "decline", code: "expired_card", declineCode: "expired_card", message: "Your card has expired." },
-  "4000000000000127": { kind: "decline", code: "incorrect_cvc", declineCode: "incorrect_cvc", message: "Your card's security code is incorrect." },
+  "4000000000009995": {
+    kind: "decline",
+    code: "card_declined",
+    declineCode: "insufficient_funds",
+    message: "Your card has insufficient funds.",
+  },
+  "4000000000000069": {
+    kind: "decline",
+    code: "expired_card",
+    declineCode: "expired_card",
+    message: "Your card has expired.",
+  },
+  "4000000000000127": {
+    kind: "decline",
+    code: "incorrect_cvc",
+    declineCode: "incorrect_cvc",
+    message: "Your card's security code is incorrect.",
+  },
   "4000002500003155": { kind: "authenticate" },
   "4000000000003220": { kind: "authenticate" },
 };
@@ -40,7 +55,10 @@ export function luhnValid(digits: string): boolean {
 }
 
 /** Validates `card[…]` of POST /v1/payment_methods; returns the stored card details and the test behaviour. */
-export function readCard(p: ParamHash | undefined, now: Date): { card: Stripe.PaymentMethod.Card; behaviour: CardBehaviour } {
+export function readCard(
+  p: ParamHash | undefined,
+  now: Date,
+): { card: Stripe.PaymentMethod.Card; behaviour: CardBehaviour } {
   if (!p) throw missingParam("card");
   onlyParams(p, ["number", "exp_month", "exp_year", "cvc"], "card");
   const rawNumber = str(p, "number", "card");
@@ -51,21 +69,28 @@ export function readCard(p: ParamHash | undefined, now: Date): { card: Stripe.Pa
   }
   const expMonth = int(p, "exp_month", {}, "card");
   if (expMonth === undefined) throw missingParam("card[exp_month]");
-  if (expMonth < 1 || expMonth > 12) throw cardError("invalid_expiry_month", "Your card's expiration month is invalid.", "card[exp_month]");
+  if (expMonth < 1 || expMonth > 12)
+    throw cardError("invalid_expiry_month", "Your card's expiration month is invalid.", "card[exp_month]");
   let expYear = int(p, "exp_year", {}, "card");
   if (expYear === undefined) throw missingParam("card[exp_year]");
   if (expYear >= 0 && expYear < 100) expYear += 2000;
   const year = now.getUTCFullYear();
-  if (expYear < year || expYear > year + 50) throw cardError("invalid_expiry_year", "Your card's expiration year is invalid.", "card[exp_year]");
+  if (expYear < year || expYear > year + 50)
+    throw cardError("invalid_expiry_year", "Your card's expiration year is invalid.", "card[exp_year]");
   if (expYear === year && expMonth < now.getUTCMonth() + 1) {
     throw cardError("invalid_expiry_month", "Your card's expiration month is invalid.", "card[exp_month]");
   }
   const cvc = str(p, "cvc", "card");
-  if (cvc !== undefined && !/^\d{3,4}$/.test(cvc)) throw cardError("invalid_cvc", "Your card's security code is invalid.", "card[cvc]");
+  if (cvc !== undefined && !/^\d{3,4}$/.test(cvc))
+    throw cardError("invalid_cvc", "Your card's security code is invalid.", "card[cvc]");
   if (number.length < 4) throw invalid("Invalid card number.", "card[number]");
   const card: Stripe.PaymentMethod.Card = {
     brand: "unknown",
-    checks: { address_line1_check: null, address_postal_code_check: null, cvc_check: cvc === undefined ? null : "unchecked" },
+    checks: {
+      address_line1_check: null,
+      address_postal_code_check: null,
+      cvc_check: cvc === undefined ? null : "unchecked",
+    },
     country: "US",
     display_brand: "unknown",
     exp_month: expMonth,

@@ -12,7 +12,13 @@ type Outcome =
   | { ok: false; code: string; declineCode: string; message: string };
 
 /** Records the charge of one payment attempt on `pi` with `pm`; balance transaction added by the caller. */
-export function makeCharge(state: State, pi: Stripe.PaymentIntent, pm: Stripe.PaymentMethod, o: Outcome, now: number): Stripe.Charge {
+export function makeCharge(
+  state: State,
+  pi: Stripe.PaymentIntent,
+  pm: Stripe.PaymentMethod,
+  o: Outcome,
+  now: number,
+): Stripe.Charge {
   const card = pm.card!;
   const charge: Stripe.Charge = {
     id: newId("ch"),

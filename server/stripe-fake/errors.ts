@@ -29,7 +29,12 @@ export class FakeError extends Error {
 
 /** 400 invalid_request_error. */
 export function invalid(message: string, param?: string, code?: string): FakeError {
-  return new FakeError(400, { type: "invalid_request_error", message, ...(code ? { code } : {}), ...(param ? { param } : {}) });
+  return new FakeError(400, {
+    type: "invalid_request_error",
+    message,
+    ...(code ? { code } : {}),
+    ...(param ? { param } : {}),
+  });
 }
 
 /** 400 for a required parameter that is absent. */

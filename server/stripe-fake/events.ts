@@ -14,7 +14,14 @@ export const API_VERSION: string = Stripe.API_VERSION;
 /** Records an event; when webhooks are on, queues its delivery (due now). */
 export function recordEvent(
   state: State,
-  e: { type: string; object: object; created: number; requestId: string | null; idempotencyKey: string | null; deliver: boolean },
+  e: {
+    type: string;
+    object: object;
+    created: number;
+    requestId: string | null;
+    idempotencyKey: string | null;
+    deliver: boolean;
+  },
 ): FakeEvent {
   const event: FakeEvent = {
     id: newId("evt"),
@@ -55,7 +62,8 @@ function typeMatcher(pattern: string): (type: string) => boolean {
     const prefix = pattern.slice(0, -1);
     return (t) => t.startsWith(prefix);
   }
-  if (pattern.includes("*")) throw invalid(`Invalid type: ${pattern} (a wildcard may only end the pattern, as in payment_intent.*)`, "type");
+  if (pattern.includes("*"))
+    throw invalid(`Invalid type: ${pattern} (a wildcard may only end the pattern, as in payment_intent.*)`, "type");
   return (t) => t === pattern;
 }
 
@@ -65,11 +73,13 @@ export const listEvents: Handler = (ctx) => {
   onlyParams(p, [...LIST_PARAMS, "type", "types", "delivery_success"]);
   const type = str(p, "type");
   const typesRaw = p.types;
-  if (type !== undefined && typesRaw !== undefined) throw invalid("You may only specify one of these parameters: type, types.", "types");
+  if (type !== undefined && typesRaw !== undefined)
+    throw invalid("You may only specify one of these parameters: type, types.", "types");
   let matchers: Array<(t: string) => boolean> = [];
   if (type !== undefined) matchers = [typeMatcher(type)];
   if (typesRaw !== undefined) {
-    if (!Array.isArray(typesRaw) || typesRaw.some((x) => typeof x !== "string")) throw invalid("Invalid types: must be a list of event types.", "types");
+    if (!Array.isArray(typesRaw) || typesRaw.some((x) => typeof x !== "string"))
+      throw invalid("Invalid types: must be a list of event types.", "types");
     matchers = (typesRaw as string[]).map(typeMatcher);
   }
   const success = bool(p, "delivery_success");

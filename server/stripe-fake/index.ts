@@ -76,7 +76,10 @@ export { TEST_CARDS } from "./cards";
 
 async function main(): Promise<void> {
   const { loadEnvConfig } = await import("@next/env");
-  loadEnvConfig(process.cwd(), process.env.NODE_ENV !== "production", { info: () => {}, error: (...a: unknown[]) => console.error(...a) });
+  loadEnvConfig(process.cwd(), process.env.NODE_ENV !== "production", {
+    info: () => {},
+    error: (...a: unknown[]) => console.error(...a),
+  });
   const secret = process.env.STRIPE_WEBHOOK_SECRET;
   if (!secret) throw new Error("STRIPE_WEBHOOK_SECRET is required (scripts/ensure-env.sh writes one to .env.local)");
   const fake = await startStripeFake({

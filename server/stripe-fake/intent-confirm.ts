@@ -69,9 +69,20 @@ export function succeed(ctx: Ctx, pi: Stripe.PaymentIntent, pm: Stripe.PaymentMe
 }
 
 /** A decline: failed charge, intent back to requires_payment_method, event, then 402 (changes kept). */
-function decline(ctx: Ctx, pi: Stripe.PaymentIntent, pm: Stripe.PaymentMethod, d: Extract<CardBehaviour, { kind: "decline" }>): never {
+function decline(
+  ctx: Ctx,
+  pi: Stripe.PaymentIntent,
+  pm: Stripe.PaymentMethod,
+  d: Extract<CardBehaviour, { kind: "decline" }>,
+): never {
   endAuthentication(ctx, pi);
-  const charge = makeCharge(ctx.state, pi, pm, { ok: false, code: d.code, declineCode: d.declineCode, message: d.message }, ctx.now);
+  const charge = makeCharge(
+    ctx.state,
+    pi,
+    pm,
+    { ok: false, code: d.code, declineCode: d.declineCode, message: d.message },
+    ctx.now,
+  );
   pi.latest_charge = charge.id;
   pi.status = "requires_payment_method";
   pi.payment_method = null;
@@ -138,7 +149,10 @@ function nextAction(ctx: Ctx, pi: Stripe.PaymentIntent): Stripe.PaymentIntent.Ne
   const url = `${ctx.baseUrl}/_fake/3ds/${pi.id}/${auth}`;
   const returnUrl = ctx.state.return_urls[pi.id];
   if (returnUrl) return { type: "redirect_to_url", redirect_to_url: { url, return_url: returnUrl } };
-  return { type: "use_stripe_sdk", use_stripe_sdk: { type: "three_d_secure_redirect", stripe_js: url, source: `src_${randomText(24)}` } };
+  return {
+    type: "use_stripe_sdk",
+    use_stripe_sdk: { type: "three_d_secure_redirect", stripe_js: url, source: `src_${randomText(24)}` },
+  };
 }
 
 export type ConfirmOptions = { offSession: boolean; errorOnRequiresAction: boolean };
@@ -166,6 +180,8 @@ export function confirm(ctx: Ctx, pi: Stripe.PaymentIntent, o: ConfirmOptions): 
 }
 
 export function readConfirmOptions(p: ParamHash): ConfirmOptions {
-  return { offSession: bool(p, "off_session") ?? false, errorOnRequiresAction: bool(p, "error_on_requires_action") ?? false };
+  return {
+    offSession: bool(p, "off_session") ?? false,
+    errorOnRequiresAction: bool(p, "error_on_requires_action") ?? false,
+  };
 }
-

@@ -33,7 +33,15 @@ export function record(state: State, m: Movement): Stripe.BalanceTransaction {
     fee_details:
       m.fee === 0
         ? []
-        : [{ amount: m.fee, application: null, currency: m.currency, description: FEE_DESCRIPTION, type: "stripe_fee" }],
+        : [
+            {
+              amount: m.fee,
+              application: null,
+              currency: m.currency,
+              description: FEE_DESCRIPTION,
+              type: "stripe_fee",
+            },
+          ],
     net: m.amount - m.fee,
     reporting_category: m.reportingCategory,
     source: m.source,

@@ -25,7 +25,8 @@ function createdFilter(p: ParamHash): (created: number) => boolean {
     ["lte", (c, b) => c <= b],
   ];
   for (const k of Object.keys(range)) {
-    if (!bounds.some(([name]) => name === k)) throw invalid(`Received unknown parameter: created[${k}]`, `created[${k}]`, "parameter_unknown");
+    if (!bounds.some(([name]) => name === k))
+      throw invalid(`Received unknown parameter: created[${k}]`, `created[${k}]`, "parameter_unknown");
   }
   const checks = bounds.flatMap(([name, cmp]) => {
     const b = int(range, name, {}, "created");
@@ -39,7 +40,8 @@ export function page<T extends { id: string; created?: number }>(items: T[], p: 
   const limit = int(p, "limit", { min: 1, max: 100 }) ?? 10;
   const after = str(p, "starting_after");
   const before = str(p, "ending_before");
-  if (after && before) throw invalid("You may only specify one of these parameters: starting_after, ending_before.", "ending_before");
+  if (after && before)
+    throw invalid("You may only specify one of these parameters: starting_after, ending_before.", "ending_before");
   const keep = createdFilter(p);
   const all = items.filter((x) => keep(x.created ?? 0)).reverse();
   if (before) {

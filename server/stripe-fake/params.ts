@@ -20,7 +20,8 @@ function fullName(name: string, prefix: string): string {
 export function str(p: ParamHash, name: string, prefix = ""): string | undefined {
   const v = p[name];
   if (v === undefined) return undefined;
-  if (typeof v !== "string") throw invalid(`Invalid string: ${fullName(name, prefix)} must be a string.`, fullName(name, prefix));
+  if (typeof v !== "string")
+    throw invalid(`Invalid string: ${fullName(name, prefix)} must be a string.`, fullName(name, prefix));
   return v;
 }
 
@@ -39,14 +40,21 @@ export function requiredStr(p: ParamHash, name: string, prefix = ""): string {
 }
 
 /** A whole-number parameter within [min, max], or undefined when absent. */
-export function int(p: ParamHash, name: string, opts: { min?: number; max?: number } = {}, prefix = ""): number | undefined {
+export function int(
+  p: ParamHash,
+  name: string,
+  opts: { min?: number; max?: number } = {},
+  prefix = "",
+): number | undefined {
   const raw = str(p, name, prefix);
   if (raw === undefined) return undefined;
   const param = fullName(name, prefix);
   if (!/^-?\d{1,15}$/.test(raw)) throw invalid(`Invalid integer: ${raw}`, param, "parameter_invalid_integer");
   const n = Number(raw);
-  if (opts.min !== undefined && n < opts.min) throw invalid(`This value must be greater than or equal to ${opts.min}.`, param);
-  if (opts.max !== undefined && n > opts.max) throw invalid(`This value must be less than or equal to ${opts.max}.`, param);
+  if (opts.min !== undefined && n < opts.min)
+    throw invalid(`This value must be greater than or equal to ${opts.min}.`, param);
+  if (opts.max !== undefined && n > opts.max)
+    throw invalid(`This value must be less than or equal to ${opts.max}.`, param);
   return n;
 }
 
@@ -73,7 +81,8 @@ export function oneOf<T extends string>(p: ParamHash, name: string, values: read
 export function hash(p: ParamHash, name: string, prefix = ""): ParamHash | undefined {
   const v = p[name];
   if (v === undefined) return undefined;
-  if (typeof v !== "object" || Array.isArray(v)) throw invalid(`Invalid object: ${fullName(name, prefix)} must be a hash.`, fullName(name, prefix));
+  if (typeof v !== "object" || Array.isArray(v))
+    throw invalid(`Invalid object: ${fullName(name, prefix)} must be a hash.`, fullName(name, prefix));
   return v;
 }
 
@@ -82,7 +91,8 @@ export function currency(p: ParamHash, name = "currency", required = true): stri
   const raw = required ? requiredStr(p, name) : str(p, name);
   if (raw === undefined) return undefined;
   const c = raw.toLowerCase();
-  if (!/^[a-z]{3}$/.test(c)) throw invalid(`Invalid currency: ${raw}. Stripe currencies are three-letter ISO codes.`, name);
+  if (!/^[a-z]{3}$/.test(c))
+    throw invalid(`Invalid currency: ${raw}. Stripe currencies are three-letter ISO codes.`, name);
   return c;
 }
 
@@ -105,12 +115,14 @@ export function applyMetadata(p: ParamHash, existing: Record<string, string> = {
   const v = p.metadata;
   if (v === undefined) return existing;
   if (v === "") return {};
-  if (typeof v !== "object" || Array.isArray(v)) throw invalid("Invalid metadata: must be a hash of string keys and values.", "metadata");
+  if (typeof v !== "object" || Array.isArray(v))
+    throw invalid("Invalid metadata: must be a hash of string keys and values.", "metadata");
   const out: Record<string, string> = { ...existing };
   for (const [k, x] of Object.entries(v)) {
     if (typeof x !== "string") throw invalid(`Invalid metadata[${k}]: values must be strings.`, `metadata[${k}]`);
     if (k.length > 40) throw invalid(`Metadata keys can be at most 40 characters long: ${k}`, `metadata[${k}]`);
-    if (x.length > 500) throw invalid(`Metadata values can be at most 500 characters long (metadata[${k}]).`, `metadata[${k}]`);
+    if (x.length > 500)
+      throw invalid(`Metadata values can be at most 500 characters long (metadata[${k}]).`, `metadata[${k}]`);
     if (x === "") delete out[k];
     else out[k] = x;
   }

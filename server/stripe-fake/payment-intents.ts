@@ -8,7 +8,14 @@ import type { Ctx, Handler } from "./context";
 import { invalid, noSuch } from "./errors";
 import type { ParamHash } from "./form";
 import { newId, randomText } from "./ids";
-import { confirm, endAuthentication, findIntent, readConfirmOptions, settleCharge, unexpectedState } from "./intent-confirm";
+import {
+  confirm,
+  endAuthentication,
+  findIntent,
+  readConfirmOptions,
+  settleCharge,
+  unexpectedState,
+} from "./intent-confirm";
 import { LIST_PARAMS, page } from "./lists";
 import { applyMetadata, bool, currency, hash, int, onlyParams, oneOf, str } from "./params";
 
@@ -16,7 +23,15 @@ import { applyMetadata, bool, currency, hash, int, onlyParams, oneOf, str } from
 const MIN_AMOUNT = 50;
 const MAX_AMOUNT = 99_999_999;
 const CAPTURE_METHODS = ["automatic", "automatic_async", "manual"] as const;
-const CONFIRM_PARAMS = ["payment_method", "return_url", "off_session", "error_on_requires_action", "receipt_email", "use_stripe_sdk", "expand"];
+const CONFIRM_PARAMS = [
+  "payment_method",
+  "return_url",
+  "off_session",
+  "error_on_requires_action",
+  "receipt_email",
+  "use_stripe_sdk",
+  "expand",
+];
 const CANCELABLE = ["requires_payment_method", "requires_capture", "requires_confirmation", "requires_action"];
 
 function readAmount(p: ParamHash, required: boolean): number | undefined {
@@ -25,8 +40,10 @@ function readAmount(p: ParamHash, required: boolean): number | undefined {
     if (required) throw invalid("Missing required param: amount.", "amount", "parameter_missing");
     return undefined;
   }
-  if (amount < MIN_AMOUNT) throw invalid(`Amount must be at least ${MIN_AMOUNT} minor units.`, "amount", "amount_too_small");
-  if (amount > MAX_AMOUNT) throw invalid(`Amount must be no more than ${MAX_AMOUNT} minor units.`, "amount", "amount_too_large");
+  if (amount < MIN_AMOUNT)
+    throw invalid(`Amount must be at least ${MIN_AMOUNT} minor units.`, "amount", "amount_too_small");
+  if (amount > MAX_AMOUNT)
+    throw invalid(`Amount must be no more than ${MAX_AMOUNT} minor units.`, "amount", "amount_too_large");
   return amount;
 }
 
@@ -68,13 +85,21 @@ export const createPaymentIntent: Handler = (ctx) => {
   const confirmNow = bool(p, "confirm") ?? false;
   const apm = hash(p, "automatic_payment_methods");
   if (apm) onlyParams(apm, ["enabled", "allow_redirects"], "automatic_payment_methods");
-  const allowRedirects = apm ? oneOf(apm, "allow_redirects", ["always", "never"] as const, "automatic_payment_methods") : undefined;
+  const allowRedirects = apm
+    ? oneOf(apm, "allow_redirects", ["always", "never"] as const, "automatic_payment_methods")
+    : undefined;
   if (apm && bool(apm, "enabled", "automatic_payment_methods") === false) {
-    throw invalid("This local fake accepts card payments only through automatic_payment_methods[enabled]=true (the default).", "automatic_payment_methods[enabled]");
+    throw invalid(
+      "This local fake accepts card payments only through automatic_payment_methods[enabled]=true (the default).",
+      "automatic_payment_methods[enabled]",
+    );
   }
   const returnUrl = readReturnUrl(p);
   if ((p.off_session !== undefined || p.error_on_requires_action !== undefined) && !confirmNow) {
-    throw invalid("off_session and error_on_requires_action can only be used with confirm=true.", p.off_session !== undefined ? "off_session" : "error_on_requires_action");
+    throw invalid(
+      "off_session and error_on_requires_action can only be used with confirm=true.",
+      p.off_session !== undefined ? "off_session" : "error_on_requires_action",
+    );
   }
   const id = newId("pi");
   const pi: Stripe.PaymentIntent = {
@@ -144,14 +169,25 @@ export const listPaymentIntents: Handler = (ctx) => {
   const p = ctx.params;
   onlyParams(p, [...LIST_PARAMS, "transfer_group"]);
   const group = str(p, "transfer_group");
-  const items = Object.values(ctx.state.payment_intents).filter((x) => group === undefined || x.transfer_group === group);
+  const items = Object.values(ctx.state.payment_intents).filter(
+    (x) => group === undefined || x.transfer_group === group,
+  );
   return page(items, p, "/v1/payment_intents");
 };
 
 /** POST /v1/payment_intents/:id — metadata, description, transfer_group any time; amount, currency, payment_method before payment. */
 export const updatePaymentIntent: Handler = (ctx, id) => {
   const p = ctx.params;
-  onlyParams(p, ["amount", "currency", "payment_method", "metadata", "description", "transfer_group", "receipt_email", "expand"]);
+  onlyParams(p, [
+    "amount",
+    "currency",
+    "payment_method",
+    "metadata",
+    "description",
+    "transfer_group",
+    "receipt_email",
+    "expand",
+  ]);
   const pi = findIntent(ctx, id);
   const amount = readAmount(p, false);
   const cur = currency(p, "currency", false);
@@ -205,7 +241,11 @@ export const capturePaymentIntent: Handler = (ctx, id) => {
   if (pi.status !== "requires_capture") throw unexpectedState(pi, "capture", ["requires_capture"]);
   const amount = int(p, "amount_to_capture", { min: 1 }) ?? pi.amount_capturable;
   if (amount > pi.amount_capturable) {
-    throw invalid(`The amount to capture (${amount}) is more than the amount capturable (${pi.amount_capturable}).`, "amount_to_capture", "amount_too_large");
+    throw invalid(
+      `The amount to capture (${amount}) is more than the amount capturable (${pi.amount_capturable}).`,
+      "amount_to_capture",
+      "amount_too_large",
+    );
   }
   pi.metadata = applyMetadata(p, pi.metadata);
   const charge = ctx.state.charges[pi.latest_charge as string];
@@ -225,7 +265,12 @@ export const cancelPaymentIntent: Handler = (ctx, id) => {
   onlyParams(p, ["cancellation_reason", "expand"]);
   const pi = findIntent(ctx, id);
   if (!CANCELABLE.includes(pi.status)) throw unexpectedState(pi, "cancel", [...CANCELABLE, "processing"]);
-  const reason = oneOf(p, "cancellation_reason", ["duplicate", "fraudulent", "requested_by_customer", "abandoned"] as const);
+  const reason = oneOf(p, "cancellation_reason", [
+    "duplicate",
+    "fraudulent",
+    "requested_by_customer",
+    "abandoned",
+  ] as const);
   if (pi.status === "requires_capture" && pi.latest_charge) {
     const charge = ctx.state.charges[pi.latest_charge as string];
     charge.amount_refunded = charge.amount;
@@ -240,4 +285,3 @@ export const cancelPaymentIntent: Handler = (ctx, id) => {
   ctx.emit("payment_intent.canceled", pi);
   return pi;
 };
-

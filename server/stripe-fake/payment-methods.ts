@@ -14,7 +14,8 @@ export const createPaymentMethod: Handler = (ctx) => {
   const p = ctx.params;
   onlyParams(p, ["type", "card", "billing_details", "metadata", "expand"]);
   const type = requiredStr(p, "type");
-  if (type !== "card") throw invalid(`Invalid type: this local fake creates only card PaymentMethods, not '${type}'.`, "type");
+  if (type !== "card")
+    throw invalid(`Invalid type: this local fake creates only card PaymentMethods, not '${type}'.`, "type");
   const { card, behaviour } = readCard(hash(p, "card"), new Date(ctx.now * 1000));
   const billing = hash(p, "billing_details") ?? {};
   onlyParams(billing, [...BILLING_FIELDS], "billing_details");

@@ -18,23 +18,35 @@ export const createRefund: Handler = (ctx) => {
   onlyParams(p, ["payment_intent", "charge", "amount", "reason", "metadata", "instructions_email", "expand"]);
   const piId = str(p, "payment_intent");
   const chargeId = str(p, "charge");
-  if (!piId && !chargeId) throw invalid("One of the following params should be provided for this request: payment_intent or charge.", "payment_intent", "parameter_missing");
+  if (!piId && !chargeId)
+    throw invalid(
+      "One of the following params should be provided for this request: payment_intent or charge.",
+      "payment_intent",
+      "parameter_missing",
+    );
   let charge: Stripe.Charge | undefined;
   if (piId) {
     const pi = ctx.state.payment_intents[piId];
     if (!pi) throw noSuch("payment_intent", piId, "payment_intent", 400);
     charge = pi.latest_charge ? ctx.state.charges[pi.latest_charge as string] : undefined;
     if (pi.status !== "succeeded" || !charge) {
-      throw invalid(`This PaymentIntent (${piId}) does not have a successful charge to refund.`, "payment_intent", "charge_not_refundable");
+      throw invalid(
+        `This PaymentIntent (${piId}) does not have a successful charge to refund.`,
+        "payment_intent",
+        "charge_not_refundable",
+      );
     }
-    if (chargeId && chargeId !== charge.id) throw invalid(`Charge ${chargeId} does not belong to PaymentIntent ${piId}.`, "charge");
+    if (chargeId && chargeId !== charge.id)
+      throw invalid(`Charge ${chargeId} does not belong to PaymentIntent ${piId}.`, "charge");
   } else {
     charge = ctx.state.charges[chargeId!];
     if (!charge) throw noSuch("charge", chargeId!, "charge", 400);
-    if (charge.status !== "succeeded" || !charge.captured) throw invalid(`Charge ${charge.id} has no captured funds to refund.`, "charge", "charge_not_refundable");
+    if (charge.status !== "succeeded" || !charge.captured)
+      throw invalid(`Charge ${charge.id} has no captured funds to refund.`, "charge", "charge_not_refundable");
   }
   const remaining = charge.amount_captured - charge.amount_refunded;
-  if (remaining <= 0) throw invalid(`Charge ${charge.id} has already been refunded.`, "charge", "charge_already_refunded");
+  if (remaining <= 0)
+    throw invalid(`Charge ${charge.id} has already been refunded.`, "charge", "charge_already_refunded");
   const amount = int(p, "amount", { min: 1 }) ?? remaining;
   if (amount > remaining) {
     throw invalid(

@@ -89,13 +89,19 @@ function sameKey(a: string, b: string): boolean {
 function canonical(v: ParamValue): unknown {
   if (Array.isArray(v)) return v.map(canonical);
   if (typeof v === "object") {
-    return Object.fromEntries(Object.keys(v).sort().map((k) => [k, canonical(v[k])]));
+    return Object.fromEntries(
+      Object.keys(v)
+        .sort()
+        .map((k) => [k, canonical(v[k])]),
+    );
   }
   return v;
 }
 
 function fingerprint(params: ParamHash): string {
-  return createHash("sha256").update(JSON.stringify(canonical(redactCardParams(params)))).digest("hex");
+  return createHash("sha256")
+    .update(JSON.stringify(canonical(redactCardParams(params))))
+    .digest("hex");
 }
 
 function header(req: http.IncomingMessage, name: string): string | null {
@@ -107,7 +113,8 @@ function paramsOf(req: http.IncomingMessage, url: URL, body: string, allowJson: 
   if (req.method !== "POST") return parseForm(url.search.slice(1));
   const type = header(req, "content-type") ?? "";
   if (/^application\/json/i.test(type)) {
-    if (!allowJson) throw invalid("This endpoint takes application/x-www-form-urlencoded bodies, as Stripe's v1 API does.");
+    if (!allowJson)
+      throw invalid("This endpoint takes application/x-www-form-urlencoded bodies, as Stripe's v1 API does.");
     try {
       return body ? fromJson(JSON.parse(body)) : {};
     } catch (e) {
@@ -124,7 +131,8 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
   const webhookUrl = opts.webhookUrl ? opts.webhookUrl : null;
   if (webhookUrl) {
     const u = new URL(webhookUrl);
-    if (!LOOPBACK.has(u.hostname)) throw new Error(`stripe-fake: the webhook URL must point at this machine (127.0.0.1), not ${u.hostname}`);
+    if (!LOOPBACK.has(u.hostname))
+      throw new Error(`stripe-fake: the webhook URL must point at this machine (127.0.0.1), not ${u.hostname}`);
   }
   const log = opts.log ?? (() => {});
   const store = new Store(path.resolve(opts.dataDir));
@@ -143,7 +151,12 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
   );
   let baseUrl = "";
 
-  function makeCtx(params: ParamHash, requestId: string | null, idempotencyKey: string | null, stripeAccount: string | null): Ctx {
+  function makeCtx(
+    params: ParamHash,
+    requestId: string | null,
+    idempotencyKey: string | null,
+    stripeAccount: string | null,
+  ): Ctx {
     const ctx: Ctx = {
       state: store.state,
       now: Math.floor(Date.now() / 1000),
@@ -153,7 +166,14 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
       idempotencyKey,
       stripeAccount,
       emit: (type, object) => {
-        recordEvent(ctx.state, { type, object, created: ctx.now, requestId, idempotencyKey, deliver: webhooks.enabled });
+        recordEvent(ctx.state, {
+          type,
+          object,
+          created: ctx.now,
+          requestId,
+          idempotencyKey,
+          deliver: webhooks.enabled,
+        });
       },
     };
     return ctx;
@@ -184,7 +204,8 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
     if (!key) {
       throw new FakeError(401, {
         type: "invalid_request_error",
-        message: "You did not provide an API key. You need to provide your API key in the Authorization header, using Bearer auth (e.g. 'Authorization: Bearer YOUR_SECRET_KEY').",
+        message:
+          "You did not provide an API key. You need to provide your API key in the Authorization header, using Bearer auth (e.g. 'Authorization: Bearer YOUR_SECRET_KEY').",
       });
     }
     if (opts.apiKey ? !sameKey(key, opts.apiKey) : !key.startsWith("sk_test_")) {
@@ -203,13 +224,19 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
     if (!route) throw unrecognized(method, url.pathname);
     const params = paramsOf(req, url, body, false);
     const stripeAccount = header(req, "stripe-account");
-    if (stripeAccount && !route.account) throw invalid("This local fake honours the Stripe-Account header only on GET /v1/balance.");
+    if (stripeAccount && !route.account)
+      throw invalid("This local fake honours the Stripe-Account header only on GET /v1/balance.");
     const writes = method === "POST";
     const idemKey = writes ? header(req, "idempotency-key") : null;
-    const base = { "request-id": requestId, "stripe-version": API_VERSION, ...(idemKey ? { "idempotency-key": idemKey } : {}) };
+    const base = {
+      "request-id": requestId,
+      "stripe-version": API_VERSION,
+      ...(idemKey ? { "idempotency-key": idemKey } : {}),
+    };
     let fp = "";
     if (idemKey) {
-      if (idemKey.length > 255) throw invalid("Idempotency keys can be at most 255 characters long.", "Idempotency-Key");
+      if (idemKey.length > 255)
+        throw invalid("Idempotency keys can be at most 255 characters long.", "Idempotency-Key");
       fp = fingerprint(params);
       const stored = store.state.idempotency[idemKey];
       const ttl = idemKey.startsWith(SDK_KEY_PREFIX) ? SDK_KEY_TTL_MS : IDEMPOTENCY_TTL_MS;
@@ -252,7 +279,14 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
           const ttl = k.startsWith(SDK_KEY_PREFIX) ? SDK_KEY_TTL_MS : IDEMPOTENCY_TTL_MS;
           if (now - rec.created > ttl) delete ctx.state.idempotency[k];
         }
-        ctx.state.idempotency[idemKey] = { method, path: url.pathname, fingerprint: fp, status, body: json, created: now };
+        ctx.state.idempotency[idemKey] = {
+          method,
+          path: url.pathname,
+          fingerprint: fp,
+          status,
+          body: json,
+          created: now,
+        };
       }
       return { status, json };
     });
@@ -296,14 +330,25 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
     } catch (e) {
       if (e instanceof FakeError) {
         status = e.status;
-        if (!res.headersSent) send(res, e.status, JSON.stringify({ error: e.body }, null, 2), { "request-id": requestId, "stripe-version": API_VERSION });
+        if (!res.headersSent)
+          send(res, e.status, JSON.stringify({ error: e.body }, null, 2), {
+            "request-id": requestId,
+            "stripe-version": API_VERSION,
+          });
       } else {
         const ref = randomUUID();
         log(`error ${ref} on ${method} ${url.pathname}: ${(e as Error).stack ?? e}`);
         if (!res.headersSent) {
-          send(res, 500, JSON.stringify({ error: { type: "api_error", message: `The local Stripe fake failed (${ref}); see its log.` } }), {
-            "request-id": requestId,
-          });
+          send(
+            res,
+            500,
+            JSON.stringify({
+              error: { type: "api_error", message: `The local Stripe fake failed (${ref}); see its log.` },
+            }),
+            {
+              "request-id": requestId,
+            },
+          );
         }
       }
     }

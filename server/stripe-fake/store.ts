@@ -1,7 +1,17 @@
 // The fake's whole state, kept in one JSON file under its data directory. Every change is written
 // atomically (temporary file, fsync, rename), so a restart — or a crash — loses nothing that was answered.
 // A lock file stops two fakes from sharing one directory.
-import { closeSync, fsyncSync, mkdirSync, openSync, readFileSync, renameSync, rmSync, writeFileSync, writeSync } from "node:fs";
+import {
+  closeSync,
+  fsyncSync,
+  mkdirSync,
+  openSync,
+  readFileSync,
+  renameSync,
+  rmSync,
+  writeFileSync,
+  writeSync,
+} from "node:fs";
 import path from "node:path";
 import type Stripe from "stripe";
 import type { CardBehaviour } from "./cards";

@@ -57,7 +57,13 @@ const authenticationPage: TestHandler = (ctx, _w, id, auth) => {
   const pi = ctx.state.payment_intents[id];
   if (!pi) return { status: 404, html: page("Not found", `<p>No payment ${escapeHtml(id)}.</p>`) };
   if (pi.status !== "requires_action" || !isCurrentAuthentication(ctx, id, auth)) {
-    return { status: 409, html: page("Nothing to authenticate", `<p>This check is no longer open: payment ${escapeHtml(id)} has status ${escapeHtml(pi.status)}${pi.status === "requires_action" ? " with a newer check" : ""}.</p>`) };
+    return {
+      status: 409,
+      html: page(
+        "Nothing to authenticate",
+        `<p>This check is no longer open: payment ${escapeHtml(id)} has status ${escapeHtml(pi.status)}${pi.status === "requires_action" ? " with a newer check" : ""}.</p>`,
+      ),
+    };
   }
   const amount = `${(pi.amount / 100).toFixed(2)} ${pi.currency.toUpperCase()}`;
   return {
@@ -86,12 +92,18 @@ const authenticationForm: TestHandler = (ctx, _w, id, auth) => {
     u.searchParams.set("redirect_status", outcome === "succeed" ? "succeeded" : "failed");
     return { status: 303, location: u.toString() };
   }
-  return { status: 200, html: page("Authentication finished", `<p>Payment ${escapeHtml(id)} is now ${escapeHtml(pi.status)}.</p>`) };
+  return {
+    status: 200,
+    html: page("Authentication finished", `<p>Payment ${escapeHtml(id)} is now ${escapeHtml(pi.status)}.</p>`),
+  };
 };
 
 const authenticateJson: TestHandler = (ctx, _w, id) => {
   onlyParams(ctx.params, ["outcome", "authentication"]);
-  return { status: 200, json: completeAuthentication(ctx, id, readOutcome(ctx.params), readAuthentication(ctx.params)) };
+  return {
+    status: 200,
+    json: completeAuthentication(ctx, id, readOutcome(ctx.params), readAuthentication(ctx.params)),
+  };
 };
 
 const redeliver: TestHandler = (ctx, webhooks, id) => {
@@ -99,7 +111,10 @@ const redeliver: TestHandler = (ctx, webhooks, id) => {
   if (!ctx.state.events[id]) throw noSuch("event", id);
   if (!webhooks.enabled) throw invalid("This fake was started without a webhook URL; there is nowhere to deliver to.");
   if (webhooks.busy(id)) {
-    throw new FakeError(409, { type: "invalid_request_error", message: `A delivery of ${id} is on the wire; try again when it has finished.` });
+    throw new FakeError(409, {
+      type: "invalid_request_error",
+      message: `A delivery of ${id} is on the wire; try again when it has finished.`,
+    });
   }
   const delivery = {
     event: id,
@@ -132,7 +147,12 @@ export const TEST_ROUTES: TestRoute[] = [
   { method: "GET", pattern: /^\/_fake\/health$/, handler: health, writes: false },
   { method: "GET", pattern: new RegExp(`^/_fake/3ds/${ID}/${ID}$`), handler: authenticationPage, writes: false },
   { method: "POST", pattern: new RegExp(`^/_fake/3ds/${ID}/${ID}$`), handler: authenticationForm, writes: true },
-  { method: "POST", pattern: new RegExp(`^/_fake/payment_intents/${ID}/authenticate$`), handler: authenticateJson, writes: true },
+  {
+    method: "POST",
+    pattern: new RegExp(`^/_fake/payment_intents/${ID}/authenticate$`),
+    handler: authenticateJson,
+    writes: true,
+  },
   { method: "POST", pattern: new RegExp(`^/_fake/events/${ID}/redeliver$`), handler: redeliver, writes: true },
   { method: "GET", pattern: /^\/_fake\/deliveries$/, handler: deliveries, writes: false },
 ];

@@ -28,7 +28,16 @@ function leftOfCharge(state: State, charge: Stripe.Charge): number {
 /** POST /v1/transfers */
 export const createTransfer: Handler = (ctx) => {
   const p = ctx.params;
-  onlyParams(p, ["amount", "currency", "destination", "transfer_group", "source_transaction", "metadata", "description", "expand"]);
+  onlyParams(p, [
+    "amount",
+    "currency",
+    "destination",
+    "transfer_group",
+    "source_transaction",
+    "metadata",
+    "description",
+    "expand",
+  ]);
   const amount = int(p, "amount", { min: 1 });
   if (amount === undefined) throw invalid("Missing required param: amount.", "amount", "parameter_missing");
   const cur = currency(p)!;
@@ -46,9 +55,13 @@ export const createTransfer: Handler = (ctx) => {
   if (sourceId !== undefined) {
     const charge = ctx.state.charges[sourceId];
     if (!charge) throw noSuch("charge", sourceId, "source_transaction", 400);
-    if (charge.status !== "succeeded" || !charge.captured) throw invalid(`Charge ${sourceId} has no captured funds to transfer.`, "source_transaction");
+    if (charge.status !== "succeeded" || !charge.captured)
+      throw invalid(`Charge ${sourceId} has no captured funds to transfer.`, "source_transaction");
     if (charge.currency !== cur) {
-      throw invalid(`The currency of source_transaction's balance transaction (${charge.currency}) must be the same as the transfer currency (${cur}).`, "currency");
+      throw invalid(
+        `The currency of source_transaction's balance transaction (${charge.currency}) must be the same as the transfer currency (${cur}).`,
+        "currency",
+      );
     }
     const left = leftOfCharge(ctx.state, charge);
     if (amount > left) {
@@ -128,7 +141,9 @@ export const listTransfers: Handler = (ctx) => {
   const destination = str(p, "destination");
   const group = str(p, "transfer_group");
   const items = Object.values(ctx.state.transfers).filter(
-    (t) => (destination === undefined || t.destination === destination) && (group === undefined || t.transfer_group === group),
+    (t) =>
+      (destination === undefined || t.destination === destination) &&
+      (group === undefined || t.transfer_group === group),
   );
   return page(items, p, "/v1/transfers");
 };
@@ -142,7 +157,11 @@ export const createReversal: Handler = (ctx, transferId) => {
   if (left <= 0) throw invalid(`Transfer ${transferId} has already been fully reversed.`, "amount", "amount_too_large");
   const amount = int(p, "amount", { min: 1 }) ?? left;
   if (amount > left) {
-    throw invalid(`Reversal amount (${amount}) is greater than the amount left on transfer ${transferId} (${left}).`, "amount", "amount_too_large");
+    throw invalid(
+      `Reversal amount (${amount}) is greater than the amount left on transfer ${transferId} (${left}).`,
+      "amount",
+      "amount_too_large",
+    );
   }
   const id = newId("trr");
   const txn = record(ctx.state, {

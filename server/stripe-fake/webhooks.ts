@@ -32,7 +32,13 @@ export function signatureHeader(payload: string, secret: string, t = Math.floor(
 
 type Result = { status: number | null; error: string | null };
 
-function post(url: URL, body: string, headers: Record<string, string>, timeoutMs: number, onRequest: (r: http.ClientRequest) => void): Promise<Result> {
+function post(
+  url: URL,
+  body: string,
+  headers: Record<string, string>,
+  timeoutMs: number,
+  onRequest: (r: http.ClientRequest) => void,
+): Promise<Result> {
   return new Promise((resolve) => {
     const lib = url.protocol === "https:" ? https : http;
     const req = lib.request(

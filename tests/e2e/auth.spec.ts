@@ -59,7 +59,10 @@ test("the house grants the mediator role from the accounts table", async ({ page
 
 test("the cautions page is reachable from every page's footer and passes an accessibility scan", async ({ page }) => {
   await page.goto("/");
-  await page.getByRole("contentinfo").getByRole("link", { name: /Safety cautions/ }).click();
+  await page
+    .getByRole("contentinfo")
+    .getByRole("link", { name: /Safety cautions/ })
+    .click();
   await expectHeading(page, "Safety cautions");
   await expect(page.getByRole("heading", { name: "Beryllium-oxide ceramics" })).toBeVisible();
   const scan = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa"]).analyze();

@@ -8,16 +8,64 @@ import { DEMO, DEMO_PASSWORD, signedInPage } from "./helpers";
 const INBOX = "http://127.0.0.1:2580/api/messages";
 const DEALER = "northbank@dealer.getterline.test";
 
-async function listLot(consignor: Page, house: Page, title: string, designation: string, quantity: number): Promise<string> {
-  const lot = ((await (await consignor.request.post("/api/lots", { data: { title, provenance: "An invented box for the catalogue test", shippingOrigin: "Demo county", testerKind: "untested", testerNotes: "" } })).json()) as { lot: { id: string } }).lot;
-  const item = { designation, quantity, labelBrand: "Tri-County Parts", makerName: null, makerBasis: "unconfirmed", sourceCode: null, dateCode: null, features: {}, condition: "new-old-stock", vacuumLoss: false, defects: [], hazards: [], readings: [], notes: "" };
+async function listLot(
+  consignor: Page,
+  house: Page,
+  title: string,
+  designation: string,
+  quantity: number,
+): Promise<string> {
+  const lot = (
+    (await (
+      await consignor.request.post("/api/lots", {
+        data: {
+          title,
+          provenance: "An invented box for the catalogue test",
+          shippingOrigin: "Demo county",
+          testerKind: "untested",
+          testerNotes: "",
+        },
+      })
+    ).json()) as { lot: { id: string } }
+  ).lot;
+  const item = {
+    designation,
+    quantity,
+    labelBrand: "Tri-County Parts",
+    makerName: null,
+    makerBasis: "unconfirmed",
+    sourceCode: null,
+    dateCode: null,
+    features: {},
+    condition: "new-old-stock",
+    vacuumLoss: false,
+    defects: [],
+    hazards: [],
+    readings: [],
+    notes: "",
+  };
   expect((await consignor.request.post(`/api/lots/${lot.id}/items`, { data: item })).status()).toBe(201);
   expect((await consignor.request.post(`/api/lots/${lot.id}/submit`)).status()).toBe(200);
-  expect((await house.request.post(`/api/house/lots/${lot.id}/decision`, { data: { action: "approve", comment: "", estimateLowCents: 6_000, estimateHighCents: 9_000, reserveCents: 6_000, reserveAgreed: true } })).status()).toBe(200);
+  expect(
+    (
+      await house.request.post(`/api/house/lots/${lot.id}/decision`, {
+        data: {
+          action: "approve",
+          comment: "",
+          estimateLowCents: 6_000,
+          estimateHighCents: 9_000,
+          reserveCents: 6_000,
+          reserveAgreed: true,
+        },
+      })
+    ).status(),
+  ).toBe(200);
   return lot.id;
 }
 
-test("a visitor finds a lot by an equivalent, signs in from it, saves a want list, and hears of the next matching lot", async ({ browser }) => {
+test("a visitor finds a lot by an equivalent, signs in from it, saves a want list, and hears of the next matching lot", async ({
+  browser,
+}) => {
   test.setTimeout(120_000);
   const run = Date.now().toString(36);
   const consignor = await signedInPage(browser, "marrow-creek@consignor.getterline.test");
@@ -27,7 +75,9 @@ test("a visitor finds a lot by an equivalent, signs in from it, saves a want lis
   // A visitor, not signed in, searches by the European name and is told how the lot's 6BQ5s relate.
   const visitor = await (await browser.newContext()).newPage();
   const errors: string[] = [];
-  visitor.on("console", (m) => { if (m.type() === "error") errors.push(m.text()); });
+  visitor.on("console", (m) => {
+    if (m.type() === "error") errors.push(m.text());
+  });
   await visitor.goto("/");
   await visitor.getByLabel("Search the catalogue by type, equivalent or words").fill("el 84");
   await visitor.getByRole("button", { name: "Search" }).click();
@@ -59,19 +109,34 @@ test("a visitor finds a lot by an equivalent, signs in from it, saves a want lis
 
   // The house approves a matching lot: the dealer's notice arrives, and the digest e-mail.
   const secondLot = await listLot(consignor, house, `Console amplifier pulls ${run}`, "EL84", 6);
-  await expect.poll(async () => {
-    await visitor.reload();
-    return visitor.getByRole("button", { name: /Notices/ }).textContent();
-  }, { timeout: 30_000, intervals: [1_000] }).toMatch(/Notices\s*\d/);
+  await expect
+    .poll(
+      async () => {
+        await visitor.reload();
+        return visitor.getByRole("button", { name: /Notices/ }).textContent();
+      },
+      { timeout: 30_000, intervals: [1_000] },
+    )
+    .toMatch(/Notices\s*\d/);
   await visitor.getByRole("button", { name: /Notices/ }).click();
-  await expect(visitor.getByText(new RegExp(`Want list match: "Console amplifier pulls ${run}": 6 tubes`))).toBeVisible();
+  await expect(
+    visitor.getByText(new RegExp(`Want list match: "Console amplifier pulls ${run}": 6 tubes`)),
+  ).toBeVisible();
 
   let mail: { subject: string; text: string } | undefined;
-  await expect.poll(async () => {
-    const mails = (await (await fetch(`${INBOX}?to=${encodeURIComponent(DEALER)}`)).json()) as { subject: string; text: string }[];
-    mail = mails.find((m) => m.subject.startsWith("Want lists:") && m.text.includes(secondLot));
-    return Boolean(mail);
-  }, { timeout: 30_000, intervals: [1_000] }).toBe(true);
+  await expect
+    .poll(
+      async () => {
+        const mails = (await (await fetch(`${INBOX}?to=${encodeURIComponent(DEALER)}`)).json()) as {
+          subject: string;
+          text: string;
+        }[];
+        mail = mails.find((m) => m.subject.startsWith("Want lists:") && m.text.includes(secondLot));
+        return Boolean(mail);
+      },
+      { timeout: 30_000, intervals: [1_000] },
+    )
+    .toBe(true);
   expect(mail!.text).not.toContain(firstLot); // listed before the want list existed
 
   // The stop link works in a browser that is not signed in.
@@ -83,11 +148,15 @@ test("a visitor finds a lot by an equivalent, signs in from it, saves a want lis
   expect(errors).toEqual([]);
 });
 
-test("the catalogue works at phone width: search, filters behind one button, lot cards with pictures", async ({ browser }) => {
+test("the catalogue works at phone width: search, filters behind one button, lot cards with pictures", async ({
+  browser,
+}) => {
   const phone = await (await browser.newContext({ viewport: { width: 390, height: 844 } })).newPage();
   await phone.goto("/catalogue");
   await expect(phone.getByRole("heading", { name: "Catalogue", level: 1 })).toBeVisible();
   await expect(phone.getByText("Filters", { exact: true })).toBeVisible();
-  const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+  const overflow = await phone.evaluate(
+    () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
+  );
   expect(overflow).toBeLessThanOrEqual(0);
 });

@@ -8,9 +8,18 @@ const DB = process.env.E2E_DATABASE_URL ?? "postgres://app@127.0.0.1:54329/gette
 const SHOTS = process.env.SHOTS_DIR; // set to keep screenshots of the pages for review
 
 const as = signedInPage;
-const shot = async (page: Page, name: string) => { if (SHOTS) await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true }); };
+const shot = async (page: Page, name: string) => {
+  if (SHOTS) await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true });
+};
 /** WCAG 2 A/AA problems axe finds on the page as it stands. */
-const axe = async (page: Page) => (await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa"]).analyze()).violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).slice(0, 3).join(", ")}`);
+const axe = async (page: Page) =>
+  (await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa"]).analyze()).violations.map(
+    (v) =>
+      `${v.id}: ${v.nodes
+        .map((n) => n.target.join(" "))
+        .slice(0, 3)
+        .join(", ")}`,
+  );
 
 // Invented demo box. Line 1 is attributed to one maker by construction; line 2 is sold by its label alone.
 const CSV = [
@@ -20,7 +29,9 @@ const CSV = [
   "EL84,2,Tri-County Parts,Vireo Lamp & Valve,construction,plateShape=round; getterShape=disc,used",
 ].join("\n");
 
-test("an estate lists a box, a dealer wins, pays and receives it, claims misattribution; a mediator grants a partial refund that agrees to the cent", async ({ browser }) => {
+test("an estate lists a box, a dealer wins, pays and receives it, claims misattribution; a mediator grants a partial refund that agrees to the cent", async ({
+  browser,
+}) => {
   test.setTimeout(300_000);
 
   // An estate opens a consignor account and lists the box.
@@ -41,7 +52,9 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await estate.getByRole("button", { name: "Start the lot" }).click();
   await expect(estate).toHaveURL(/\/consignor\/lots\/[0-9a-f-]{36}$/);
   const lotId = estate.url().split("/").pop()!;
-  await estate.getByLabel("CSV file", { exact: true }).setInputFiles({ name: "box.csv", mimeType: "text/csv", buffer: Buffer.from(CSV) });
+  await estate
+    .getByLabel("CSV file", { exact: true })
+    .setInputFiles({ name: "box.csv", mimeType: "text/csv", buffer: Buffer.from(CSV) });
   await estate.getByRole("button", { name: "Check the file" }).click();
   await estate.getByRole("button", { name: "Import 3 rows" }).click();
   await expect(estate.getByText("3 lines · 12 tubes")).toBeVisible();
@@ -50,9 +63,37 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
 
   // The house approves it (reserve $80) and offers it in a sale closing in 40 s.
   const house = await as(browser, DEMO.admin);
-  expect((await house.request.post(`/api/house/lots/${lotId}/decision`, { data: { action: "approve", comment: "", estimateLowCents: 10_000, estimateHighCents: 20_000, reserveCents: 8_000, reserveAgreed: true } })).status()).toBe(200);
-  const sale = ((await (await house.request.post("/api/sales", { data: { title: "Claims sale", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 40_000).toISOString(), gapSeconds: 30, softCloseSeconds: 30, lots: [{ lotId, openingCents: 2_000 }] } })).json()) as { sale: { id: string } }).sale;
-  const saleLotId = (((await (await house.request.get(`/api/sales/${sale.id}`)).json()) as { lots: { saleLotId: string }[] }).lots[0]!).saleLotId;
+  expect(
+    (
+      await house.request.post(`/api/house/lots/${lotId}/decision`, {
+        data: {
+          action: "approve",
+          comment: "",
+          estimateLowCents: 10_000,
+          estimateHighCents: 20_000,
+          reserveCents: 8_000,
+          reserveAgreed: true,
+        },
+      })
+    ).status(),
+  ).toBe(200);
+  const sale = (
+    (await (
+      await house.request.post("/api/sales", {
+        data: {
+          title: "Claims sale",
+          startsAt: new Date(Date.now() - 60_000).toISOString(),
+          firstCloseAt: new Date(Date.now() + 40_000).toISOString(),
+          gapSeconds: 30,
+          softCloseSeconds: 30,
+          lots: [{ lotId, openingCents: 2_000 }],
+        },
+      })
+    ).json()) as { sale: { id: string } }
+  ).sale;
+  const saleLotId = (
+    (await (await house.request.get(`/api/sales/${sale.id}`)).json()) as { lots: { saleLotId: string }[] }
+  ).lots[0]!.saleLotId;
 
   // A dealer bids live ($150 ceiling; the price goes to the $80 reserve [CTP proxy rule]) and wins.
   const dealer = await as(browser, DEMO.dealer);
@@ -60,11 +101,22 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await dealer.getByLabel("Your ceiling ($)").fill("150");
   await dealer.getByRole("button", { name: "Bid", exact: true }).click();
   await expect(dealer.getByRole("main")).toContainText("$80.00");
-  await expect.poll(async () => ((await (await dealer.request.get("/api/invoices")).json()) as { invoices: { title: string }[] }).invoices.some((i) => i.title === title), { timeout: 90_000, intervals: [2_000] }).toBe(true);
+  await expect
+    .poll(
+      async () =>
+        ((await (await dealer.request.get("/api/invoices")).json()) as { invoices: { title: string }[] }).invoices.some(
+          (i) => i.title === title,
+        ),
+      { timeout: 90_000, intervals: [2_000] },
+    )
+    .toBe(true);
 
   // Pays by card; the house ships and records delivery.
   await dealer.goto("/invoices");
-  await dealer.getByRole("row", { name: new RegExp(title) }).getByRole("link").click();
+  await dealer
+    .getByRole("row", { name: new RegExp(title) })
+    .getByRole("link")
+    .click();
   await payWithTestCard(dealer);
   const invoiceUrl = dealer.url();
   const invoiceId = invoiceUrl.split("/").pop()!;
@@ -75,7 +127,11 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await dealer.getByRole("link", { name: /open a claim/ }).click();
   await dealer.getByLabel("What is wrong").selectOption("maker-misattributed");
   await dealer.getByLabel("What you ask for").selectOption("refund-affected-items");
-  await dealer.getByLabel("Your statement").fill("Three of the six 12AX7s carry source code X46 and square top getters with dimpled plates, not the construction listed.");
+  await dealer
+    .getByLabel("Your statement")
+    .fill(
+      "Three of the six 12AX7s carry source code X46 and square top getters with dimpled plates, not the construction listed.",
+    );
   await dealer.getByLabel(/Line 1: 12AX7/).check();
   await dealer.getByLabel("Tubes affected").fill("3");
   await dealer.getByLabel("Source code you read").fill("X46");
@@ -99,7 +155,9 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await expect(dealer.getByTestId("case-state")).toHaveText("Waiting for the consignor's answer");
 
   // A photo of the codes, captioned.
-  const jpeg = await sharp({ create: { width: 640, height: 480, channels: 3, background: "#8a8a80" } }).jpeg().toBuffer();
+  const jpeg = await sharp({ create: { width: 640, height: 480, channels: 3, background: "#8a8a80" } })
+    .jpeg()
+    .toBuffer();
   await dealer.getByLabel("Photo of").selectOption({ label: "Line 1: 12AX7" });
   await dealer.getByLabel("Caption").fill("Code X46 and square getter, tubes 4–6");
   await dealer.getByLabel("Choose photos").setInputFiles({ name: "codes.jpg", mimeType: "image/jpeg", buffer: jpeg });
@@ -115,7 +173,9 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await estate.getByRole("link", { name: /^CL-/ }).first().click();
   await expect(estate).toHaveURL(caseUrl);
   await estate.getByLabel("Your answer").selectOption("contests");
-  await estate.getByLabel("Your account").fill("We listed them as the repairer had marked the box; we did not open every carton.");
+  await estate
+    .getByLabel("Your account")
+    .fill("We listed them as the repairer had marked the box; we did not open every carton.");
   await estate.getByRole("button", { name: "Post my answer" }).click();
   await expect(estate.getByTestId("case-state")).toHaveText("Answered: waiting for a mediator");
   await shot(estate, "claim-case");
@@ -125,12 +185,17 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   const mediator = await as(browser, DEMO.mediator);
   await mediator.goto("/mediation");
   expect(await axe(mediator)).toEqual([]);
-  const number = (await mediator.getByRole("row", { name: new RegExp(title) }).getByRole("link").textContent())!;
+  const number = (await mediator
+    .getByRole("row", { name: new RegExp(title) })
+    .getByRole("link")
+    .textContent())!;
   await mediator.getByRole("button", { name: `Take claim ${number}` }).click();
   await expect(mediator).toHaveURL(new RegExp(`/mediation/cases/${caseId}$`));
   await expect(mediator.getByTestId("weighing-summary")).toContainText("supports the claim on 1 of 1 item (3 tubes)");
   await expect(mediator.getByTestId("verdict-1")).toHaveText("Evidence supports the claim");
-  await expect(mediator.getByRole("region", { name: "What the buyer reports" })).toContainText("Pellham Radio Tube Corp.");
+  await expect(mediator.getByRole("region", { name: "What the buyer reports" })).toContainText(
+    "Pellham Radio Tube Corp.",
+  );
   await mediator.getByLabel("Line 1 value per tube").fill("10.00");
   await mediator.getByLabel("Line 2 value per tube").fill("5.00");
   await mediator.getByLabel("Line 3 value per tube").fill("10.00");
@@ -148,7 +213,11 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   await expect(mediator.getByTestId("preview-refund")).toHaveText("$15.84");
   await shot(mediator, "workspace");
   expect(await axe(mediator)).toEqual([]);
-  await mediator.getByLabel("Reasons (both parties receive them)").fill("Code X46 is registered to another maker, and the buyer's construction (square top getter, dimpled grey plates) matches that maker's reference profile, not the listed one. More likely than not, three tubes were misattributed; the refund is the listed value less what they are worth as the other maker's.");
+  await mediator
+    .getByLabel("Reasons (both parties receive them)")
+    .fill(
+      "Code X46 is registered to another maker, and the buyer's construction (square top getter, dimpled grey plates) matches that maker's reference profile, not the listed one. More likely than not, three tubes were misattributed; the refund is the listed value less what they are worth as the other maker's.",
+    );
   await mediator.getByRole("button", { name: "Record the decision and move the money" }).click();
   await expect(mediator.getByTestId("decision-refund")).toHaveText("$15.84", { timeout: 20_000 });
 
@@ -169,12 +238,21 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   const db = new pg.Client({ connectionString: DB });
   await db.connect();
   const { rows } = await db.query(
-    `SELECT txn_kind, account, SUM(debit_cents)::int AS d, SUM(credit_cents)::int AS c FROM ledger_entries WHERE invoice_id = $1 GROUP BY txn_kind, account`, [invoiceId]);
-  const { rows: [claim] } = await db.query(`SELECT refund_id, buyer_refund_cents FROM disputes WHERE id = $1`, [caseId]);
-  const { rows: [inv] } = await db.query(`SELECT transfer_id FROM invoices WHERE id = $1`, [invoiceId]);
-  const { rows: [trial] } = await db.query(`SELECT SUM(debit_cents) - SUM(credit_cents) AS diff FROM ledger_entries`);
+    `SELECT txn_kind, account, SUM(debit_cents)::int AS d, SUM(credit_cents)::int AS c FROM ledger_entries WHERE invoice_id = $1 GROUP BY txn_kind, account`,
+    [invoiceId],
+  );
+  const {
+    rows: [claim],
+  } = await db.query(`SELECT refund_id, buyer_refund_cents FROM disputes WHERE id = $1`, [caseId]);
+  const {
+    rows: [inv],
+  } = await db.query(`SELECT transfer_id FROM invoices WHERE id = $1`, [invoiceId]);
+  const {
+    rows: [trial],
+  } = await db.query(`SELECT SUM(debit_cents) - SUM(credit_cents) AS diff FROM ledger_entries`);
   await db.end();
-  const at = (kind: string, account: string) => rows.find((r) => r.txn_kind === kind && r.account === account) as { d: number; c: number } | undefined;
+  const at = (kind: string, account: string) =>
+    rows.find((r) => r.txn_kind === kind && r.account === account) as { d: number; c: number } | undefined;
   expect(at("dispute-refund", "cash")?.c).toBe(1_584);
   expect(at("dispute-refund", "escrow-held")?.d).toBe(1_584);
   // Paid to the estate in two parts: $44.80 early, then what was left after the refund: $80 − $14.40 − $56 = $9.60 hammer
@@ -182,14 +260,26 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   expect(at("payout-sent-undisputed", "cash")?.c).toBe(4_480);
   expect(at("payout-sent", "cash")?.c).toBe(768);
   expect(at("payout-sent-undisputed", "cash")!.c + at("payout-sent", "cash")!.c).toBe(5_248);
-  expect((at("escrow-released-undisputed", "house-revenue-premium")?.c ?? 0) + (at("escrow-released", "house-revenue-premium")?.c ?? 0)).toBe(800 - 144);
-  expect((at("escrow-released-undisputed", "house-revenue-commission")?.c ?? 0) + (at("escrow-released", "house-revenue-commission")?.c ?? 0)).toBe(1_600 - 288);
+  expect(
+    (at("escrow-released-undisputed", "house-revenue-premium")?.c ?? 0) +
+      (at("escrow-released", "house-revenue-premium")?.c ?? 0),
+  ).toBe(800 - 144);
+  expect(
+    (at("escrow-released-undisputed", "house-revenue-commission")?.c ?? 0) +
+      (at("escrow-released", "house-revenue-commission")?.c ?? 0),
+  ).toBe(1_600 - 288);
   expect(Number(trial.diff)).toBe(0);
   expect(claim.buyer_refund_cents).toBe(1_584);
   const fake = `http://127.0.0.1:${process.env.STRIPE_FAKE_PORT ?? "12121"}`;
   const auth = { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}` };
-  expect(((await (await fetch(`${fake}/v1/refunds/${claim.refund_id}`, { headers: auth })).json()) as { amount: number }).amount).toBe(1_584);
-  expect(((await (await fetch(`${fake}/v1/transfers/${inv.transfer_id}`, { headers: auth })).json()) as { amount: number }).amount).toBe(768);
+  expect(
+    ((await (await fetch(`${fake}/v1/refunds/${claim.refund_id}`, { headers: auth })).json()) as { amount: number })
+      .amount,
+  ).toBe(1_584);
+  expect(
+    ((await (await fetch(`${fake}/v1/transfers/${inv.transfer_id}`, { headers: auth })).json()) as { amount: number })
+      .amount,
+  ).toBe(768);
 
   // Dealers see the estate's record on its lots from now on.
   await dealer.goto(`/lots/${lotId}`);

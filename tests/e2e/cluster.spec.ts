@@ -13,14 +13,29 @@ const base = (p: number) => `http://localhost:${p}`;
 
 function startInstance(port: number): ChildProcess {
   return spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
-    env: { ...process.env, NODE_ENV: "production", PORT: String(port), NEXTAUTH_URL: base(port), DATABASE_URL: DB, SMTP_PORT: "2525", MAIL_CATCHER_URL: "http://127.0.0.1:2580", S3_ENDPOINT: "http://127.0.0.1:4589", STRIPE_API_PORT: "12121", DEMO_LIVE: "0" },
+    env: {
+      ...process.env,
+      NODE_ENV: "production",
+      PORT: String(port),
+      NEXTAUTH_URL: base(port),
+      DATABASE_URL: DB,
+      SMTP_PORT: "2525",
+      MAIL_CATCHER_URL: "http://127.0.0.1:2580",
+      S3_ENDPOINT: "http://127.0.0.1:4589",
+      STRIPE_API_PORT: "12121",
+      DEMO_LIVE: "0",
+    },
     stdio: "ignore",
   });
 }
 
 async function healthy(port: number): Promise<void> {
   for (let i = 0; i < 240; i++) {
-    try { if ((await fetch(`${base(port)}/api/health`)).ok) return; } catch { /* not up yet */ }
+    try {
+      if ((await fetch(`${base(port)}/api/health`)).ok) return;
+    } catch {
+      /* not up yet */
+    }
     await new Promise((r) => setTimeout(r, 250));
   }
   throw new Error(`instance on ${port} did not come up`);
@@ -29,12 +44,19 @@ async function healthy(port: number): Promise<void> {
 async function cookieFor(client: pg.Client, email: string): Promise<string> {
   const { rows } = await client.query("SELECT id, roles, display_name FROM users WHERE email = $1", [email]);
   const u = rows[0];
-  const token = await encode({ token: { uid: u.id, roles: u.roles, email, name: u.display_name, sub: u.id }, secret: process.env.NEXTAUTH_SECRET! });
+  const token = await encode({
+    token: { uid: u.id, roles: u.roles, email, name: u.display_name, sub: u.id },
+    secret: process.env.NEXTAUTH_SECRET!,
+  });
   return `next-auth.session-token=${token}`;
 }
 
 async function call(port: number, cookie: string, method: string, path: string, body?: unknown) {
-  const res = await fetch(`${base(port)}${path}`, { method, headers: { cookie, "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  const res = await fetch(`${base(port)}${path}`, {
+    method,
+    headers: { cookie, "content-type": "application/json" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
   return { status: res.status, body: (await res.json()) as Record<string, unknown> };
 }
 
@@ -47,35 +69,93 @@ test("two instances: broadcasts cross, a killed instance loses no committed bid,
     await Promise.all(PORTS.map(healthy));
     const admin = await cookieFor(db, "priya@house.getterline.test");
     const consignor = await cookieFor(db, "odette@consignor.getterline.test");
-    const dealers = await Promise.all(["quill@dealer.getterline.test", "bellweather@dealer.getterline.test", "northbank@dealer.getterline.test"].map((e) => cookieFor(db, e)));
+    const dealers = await Promise.all(
+      ["quill@dealer.getterline.test", "bellweather@dealer.getterline.test", "northbank@dealer.getterline.test"].map(
+        (e) => cookieFor(db, e),
+      ),
+    );
 
     // Three approved lots, made through the API (titles unique to this run).
     const run = Date.now().toString(36);
     const lotIds: string[] = [];
     for (let i = 0; i < 3; i++) {
-      const lot = (await call(PORTS[0]!, consignor, "POST", "/api/lots", { title: `Cluster lot ${i + 1} ${run}`, provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" })).body.lot as { id: string };
-      const item = { designation: "6V6GT", quantity: 2, labelBrand: "Tri-County Parts", makerName: null, makerBasis: "unconfirmed", sourceCode: null, dateCode: null, features: {}, condition: "used", vacuumLoss: false, defects: [], hazards: [], readings: [], notes: "" };
+      const lot = (
+        await call(PORTS[0]!, consignor, "POST", "/api/lots", {
+          title: `Cluster lot ${i + 1} ${run}`,
+          provenance: "",
+          shippingOrigin: "",
+          testerKind: "untested",
+          testerNotes: "",
+        })
+      ).body.lot as { id: string };
+      const item = {
+        designation: "6V6GT",
+        quantity: 2,
+        labelBrand: "Tri-County Parts",
+        makerName: null,
+        makerBasis: "unconfirmed",
+        sourceCode: null,
+        dateCode: null,
+        features: {},
+        condition: "used",
+        vacuumLoss: false,
+        defects: [],
+        hazards: [],
+        readings: [],
+        notes: "",
+      };
       expect((await call(PORTS[0]!, consignor, "POST", `/api/lots/${lot.id}/items`, item)).status).toBe(201);
       expect((await call(PORTS[1]!, consignor, "POST", `/api/lots/${lot.id}/submit`)).status).toBe(200);
-      expect((await call(PORTS[1]!, admin, "POST", `/api/house/lots/${lot.id}/decision`, { action: "approve", comment: "", estimateLowCents: 5_000, estimateHighCents: 9_000, reserveCents: 2_000, reserveAgreed: true })).status).toBe(200);
+      expect(
+        (
+          await call(PORTS[1]!, admin, "POST", `/api/house/lots/${lot.id}/decision`, {
+            action: "approve",
+            comment: "",
+            estimateLowCents: 5_000,
+            estimateHighCents: 9_000,
+            reserveCents: 2_000,
+            reserveAgreed: true,
+          })
+        ).status,
+      ).toBe(200);
       lotIds.push(lot.id);
     }
     const created = await call(PORTS[0]!, admin, "POST", "/api/sales", {
-      title: "Cluster sale", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 45_000).toISOString(),
-      gapSeconds: 10, softCloseSeconds: 30, lots: lotIds.map((lotId) => ({ lotId, openingCents: 1_000 })),
+      title: "Cluster sale",
+      startsAt: new Date(Date.now() - 60_000).toISOString(),
+      firstCloseAt: new Date(Date.now() + 45_000).toISOString(),
+      gapSeconds: 10,
+      softCloseSeconds: 30,
+      lots: lotIds.map((lotId) => ({ lotId, openingCents: 1_000 })),
     });
     expect(created.status).toBe(201);
     const saleId = (created.body.sale as { id: string }).id;
-    const saleLots = ((await call(PORTS[1]!, dealers[0]!, "GET", `/api/sales/${saleId}`)).body.lots as { saleLotId: string }[]).map((l) => l.saleLotId);
+    const saleLots = (
+      (await call(PORTS[1]!, dealers[0]!, "GET", `/api/sales/${saleId}`)).body.lots as { saleLotId: string }[]
+    ).map((l) => l.saleLotId);
 
     // A watcher on instance B sees a bid placed through instance A.
-    const watcher = io(base(PORTS[1]!), { path: "/socket.io", transports: ["websocket"], extraHeaders: { cookie: dealers[2]! } });
+    const watcher = io(base(PORTS[1]!), {
+      path: "/socket.io",
+      transports: ["websocket"],
+      extraHeaders: { cookie: dealers[2]! },
+    });
     await new Promise<void>((r) => watcher.on("session.ready", () => r()));
     await new Promise<void>((r) => watcher.emit("room.join", { room: `lot:${saleLots[0]}` }, () => r()));
     const seen = new Promise<{ seq: number }>((r) => watcher.on("lot.bid", r));
-    const first = await call(PORTS[0]!, dealers[0]!, "POST", `/api/sale-lots/${saleLots[0]}/bids`, { maxCents: 3_000, idempotencyKey: "cluster-first" });
+    const first = await call(PORTS[0]!, dealers[0]!, "POST", `/api/sale-lots/${saleLots[0]}/bids`, {
+      maxCents: 3_000,
+      idempotencyKey: "cluster-first",
+    });
     expect(first.status).toBe(200);
-    expect((await Promise.race([seen, new Promise((_, rej) => setTimeout(() => rej(new Error("no cross-instance broadcast")), 3_000))]) as { seq: number }).seq).toBe(1);
+    expect(
+      (
+        (await Promise.race([
+          seen,
+          new Promise((_, rej) => setTimeout(() => rej(new Error("no cross-instance broadcast")), 3_000)),
+        ])) as { seq: number }
+      ).seq,
+    ).toBe(1);
     watcher.close();
 
     // Bids through both instances; instance A is killed part-way.
@@ -84,11 +164,17 @@ test("two instances: broadcasts cross, a killed instance loses no committed bid,
       if (round === 6) a.kill("SIGKILL");
       for (const [i, sl] of saleLots.entries()) {
         const port = round < 6 && i % 2 === 0 ? PORTS[0]! : PORTS[1]!;
-        const r = await call(port, dealers[round % 3]!, "POST", `/api/sale-lots/${sl}/bids`, { maxCents: 2_000 + round * 700 + i * 100, idempotencyKey: `cluster-${round}-${i}` }).catch(() => ({ status: 0, body: {} }));
+        const r = await call(port, dealers[round % 3]!, "POST", `/api/sale-lots/${sl}/bids`, {
+          maxCents: 2_000 + round * 700 + i * 100,
+          idempotencyKey: `cluster-${round}-${i}`,
+        }).catch(() => ({ status: 0, body: {} }));
         if (r.status === 200) accepted++;
       }
     }
-    const { rows: stored } = await db.query("SELECT COUNT(*)::int AS n FROM bids b JOIN sale_lots sl ON sl.id = b.sale_lot_id WHERE sl.sale_id = $1", [saleId]);
+    const { rows: stored } = await db.query(
+      "SELECT COUNT(*)::int AS n FROM bids b JOIN sale_lots sl ON sl.id = b.sale_lot_id WHERE sl.sale_id = $1",
+      [saleId],
+    );
     expect(stored[0].n).toBe(accepted); // every bid acknowledged by either instance is committed
 
     // Every lot closes exactly once, after the kill, from the surviving instance.
@@ -96,20 +182,29 @@ test("two instances: broadcasts cross, a killed instance loses no committed bid,
     let open = 3;
     while (Date.now() < deadline && open > 0) {
       await new Promise((r) => setTimeout(r, 1_000));
-      open = (await db.query("SELECT COUNT(*)::int AS n FROM sale_lots WHERE sale_id = $1 AND phase = 'open'", [saleId])).rows[0].n;
+      open = (
+        await db.query("SELECT COUNT(*)::int AS n FROM sale_lots WHERE sale_id = $1 AND phase = 'open'", [saleId])
+      ).rows[0].n;
     }
     expect(open).toBe(0);
-    const { rows: closed } = await db.query("SELECT phase, closed_at, seq, (SELECT MAX(seq) FROM bids WHERE sale_lot_id = sale_lots.id) AS last_bid FROM sale_lots WHERE sale_id = $1", [saleId]);
+    const { rows: closed } = await db.query(
+      "SELECT phase, closed_at, seq, (SELECT MAX(seq) FROM bids WHERE sale_lot_id = sale_lots.id) AS last_bid FROM sale_lots WHERE sale_id = $1",
+      [saleId],
+    );
     for (const c of closed) {
       expect(c.phase).toBe("sold");
       expect(c.seq).toBe(c.last_bid + 1); // the close itself took exactly one sequence number
     }
     // The consignor's e-mail follows the close's commit: wait for all three, then check none came twice.
-    const sold = async () => ((await (await fetch("http://127.0.0.1:2580/api/messages")).json()) as { subject: string }[]).filter((m) => m.subject.startsWith("Sold: Cluster lot") && m.subject.endsWith(run));
+    const sold = async () =>
+      ((await (await fetch("http://127.0.0.1:2580/api/messages")).json()) as { subject: string }[]).filter(
+        (m) => m.subject.startsWith("Sold: Cluster lot") && m.subject.endsWith(run),
+      );
     await expect.poll(async () => (await sold()).length, { timeout: 20_000 }).toBeGreaterThanOrEqual(3);
     await new Promise((r) => setTimeout(r, 2_000));
     const mails = await sold();
-    for (let i = 1; i <= 3; i++) expect(mails.filter((m) => m.subject === `Sold: Cluster lot ${i} ${run}`)).toHaveLength(1);
+    for (let i = 1; i <= 3; i++)
+      expect(mails.filter((m) => m.subject === `Sold: Cluster lot ${i} ${run}`)).toHaveLength(1);
   } finally {
     a.kill("SIGKILL");
     b.kill("SIGTERM");

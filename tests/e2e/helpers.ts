@@ -60,25 +60,92 @@ export async function shipAndDeliver(house: Page, invoiceUrl: string, tracking: 
  * dealer bids `maxCents`; the lot's close is then brought forward in the database (the clock moving on) and
  * the test waits for the dealer's invoice. Returns the sale and the invoice's id.
  */
-export async function soldToDealer(consignor: Page, house: Page, dealer: Page, opts: { title: string; reserveCents: number; maxCents: number; databaseUrl: string }) {
+export async function soldToDealer(
+  consignor: Page,
+  house: Page,
+  dealer: Page,
+  opts: { title: string; reserveCents: number; maxCents: number; databaseUrl: string },
+) {
   const { title } = opts;
-  const lot = ((await (await consignor.request.post("/api/lots", { data: { title, provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" } })).json()) as { lot: { id: string } }).lot;
-  const item = { designation: "6SN7GT", quantity: 4, labelBrand: "Carrow Instruments", makerName: null, makerBasis: "unconfirmed", sourceCode: null, dateCode: null, features: {}, condition: "used", vacuumLoss: false, defects: [], hazards: [], readings: [], notes: "" };
+  const lot = (
+    (await (
+      await consignor.request.post("/api/lots", {
+        data: { title, provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" },
+      })
+    ).json()) as { lot: { id: string } }
+  ).lot;
+  const item = {
+    designation: "6SN7GT",
+    quantity: 4,
+    labelBrand: "Carrow Instruments",
+    makerName: null,
+    makerBasis: "unconfirmed",
+    sourceCode: null,
+    dateCode: null,
+    features: {},
+    condition: "used",
+    vacuumLoss: false,
+    defects: [],
+    hazards: [],
+    readings: [],
+    notes: "",
+  };
   expect((await consignor.request.post(`/api/lots/${lot.id}/items`, { data: item })).status()).toBe(201);
   expect((await consignor.request.post(`/api/lots/${lot.id}/submit`)).status()).toBe(200);
-  expect((await house.request.post(`/api/house/lots/${lot.id}/decision`, { data: { action: "approve", comment: "", estimateLowCents: 10_000, estimateHighCents: 20_000, reserveCents: opts.reserveCents, reserveAgreed: true } })).status()).toBe(200);
-  const sale = ((await (await house.request.post("/api/sales", { data: { title: `Sale of ${title}`, startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 40_000).toISOString(), gapSeconds: 30, softCloseSeconds: 30, lots: [{ lotId: lot.id, openingCents: 2_000 }] } })).json()) as { sale: { id: string } }).sale;
-  const saleLotId = (((await (await house.request.get(`/api/sales/${sale.id}`)).json()) as { lots: { saleLotId: string }[] }).lots[0]!).saleLotId;
-  expect((await dealer.request.post(`/api/sale-lots/${saleLotId}/bids`, { data: { maxCents: opts.maxCents, idempotencyKey: `e2e-${saleLotId}` } })).status()).toBe(200);
+  expect(
+    (
+      await house.request.post(`/api/house/lots/${lot.id}/decision`, {
+        data: {
+          action: "approve",
+          comment: "",
+          estimateLowCents: 10_000,
+          estimateHighCents: 20_000,
+          reserveCents: opts.reserveCents,
+          reserveAgreed: true,
+        },
+      })
+    ).status(),
+  ).toBe(200);
+  const sale = (
+    (await (
+      await house.request.post("/api/sales", {
+        data: {
+          title: `Sale of ${title}`,
+          startsAt: new Date(Date.now() - 60_000).toISOString(),
+          firstCloseAt: new Date(Date.now() + 40_000).toISOString(),
+          gapSeconds: 30,
+          softCloseSeconds: 30,
+          lots: [{ lotId: lot.id, openingCents: 2_000 }],
+        },
+      })
+    ).json()) as { sale: { id: string } }
+  ).sale;
+  const saleLotId = (
+    (await (await house.request.get(`/api/sales/${sale.id}`)).json()) as { lots: { saleLotId: string }[] }
+  ).lots[0]!.saleLotId;
+  expect(
+    (
+      await dealer.request.post(`/api/sale-lots/${saleLotId}/bids`, {
+        data: { maxCents: opts.maxCents, idempotencyKey: `e2e-${saleLotId}` },
+      })
+    ).status(),
+  ).toBe(200);
   const db = new pg.Client({ connectionString: opts.databaseUrl });
   await db.connect();
   await db.query("UPDATE sale_lots SET closes_at = now() WHERE id = $1", [saleLotId]);
   await db.end();
   let invoiceId = "";
-  await expect.poll(async () => {
-    const list = ((await (await dealer.request.get("/api/invoices")).json()) as { invoices: { id: string; title: string }[] }).invoices;
-    invoiceId = list.find((i) => i.title === title)?.id ?? "";
-    return invoiceId;
-  }, { timeout: 40_000, intervals: [1_000] }).not.toBe("");
+  await expect
+    .poll(
+      async () => {
+        const list = (
+          (await (await dealer.request.get("/api/invoices")).json()) as { invoices: { id: string; title: string }[] }
+        ).invoices;
+        invoiceId = list.find((i) => i.title === title)?.id ?? "";
+        return invoiceId;
+      },
+      { timeout: 40_000, intervals: [1_000] },
+    )
+    .not.toBe("");
   return { saleId: sale.id, saleLotId, invoiceId };
 }

@@ -8,19 +8,32 @@ async function as(browser: Browser, email: string, viewport?: { width: number; h
   return page;
 }
 
-test("two dealers bid live; the panel never contradicts itself; after the close the loser reads the outcome; phone board, sign-in return and the consignor's net", async ({ browser }) => {
+test("two dealers bid live; the panel never contradicts itself; after the close the loser reads the outcome; phone board, sign-in return and the consignor's net", async ({
+  browser,
+}) => {
   test.setTimeout(200_000);
   const errors: string[] = [];
   const house = await as(browser, DEMO.admin);
-  const { lots } = (await (await house.request.get("/api/lots?scope=approved")).json()) as { lots: { id: string; title: string }[] };
+  const { lots } = (await (await house.request.get("/api/lots?scope=approved")).json()) as {
+    lots: { id: string; title: string }[];
+  };
   const lot = lots.find((l) => l.title.startsWith("Attic box"))!;
   const firstClose = new Date(Date.now() + 30_000); // the bids below fall inside its 30 s late-bid window
   const created = await house.request.post("/api/sales", {
-    data: { title: "Live test sale", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: firstClose.toISOString(), gapSeconds: 30, softCloseSeconds: 30, lots: [{ lotId: lot.id, openingCents: 10_000 }] },
+    data: {
+      title: "Live test sale",
+      startsAt: new Date(Date.now() - 60_000).toISOString(),
+      firstCloseAt: firstClose.toISOString(),
+      gapSeconds: 30,
+      softCloseSeconds: 30,
+      lots: [{ lotId: lot.id, openingCents: 10_000 }],
+    },
   });
   expect(created.status()).toBe(201);
   const { sale } = (await created.json()) as { sale: { id: string } };
-  const { lots: saleLots } = (await (await house.request.get(`/api/sales/${sale.id}`)).json()) as { lots: { saleLotId: string }[] };
+  const { lots: saleLots } = (await (await house.request.get(`/api/sales/${sale.id}`)).json()) as {
+    lots: { saleLotId: string }[];
+  };
   const saleLotId = saleLots[0]!.saleLotId;
   const url = `/sales/${sale.id}/lots/${saleLotId}`;
 
@@ -35,7 +48,9 @@ test("two dealers bid live; the panel never contradicts itself; after the close 
   const a = visitor; // Quill & Cathode
   const b = await as(browser, "bellweather@dealer.getterline.test");
   for (const p of [a, b]) {
-    p.on("console", (m) => { if (m.type() === "error") errors.push(m.text()); });
+    p.on("console", (m) => {
+      if (m.type() === "error") errors.push(m.text());
+    });
     p.on("pageerror", (e) => errors.push(e.message));
     await p.goto(url);
     await expect(p.getByTestId("live-link")).toHaveAttribute("data-connected", "true");
@@ -50,7 +65,9 @@ test("two dealers bid live; the panel never contradicts itself; after the close 
   await expect(a.getByTestId("standing")).toContainText("You hold this lot");
   await expect(b.getByTestId("live-price")).toHaveText("$500.00", { timeout: 1_000 });
   await expect(b.getByText(/A late bid moved the close/)).toBeVisible();
-  expect(Date.parse((await b.getByTestId("live-left").locator("xpath=..").locator("time").getAttribute("datetime"))!)).toBeGreaterThan(Date.parse(closeBefore!));
+  expect(
+    Date.parse((await b.getByTestId("live-left").locator("xpath=..").locator("time").getAttribute("datetime"))!),
+  ).toBeGreaterThan(Date.parse(closeBefore!));
 
   // B passes A: price = A's ceiling + one step at that level ($50 from $500) = $750 [CTP proxy rule, 1-2-5 ladder].
   await b.getByLabel("Your ceiling ($)").fill("800");
@@ -91,6 +108,14 @@ test("two dealers bid live; the panel never contradicts itself; after the close 
 
   // The consignor sees the sold lot's net: $750.00 hammer − marginal commission (20 % of $500 + 15 % of $250 = $137.50) = $612.50 [SUG house tiers].
   const consignor = await as(browser, DEMO.consignor);
-  await expect.poll(async () => { await consignor.goto("/consignor"); return consignor.getByTestId(`net-${lot.id}`).textContent(); }, { timeout: 30_000, intervals: [1_000] }).toBe("$612.50");
+  await expect
+    .poll(
+      async () => {
+        await consignor.goto("/consignor");
+        return consignor.getByTestId(`net-${lot.id}`).textContent();
+      },
+      { timeout: 30_000, intervals: [1_000] },
+    )
+    .toBe("$612.50");
   await expect(consignor.locator("table").getByTestId(`stage-${lot.id}`)).toHaveText("Sold, buyer paying");
 });

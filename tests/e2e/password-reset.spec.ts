@@ -11,11 +11,13 @@ test("a forgotten password is reset through the e-mailed link", async ({ page, r
   await expect(page.getByRole("main").getByRole("status")).toContainText("reset link is on its way");
 
   let link = "";
-  await expect.poll(async () => {
-    const mails = (await (await request.get(`${INBOX}?to=${encodeURIComponent(who)}`)).json()) as { text: string }[];
-    link = mails[0]?.text.match(/https?:\/\/\S+token=[\w-]+/)?.[0] ?? "";
-    return link;
-  }).not.toBe("");
+  await expect
+    .poll(async () => {
+      const mails = (await (await request.get(`${INBOX}?to=${encodeURIComponent(who)}`)).json()) as { text: string }[];
+      link = mails[0]?.text.match(/https?:\/\/\S+token=[\w-]+/)?.[0] ?? "";
+      return link;
+    })
+    .not.toBe("");
 
   await page.goto(link);
   await page.getByLabel("New password").fill("tomas-new-password");

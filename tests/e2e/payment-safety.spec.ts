@@ -12,23 +12,36 @@ test("two tabs pay one invoice at once: exactly one succeeds and the other is to
   const house = await signedInPage(browser, DEMO.admin);
   const tabOne = await signedInPage(browser, "northbank@dealer.getterline.test");
   const title = `Two-tab lot ${Date.now().toString(36)}`;
-  const { invoiceId } = await soldToDealer(consignor, house, tabOne, { title, reserveCents: 3_000, maxCents: 6_000, databaseUrl: DB });
+  const { invoiceId } = await soldToDealer(consignor, house, tabOne, {
+    title,
+    reserveCents: 3_000,
+    maxCents: 6_000,
+    databaseUrl: DB,
+  });
 
   const tabTwo = await tabOne.context().newPage(); // the same buyer's second tab
   const errors: string[] = [];
-  for (const tab of [tabOne, tabTwo]) tab.on("console", (m) => { if (m.type() === "error") errors.push(m.text()); });
+  for (const tab of [tabOne, tabTwo])
+    tab.on("console", (m) => {
+      if (m.type() === "error") errors.push(m.text());
+    });
   for (const tab of [tabOne, tabTwo]) {
     await tab.goto(`/invoices/${invoiceId}`);
     await fillTestCard(tab);
   }
   await Promise.all([tabOne, tabTwo].map((tab) => tab.getByRole("button", { name: "Pay now" }).click()));
 
-  for (const tab of [tabOne, tabTwo]) await expect(tab.getByTestId("invoice-state")).toHaveText("Paid, held by the house", { timeout: 15_000 });
+  for (const tab of [tabOne, tabTwo])
+    await expect(tab.getByTestId("invoice-state")).toHaveText("Paid, held by the house", { timeout: 15_000 });
   const said = await Promise.all([tabOne, tabTwo].map((tab) => tab.getByRole("status").first().textContent()));
   expect(said.filter((t) => /Payment received/.test(t ?? ""))).toHaveLength(1);
   expect(said.filter((t) => /already been paid|already in progress/.test(t ?? ""))).toHaveLength(1);
 
-  const charges = (await (await fetch(`${PROCESSOR}/v1/charges?limit=100`, { headers: { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}` } })).json()) as { data: { status: string; metadata: Record<string, string> }[] };
+  const charges = (await (
+    await fetch(`${PROCESSOR}/v1/charges?limit=100`, {
+      headers: { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}` },
+    })
+  ).json()) as { data: { status: string; metadata: Record<string, string> }[] };
   expect(charges.data.filter((c) => c.metadata.invoice_id === invoiceId && c.status === "succeeded")).toHaveLength(1);
   // The refused tab's 409 answer is logged by the browser as a failed resource; nothing else may be.
   expect(errors.filter((e) => !/status of 409/.test(e))).toEqual([]);

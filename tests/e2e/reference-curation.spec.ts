@@ -44,7 +44,9 @@ test("the house adds a type, and a consignor's lot stops flagging it", async ({ 
   // The consignor's lot no longer asks for a check, without the item being touched.
   await consignor.reload();
   await expect(consignor.getByRole("row").filter({ hasText: "KT61" }).filter({ hasNotText: "lines ·" })).toBeVisible();
-  await expect(consignor.getByRole("row").filter({ hasText: "KT61" }).filter({ hasNotText: "lines ·" })).not.toContainText("check type");
+  await expect(
+    consignor.getByRole("row").filter({ hasText: "KT61" }).filter({ hasNotText: "lines ·" }),
+  ).not.toContainText("check type");
 
   // And the public reference page now has it on file, with its source.
   await house.goto("/reference?q=KT61");

@@ -11,7 +11,9 @@ test("a designation typed loosely is decoded with its published figures and equi
   await expect(page.getByRole("row", { name: /5751.*Substitute with caveats/ })).toBeVisible();
 });
 
-test("a designation with no figures on file decodes by its scheme and offers the closest known ones", async ({ page }) => {
+test("a designation with no figures on file decodes by its scheme and offers the closest known ones", async ({
+  page,
+}) => {
   await page.goto("/reference?q=12AX8");
   // [LS53] 12 = 12.6 V heater class; no figures on file for 12AX8
   await expect(page.getByRole("heading", { name: "12AX8", exact: true })).toBeVisible();
@@ -35,7 +37,9 @@ test("the reference page lists every source tag with its publication", async ({ 
   await expect(sources).toContainText("EIA-476");
 });
 
-test("a single-digit-year code on a 12AX7 lists every decade since the type's introduction, none before", async ({ page }) => {
+test("a single-digit-year code on a 12AX7 lists every decade since the type's introduction, none before", async ({
+  page,
+}) => {
   await page.goto("/reference");
   await page.getByLabel("Code off the glass").fill("943");
   await page.getByLabel("On type (optional)").fill("12AX7");

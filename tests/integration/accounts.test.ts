@@ -1,7 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { ApiError } from "../../lib/api/errors";
 import { ACCOUNT_MAX_FAILURES } from "../../lib/auth/rate-limit";
-import { authenticate, confirmPasswordReset, requestPasswordReset, setRoles, signUp } from "../../lib/services/accounts";
+import {
+  authenticate,
+  confirmPasswordReset,
+  requestPasswordReset,
+  setRoles,
+  signUp,
+} from "../../lib/services/accounts";
 import { User } from "../../models";
 import { makeUser, waitForMail } from "../support/factories";
 
@@ -16,21 +22,33 @@ const code = async (p: Promise<unknown>) => {
 
 describe("accounts service (real PostgreSQL)", () => {
   it("signs up a dealer with a bcrypt hash and refuses the same e-mail twice", async () => {
-    const a = await signUp({ displayName: "Quill Test", email: "Signup@Example.test", password: "long-enough-pw", role: "dealer" });
+    const a = await signUp({
+      displayName: "Quill Test",
+      email: "Signup@Example.test",
+      password: "long-enough-pw",
+      role: "dealer",
+    });
     expect(a.email).toBe("signup@example.test");
     expect(a.roles).toEqual(["dealer"]);
     expect(a).not.toHaveProperty("passwordHash");
     const row = await User.findByPk(a.id);
     expect(row!.passwordHash).toMatch(/^\$2[aby]\$11\$/);
-    expect(await code(signUp({ displayName: "Again", email: "signup@example.test", password: "long-enough-pw", role: "consignor" }))).toBe("conflict");
+    expect(
+      await code(
+        signUp({ displayName: "Again", email: "signup@example.test", password: "long-enough-pw", role: "consignor" }),
+      ),
+    ).toBe("conflict");
   });
 
   it("rejects a wrong password and then throttles the account on the tenth attempt", async () => {
     const u = await makeUser(["dealer"]);
     expect(await code(authenticate({ email: u.email, password: "wrong" }, "10.0.0.1"))).toBe("invalid_credentials");
-    for (let i = 1; i < ACCOUNT_MAX_FAILURES; i++) await code(authenticate({ email: u.email, password: "wrong" }, `10.0.1.${i}`));
+    for (let i = 1; i < ACCOUNT_MAX_FAILURES; i++)
+      await code(authenticate({ email: u.email, password: "wrong" }, `10.0.1.${i}`));
     // Tenth attempt, even with the right password and from another address: refused.
-    expect(await code(authenticate({ email: u.email, password: "correct-horse-battery" }, "10.0.2.1"))).toBe("rate_limited");
+    expect(await code(authenticate({ email: u.email, password: "correct-horse-battery" }, "10.0.2.1"))).toBe(
+      "rate_limited",
+    );
   });
 
   it("accepts the right password", async () => {
@@ -46,8 +64,12 @@ describe("accounts service (real PostgreSQL)", () => {
     expect(mail.subject).toMatch(/Reset your Getterline password/);
     const token = mail.text.match(/token=([\w-]+)/)![1]!;
     await confirmPasswordReset({ token, password: "a-brand-new-password", confirm: "a-brand-new-password" });
-    await expect(authenticate({ email: u.email, password: "a-brand-new-password" }, "10.0.4.1")).resolves.toMatchObject({ id: u.id });
-    expect(await code(confirmPasswordReset({ token, password: "another-password", confirm: "another-password" }))).toBe("gone");
+    await expect(authenticate({ email: u.email, password: "a-brand-new-password" }, "10.0.4.1")).resolves.toMatchObject(
+      { id: u.id },
+    );
+    expect(await code(confirmPasswordReset({ token, password: "another-password", confirm: "another-password" }))).toBe(
+      "gone",
+    );
   });
 
   it("says nothing about addresses without an account", async () => {

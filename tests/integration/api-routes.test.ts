@@ -15,27 +15,51 @@ function expectErrorShape(body: unknown): asserts body is ErrorBody {
 
 describe("API routes: one error shape, role checks, cross-site refusal", () => {
   it("creates an account (201) and answers bad input with 400 and field messages", async () => {
-    const ok = await signUpRoute(request("/api/account/sign-up", { json: { displayName: "Northbank Test", email: "nb@example.test", password: "long-enough-pw", role: "dealer" } }), noParams);
+    const ok = await signUpRoute(
+      request("/api/account/sign-up", {
+        json: { displayName: "Northbank Test", email: "nb@example.test", password: "long-enough-pw", role: "dealer" },
+      }),
+      noParams,
+    );
     expect(ok.status).toBe(201);
-    const bad = await signUpRoute(request("/api/account/sign-up", { json: { email: "not-mail", role: "admin" } }), noParams);
+    const bad = await signUpRoute(
+      request("/api/account/sign-up", { json: { email: "not-mail", role: "admin" } }),
+      noParams,
+    );
     expect(bad.status).toBe(400);
     const body = await bad.json();
     expectErrorShape(body);
     expect(body.error.code).toBe("validation_failed");
-    expect(Object.keys(body.error.fields!)).toEqual(expect.arrayContaining(["email", "role", "password", "displayName"]));
+    expect(Object.keys(body.error.fields!)).toEqual(
+      expect.arrayContaining(["email", "role", "password", "displayName"]),
+    );
   });
 
   it("refuses a self-granted house role at sign-up", async () => {
-    const r = await signUpRoute(request("/api/account/sign-up", { json: { displayName: "Sneaky", email: "sneaky@example.test", password: "long-enough-pw", role: "admin" } }), noParams);
+    const r = await signUpRoute(
+      request("/api/account/sign-up", {
+        json: { displayName: "Sneaky", email: "sneaky@example.test", password: "long-enough-pw", role: "admin" },
+      }),
+      noParams,
+    );
     expect(r.status).toBe(400);
   });
 
   it("answers malformed JSON with 400, a wrong content type with 415 and a huge body with 413", async () => {
-    const broken = await signUpRoute(request("/api/account/sign-up", { body: "{not json", headers: { "content-type": "application/json" } }), noParams);
+    const broken = await signUpRoute(
+      request("/api/account/sign-up", { body: "{not json", headers: { "content-type": "application/json" } }),
+      noParams,
+    );
     expect(broken.status).toBe(400);
-    const wrongType = await signUpRoute(request("/api/account/sign-up", { body: "a=b", headers: { "content-type": "text/plain" } }), noParams);
+    const wrongType = await signUpRoute(
+      request("/api/account/sign-up", { body: "a=b", headers: { "content-type": "text/plain" } }),
+      noParams,
+    );
     expect(wrongType.status).toBe(415);
-    const huge = await signUpRoute(request("/api/account/sign-up", { json: { displayName: "x".repeat(100_000) } }), noParams);
+    const huge = await signUpRoute(
+      request("/api/account/sign-up", { json: { displayName: "x".repeat(100_000) } }),
+      noParams,
+    );
     expect(huge.status).toBe(413);
     expectErrorShape(await huge.json());
   });
@@ -46,14 +70,20 @@ describe("API routes: one error shape, role checks, cross-site refusal", () => {
     expectErrorShape(await anon.json());
 
     const dealer = await makeUser(["dealer"]);
-    const forbidden = await adminUsers(request("/api/admin/users", { headers: { cookie: await sessionCookie(dealer) } }), noParams);
+    const forbidden = await adminUsers(
+      request("/api/admin/users", { headers: { cookie: await sessionCookie(dealer) } }),
+      noParams,
+    );
     expect(forbidden.status).toBe(403);
     const fb = await forbidden.json();
     expectErrorShape(fb);
     expect(fb.error.code).toBe("forbidden");
 
     const admin = await makeUser(["admin"]);
-    const ok = await adminUsers(request("/api/admin/users", { headers: { cookie: await sessionCookie(admin) } }), noParams);
+    const ok = await adminUsers(
+      request("/api/admin/users", { headers: { cookie: await sessionCookie(admin) } }),
+      noParams,
+    );
     expect(ok.status).toBe(200);
     const list = (await ok.json()) as { accounts: { email: string; passwordHash?: string }[] };
     expect(list.accounts.some((a) => a.email === dealer.email)).toBe(true);

@@ -14,10 +14,17 @@ async function saleWith(closeInMs: number, reserveCents = 5_000, softCloseSecond
   const lot = await approvedLot(consignor, admin, reserveCents);
   const now = Date.now();
   const sale = await createSale(viewerOf(admin), {
-    title: "Test sale", startsAt: new Date(now - 60_000).toISOString(), firstCloseAt: new Date(now + closeInMs).toISOString(),
-    gapSeconds: 30, softCloseSeconds, lots: [{ lotId: lot.id, openingCents: 1_000 }],
+    title: "Test sale",
+    startsAt: new Date(now - 60_000).toISOString(),
+    firstCloseAt: new Date(now + closeInMs).toISOString(),
+    gapSeconds: 30,
+    softCloseSeconds,
+    lots: [{ lotId: lot.id, openingCents: 1_000 }],
   });
-  const [sl] = await db().query<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, { replacements: { id: sale.id }, type: QueryTypes.SELECT });
+  const [sl] = await db().query<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, {
+    replacements: { id: sale.id },
+    type: QueryTypes.SELECT,
+  });
   return { saleLotId: sl!.id, consignor, admin };
 }
 
@@ -27,21 +34,29 @@ describe("bidding under load (real PostgreSQL, row lock per lot)", () => {
     const dealers = await Promise.all(Array.from({ length: 20 }, () => makeUser(["dealer"])));
     let accepted = 0;
     const keys: string[] = [];
-    await Promise.all(dealers.map(async (d, di) => {
-      for (let i = 0; i < 50; i++) {
-        const key = `d${di}-b${i}`;
-        keys.push(key);
-        const max = 1_000 + (di * 50 + i) * 137 + ((di * 7919 + i * 104729) % 3000); // spread, overlapping maxima
-        const r = await placeMaxBid(viewerOf(d), saleLotId, max, key);
-        if (r.accepted) accepted++;
-        if (i % 10 === 0) {
-          // A client retry with the same key: the same answer, nothing new stored.
-          const again = await placeMaxBid(viewerOf(d), saleLotId, max, key);
-          if (r.accepted) expect(again).toMatchObject({ accepted: true, seq: r.seq, replayed: true });
+    await Promise.all(
+      dealers.map(async (d, di) => {
+        for (let i = 0; i < 50; i++) {
+          const key = `d${di}-b${i}`;
+          keys.push(key);
+          const max = 1_000 + (di * 50 + i) * 137 + ((di * 7919 + i * 104729) % 3000); // spread, overlapping maxima
+          const r = await placeMaxBid(viewerOf(d), saleLotId, max, key);
+          if (r.accepted) accepted++;
+          if (i % 10 === 0) {
+            // A client retry with the same key: the same answer, nothing new stored.
+            const again = await placeMaxBid(viewerOf(d), saleLotId, max, key);
+            if (r.accepted) expect(again).toMatchObject({ accepted: true, seq: r.seq, replayed: true });
+          }
         }
-      }
-    }));
-    const bids = await db().query<{ seq: number; bidder_id: string; max_cents: number; placed_at: Date; idempotency_key: string }>(
+      }),
+    );
+    const bids = await db().query<{
+      seq: number;
+      bidder_id: string;
+      max_cents: number;
+      placed_at: Date;
+      idempotency_key: string;
+    }>(
       `SELECT seq, bidder_id, max_cents, placed_at, idempotency_key FROM bids WHERE sale_lot_id = :saleLotId ORDER BY seq`,
       { replacements: { saleLotId }, type: QueryTypes.SELECT },
     );
@@ -49,9 +64,18 @@ describe("bidding under load (real PostgreSQL, row lock per lot)", () => {
     expect(bids.map((b) => b.seq)).toEqual(Array.from({ length: bids.length }, (_, i) => i + 1)); // no gaps
     expect(new Set(bids.map((b) => `${b.bidder_id}:${b.idempotency_key}`)).size).toBe(bids.length); // no duplicates
     const [row] = await db().query<{ state: ProxyState; price_cents: number; leader_id: string; seq: number }>(
-      `SELECT state, price_cents, leader_id, seq FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT },
+      `SELECT state, price_cents, leader_id, seq FROM sale_lots WHERE id = :saleLotId`,
+      { replacements: { saleLotId }, type: QueryTypes.SELECT },
     );
-    const replayed = replayBids(row!.state.terms, bids.map((b) => ({ bidderId: b.bidder_id, maxCents: b.max_cents, placedAtMs: b.placed_at.getTime(), seq: b.seq })));
+    const replayed = replayBids(
+      row!.state.terms,
+      bids.map((b) => ({
+        bidderId: b.bidder_id,
+        maxCents: b.max_cents,
+        placedAtMs: b.placed_at.getTime(),
+        seq: b.seq,
+      })),
+    );
     expect(row!.price_cents).toBe(replayed.priceCents);
     expect(row!.leader_id).toBe(replayed.leader!.bidderId);
     expect(row!.seq).toBe(bids.length);
@@ -59,7 +83,10 @@ describe("bidding under load (real PostgreSQL, row lock per lot)", () => {
 
   it("gives 30 first-time bidders arriving at once 30 different paddle numbers", async () => {
     const { saleLotId } = await saleWith(3_600_000);
-    const [{ sale_id: saleId }] = await db().query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT }) as [{ sale_id: string }];
+    const [{ sale_id: saleId }] = (await db().query<{ sale_id: string }>(
+      `SELECT sale_id FROM sale_lots WHERE id = :saleLotId`,
+      { replacements: { saleLotId }, type: QueryTypes.SELECT },
+    )) as [{ sale_id: string }];
     const { paddleFor } = await import("../../lib/services/paddles");
     const dealers = await Promise.all(Array.from({ length: 30 }, () => makeUser(["dealer"])));
     const numbers = await Promise.all(dealers.map((d) => paddleFor(saleId, d.id)));
@@ -89,8 +116,13 @@ describe("bidding under load (real PostgreSQL, row lock per lot)", () => {
 });
 
 describe("closing", () => {
-  beforeAll(async () => { await startQueue(process.env.DATABASE_URL!); await startClosingWorker(); });
-  afterAll(async () => { await stopQueue(); });
+  beforeAll(async () => {
+    await startQueue(process.env.DATABASE_URL!);
+    await startClosingWorker();
+  });
+  afterAll(async () => {
+    await stopQueue();
+  });
 
   it("closes exactly once however many times it is asked, sells to the leader at the shown price and mails both sides", async () => {
     const { saleLotId, consignor } = await saleWith(3_000, 2_000, 1); // a 1 s late-bid window, so these early bids do not extend
@@ -101,7 +133,10 @@ describe("closing", () => {
     await new Promise((r) => setTimeout(r, 3_200));
     const results = await Promise.all(Array.from({ length: 8 }, () => closeSaleLot(saleLotId)));
     expect(results.filter((x) => x === "closed").length).toBeLessThanOrEqual(1);
-    const [row] = await db().query<{ phase: string; buyer_id: string; hammer_cents: number }>(`SELECT phase, buyer_id, hammer_cents FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT });
+    const [row] = await db().query<{ phase: string; buyer_id: string; hammer_cents: number }>(
+      `SELECT phase, buyer_id, hammer_cents FROM sale_lots WHERE id = :saleLotId`,
+      { replacements: { saleLotId }, type: QueryTypes.SELECT },
+    );
     expect(row).toMatchObject({ phase: "sold", buyer_id: a.id, hammer_cents: 2_700 });
     const winner = await User.findByPk(a.id);
     expect((await waitForSubject(winner!.email, /You won/)).text).toContain("$27.00");
@@ -115,7 +150,10 @@ describe("closing", () => {
     let phase = "open";
     while (Date.now() < deadline && phase === "open") {
       await new Promise((r) => setTimeout(r, 300));
-      const [row] = await db().query<{ phase: string; unsold_reason: string | null }>(`SELECT phase, unsold_reason FROM sale_lots WHERE id = :saleLotId`, { replacements: { saleLotId }, type: QueryTypes.SELECT });
+      const [row] = await db().query<{ phase: string; unsold_reason: string | null }>(
+        `SELECT phase, unsold_reason FROM sale_lots WHERE id = :saleLotId`,
+        { replacements: { saleLotId }, type: QueryTypes.SELECT },
+      );
       phase = row!.phase;
     }
     expect(phase).toBe("unsold");

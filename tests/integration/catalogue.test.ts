@@ -27,11 +27,33 @@ const RUN = Date.now().toString(36);
 const search = (q: Record<string, unknown>) => searchCatalogue(CatalogueQuerySchema.parse({ limit: 60, ...q }));
 
 /** A lot listed through the real review path: draft, items, submitted, approved with an estimate and a reserve. */
-async function listed(title: string, items: { designation: string; quantity: number; condition?: "used" | "new-old-stock" }[], reserveCents = 7_777) {
-  const lot = await createLot(viewerOf(consignor), { title: `${title} ${RUN}`, provenance: "From a service bench", shippingOrigin: "", testerKind: "untested", testerNotes: "" });
-  for (const i of items) await addItem(viewerOf(consignor), lot.id, itemInput({ designation: i.designation, quantity: i.quantity, condition: i.condition ?? "used" }));
+async function listed(
+  title: string,
+  items: { designation: string; quantity: number; condition?: "used" | "new-old-stock" }[],
+  reserveCents = 7_777,
+) {
+  const lot = await createLot(viewerOf(consignor), {
+    title: `${title} ${RUN}`,
+    provenance: "From a service bench",
+    shippingOrigin: "",
+    testerKind: "untested",
+    testerNotes: "",
+  });
+  for (const i of items)
+    await addItem(
+      viewerOf(consignor),
+      lot.id,
+      itemInput({ designation: i.designation, quantity: i.quantity, condition: i.condition ?? "used" }),
+    );
   await submitLot(viewerOf(consignor), lot.id);
-  await decideLot(viewerOf(admin), lot.id, { action: "approve", comment: "", estimateLowCents: 4_000, estimateHighCents: 9_000, reserveCents, reserveAgreed: true });
+  await decideLot(viewerOf(admin), lot.id, {
+    action: "approve",
+    comment: "",
+    estimateLowCents: 4_000,
+    estimateHighCents: 9_000,
+    reserveCents,
+    reserveAgreed: true,
+  });
   return lot.id;
 }
 
@@ -41,7 +63,11 @@ describe("search by type and equivalents", () => {
     ecc88 = await listed("Four ECC88 in sleeves", [{ designation: "ECC88", quantity: 4 }]);
     sixdj8 = await listed("Pair of 6DJ8", [{ designation: "6DJ8", quantity: 2 }]);
     sixbq5 = await listed("Output valves 6BQ5", [{ designation: "6BQ5", quantity: 4, condition: "new-old-stock" }]);
-    mixed = await listed("Bench drawer", [{ designation: "ECC83", quantity: 3 }, { designation: "12AX7", quantity: 1 }, { designation: "6V6GT", quantity: 2 }]);
+    mixed = await listed("Bench drawer", [
+      { designation: "ECC83", quantity: 3 },
+      { designation: "12AX7", quantity: 1 },
+      { designation: "6V6GT", quantity: 2 },
+    ]);
   }, 60_000);
 
   it("6922 finds both the ECC88 lot and the 6DJ8 lot, naming the item and how it relates", async () => {
@@ -64,7 +90,10 @@ describe("search by type and equivalents", () => {
   it("ranks the searched type before its equivalents, and lists a lot's items best relation first", async () => {
     const r = await search({ q: "ecc 83" });
     const drawer = r.lots.find((l) => l.id === mixed)!;
-    expect(drawer.matches.map((m) => [m.designation, m.relation])).toEqual([["ECC83", "same"], ["12AX7", "exact"]]);
+    expect(drawer.matches.map((m) => [m.designation, m.relation])).toEqual([
+      ["ECC83", "same"],
+      ["12AX7", "exact"],
+    ]);
     expect(r.term).toEqual({ designation: "ECC83", typed: "ecc 83" });
   });
 
@@ -119,7 +148,11 @@ describe("paging and bad input", () => {
       paged.push(...page.lots);
     }
     expect(paged.map((l) => l.id)).toEqual(whole.map((l) => l.id));
-    const best = paged.map((l) => ["same", "exact", "premium", "near", "caveat", "sibling-heater", "different-base"].indexOf(l.matches[0]!.relation));
+    const best = paged.map((l) =>
+      ["same", "exact", "premium", "near", "caveat", "sibling-heater", "different-base"].indexOf(
+        l.matches[0]!.relation,
+      ),
+    );
     expect(best).toEqual([...best].sort((a, b) => a - b));
     expect(paged[0]!.matches[0]!.relation).toBe("same");
     expect(paged.some((l) => l.matches[0]!.relation === "premium")).toBe(true); // 7025, the low-noise 12AX7
@@ -148,27 +181,70 @@ describe("paging and bad input", () => {
 describe("want lists", () => {
   it("match a newly listed lot exactly once, even when two instances run the match at once", async () => {
     const dealer = await makeUser(["dealer"]);
-    const list = await createWantList(viewerOf(dealer), { name: "Small-signal twins", criteria: { designation: "6922", closeness: "near", minQuantity: 2, conditions: [], makerBases: [], noVacuumLoss: true, maxEstimateCents: 50_000 } });
+    const list = await createWantList(viewerOf(dealer), {
+      name: "Small-signal twins",
+      criteria: {
+        designation: "6922",
+        closeness: "near",
+        minQuantity: 2,
+        conditions: [],
+        makerBases: [],
+        noVacuumLoss: true,
+        maxEstimateCents: 50_000,
+      },
+    });
     const tooFew = await makeUser(["dealer"]);
-    await createWantList(viewerOf(tooFew), { name: "Quads only", criteria: { designation: "6922", closeness: "near", minQuantity: 8, conditions: [], makerBases: [], noVacuumLoss: false, maxEstimateCents: null } });
+    await createWantList(viewerOf(tooFew), {
+      name: "Quads only",
+      criteria: {
+        designation: "6922",
+        closeness: "near",
+        minQuantity: 8,
+        conditions: [],
+        makerBases: [],
+        noVacuumLoss: false,
+        maxEstimateCents: null,
+      },
+    });
     const lotId = await listed("Six ECC88 for matching", [{ designation: "ECC88", quantity: 6 }]); // approval itself asks for a match
     // Two more runs at once: this process and a second process (another app instance on the same database).
     const other = new Promise<number>((resolve, reject) => {
-      const child = spawn(process.execPath, ["--import", "tsx", "-e", `import("./lib/services/want-list-matching").then((m) => (m.matchLotToWantLists ?? m.default.matchLotToWantLists)(${JSON.stringify(lotId)})).then(() => process.exit(0), (e) => { console.error(e); process.exit(1); })`], { env: process.env, stdio: "inherit" });
+      const child = spawn(
+        process.execPath,
+        [
+          "--import",
+          "tsx",
+          "-e",
+          `import("./lib/services/want-list-matching").then((m) => (m.matchLotToWantLists ?? m.default.matchLotToWantLists)(${JSON.stringify(lotId)})).then(() => process.exit(0), (e) => { console.error(e); process.exit(1); })`,
+        ],
+        { env: process.env, stdio: "inherit" },
+      );
       child.on("exit", (code) => (code === 0 ? resolve(0) : reject(new Error(`second instance exited ${code}`))));
     });
     await Promise.all([matchLotToWantLists(lotId), other]);
-    await vi.waitFor(async () => {
-      const hits = await db().query<{ want_list_id: string }>(`SELECT want_list_id FROM want_list_hits WHERE lot_id = :lotId`, { replacements: { lotId }, type: QueryTypes.SELECT });
-      expect(hits.map((h) => h.want_list_id)).toEqual([list.id]);
-    }, { timeout: 8_000, interval: 100 });
-    const notices = await db().query<{ text: string }>(`SELECT text FROM notices WHERE user_id = :u AND href = :href`, { replacements: { u: dealer.id, href: `/lots/${lotId}` }, type: QueryTypes.SELECT });
+    await vi.waitFor(
+      async () => {
+        const hits = await db().query<{ want_list_id: string }>(
+          `SELECT want_list_id FROM want_list_hits WHERE lot_id = :lotId`,
+          { replacements: { lotId }, type: QueryTypes.SELECT },
+        );
+        expect(hits.map((h) => h.want_list_id)).toEqual([list.id]);
+      },
+      { timeout: 8_000, interval: 100 },
+    );
+    const notices = await db().query<{ text: string }>(`SELECT text FROM notices WHERE user_id = :u AND href = :href`, {
+      replacements: { u: dealer.id, href: `/lots/${lotId}` },
+      type: QueryTypes.SELECT,
+    });
     expect(notices).toHaveLength(1);
     expect(notices[0]!.text).toMatch(/Small-signal twins/);
     const mail = await waitForSubject(dealer.email, /Want lists: 1 new lot/);
     expect(mail.text).toContain(`/lots/${lotId}`);
     expect(mail.text).toMatch(/\/want-lists\/unsubscribe\?u=/);
-    const tooFewHits = await db().query(`SELECT 1 FROM want_list_hits WHERE dealer_id = :u`, { replacements: { u: tooFew.id }, type: QueryTypes.SELECT });
+    const tooFewHits = await db().query(`SELECT 1 FROM want_list_hits WHERE dealer_id = :u`, {
+      replacements: { u: tooFew.id },
+      type: QueryTypes.SELECT,
+    });
     expect(tooFewHits).toHaveLength(0);
   }, 60_000);
 
@@ -176,19 +252,36 @@ describe("want lists", () => {
     const a = await makeUser(["dealer"]);
     const b = await makeUser(["dealer"]);
     const { POST } = await import("../../app/api/want-lists/unsubscribe/route");
-    const forged = await POST(request("http://localhost:3000/api/want-lists/unsubscribe", { json: { u: b.id, t: unsubscribeToken(a.id) } }), noParams);
+    const forged = await POST(
+      request("http://localhost:3000/api/want-lists/unsubscribe", { json: { u: b.id, t: unsubscribeToken(a.id) } }),
+      noParams,
+    );
     expect(forged.status).toBe(403);
     const altered = unsubscribeToken(b.id).replace(/^./, (c) => (c === "A" ? "B" : "A"));
     await expect(unsubscribeDigest(b.id, altered)).rejects.toBeInstanceOf(ApiError);
-    const ok = await POST(request("http://localhost:3000/api/want-lists/unsubscribe", { json: { u: b.id, t: unsubscribeToken(b.id) } }), noParams);
+    const ok = await POST(
+      request("http://localhost:3000/api/want-lists/unsubscribe", { json: { u: b.id, t: unsubscribeToken(b.id) } }),
+      noParams,
+    );
     expect(ok.status).toBe(200);
-    const [row] = await db().query<{ digest_enabled: boolean }>(`SELECT digest_enabled FROM want_list_mail WHERE dealer_id = :u`, { replacements: { u: b.id }, type: QueryTypes.SELECT });
+    const [row] = await db().query<{ digest_enabled: boolean }>(
+      `SELECT digest_enabled FROM want_list_mail WHERE dealer_id = :u`,
+      { replacements: { u: b.id }, type: QueryTypes.SELECT },
+    );
     expect(row?.digest_enabled).toBe(false);
   });
 
   it("caps want lists per dealer and says so in words", async () => {
     const dealer = await makeUser(["dealer"]);
-    const criteria = { designation: "12AX7", closeness: "exact" as const, minQuantity: 1, conditions: [], makerBases: [], noVacuumLoss: false, maxEstimateCents: null };
+    const criteria = {
+      designation: "12AX7",
+      closeness: "exact" as const,
+      minQuantity: 1,
+      conditions: [],
+      makerBases: [],
+      noVacuumLoss: false,
+      maxEstimateCents: null,
+    };
     await db().query(
       `INSERT INTO want_lists (id, dealer_id, name, criteria, designations, paused, created_at, updated_at)
        SELECT gen_random_uuid(), :u, 'List ' || g, :c::jsonb, ARRAY['12AX7']::varchar[], false, now(), now() FROM generate_series(1, :n) g`,

@@ -4,8 +4,18 @@ import { ApiError } from "../../lib/api/errors";
 import type { User } from "../../models";
 import { placeMaxBid } from "../../lib/services/bidding";
 import {
-  addDisputePhoto, confirmReturnReceived, decide, getCase, mediationQueue, myCases, openDispute, postMessage, readDisputePhoto, recordReturn,
-  takeCase, workspace,
+  addDisputePhoto,
+  confirmReturnReceived,
+  decide,
+  getCase,
+  mediationQueue,
+  myCases,
+  openDispute,
+  postMessage,
+  readDisputePhoto,
+  recordReturn,
+  takeCase,
+  workspace,
 } from "../../lib/services/disputes";
 import { markDelivered, markShipped, releaseDue } from "../../lib/services/escrow";
 import { balances, trialBalance } from "../../lib/services/ledger";
@@ -34,14 +44,24 @@ import { getInvoice } from "../../lib/services/invoices";
 
 let fake: TestStripe;
 let s3: TestS3;
-beforeAll(async () => { fake = await startTestStripe(); s3 = await startTestS3(); });
-afterAll(async () => { await fake.stop(); await s3.stop(); });
+beforeAll(async () => {
+  fake = await startTestStripe();
+  s3 = await startTestS3();
+});
+afterAll(async () => {
+  await fake.stop();
+  await s3.stop();
+});
 
-const one = async <T extends object>(sql: string, r: Record<string, unknown>) => (await db().query<T>(sql, { replacements: r, type: QueryTypes.SELECT }))[0]!;
+const one = async <T extends object>(sql: string, r: Record<string, unknown>) =>
+  (await db().query<T>(sql, { replacements: r, type: QueryTypes.SELECT }))[0]!;
 const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000): Promise<T> => {
   const end = Date.now() + ms;
   let v = await fn();
-  while (!ok(v) && Date.now() < end) { await new Promise((r) => setTimeout(r, 100)); v = await fn(); }
+  while (!ok(v) && Date.now() < end) {
+    await new Promise((r) => setTimeout(r, 100));
+    v = await fn();
+  }
   return v;
 };
 /** Nothing left in escrow or owed to the consignor; the house keeps what it should; the ledger balances and matches the processor. */
@@ -54,21 +74,49 @@ async function expectSettled(invoiceId: string, kept: { premiumKeptCents: number
   expect(await trialBalance()).toBe(0);
   expect((await reconcile()).differences).toEqual([]);
 }
-const refused = async (p: Promise<unknown>) => { const e = await p.then(() => null, (x: unknown) => x); expect(e).toBeInstanceOf(ApiError); return e as ApiError; };
+const refused = async (p: Promise<unknown>) => {
+  const e = await p.then(
+    () => null,
+    (x: unknown) => x,
+  );
+  expect(e).toBeInstanceOf(ApiError);
+  return e as ApiError;
+};
 
 /** Three lines: four tubes attributed to a maker, two sold by label alone, and a matched quad. */
 const LINES = [
-  itemInput({ designation: "12AX7", quantity: 4, labelBrand: "Carrow Instruments", makerName: "Kestrel Valve Company", makerBasis: "construction-matched", features: { plateColour: "black", getterShape: "d-shape" } }),
+  itemInput({
+    designation: "12AX7",
+    quantity: 4,
+    labelBrand: "Carrow Instruments",
+    makerName: "Kestrel Valve Company",
+    makerBasis: "construction-matched",
+    features: { plateColour: "black", getterShape: "d-shape" },
+  }),
   itemInput({ designation: "6SN7GT", quantity: 2, labelBrand: "Fairmont Home Radio" }),
-  itemInput({ designation: "EL84", quantity: 4, labelBrand: "Tri-County Parts", makerName: "Vireo Lamp & Valve", makerBasis: "construction-matched", soldAsSet: true }),
+  itemInput({
+    designation: "EL84",
+    quantity: 4,
+    labelBrand: "Tri-County Parts",
+    makerName: "Vireo Lamp & Valve",
+    makerBasis: "construction-matched",
+    soldAsSet: true,
+  }),
 ];
 
 /** A lot sold for a hammer of $27.00, paid, shipped and delivered (inspection window open). */
 async function deliveredLot(consignor?: User) {
   const admin = await makeUser(["admin"]);
-  const seller = consignor ?? await makeUser(["consignor"]);
+  const seller = consignor ?? (await makeUser(["consignor"]));
   const lot = await approvedLot(seller, admin, 2_000, LINES);
-  const sale = await createSale(viewerOf(admin), { title: "Claims test", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 2_500).toISOString(), gapSeconds: 30, softCloseSeconds: 1, lots: [{ lotId: lot.id, openingCents: 1_000 }] });
+  const sale = await createSale(viewerOf(admin), {
+    title: "Claims test",
+    startsAt: new Date(Date.now() - 60_000).toISOString(),
+    firstCloseAt: new Date(Date.now() + 2_500).toISOString(),
+    gapSeconds: 30,
+    softCloseSeconds: 1,
+    lots: [{ lotId: lot.id, openingCents: 1_000 }],
+  });
   const sl = await one<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, { id: sale.id });
   const buyer = await makeUser(["dealer"]);
   const under = await makeUser(["dealer"]);
@@ -77,18 +125,52 @@ async function deliveredLot(consignor?: User) {
   await new Promise((r) => setTimeout(r, 2_700));
   expect(await closeSaleLot(sl.id)).toBe("closed");
   const inv = await one<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, { id: sl.id });
-  await payInvoice(viewerOf(buyer), inv.id, { number: "4242424242424242", expMonth: 12, expYear: 2030, cvc: "123", attemptKey: `pay-${inv.id}` });
-  await until(() => one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: inv.id }), (i) => i.state === "paid-held");
+  await payInvoice(viewerOf(buyer), inv.id, {
+    number: "4242424242424242",
+    expMonth: 12,
+    expYear: 2030,
+    cvc: "123",
+    attemptKey: `pay-${inv.id}`,
+  });
+  await until(
+    () => one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: inv.id }),
+    (i) => i.state === "paid-held",
+  );
   await markShipped(inv.id, "Demo Parcel Co.", "DP55501");
   await markDelivered(inv.id);
-  const items = await db().query<{ id: string; position: number }>(`SELECT id, position FROM lot_items WHERE lot_id = :id ORDER BY position`, { replacements: { id: lot.id }, type: QueryTypes.SELECT });
-  return { invoiceId: inv.id, buyer, consignor: seller, admin, saleId: sale.id, lotId: lot.id, items: items.map((i) => i.id) };
+  const items = await db().query<{ id: string; position: number }>(
+    `SELECT id, position FROM lot_items WHERE lot_id = :id ORDER BY position`,
+    { replacements: { id: lot.id }, type: QueryTypes.SELECT },
+  );
+  return {
+    invoiceId: inv.id,
+    buyer,
+    consignor: seller,
+    admin,
+    saleId: sale.id,
+    lotId: lot.id,
+    items: items.map((i) => i.id),
+  };
 }
 
 const claim = (itemId: string, over: Partial<OpenDisputeInput> = {}): OpenDisputeInput => ({
-  reason: "maker-misattributed", remedy: "refund-affected-items",
+  reason: "maker-misattributed",
+  remedy: "refund-affected-items",
   statement: "Two of the four carry another maker's source code and square getters.",
-  items: [{ itemId, tubes: 2, sourceCode: "X46", dateCode: "6231", features: { getterShape: "square", plateSurface: "dimpled" }, readings: [], designationSeen: null, tubesReceived: null, vacuumLoss: false, note: "" }],
+  items: [
+    {
+      itemId,
+      tubes: 2,
+      sourceCode: "X46",
+      dateCode: "6231",
+      features: { getterShape: "square", plateSurface: "dimpled" },
+      readings: [],
+      designationSeen: null,
+      tubesReceived: null,
+      vacuumLoss: false,
+      note: "",
+    },
+  ],
   ...over,
 });
 
@@ -105,19 +187,34 @@ describe("claims and mediation", () => {
 
     const { id } = await openDispute(buyer, f.invoiceId, claim(f.items[0]!));
     expect((await openDispute(buyer, f.invoiceId, claim(f.items[0]!))).id).toBe(id); // a retry finds the open claim
-    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: f.invoiceId })).state).toBe("disputed");
+    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: f.invoiceId })).state).toBe(
+      "disputed",
+    );
     expect((await inbox(f.consignor.email)).some((m) => m.subject.includes("opened a claim"))).toBe(true);
 
     // Escrow stays held even after the window ends while the claim is open.
-    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: f.invoiceId } });
+    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 second' WHERE id = :id`, {
+      replacements: { id: f.invoiceId },
+    });
     expect(await releaseDue()).toBe(0);
 
     // Evidence: a photo, re-encoded and kept; it cannot be edited or deleted afterwards.
-    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#777" } }).jpeg().toBuffer();
-    const photo = await addDisputePhoto(buyer, id, { name: "getter.jpg", bytes: jpeg }, { itemId: f.items[0]!, caption: "Square getter, code X46" });
+    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: "#777" } })
+      .jpeg()
+      .toBuffer();
+    const photo = await addDisputePhoto(
+      buyer,
+      id,
+      { name: "getter.jpg", bytes: jpeg },
+      { itemId: f.items[0]!, caption: "Square getter, code X46" },
+    );
     expect((await readDisputePhoto(consignor, photo.id, "thumb")).contentType).toBe("image/jpeg");
-    await expect(db().query(`UPDATE dispute_messages SET body = 'changed' WHERE dispute_id = :id`, { replacements: { id } })).rejects.toThrow(/cannot be changed/);
-    await expect(db().query(`DELETE FROM dispute_evidence WHERE id = :id`, { replacements: { id: photo.id } })).rejects.toThrow(/cannot be changed/);
+    await expect(
+      db().query(`UPDATE dispute_messages SET body = 'changed' WHERE dispute_id = :id`, { replacements: { id } }),
+    ).rejects.toThrow(/cannot be changed/);
+    await expect(
+      db().query(`DELETE FROM dispute_evidence WHERE id = :id`, { replacements: { id: photo.id } }),
+    ).rejects.toThrow(/cannot be changed/);
 
     // Nobody else reads the case: another dealer, another consignor; the queue is for mediators only.
     const stranger = viewerOf(await makeUser(["dealer"]));
@@ -136,19 +233,39 @@ describe("claims and mediation", () => {
     await takeCase(m1, id);
     expect((await refused(takeCase(m2, id))).status).toBe(409);
     // [SUG] The case's mediator reads its invoice, read-only; any other mediator still gets 404.
-    expect(await getInvoice(m1, f.invoiceId)).toMatchObject({ id: f.invoiceId, readOnly: true, isBuyer: false, isConsignor: false });
+    expect(await getInvoice(m1, f.invoiceId)).toMatchObject({
+      id: f.invoiceId,
+      readOnly: true,
+      isBuyer: false,
+      isConsignor: false,
+    });
     expect((await refused(getInvoice(m2, f.invoiceId))).status).toBe(404);
     // The consignor's desk shows the lot under its claim (not "approved"), netting the $27.00 hammer less 20 % commission
     // = $21.60 [SUG house tiers: 20 % of the first $500].
-    expect((await consignorDesk(consignor)).lots.find((l) => l.id === f.lotId)).toMatchObject({ stage: "claim", netCents: 2_160 });
+    expect((await consignorDesk(consignor)).lots.find((l) => l.id === f.lotId)).toMatchObject({
+      stage: "claim",
+      netCents: 2_160,
+    });
     expect((await mediationQueue(m2)).waiting.map((c) => c.id)).not.toContain(id);
 
     // Before the consignor answers (and before the deadline) the mediator cannot decide.
-    const lines = [{ itemId: f.items[0]!, valueCents: 1_000 }, { itemId: f.items[1]!, valueCents: 500 }, { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 }];
-    const decision = { outcome: "partial-refund" as const, reasons: "Code X46 and the square getter point to another maker on two tubes.", lines, rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }] };
+    const lines = [
+      { itemId: f.items[0]!, valueCents: 1_000 },
+      { itemId: f.items[1]!, valueCents: 500 },
+      { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 },
+    ];
+    const decision = {
+      outcome: "partial-refund" as const,
+      reasons: "Code X46 and the square getter point to another maker on two tubes.",
+      lines,
+      rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }],
+    };
     expect((await refused(decide(m1, id, decision))).message).toMatch(/has until/);
     expect((await refused(postMessage(consignor, id, { body: "I bought them as they are." }))).status).toBe(400); // the answer needs a stance
-    await postMessage(consignor, id, { body: "They came from the estate as listed; I matched them by construction.", stance: "contests" });
+    await postMessage(consignor, id, {
+      body: "They came from the estate as listed; I matched them by construction.",
+      stance: "contests",
+    });
     await postMessage(m1, id, { body: "Thank you both; I am comparing the codes and construction." });
     const view = await getCase(buyer, id);
     expect(view.messages.map((m) => m.role)).toEqual(["buyer", "consignor", "mediator"]);
@@ -175,9 +292,18 @@ describe("claims and mediation", () => {
     expect(closed.decidedBy).toBe(m1.name);
     expect(closed.decision?.buyerRefundCents).toBe(416);
     expect(closed.decision?.consignorChangeCents).toBe(-302);
-    const inv = await one<{ state: string; hammer_refunded_cents: number; premium_refunded_cents: number; commission_returned_cents: number; payment_intent_id: string; transfer_id: string }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+    const inv = await one<{
+      state: string;
+      hammer_refunded_cents: number;
+      premium_refunded_cents: number;
+      commission_returned_cents: number;
+      payment_intent_id: string;
+      transfer_id: string;
+    }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
     expect(inv.state).toBe("released");
-    expect([inv.hammer_refunded_cents, inv.premium_refunded_cents, inv.commission_returned_cents]).toEqual([378, 38, 76]);
+    expect([inv.hammer_refunded_cents, inv.premium_refunded_cents, inv.commission_returned_cents]).toEqual([
+      378, 38, 76,
+    ]);
 
     // The processor agrees: one refund of $4.16 on the payment, one transfer of what is left.
     const refunds = await stripe().refunds.list({ payment_intent: inv.payment_intent_id });
@@ -191,7 +317,9 @@ describe("claims and mediation", () => {
     expect(st.totals.payoutCents).toBe(transfer.amount);
     await expectSettled(f.invoiceId, { premiumKeptCents: 270 - 38, commissionKeptCents: 540 - 76 });
 
-    const decisionMails = [...await inbox(f.buyer.email), ...await inbox(f.consignor.email)].filter((m) => m.subject.includes("Decision on"));
+    const decisionMails = [...(await inbox(f.buyer.email)), ...(await inbox(f.consignor.email))].filter((m) =>
+      m.subject.includes("Decision on"),
+    );
     expect(decisionMails).toHaveLength(2);
     expect(decisionMails.every((m) => m.text.includes("Code X46 and the square getter"))).toBe(true);
 
@@ -202,7 +330,9 @@ describe("claims and mediation", () => {
 
   it("refuses a claim after the inspection window with the date it closed", async () => {
     const f = await deliveredLot();
-    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 minute' WHERE id = :id`, { replacements: { id: f.invoiceId } });
+    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 minute' WHERE id = :id`, {
+      replacements: { id: f.invoiceId },
+    });
     const e = await refused(openDispute(viewerOf(f.buyer), f.invoiceId, claim(f.items[0]!)));
     expect(e.status).toBe(409);
     expect(e.message).toMatch(/inspection window closed on \d{4}-\d{2}-\d{2}/);
@@ -213,23 +343,36 @@ describe("claims and mediation", () => {
     const seller = await makeUser(["consignor"]);
     for (let round = 0; round < 2; round++) {
       const f = await deliveredLot(seller);
-      const { id } = await openDispute(viewerOf(f.buyer), f.invoiceId, claim(f.items[0]!, { remedy: "return-whole-lot" }));
+      const { id } = await openDispute(
+        viewerOf(f.buyer),
+        f.invoiceId,
+        claim(f.items[0]!, { remedy: "return-whole-lot" }),
+      );
       await postMessage(viewerOf(f.consignor), id, { body: "Send them back, then.", stance: "accepts" });
       const m = viewerOf(await makeUser(["mediator"]));
       await takeCase(m, id);
-      await decide(m, id, { outcome: "refund-on-return", reasons: "The consignor accepts the claim; the whole lot goes back for a refund." });
+      await decide(m, id, {
+        outcome: "refund-on-return",
+        reasons: "The consignor accepts the claim; the whole lot goes back for a refund.",
+      });
       expect((await getCase(viewerOf(f.buyer), id)).state).toBe("awaiting-return");
       expect((await refused(confirmReturnReceived(viewerOf(f.consignor), id))).status).toBe(409); // nothing shipped yet
       await recordReturn(viewerOf(f.buyer), id, { carrier: "Demo Parcel Co.", tracking: "RT 000111" });
       // Two clicks at once: one pays the refund; the other answers 409 with the case as it stands, never a 500.
-      const clicks = await Promise.allSettled([confirmReturnReceived(viewerOf(f.consignor), id), confirmReturnReceived(viewerOf(f.consignor), id)]);
+      const clicks = await Promise.allSettled([
+        confirmReturnReceived(viewerOf(f.consignor), id),
+        confirmReturnReceived(viewerOf(f.consignor), id),
+      ]);
       expect(clicks.filter((c) => c.status === "fulfilled")).toHaveLength(1);
       const second = (clicks.find((c) => c.status === "rejected") as PromiseRejectedResult).reason as ApiError;
       expect(second).toBeInstanceOf(ApiError);
       expect(second.status).toBe(409);
       expect(second.details?.returnReceivedAt).toEqual(expect.any(String));
       expect((await refused(confirmReturnReceived(viewerOf(f.consignor), id))).details?.state).toBe("closed");
-      const inv = await one<{ state: string; payment_intent_id: string; hammer_cents: number; premium_cents: number }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+      const inv = await one<{ state: string; payment_intent_id: string; hammer_cents: number; premium_cents: number }>(
+        `SELECT * FROM invoices WHERE id = :id`,
+        { id: f.invoiceId },
+      );
       expect(inv.state).toBe("refunded");
       const refunds = await stripe().refunds.list({ payment_intent: inv.payment_intent_id });
       expect(refunds.data.map((r) => r.amount)).toEqual([inv.hammer_cents + inv.premium_cents]);
@@ -240,7 +383,13 @@ describe("claims and mediation", () => {
     }
     expect(await trialBalance()).toBe(0);
     // House setting: two upheld misattribution claims [SUG] → the next lot is reviewed more closely.
-    const lot = await createLot(viewerOf(seller), { title: "After two upheld claims", provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" });
+    const lot = await createLot(viewerOf(seller), {
+      title: "After two upheld claims",
+      provenance: "",
+      shippingOrigin: "",
+      testerKind: "untested",
+      testerNotes: "",
+    });
     await addItem(viewerOf(seller), lot.id, itemInput());
     await submitLot(viewerOf(seller), lot.id);
     expect((await Lot.findByPk(lot.id))!.extraReview).toBe(true);
@@ -251,31 +400,102 @@ describe("claims and mediation", () => {
     const buyerCookie = await sessionCookie(f.buyer);
     const params = (id: string) => ({ params: Promise.resolve({ id }) });
     // Bad input: no reason, a statement too short, no items → 400 with fields; nothing opened.
-    const bad = await openRoute(request(`/api/invoices/${f.invoiceId}/dispute`, { json: { statement: "bad", items: [] }, headers: { cookie: buyerCookie } }), params(f.invoiceId));
+    const bad = await openRoute(
+      request(`/api/invoices/${f.invoiceId}/dispute`, {
+        json: { statement: "bad", items: [] },
+        headers: { cookie: buyerCookie },
+      }),
+      params(f.invoiceId),
+    );
     expect(bad.status).toBe(400);
-    const badBody = await bad.json() as { error: { code: string; fields: Record<string, string> } };
+    const badBody = (await bad.json()) as { error: { code: string; fields: Record<string, string> } };
     expect(badBody.error.code).toBe("validation_failed");
-    expect(Object.keys(badBody.error.fields)).toEqual(expect.arrayContaining(["reason", "remedy", "statement", "items"]));
-    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: f.invoiceId })).state).toBe("delivered");
+    expect(Object.keys(badBody.error.fields)).toEqual(
+      expect.arrayContaining(["reason", "remedy", "statement", "items"]),
+    );
+    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: f.invoiceId })).state).toBe(
+      "delivered",
+    );
     // The consignor cannot open a claim on their own sale (dealers only), and a stranger dealer gets 404.
-    expect((await openRoute(request(`/api/invoices/${f.invoiceId}/dispute`, { json: claim(f.items[0]!), headers: { cookie: await sessionCookie(f.consignor) } }), params(f.invoiceId))).status).toBe(403);
-    expect((await openRoute(request(`/api/invoices/${f.invoiceId}/dispute`, { json: claim(f.items[0]!), headers: { cookie: await sessionCookie(await makeUser(["dealer"])) } }), params(f.invoiceId))).status).toBe(404);
-    const opened = await openRoute(request(`/api/invoices/${f.invoiceId}/dispute`, { json: claim(f.items[0]!), headers: { cookie: buyerCookie } }), params(f.invoiceId));
+    expect(
+      (
+        await openRoute(
+          request(`/api/invoices/${f.invoiceId}/dispute`, {
+            json: claim(f.items[0]!),
+            headers: { cookie: await sessionCookie(f.consignor) },
+          }),
+          params(f.invoiceId),
+        )
+      ).status,
+    ).toBe(403);
+    expect(
+      (
+        await openRoute(
+          request(`/api/invoices/${f.invoiceId}/dispute`, {
+            json: claim(f.items[0]!),
+            headers: { cookie: await sessionCookie(await makeUser(["dealer"])) },
+          }),
+          params(f.invoiceId),
+        )
+      ).status,
+    ).toBe(404);
+    const opened = await openRoute(
+      request(`/api/invoices/${f.invoiceId}/dispute`, { json: claim(f.items[0]!), headers: { cookie: buyerCookie } }),
+      params(f.invoiceId),
+    );
     expect(opened.status).toBe(201);
-    const { dispute } = await opened.json() as { dispute: { id: string } };
+    const { dispute } = (await opened.json()) as { dispute: { id: string } };
     // Only mediators see the queue or decide; the house reads the case; a buyer cannot decide their own claim.
-    expect((await queueRoute(request("/api/mediation/queue", { headers: { cookie: buyerCookie } }), params("x"))).status).toBe(403);
-    expect((await queueRoute(request("/api/mediation/queue", { headers: { cookie: await sessionCookie(f.admin) } }), params("x"))).status).toBe(403);
-    expect((await caseRoute(request(`/api/disputes/${dispute.id}`, { headers: { cookie: await sessionCookie(f.admin) } }), params(dispute.id))).status).toBe(200);
+    expect(
+      (await queueRoute(request("/api/mediation/queue", { headers: { cookie: buyerCookie } }), params("x"))).status,
+    ).toBe(403);
+    expect(
+      (
+        await queueRoute(
+          request("/api/mediation/queue", { headers: { cookie: await sessionCookie(f.admin) } }),
+          params("x"),
+        )
+      ).status,
+    ).toBe(403);
+    expect(
+      (
+        await caseRoute(
+          request(`/api/disputes/${dispute.id}`, { headers: { cookie: await sessionCookie(f.admin) } }),
+          params(dispute.id),
+        )
+      ).status,
+    ).toBe(200);
     const decisionBody = { outcome: "dismissed", reasons: "The buyer's evidence does not show another maker's work." };
-    expect((await decisionRoute(request(`/api/disputes/${dispute.id}/decision`, { json: decisionBody, headers: { cookie: buyerCookie } }), params(dispute.id))).status).toBe(403);
+    expect(
+      (
+        await decisionRoute(
+          request(`/api/disputes/${dispute.id}/decision`, { json: decisionBody, headers: { cookie: buyerCookie } }),
+          params(dispute.id),
+        )
+      ).status,
+    ).toBe(403);
     const m = await makeUser(["mediator"]);
-    const notTaken = await decisionRoute(request(`/api/disputes/${dispute.id}/decision`, { json: decisionBody, headers: { cookie: await sessionCookie(m) } }), params(dispute.id));
+    const notTaken = await decisionRoute(
+      request(`/api/disputes/${dispute.id}/decision`, {
+        json: decisionBody,
+        headers: { cookie: await sessionCookie(m) },
+      }),
+      params(dispute.id),
+    );
     expect(notTaken.status).toBe(409);
     expect(((await notTaken.json()) as { error: { message: string } }).error.message).toMatch(/Take the case/);
-    const tooShort = await decisionRoute(request(`/api/disputes/${dispute.id}/decision`, { json: { outcome: "dismissed", reasons: "no" }, headers: { cookie: await sessionCookie(m) } }), params(dispute.id));
+    const tooShort = await decisionRoute(
+      request(`/api/disputes/${dispute.id}/decision`, {
+        json: { outcome: "dismissed", reasons: "no" },
+        headers: { cookie: await sessionCookie(m) },
+      }),
+      params(dispute.id),
+    );
     expect(tooShort.status).toBe(400);
-    expect((await caseRoute(request(`/api/disputes/not-a-uuid`, { headers: { cookie: buyerCookie } }), params("not-a-uuid"))).status).toBe(404);
+    expect(
+      (await caseRoute(request(`/api/disputes/not-a-uuid`, { headers: { cookie: buyerCookie } }), params("not-a-uuid")))
+        .status,
+    ).toBe(404);
   }, 60_000);
 
   it("deadlines: past the answer deadline the mediator decides on the buyer's evidence; a dismissal releases escrow; an unconfirmed return is refunded, an unsent one released", async () => {
@@ -284,25 +504,44 @@ describe("claims and mediation", () => {
     const c1 = await openDispute(viewerOf(a.buyer), a.invoiceId, claim(a.items[0]!));
     const m = viewerOf(await makeUser(["mediator"]));
     await takeCase(m, c1.id);
-    await db().query(`UPDATE disputes SET answer_due_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: c1.id } });
+    await db().query(`UPDATE disputes SET answer_due_at = now() - interval '1 second' WHERE id = :id`, {
+      replacements: { id: c1.id },
+    });
     expect((await getCase(m, c1.id)).deadlinePassed).toBe(true);
-    await decide(m, c1.id, { outcome: "dismissed", reasons: "The code the buyer read is registered to the listed maker's brand owner; not misdescribed." });
-    const inv1 = await one<{ state: string; hammer_cents: number; commission_cents: number; transfer_id: string }>(`SELECT * FROM invoices WHERE id = :id`, { id: a.invoiceId });
+    await decide(m, c1.id, {
+      outcome: "dismissed",
+      reasons: "The code the buyer read is registered to the listed maker's brand owner; not misdescribed.",
+    });
+    const inv1 = await one<{ state: string; hammer_cents: number; commission_cents: number; transfer_id: string }>(
+      `SELECT * FROM invoices WHERE id = :id`,
+      { id: a.invoiceId },
+    );
     expect(inv1.state).toBe("released");
-    expect((await stripe().transfers.retrieve(inv1.transfer_id)).amount).toBe(inv1.hammer_cents - inv1.commission_cents);
+    expect((await stripe().transfers.retrieve(inv1.transfer_id)).amount).toBe(
+      inv1.hammer_cents - inv1.commission_cents,
+    );
     expect(await consignorRecord(a.consignor.id)).toMatchObject({ tubesDisputed: 2, tubesUpheld: 0 });
 
     // Refund on return: shipped back, the consignor never confirms; after the house's days the buyer is refunded anyway.
     const b = await deliveredLot();
     const c2 = await openDispute(viewerOf(b.buyer), b.invoiceId, claim(b.items[0]!, { remedy: "return-whole-lot" }));
     await takeCase(m, c2.id);
-    await db().query(`UPDATE disputes SET answer_due_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: c2.id } });
-    await decide(m, c2.id, { outcome: "refund-on-return", reasons: "No answer from the consignor; the evidence supports a return of the whole lot." });
+    await db().query(`UPDATE disputes SET answer_due_at = now() - interval '1 second' WHERE id = :id`, {
+      replacements: { id: c2.id },
+    });
+    await decide(m, c2.id, {
+      outcome: "refund-on-return",
+      reasons: "No answer from the consignor; the evidence supports a return of the whole lot.",
+    });
     await recordReturn(viewerOf(b.buyer), c2.id, { carrier: "Demo Parcel Co.", tracking: "RT 222333" });
     expect(await disputeSweep()).toBe(0); // not yet due
-    await db().query(`UPDATE disputes SET return_shipped_at = now() - interval '11 days' WHERE id = :id`, { replacements: { id: c2.id } });
+    await db().query(`UPDATE disputes SET return_shipped_at = now() - interval '11 days' WHERE id = :id`, {
+      replacements: { id: c2.id },
+    });
     expect(await disputeSweep()).toBeGreaterThanOrEqual(1);
-    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: b.invoiceId })).state).toBe("refunded");
+    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: b.invoiceId })).state).toBe(
+      "refunded",
+    );
     expect((await getCase(m, c2.id)).decision?.closingNote).toMatch(/not confirmed in time/);
 
     // Refund on return, never sent back by the deadline: the consignor is paid.
@@ -310,10 +549,17 @@ describe("claims and mediation", () => {
     const c3 = await openDispute(viewerOf(c.buyer), c.invoiceId, claim(c.items[0]!, { remedy: "return-whole-lot" }));
     await postMessage(viewerOf(c.consignor), c3.id, { body: "Return them if you must.", stance: "accepts" });
     await takeCase(m, c3.id);
-    await decide(m, c3.id, { outcome: "refund-on-return", reasons: "The consignor accepts a return of the whole lot for a refund." });
-    await db().query(`UPDATE disputes SET return_due_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: c3.id } });
+    await decide(m, c3.id, {
+      outcome: "refund-on-return",
+      reasons: "The consignor accepts a return of the whole lot for a refund.",
+    });
+    await db().query(`UPDATE disputes SET return_due_at = now() - interval '1 second' WHERE id = :id`, {
+      replacements: { id: c3.id },
+    });
     expect(await disputeSweep()).toBeGreaterThanOrEqual(1);
-    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: c.invoiceId })).state).toBe("released");
+    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: c.invoiceId })).state).toBe(
+      "released",
+    );
     expect((await getCase(m, c3.id)).state).toBe("closed");
     expect(await trialBalance()).toBe(0);
     expect((await reconcile()).differences).toEqual([]);
@@ -324,14 +570,20 @@ describe("claims and mediation", () => {
     const { id } = await openDispute(viewerOf(f.buyer), f.invoiceId, claim(f.items[0]!));
     const m = viewerOf(await makeUser(["mediator"]));
     await takeCase(m, id);
-    const lines = [{ itemId: f.items[0]!, valueCents: 1_000 }, { itemId: f.items[1]!, valueCents: 500 }, { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 }];
+    const lines = [
+      { itemId: f.items[0]!, valueCents: 1_000 },
+      { itemId: f.items[1]!, valueCents: 500 },
+      { itemId: f.items[2]!, valueCents: 5_000, singleValueCents: 1_000 },
+    ];
     // Hand-worked [CTP/SUG]: the claim covers 2 × $10 of V_lot $100 = 20 % held; hammer $27.00 → $5.40 held, $21.60 released;
     // premium $2.70 → $0.54 / $2.16; commission $5.40 → $1.08 / $4.32; the consignor is paid $21.60 − $4.32 = $17.28 now.
     const r = await releaseUndisputedShare(m, id, { lines });
     expect(r.payoutCents).toBe(1_728);
     expect(r.held).toEqual({ hammerCents: 540, premiumCents: 54, commissionCents: 108 });
     expect(await releaseDue()).toBe(0);
-    const early = await one<{ state: string; released_hammer_cents: number }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+    const early = await one<{ state: string; released_hammer_cents: number }>(`SELECT * FROM invoices WHERE id = :id`, {
+      id: f.invoiceId,
+    });
     expect(early.state).toBe("disputed");
     expect(early.released_hammer_cents).toBe(2_160);
     expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.paidOutCents).toBe(1_728);
@@ -339,17 +591,56 @@ describe("claims and mediation", () => {
     expect(again.status).toBe(409);
     expect(again.details).toMatchObject({ state: expect.any(String), payoutCents: 1_728 });
     expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.paidOutCents).toBe(1_728);
-    expect((await refused(releaseUndisputedShare(m, id, { lines: lines.map((l) => ({ ...l, valueCents: l.valueCents + 1 })) }))).status).toBe(409);
+    expect(
+      (
+        await refused(
+          releaseUndisputedShare(m, id, { lines: lines.map((l) => ({ ...l, valueCents: l.valueCents + 1 })) }),
+        )
+      ).status,
+    ).toBe(409);
 
-    await postMessage(viewerOf(f.consignor), id, { body: "We accept that two were mislabelled by the maker's carton.", stance: "accepts-in-part" });
-    expect((await refused(decide(m, id, { outcome: "refund-on-return", reasons: "Return the lot for a refund of everything paid for it." }))).status).toBe(409);
+    await postMessage(viewerOf(f.consignor), id, {
+      body: "We accept that two were mislabelled by the maker's carton.",
+      stance: "accepts-in-part",
+    });
+    expect(
+      (
+        await refused(
+          decide(m, id, {
+            outcome: "refund-on-return",
+            reasons: "Return the lot for a refund of everything paid for it.",
+          }),
+        )
+      ).status,
+    ).toBe(409);
     const other = [{ ...lines[0]!, valueCents: 2_000 }, lines[1]!, lines[2]!];
-    expect((await refused(decide(m, id, { outcome: "partial-refund", reasons: "Two tubes are another maker's work.", lines: other, rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }] }))).status).toBe(400);
-    await decide(m, id, { outcome: "partial-refund", reasons: "Two tubes are another maker's work; each is worth $3 as such.", lines, rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }] });
+    expect(
+      (
+        await refused(
+          decide(m, id, {
+            outcome: "partial-refund",
+            reasons: "Two tubes are another maker's work.",
+            lines: other,
+            rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }],
+          }),
+        )
+      ).status,
+    ).toBe(400);
+    await decide(m, id, {
+      outcome: "partial-refund",
+      reasons: "Two tubes are another maker's work; each is worth $3 as such.",
+      lines,
+      rulings: [{ itemId: f.items[0]!, upheld: true, tubes: 2, worthCents: 300 }],
+    });
     // Refund as in the first test ($4.16); what is left, $1.62 − $0.32 = $1.30, goes to the consignor: $17.28 + $1.30 = $18.58 in all.
-    const inv = await one<{ state: string; payment_intent_id: string; transfer_id: string }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+    const inv = await one<{ state: string; payment_intent_id: string; transfer_id: string }>(
+      `SELECT * FROM invoices WHERE id = :id`,
+      { id: f.invoiceId },
+    );
     expect(inv.state).toBe("released");
-    expect((await stripe().refunds.list({ payment_intent: inv.payment_intent_id })).data.map((x) => x.amount)).toEqual([416]);
+    expect((await stripe().refunds.list({ payment_intent: inv.payment_intent_id })).data.map((x) => x.amount)).toEqual([
+      416,
+    ]);
     expect((await stripe().transfers.retrieve(inv.transfer_id)).amount).toBe(130);
     const st = await statementFor(viewerOf(f.consignor), f.saleId);
     expect(st.totals.payoutCents).toBe(1_858);

@@ -21,33 +21,67 @@ beforeAll(async () => {
   fake = await startTestStripe();
   for (const k of ["log", "warn", "error", "info"] as const) {
     const orig = console[k];
-    vi.spyOn(console, k).mockImplementation((...a: unknown[]) => { logged.push(a.map(String).join(" ")); orig(...(a as [])); });
+    vi.spyOn(console, k).mockImplementation((...a: unknown[]) => {
+      logged.push(a.map(String).join(" "));
+      orig(...(a as []));
+    });
   }
 });
-afterAll(async () => { vi.restoreAllMocks(); await fake.stop(); });
+afterAll(async () => {
+  vi.restoreAllMocks();
+  await fake.stop();
+});
 
 const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000): Promise<T> => {
   const end = Date.now() + ms;
   let v = await fn();
-  while (!ok(v) && Date.now() < end) { await new Promise((r) => setTimeout(r, 100)); v = await fn(); }
+  while (!ok(v) && Date.now() < end) {
+    await new Promise((r) => setTimeout(r, 100));
+    v = await fn();
+  }
   return v;
 };
-const invoice = async (id: string) => (await db().query<{ state: string; total_cents: number; hammer_cents: number; premium_cents: number; shipping_cents: number; commission_cents: number; processor_fee_cents: number | null; last_payment_error: string | null; payment_intent_id: string | null }>(
-  `SELECT * FROM invoices WHERE id = :id`, { replacements: { id }, type: QueryTypes.SELECT }))[0]!;
+const invoice = async (id: string) =>
+  (
+    await db().query<{
+      state: string;
+      total_cents: number;
+      hammer_cents: number;
+      premium_cents: number;
+      shipping_cents: number;
+      commission_cents: number;
+      processor_fee_cents: number | null;
+      last_payment_error: string | null;
+      payment_intent_id: string | null;
+    }>(`SELECT * FROM invoices WHERE id = :id`, { replacements: { id }, type: QueryTypes.SELECT })
+  )[0]!;
 
 async function soldLot(hammerMaxes: [number, number]) {
   const admin = await makeUser(["admin"]);
   const consignor = await makeUser(["consignor"]);
   const lot = await approvedLot(consignor, admin, 2_000);
-  const sale = await createSale(viewerOf(admin), { title: "Escrow test", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 2_500).toISOString(), gapSeconds: 30, softCloseSeconds: 1, lots: [{ lotId: lot.id, openingCents: 1_000 }] });
-  const [sl] = await db().query<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, { replacements: { id: sale.id }, type: QueryTypes.SELECT });
+  const sale = await createSale(viewerOf(admin), {
+    title: "Escrow test",
+    startsAt: new Date(Date.now() - 60_000).toISOString(),
+    firstCloseAt: new Date(Date.now() + 2_500).toISOString(),
+    gapSeconds: 30,
+    softCloseSeconds: 1,
+    lots: [{ lotId: lot.id, openingCents: 1_000 }],
+  });
+  const [sl] = await db().query<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, {
+    replacements: { id: sale.id },
+    type: QueryTypes.SELECT,
+  });
   const buyer = await makeUser(["dealer"]);
   const under = await makeUser(["dealer"]);
   await placeMaxBid(viewerOf(buyer), sl!.id, hammerMaxes[0], "e-1");
   await placeMaxBid(viewerOf(under), sl!.id, hammerMaxes[1], "e-2");
   await new Promise((r) => setTimeout(r, 2_700));
   expect(await closeSaleLot(sl!.id)).toBe("closed");
-  const [inv] = await db().query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, { replacements: { id: sl!.id }, type: QueryTypes.SELECT });
+  const [inv] = await db().query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, {
+    replacements: { id: sl!.id },
+    type: QueryTypes.SELECT,
+  });
   return { invoiceId: inv!.id, buyer, consignor, saleId: sale.id };
 }
 
@@ -64,20 +98,39 @@ describe("escrow through the Stripe SDK against the local fake", () => {
     expect(await trialBalance()).toBe(0);
 
     const card = { expMonth: 12, expYear: 2030, cvc: "123" };
-    const declined = await payInvoice(viewerOf(buyer), invoiceId, { ...card, number: "4000000000000002", attemptKey: "attempt-decline" }).catch((e) => e);
+    const declined = await payInvoice(viewerOf(buyer), invoiceId, {
+      ...card,
+      number: "4000000000000002",
+      attemptKey: "attempt-decline",
+    }).catch((e) => e);
     expect(declined).toBeInstanceOf(ApiError);
     expect((declined as ApiError).code).toBe("conflict");
     expect((await invoice(invoiceId)).state).toBe("awaiting-payment");
 
-    const ok = await payInvoice(viewerOf(buyer), invoiceId, { ...card, number: "4242 4242 4242 4242", attemptKey: "attempt-good" });
+    const ok = await payInvoice(viewerOf(buyer), invoiceId, {
+      ...card,
+      number: "4242 4242 4242 4242",
+      attemptKey: "attempt-good",
+    });
     expect(ok.status).toBe("succeeded");
-    const paid = await until(() => invoice(invoiceId), (i) => i.state === "paid-held");
+    const paid = await until(
+      () => invoice(invoiceId),
+      (i) => i.state === "paid-held",
+    );
     expect(paid.state).toBe("paid-held");
     expect(paid.processor_fee_cents).toBeGreaterThan(0);
     expect(await trialBalance()).toBe(0);
 
     // The same event delivered three more times changes nothing.
-    const entries = async () => Number((await db().query<{ n: string }>(`SELECT COUNT(*) AS n FROM ledger_entries WHERE invoice_id = :id`, { replacements: { id: invoiceId }, type: QueryTypes.SELECT }))[0]!.n);
+    const entries = async () =>
+      Number(
+        (
+          await db().query<{ n: string }>(`SELECT COUNT(*) AS n FROM ledger_entries WHERE invoice_id = :id`, {
+            replacements: { id: invoiceId },
+            type: QueryTypes.SELECT,
+          })
+        )[0]!.n,
+      );
     const before = await entries();
     const evt = fake.received.at(-1)!;
     for (let k = 0; k < 3; k++) await fetch(`${fake.url}/_fake/events/${evt}/redeliver`, { method: "POST" });
@@ -88,7 +141,9 @@ describe("escrow through the Stripe SDK against the local fake", () => {
     await markShipped(invoiceId, "Demo Parcel Co.", "DP123456789");
     await markDelivered(invoiceId);
     expect(await releaseDue()).toBe(0); // the inspection window is still open
-    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 second' WHERE id = :id`, { replacements: { id: invoiceId } }); // the clock moves past the window
+    await db().query(`UPDATE invoices SET inspection_ends_at = now() - interval '1 second' WHERE id = :id`, {
+      replacements: { id: invoiceId },
+    }); // the clock moves past the window
     expect(await releaseDue()).toBe(1);
     expect((await invoice(invoiceId)).state).toBe("released");
     expect(await releaseDue()).toBe(0);
@@ -111,17 +166,38 @@ describe("escrow through the Stripe SDK against the local fake", () => {
     expect(rec.differences).toEqual([]);
 
     // The sold lot (one 12AX7, used) is now a comparable for estimates at its hammer per tube [SUG, lib/lots/comparables].
-    expect((await comparableSales()).some((c) => c.typeFamily === "12AX7" && c.condition === "used" && c.pricePerTubeCents === 2_700)).toBe(true);
+    expect(
+      (await comparableSales()).some(
+        (c) => c.typeFamily === "12AX7" && c.condition === "used" && c.pricePerTubeCents === 2_700,
+      ),
+    ).toBe(true);
   }, 60_000);
 
   it("a card that asks for authentication is paid once the buyer authenticates", async () => {
     const { invoiceId, buyer } = await soldLot([4_000, 3_000]);
-    const r = await payInvoice(viewerOf(buyer), invoiceId, { number: "4000002500003155", expMonth: 1, expYear: 2031, cvc: "999", attemptKey: "attempt-3ds" });
+    const r = await payInvoice(viewerOf(buyer), invoiceId, {
+      number: "4000002500003155",
+      expMonth: 1,
+      expYear: 2031,
+      cvc: "999",
+      attemptKey: "attempt-3ds",
+    });
     expect(r.status).toBe("requires_action");
     const pi = (await invoice(invoiceId)).payment_intent_id!;
-    const auth = await fetch(`${fake.url}/_fake/payment_intents/${pi}/authenticate`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ outcome: "succeed" }) });
+    const auth = await fetch(`${fake.url}/_fake/payment_intents/${pi}/authenticate`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ outcome: "succeed" }),
+    });
     expect(auth.ok).toBe(true);
-    expect((await until(() => invoice(invoiceId), (i) => i.state === "paid-held")).state).toBe("paid-held");
+    expect(
+      (
+        await until(
+          () => invoice(invoiceId),
+          (i) => i.state === "paid-held",
+        )
+      ).state,
+    ).toBe("paid-held");
   }, 30_000);
 
   it("keeps card numbers and the secret key out of our database and logs", async () => {
@@ -131,7 +207,10 @@ describe("escrow through the Stripe SDK against the local fake", () => {
     );
     for (const needle of ["4242424242424242", "4000002500003155", "4000000000000002", process.env.STRIPE_SECRET_KEY!]) {
       for (const c of cols) {
-        const [hit] = await db().query<{ n: number }>(`SELECT 1 AS n FROM "${c.table_name}" WHERE "${c.column_name}"::text LIKE :needle LIMIT 1`, { replacements: { needle: `%${needle}%` }, type: QueryTypes.SELECT });
+        const [hit] = await db().query<{ n: number }>(
+          `SELECT 1 AS n FROM "${c.table_name}" WHERE "${c.column_name}"::text LIKE :needle LIMIT 1`,
+          { replacements: { needle: `%${needle}%` }, type: QueryTypes.SELECT },
+        );
         expect(hit, `${needle.slice(0, 6)}… found in ${c.table_name}.${c.column_name}`).toBeUndefined();
       }
       expect(logged.some((l) => l.includes(needle))).toBe(false);
@@ -145,10 +224,15 @@ describe("unpaid invoices", () => {
     const { cancelUnpaid } = await import("../../lib/services/second-chance");
     const { invoiceId } = await soldLot([3_000, 2_500]);
     await expect(cancelUnpaid(invoiceId, true)).rejects.toThrow(/not yet past its due date/);
-    await db().query(`UPDATE invoices SET due_at = now() - interval '1 minute' WHERE id = :id`, { replacements: { id: invoiceId } });
+    await db().query(`UPDATE invoices SET due_at = now() - interval '1 minute' WHERE id = :id`, {
+      replacements: { id: invoiceId },
+    });
     expect(await sendReminders()).toBeGreaterThanOrEqual(1); // due soon
     expect(await sendReminders()).toBeGreaterThanOrEqual(1); // overdue
-    const [{ reminders_sent }] = await db().query<{ reminders_sent: number }>(`SELECT reminders_sent FROM invoices WHERE id = :id`, { replacements: { id: invoiceId }, type: QueryTypes.SELECT }) as [{ reminders_sent: number }];
+    const [{ reminders_sent }] = (await db().query<{ reminders_sent: number }>(
+      `SELECT reminders_sent FROM invoices WHERE id = :id`,
+      { replacements: { id: invoiceId }, type: QueryTypes.SELECT },
+    )) as [{ reminders_sent: number }];
     expect(reminders_sent).toBe(2);
     const r = await cancelUnpaid(invoiceId, true);
     expect(r.newInvoiceId).toBeTruthy();
@@ -166,8 +250,18 @@ describe("the webhook route", () => {
   it("refuses a bad signature with 400 in the error shape and logs it", async () => {
     const { POST } = await import("../../app/api/webhooks/stripe/route");
     const { NextRequest } = await import("next/server");
-    const body = JSON.stringify({ id: "evt_forged", type: "payment_intent.succeeded", data: { object: { metadata: { invoice_id: "x" } } } });
-    const r = await POST(new NextRequest("http://localhost:3000/api/webhooks/stripe", { method: "POST", body, headers: { "stripe-signature": "t=1,v1=deadbeef" } }));
+    const body = JSON.stringify({
+      id: "evt_forged",
+      type: "payment_intent.succeeded",
+      data: { object: { metadata: { invoice_id: "x" } } },
+    });
+    const r = await POST(
+      new NextRequest("http://localhost:3000/api/webhooks/stripe", {
+        method: "POST",
+        body,
+        headers: { "stripe-signature": "t=1,v1=deadbeef" },
+      }),
+    );
     expect(r.status).toBe(400);
     expect(((await r.json()) as { error: { code: string } }).error.code).toBe("bad_request");
     expect(logged.some((l) => l.includes("[webhook] refused: bad signature"))).toBe(true);

@@ -11,7 +11,12 @@ describe("socket.io handshake uses the same guard as the routes", () => {
   const live = socketServer();
 
   const open = (cookie?: string): Socket =>
-    connect(live.url, { path: "/socket.io", transports: ["websocket"], extraHeaders: cookie ? { cookie } : {}, reconnection: false });
+    connect(live.url, {
+      path: "/socket.io",
+      transports: ["websocket"],
+      extraHeaders: cookie ? { cookie } : {},
+      reconnection: false,
+    });
 
   it("refuses a connection without a session", async () => {
     const s = open();
@@ -38,11 +43,23 @@ describe("bids over the socket", () => {
     const admin = await makeUser(["admin"]);
     const consignor = await makeUser(["consignor"]);
     const lot = await approvedLot(consignor, admin, 2_000);
-    const sale = await createSale(viewerOf(admin), { title: "Socket sale", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 3_600_000).toISOString(), gapSeconds: 30, softCloseSeconds: 120, lots: [{ lotId: lot.id, openingCents: 1_000 }] });
+    const sale = await createSale(viewerOf(admin), {
+      title: "Socket sale",
+      startsAt: new Date(Date.now() - 60_000).toISOString(),
+      firstCloseAt: new Date(Date.now() + 3_600_000).toISOString(),
+      gapSeconds: 30,
+      softCloseSeconds: 120,
+      lots: [{ lotId: lot.id, openingCents: 1_000 }],
+    });
     const { lots } = await getSale(sale.id);
     const saleLotId = lots[0]!.saleLotId;
     const open = async (cookie: string) => {
-      const s = connect(live.url, { path: "/socket.io", transports: ["websocket"], extraHeaders: { cookie }, reconnection: false });
+      const s = connect(live.url, {
+        path: "/socket.io",
+        transports: ["websocket"],
+        extraHeaders: { cookie },
+        reconnection: false,
+      });
       await new Promise((r) => s.on("session.ready", r));
       return s;
     };
@@ -59,7 +76,9 @@ describe("bids over the socket", () => {
     expect(bad).toMatchObject({ ok: false, error: { code: "validation_failed" } });
     ds.close();
     const cs = await open(await sessionCookie(consignor));
-    expect(await cs.emitWithAck("bid.place", { saleLotId, maxCents: 9_000, idempotencyKey: "own-bid-1" })).toMatchObject({ ok: false, error: { code: "forbidden" } });
+    expect(
+      await cs.emitWithAck("bid.place", { saleLotId, maxCents: 9_000, idempotencyKey: "own-bid-1" }),
+    ).toMatchObject({ ok: false, error: { code: "forbidden" } });
     cs.close();
   });
 });
@@ -68,10 +87,15 @@ describe("graceful shutdown", () => {
   it("stops accepting, lets an in-flight request finish, then runs the closers in order", async () => {
     const order: string[] = [];
     const server = http.createServer((_req, res) => {
-      setTimeout(() => { order.push("request finished"); res.end("done"); }, 300);
+      setTimeout(() => {
+        order.push("request finished");
+        res.end("done");
+      }, 300);
     });
     const stopper = gracefulShutdown(server, {
-      closeSockets: async () => { order.push("sockets closed"); },
+      closeSockets: async () => {
+        order.push("sockets closed");
+      },
       closers: [async () => order.push("database closed")],
     });
     await new Promise<void>((r) => server.listen(0, "127.0.0.1", () => r()));

@@ -56,7 +56,9 @@ describe("object storage against the fake", () => {
   });
 
   it("refuses a key that climbs out of its prefix before sending anything", async () => {
-    await expect(putObject("photos/../escape.txt", Buffer.from("x"), "text/plain")).rejects.toThrow(/invalid object key/);
+    await expect(putObject("photos/../escape.txt", Buffer.from("x"), "text/plain")).rejects.toThrow(
+      /invalid object key/,
+    );
   });
 
   it("keeps both renditions of a processed photo under the lot's keys", async () => {

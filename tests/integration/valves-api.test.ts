@@ -6,15 +6,22 @@ import { GET as history } from "../../app/api/valves/types/[designation]/history
 import { GET as getType, PATCH as patchType } from "../../app/api/valves/types/[designation]/route";
 import { makeUser, noParams, request, sessionCookie } from "../support/factories";
 
-type Body = { error?: { code: string; message: string; details?: { candidates?: string[] } } } & Record<string, unknown>;
-const typeOf = (d: string) => getType(request(`/api/valves/types/${encodeURIComponent(d)}`), { params: Promise.resolve({ designation: d }) });
+type Body = { error?: { code: string; message: string; details?: { candidates?: string[] } } } & Record<
+  string,
+  unknown
+>;
+const typeOf = (d: string) =>
+  getType(request(`/api/valves/types/${encodeURIComponent(d)}`), { params: Promise.resolve({ designation: d }) });
 const json = async (r: Response) => (await r.json()) as Body;
 
 describe("GET /api/valves/types/:designation", () => {
   it("decodes what a consignor types and returns published figures [REG ✓: 12AX7 µ 100, Gm 1,600 µmho, Ip 1.2 mA]", async () => {
     const r = await typeOf("ecc 83");
     expect(r.status).toBe(200);
-    const b = (await r.json()) as { decode: { normalised: string }; reference: { designation: string; characteristics: { mu: number; gmMicromho: number; plateCurrentMa: number } } };
+    const b = (await r.json()) as {
+      decode: { normalised: string };
+      reference: { designation: string; characteristics: { mu: number; gmMicromho: number; plateCurrentMa: number } };
+    };
     expect(b.decode.normalised).toBe("ECC83");
     expect(b.reference.designation).toBe("12AX7");
     expect(b.reference.characteristics).toMatchObject({ mu: 100, gmMicromho: 1600, plateCurrentMa: 1.2 });
@@ -33,7 +40,12 @@ describe("GET /api/valves/types/:designation", () => {
     // 12AX8 reads as a 12-class US number [LS53]; not on file, so the house may add it.
     const r = await typeOf("12AX8");
     expect(r.status).toBe(200);
-    const b = (await json(r)) as unknown as { onFile: boolean; canAdd: boolean; reference: unknown; decode: { heater: { volts: number }; candidates: string[] } };
+    const b = (await json(r)) as unknown as {
+      onFile: boolean;
+      canAdd: boolean;
+      reference: unknown;
+      decode: { heater: { volts: number }; candidates: string[] };
+    };
     expect(b).toMatchObject({ onFile: false, canAdd: true, reference: null });
     expect(b.decode.heater.volts).toBe(12.6);
     expect(b.decode.candidates).toContain("12AX7");
@@ -59,7 +71,9 @@ describe("GET /api/valves/types/:designation", () => {
 
 describe("GET /api/valves/date-codes/:code", () => {
   const read = (code: string, type?: string) =>
-    dateCode(request(`/api/valves/date-codes/${encodeURIComponent(code)}${type ? `?type=${type}` : ""}`), { params: Promise.resolve({ code }) });
+    dateCode(request(`/api/valves/date-codes/${encodeURIComponent(code)}${type ? `?type=${type}` : ""}`), {
+      params: Promise.resolve({ code }),
+    });
 
   it("reads 5943 as 1959 week 43 [EIA-476]", async () => {
     const b = (await (await read("5943")).json()) as { eia: { readings: { year: number; week: number }[] } };
@@ -81,10 +95,24 @@ describe("GET /api/valves/date-codes/:code", () => {
 
 describe("POST /api/valves/grade", () => {
   const post = (body: unknown, raw?: string) =>
-    grade(request("/api/valves/grade", raw !== undefined ? { body: raw, headers: { "content-type": "application/json" } } : { json: body }), noParams);
+    grade(
+      request(
+        "/api/valves/grade",
+        raw !== undefined ? { body: raw, headers: { "content-type": "application/json" } } : { json: body },
+      ),
+      noParams,
+    );
 
   it("grades and matches [CTP bands]", async () => {
-    const r = await post({ chartNewValue: 1600, tolerancePct: 5, tubes: [{ id: "a", sections: [1200] }, { id: "b", sections: [1600] }, { id: "c", sections: [1640] }] });
+    const r = await post({
+      chartNewValue: 1600,
+      tolerancePct: 5,
+      tubes: [
+        { id: "a", sections: [1200] },
+        { id: "b", sections: [1600] },
+        { id: "c", sections: [1640] },
+      ],
+    });
     expect(r.status).toBe(200);
     const b = (await r.json()) as { grades: { id: string; grade: string }[]; pairs: { sets: { ids: string[] }[] } };
     expect(b.grades.find((g) => g.id === "a")!.grade).toBe("fair");
@@ -103,7 +131,7 @@ describe("POST /api/valves/grade", () => {
     const big = await post({ chartNewValue: 1600, tubes });
     expect(big.status).toBe(413);
     expect((await json(big)).error!.code).toBe("payload_too_large");
-    expect((await post(undefined, "{\"tubes\": [")).status).toBe(400);
+    expect((await post(undefined, '{"tubes": [')).status).toBe(400);
   });
 });
 
@@ -112,17 +140,33 @@ describe("reference corrections and the maker registry", () => {
     const admin = await makeUser(["admin"]);
     const dealer = await makeUser(["dealer"]);
     const edit = {
-      expectedRevision: 1, reason: "Checked against the registered data sheet", source: "REG ✓",
-      heaterVolts: 6.3, heaterAmps: 0.6, introducedYear: 1939, plateVolts: 250, gridVolts: -8, screenVolts: null,
-      mu: 20, gmMicromho: 2600, plateCurrentMa: 9, rpOhms: 7700, note: "",
+      expectedRevision: 1,
+      reason: "Checked against the registered data sheet",
+      source: "REG ✓",
+      heaterVolts: 6.3,
+      heaterAmps: 0.6,
+      introducedYear: 1939,
+      plateVolts: 250,
+      gridVolts: -8,
+      screenVolts: null,
+      mu: 20,
+      gmMicromho: 2600,
+      plateCurrentMa: 9,
+      rpOhms: 7700,
+      note: "",
     };
     const call = (cookie: string, body: unknown) =>
-      patchType(request("/api/valves/types/6SN7GT", { method: "PATCH", json: body, headers: { cookie } }), { params: Promise.resolve({ designation: "6SN7GT" }) });
+      patchType(request("/api/valves/types/6SN7GT", { method: "PATCH", json: body, headers: { cookie } }), {
+        params: Promise.resolve({ designation: "6SN7GT" }),
+      });
     expect((await call(await sessionCookie(dealer), edit)).status).toBe(403);
     const ok = await call(await sessionCookie(admin), edit);
     expect(ok.status).toBe(200);
     expect((await call(await sessionCookie(admin), edit)).status).toBe(409);
-    const h = await history(request("/api/valves/types/6SN7GT/history", { headers: { cookie: await sessionCookie(admin) } }), { params: Promise.resolve({ designation: "6SN7GT" }) });
+    const h = await history(
+      request("/api/valves/types/6SN7GT/history", { headers: { cookie: await sessionCookie(admin) } }),
+      { params: Promise.resolve({ designation: "6SN7GT" }) },
+    );
     const hb = (await h.json()) as { history: { revision: number; reason: string; changedBy: string }[] };
     expect(hb.history[0]).toMatchObject({ revision: 2, reason: edit.reason, changedBy: admin.displayName });
   });
@@ -131,11 +175,19 @@ describe("reference corrections and the maker registry", () => {
     const admin = await makeUser(["admin"]);
     const cookie = await sessionCookie(admin);
     const send = (csv: string, mode: string) =>
-      importRegistry(request(`/api/valves/makers/import?mode=${mode}`, { method: "POST", body: csv, headers: { cookie, "content-type": "text/csv" } }), noParams);
+      importRegistry(
+        request(`/api/valves/makers/import?mode=${mode}`, {
+          method: "POST",
+          body: csv,
+          headers: { cookie, "content-type": "text/csv" },
+        }),
+        noParams,
+      );
     const bad = "code,maker_name,is_demo,notes\nX17,Aldergrove Electron Works,true,demo\nabc,,maybe,\n";
     const refused = await send(bad, "apply");
     expect(refused.status).toBe(400);
-    const good = "code,maker_name,is_demo,notes\nX17,Aldergrove Electron Works,true,demo\nX31,Kestrel Valve Company,true,demo\n";
+    const good =
+      "code,maker_name,is_demo,notes\nX17,Aldergrove Electron Works,true,demo\nX31,Kestrel Valve Company,true,demo\n";
     const first = (await (await send(good, "apply")).json()) as { counts: Record<string, number> };
     expect(first.counts).toEqual({ new: 2, changed: 0, unchanged: 0 });
     const again = (await (await send(good, "apply")).json()) as { counts: Record<string, number> };

@@ -46,5 +46,8 @@ export default async function setup(project: TestProject) {
 }
 
 declare module "vitest" {
-  export interface ProvidedContext { databaseUrl: string; stripeDir: string }
+  export interface ProvidedContext {
+    databaseUrl: string;
+    stripeDir: string;
+  }
 }

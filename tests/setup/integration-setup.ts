@@ -10,6 +10,8 @@ process.env.MAIL_CATCHER_URL ??= "http://127.0.0.1:2580";
 
 afterAll(async () => {
   const { getSequelize, setSequelize } = await import("../../lib/db/sequelize");
-  await getSequelize().close().catch(() => undefined);
+  await getSequelize()
+    .close()
+    .catch(() => undefined);
   setSequelize(undefined);
 });

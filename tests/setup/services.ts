@@ -18,7 +18,10 @@ export function startDatabase(): string {
 export function portOpen(port: number): Promise<boolean> {
   return new Promise((resolve) => {
     const s = net.connect(port, "127.0.0.1");
-    s.once("connect", () => { s.destroy(); resolve(true); });
+    s.once("connect", () => {
+      s.destroy();
+      resolve(true);
+    });
     s.once("error", () => resolve(false));
   });
 }
@@ -28,7 +31,12 @@ export async function startMailCatcher(): Promise<ChildProcess | null> {
   if (await portOpen(TEST_INBOX_PORT)) return null;
   const child = spawn(process.execPath, ["--import", "tsx", "server/mail-catcher.ts"], {
     cwd: ROOT,
-    env: { ...process.env, MAIL_CATCHER_SMTP_PORT: String(TEST_SMTP_PORT), MAIL_CATCHER_HTTP_PORT: String(TEST_INBOX_PORT), MAIL_CATCHER_DIR: ".data/mail-test" },
+    env: {
+      ...process.env,
+      MAIL_CATCHER_SMTP_PORT: String(TEST_SMTP_PORT),
+      MAIL_CATCHER_HTTP_PORT: String(TEST_INBOX_PORT),
+      MAIL_CATCHER_DIR: ".data/mail-test",
+    },
     stdio: "ignore",
   });
   for (let i = 0; i < 100; i++) {

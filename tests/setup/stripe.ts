@@ -27,7 +27,16 @@ export async function startTestStripe(): Promise<TestStripe> {
       return;
     }
     const body = Buffer.concat(chunks).toString("utf8");
-    const r = await POST(new NextRequest("http://localhost:3000/api/webhooks/stripe", { method: "POST", body, headers: { "stripe-signature": String(req.headers["stripe-signature"] ?? ""), "content-type": "application/json" } }));
+    const r = await POST(
+      new NextRequest("http://localhost:3000/api/webhooks/stripe", {
+        method: "POST",
+        body,
+        headers: {
+          "stripe-signature": String(req.headers["stripe-signature"] ?? ""),
+          "content-type": "application/json",
+        },
+      }),
+    );
     if (r.ok) received.push(JSON.parse(body).id);
     res.writeHead(r.status, { "content-type": "application/json" });
     res.end(await r.text());
@@ -36,17 +45,28 @@ export async function startTestStripe(): Promise<TestStripe> {
   const hook = `http://127.0.0.1:${(receiver.address() as AddressInfo).port}/hook`;
   // The run's shared processor state (tests/setup/global-setup.ts), or a private one outside the integration project.
   const shared = process.env.STRIPE_TEST_DIR;
-  const dir = shared ?? await mkdtemp(path.join(os.tmpdir(), "getterline-stripe-"));
-  const fake = await startStripeFake({ port: 0, dataDir: dir, webhookUrl: hook, webhookSecret: secret, webhookRetry: { baseMs: 100, maxAttempts: 5 } });
+  const dir = shared ?? (await mkdtemp(path.join(os.tmpdir(), "getterline-stripe-")));
+  const fake = await startStripeFake({
+    port: 0,
+    dataDir: dir,
+    webhookUrl: hook,
+    webhookSecret: secret,
+    webhookRetry: { baseMs: 100, maxAttempts: 5 },
+  });
   Object.assign(process.env, {
-    STRIPE_SECRET_KEY: "sk_test_integration_key_not_secret", STRIPE_WEBHOOK_SECRET: secret,
-    STRIPE_API_HOST: "127.0.0.1", STRIPE_API_PORT: String(fake.port), STRIPE_API_PROTOCOL: "http",
+    STRIPE_SECRET_KEY: "sk_test_integration_key_not_secret",
+    STRIPE_WEBHOOK_SECRET: secret,
+    STRIPE_API_HOST: "127.0.0.1",
+    STRIPE_API_PORT: String(fake.port),
+    STRIPE_API_PROTOCOL: "http",
   });
   resetStripe();
   return {
     url: fake.url,
     received,
-    hold(on: boolean) { held = on; },
+    hold(on: boolean) {
+      held = on;
+    },
     async stop() {
       await fake.close();
       await new Promise<void>((r) => receiver.close(() => r()));

@@ -27,20 +27,31 @@ export async function sessionCookie(user: User): Promise<string> {
   return `next-auth.session-token=${token}`;
 }
 
-export function request(url: string, init: { method?: string; json?: unknown; body?: string; headers?: Record<string, string> } = {}): NextRequest {
+export function request(
+  url: string,
+  init: { method?: string; json?: unknown; body?: string; headers?: Record<string, string> } = {},
+): NextRequest {
   const headers: Record<string, string> = { host: "localhost:3000", ...init.headers };
   let body = init.body;
   if (init.json !== undefined) {
     body = JSON.stringify(init.json);
     headers["content-type"] ??= "application/json";
   }
-  return new NextRequest(new URL(url, "http://localhost:3000"), { method: init.method ?? (body ? "POST" : "GET"), headers, body });
+  return new NextRequest(new URL(url, "http://localhost:3000"), {
+    method: init.method ?? (body ? "POST" : "GET"),
+    headers,
+    body,
+  });
 }
 
 export const noParams = { params: Promise.resolve({}) };
 
 /** Messages the local mail catcher holds for an address, newest first. */
-type CaughtMail = { subject: string; text: string; attachments?: { filename: string; contentType: string; size: number }[] };
+type CaughtMail = {
+  subject: string;
+  text: string;
+  attachments?: { filename: string; contentType: string; size: number }[];
+};
 
 export async function inbox(to: string): Promise<CaughtMail[]> {
   const res = await fetch(`${process.env.MAIL_CATCHER_URL}/api/messages?to=${encodeURIComponent(to)}`);
@@ -74,22 +85,54 @@ export function viewerOf(u: User) {
 }
 
 /** A plain item as the consignor's form sends it. */
-export function itemInput(over: Partial<import("../../lib/validation/lots").ItemInput> = {}): import("../../lib/validation/lots").ItemInput {
+export function itemInput(
+  over: Partial<import("../../lib/validation/lots").ItemInput> = {},
+): import("../../lib/validation/lots").ItemInput {
   return {
-    designation: "12AX7", quantity: 1, labelBrand: "Fairmont Home Radio", makerName: null, makerBasis: "unconfirmed",
-    sourceCode: null, dateCode: null, features: {}, condition: "used", vacuumLoss: false, defects: [], hazards: [],
-    readings: [], notes: "", ...over,
+    designation: "12AX7",
+    quantity: 1,
+    labelBrand: "Fairmont Home Radio",
+    makerName: null,
+    makerBasis: "unconfirmed",
+    sourceCode: null,
+    dateCode: null,
+    features: {},
+    condition: "used",
+    vacuumLoss: false,
+    defects: [],
+    hazards: [],
+    readings: [],
+    notes: "",
+    ...over,
   };
 }
 
 /** An approved lot (one plain item unless others are given), ready to be offered in a sale. */
-export async function approvedLot(consignor: User, admin: User, reserveCents = 5_000, items: import("../../lib/validation/lots").ItemInput[] = [itemInput()]) {
+export async function approvedLot(
+  consignor: User,
+  admin: User,
+  reserveCents = 5_000,
+  items: import("../../lib/validation/lots").ItemInput[] = [itemInput()],
+) {
   const { createLot, addItem } = await import("../../lib/services/lots");
   const { submitLot, decideLot } = await import("../../lib/services/lot-review");
-  const lot = await createLot(viewerOf(consignor), { title: `Test lot ${Date.now()}`, provenance: "", shippingOrigin: "", testerKind: "untested", testerNotes: "" });
+  const lot = await createLot(viewerOf(consignor), {
+    title: `Test lot ${Date.now()}`,
+    provenance: "",
+    shippingOrigin: "",
+    testerKind: "untested",
+    testerNotes: "",
+  });
   for (const item of items) await addItem(viewerOf(consignor), lot.id, item);
   await submitLot(viewerOf(consignor), lot.id);
-  await decideLot(viewerOf(admin), lot.id, { action: "approve", comment: "", estimateLowCents: reserveCents, estimateHighCents: reserveCents * 2, reserveCents, reserveAgreed: true });
+  await decideLot(viewerOf(admin), lot.id, {
+    action: "approve",
+    comment: "",
+    estimateLowCents: reserveCents,
+    estimateHighCents: reserveCents * 2,
+    reserveCents,
+    reserveAgreed: true,
+  });
   return lot;
 }
 
@@ -97,7 +140,10 @@ export async function approvedLot(consignor: User, admin: User, reserveCents = 5
  * A lot sold in a one-lot sale that closes within seconds: `maxes` are the winner's and the under-bidder's
  * maximum bids. Returns the unpaid invoice with its parties.
  */
-export async function invoicedLot(maxes: [number, number] = [3_000, 2_500], items: import("../../lib/validation/lots").ItemInput[] = [itemInput()]) {
+export async function invoicedLot(
+  maxes: [number, number] = [3_000, 2_500],
+  items: import("../../lib/validation/lots").ItemInput[] = [itemInput()],
+) {
   const { QueryTypes } = await import("sequelize");
   const { db } = await import("../../models");
   const { createSale } = await import("../../lib/services/sales");
@@ -106,8 +152,16 @@ export async function invoicedLot(maxes: [number, number] = [3_000, 2_500], item
   const admin = await makeUser(["admin"]);
   const consignor = await makeUser(["consignor"]);
   const lot = await approvedLot(consignor, admin, 2_000, items);
-  const sale = await createSale(viewerOf(admin), { title: "Test sale", startsAt: new Date(Date.now() - 60_000).toISOString(), firstCloseAt: new Date(Date.now() + 2_500).toISOString(), gapSeconds: 30, softCloseSeconds: 1, lots: [{ lotId: lot.id, openingCents: 1_000 }] });
-  const one = async <T extends object>(sql: string, id: string) => (await db().query<T>(sql, { replacements: { id }, type: QueryTypes.SELECT }))[0]!;
+  const sale = await createSale(viewerOf(admin), {
+    title: "Test sale",
+    startsAt: new Date(Date.now() - 60_000).toISOString(),
+    firstCloseAt: new Date(Date.now() + 2_500).toISOString(),
+    gapSeconds: 30,
+    softCloseSeconds: 1,
+    lots: [{ lotId: lot.id, openingCents: 1_000 }],
+  });
+  const one = async <T extends object>(sql: string, id: string) =>
+    (await db().query<T>(sql, { replacements: { id }, type: QueryTypes.SELECT }))[0]!;
   const sl = await one<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, sale.id);
   const buyer = await makeUser(["dealer"]);
   const under = await makeUser(["dealer"]);

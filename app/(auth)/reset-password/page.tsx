@@ -12,7 +12,11 @@ export default async function ResetPasswordPage({ searchParams }: { searchParams
         <ResetPasswordForm token={token} />
       ) : (
         <p className="text-flash-700">
-          This page needs the link from the e-mail. <Link href="/forgot-password" className="underline">Ask for a new one</Link>.
+          This page needs the link from the e-mail.{" "}
+          <Link href="/forgot-password" className="underline">
+            Ask for a new one
+          </Link>
+          .
         </p>
       )}
     </div>

@@ -8,7 +8,11 @@ import { homeFor } from "@/lib/auth/roles";
 export const metadata = { title: "Sign in" };
 
 /** Sign in, then go back to the page that sent you here (same origin only); a signed-in visitor goes straight on. */
-export default async function SignInPage({ searchParams }: { searchParams: Promise<{ callbackUrl?: string | string[]; from?: string | string[] }> }) {
+export default async function SignInPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ callbackUrl?: string | string[]; from?: string | string[] }>;
+}) {
   const q = await searchParams;
   const first = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
   const back = safeCallbackPath(first(q.callbackUrl) ?? first(q.from));
@@ -20,8 +24,12 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
       {back ? <p className="text-sm text-flash-700">After signing in you return to the page you asked for.</p> : null}
       <SignInForm from={back ?? undefined} />
       <p className="flex justify-between text-sm text-flash-700">
-        <Link href="/forgot-password" className="underline underline-offset-2">Forgotten password?</Link>
-        <Link href="/sign-up" className="underline underline-offset-2">Open an account</Link>
+        <Link href="/forgot-password" className="underline underline-offset-2">
+          Forgotten password?
+        </Link>
+        <Link href="/sign-up" className="underline underline-offset-2">
+          Open an account
+        </Link>
       </p>
     </div>
   );

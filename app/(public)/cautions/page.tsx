@@ -60,15 +60,20 @@ export default function CautionsPage() {
       <header className="space-y-3">
         <h1 className="text-3xl font-semibold tracking-tight">Safety cautions</h1>
         <p className="text-flash-700">
-          Valves are handled safely every day, but some of the work around them can hurt you. These are the usual cautions,
-          not a substitute for training: local codes, your carrier&apos;s rules and licensed practice always come first.
+          Valves are handled safely every day, but some of the work around them can hurt you. These are the usual
+          cautions, not a substitute for training: local codes, your carrier&apos;s rules and licensed practice always
+          come first.
         </p>
       </header>
       {SECTIONS.map((s) => (
         <section key={s.id} id={s.id} aria-labelledby={`${s.id}-h`} className="card scroll-mt-6 space-y-2">
-          <h2 id={`${s.id}-h`} className="text-lg font-semibold">{s.title}</h2>
+          <h2 id={`${s.id}-h`} className="text-lg font-semibold">
+            {s.title}
+          </h2>
           {s.body.map((p) => (
-            <p key={p} className="text-flash-800">{p}</p>
+            <p key={p} className="text-flash-800">
+              {p}
+            </p>
           ))}
         </section>
       ))}

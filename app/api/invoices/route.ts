@@ -2,4 +2,6 @@
 import { route } from "@/lib/api/route";
 import { listInvoices } from "@/lib/services/invoices";
 
-export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({ invoices: await listInvoices(viewer!) }));
+export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({
+  invoices: await listInvoices(viewer!),
+}));

@@ -2,4 +2,6 @@
 import { route } from "@/lib/api/route";
 import { listNotices } from "@/lib/services/notices";
 
-export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({ notices: await listNotices(viewer!.id) }));
+export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({
+  notices: await listNotices(viewer!.id),
+}));

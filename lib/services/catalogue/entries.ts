@@ -8,9 +8,23 @@ import { currentReferenceTable } from "../reference-table";
 import { consignorRecord } from "../track-record";
 
 type LotRow = {
-  id: string; title: string; provenance: string; shipping_origin: string; state: string; consignor_id: string; approved_at: Date | null; created_at: Date;
-  estimate_low_cents: number | null; estimate_high_cents: number | null;
-  sale_lot_id: string | null; phase: string | null; starts_at: Date | null; closes_at: Date | null; closed_at: Date | null; hammer_cents: number | null; thumb: string | null;
+  id: string;
+  title: string;
+  provenance: string;
+  shipping_origin: string;
+  state: string;
+  consignor_id: string;
+  approved_at: Date | null;
+  created_at: Date;
+  estimate_low_cents: number | null;
+  estimate_high_cents: number | null;
+  sale_lot_id: string | null;
+  phase: string | null;
+  starts_at: Date | null;
+  closes_at: Date | null;
+  closed_at: Date | null;
+  hammer_cents: number | null;
+  thumb: string | null;
 };
 
 /**
@@ -30,11 +44,16 @@ export async function refreshCatalogueEntry(lotId: string, t?: Transaction): Pro
     { replacements: { lotId }, type: QueryTypes.SELECT, transaction: t },
   );
   if (!lot || lot.state !== "approved") {
-    await db().query(`DELETE FROM catalogue_entries WHERE lot_id = :lotId`, { replacements: { lotId }, transaction: t });
+    await db().query(`DELETE FROM catalogue_entries WHERE lot_id = :lotId`, {
+      replacements: { lotId },
+      transaction: t,
+    });
     return;
   }
   const reference = await currentReferenceTable();
-  const items = (await LotItem.findAll({ where: { lotId }, order: [["position", "ASC"]], transaction: t })).map(presentItem).map((i) => toDomainItem(reference, i));
+  const items = (await LotItem.findAll({ where: { lotId }, order: [["position", "ASC"]], transaction: t }))
+    .map(presentItem)
+    .map((i) => toDomainItem(reference, i));
   const a = aggregateLot(items, summariseLot(items, { reference, comparables: [] }));
   const stage = lot.phase === "sold" ? "sold" : lot.phase === "open" ? "in-sale" : "listed";
   const record = await consignorRecord(lot.consignor_id);
@@ -52,11 +71,30 @@ export async function refreshCatalogueEntry(lotId: string, t?: Transaction): Pro
         thumb_photo_id = EXCLUDED.thumb_photo_id, search_text = EXCLUDED.search_text, updated_at = now()`,
     {
       replacements: {
-        lotId, title: lot.title, stage, saleLotId: lot.sale_lot_id, startsAt: lot.starts_at, closesAt: stage === "in-sale" ? lot.closes_at : null,
-        soldAt: stage === "sold" ? lot.closed_at ?? lot.closes_at : null, hammer: stage === "sold" ? lot.hammer_cents : null, listedAt: lot.approved_at ?? lot.created_at,
-        estLow: lot.estimate_low_cents, estHigh: lot.estimate_high_cents, tubes: a.tubes,
-        designations: orNone(a.designations), families: orNone(a.families), conditions: orNone(a.conditions), bases: orNone(a.makerBases), grades: orNone(a.grades), hazards: orNone(a.hazards),
-        tested: a.tested, vacuum: a.vacuumLossTubes, pairs: a.pairs, quads: a.quads, upheld: record.tubesUpheld, thumb: lot.thumb,
+        lotId,
+        title: lot.title,
+        stage,
+        saleLotId: lot.sale_lot_id,
+        startsAt: lot.starts_at,
+        closesAt: stage === "in-sale" ? lot.closes_at : null,
+        soldAt: stage === "sold" ? (lot.closed_at ?? lot.closes_at) : null,
+        hammer: stage === "sold" ? lot.hammer_cents : null,
+        listedAt: lot.approved_at ?? lot.created_at,
+        estLow: lot.estimate_low_cents,
+        estHigh: lot.estimate_high_cents,
+        tubes: a.tubes,
+        designations: orNone(a.designations),
+        families: orNone(a.families),
+        conditions: orNone(a.conditions),
+        bases: orNone(a.makerBases),
+        grades: orNone(a.grades),
+        hazards: orNone(a.hazards),
+        tested: a.tested,
+        vacuum: a.vacuumLossTubes,
+        pairs: a.pairs,
+        quads: a.quads,
+        upheld: record.tubesUpheld,
+        thumb: lot.thumb,
         text: [lot.title, lot.provenance, lot.shipping_origin].join(" ").slice(0, 4000),
       },
       transaction: t,
@@ -79,6 +117,8 @@ export async function repairCatalogue(all = false): Promise<number> {
     { type: QueryTypes.SELECT },
   );
   for (const { id } of ids) await refreshCatalogueEntry(id);
-  await db().query(`DELETE FROM catalogue_entries e WHERE NOT EXISTS (SELECT 1 FROM lots l WHERE l.id = e.lot_id AND l.state = 'approved')`);
+  await db().query(
+    `DELETE FROM catalogue_entries e WHERE NOT EXISTS (SELECT 1 FROM lots l WHERE l.id = e.lot_id AND l.state = 'approved')`,
+  );
   return ids.length;
 }

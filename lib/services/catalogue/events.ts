@@ -11,9 +11,13 @@ export type LotChange = "approved" | "amended" | "scheduled" | "closed" | "photo
  * never thrown into the action that changed the lot; `npm run db:seed` (or refreshAllCatalogueEntries) repairs.
  */
 export async function lotChanged(lotId: string, change: LotChange): Promise<void> {
-  await refreshCatalogueEntry(lotId).catch((e: Error) => console.error(`[catalogue] refresh of ${lotId} failed`, e.message));
+  await refreshCatalogueEntry(lotId).catch((e: Error) =>
+    console.error(`[catalogue] refresh of ${lotId} failed`, e.message),
+  );
   ageFacetCounts();
   if (change === "approved" || change === "scheduled") {
-    await requestWantListMatch(lotId, change).catch((e: Error) => console.error(`[want-lists] could not queue ${lotId}`, e.message));
+    await requestWantListMatch(lotId, change).catch((e: Error) =>
+      console.error(`[want-lists] could not queue ${lotId}`, e.message),
+    );
   }
 }

@@ -40,7 +40,10 @@ export async function catalogueFacets(query: CatalogueQuery, term: DesignationTe
   fresh.catch(() => cache.delete(key));
   if (cache.size >= MAX_CACHED) cache.delete(cache.keys().next().value!);
   if (hit && age < KEEP_MS) {
-    void fresh.then((f) => cache.set(key, { at: Date.now(), facets: Promise.resolve(f) }), () => undefined);
+    void fresh.then(
+      (f) => cache.set(key, { at: Date.now(), facets: Promise.resolve(f) }),
+      () => undefined,
+    );
     return hit.facets;
   }
   cache.set(key, { at: Date.now(), facets: fresh });
@@ -62,14 +65,30 @@ async function countFacets(query: CatalogueQuery, term: DesignationTerm | null):
       GROUP BY x.facet, x.value`,
     { replacements: p.values, type: QueryTypes.SELECT },
   );
-  const f: CatalogueFacets = { total: 0, status: {}, family: {}, condition: {}, basis: {}, grade: {}, hazard: {}, tested: 0, noVacuumLoss: 0, pairs: 0, quads: 0 };
+  const f: CatalogueFacets = {
+    total: 0,
+    status: {},
+    family: {},
+    condition: {},
+    basis: {},
+    grade: {},
+    hazard: {},
+    tested: 0,
+    noVacuumLoss: 0,
+    pairs: 0,
+    quads: 0,
+  };
   for (const r of rows) {
     const n = Number(r.n);
     if (r.facet === "total") f.total = n;
     else if (r.facet === "flags") f[r.value as "tested" | "noVacuumLoss" | "pairs" | "quads"] = n;
     else (f[r.facet as "status"] as Record<string, number>)[r.value] = n;
   }
-  f.family = Object.fromEntries(Object.entries(f.family).sort(([, a], [, b]) => b - a).slice(0, 40)); // the 40 commonest families
+  f.family = Object.fromEntries(
+    Object.entries(f.family)
+      .sort(([, a], [, b]) => b - a)
+      .slice(0, 40),
+  ); // the 40 commonest families
   return f;
 }
 

@@ -34,7 +34,11 @@ const STATUS_SQL = {
 
 /** Words of a search as a prefix query: "voss carton" finds "Voss estate … cartons". */
 export function wordsQuery(q: string): string | null {
-  const words = q.toLowerCase().split(/[^\p{L}\p{N}]+/u).filter((w) => w.length > 0).slice(0, 8);
+  const words = q
+    .toLowerCase()
+    .split(/[^\p{L}\p{N}]+/u)
+    .filter((w) => w.length > 0)
+    .slice(0, 8);
   return words.length ? words.map((w) => `${w}:*`).join(" & ") : null;
 }
 
@@ -53,12 +57,17 @@ export function filterSql(q: CatalogueQuery, term: DesignationTerm | null, opts:
     if (words) either.push(`e.search_tsv @@ to_tsquery('simple', ${p.bind(words)})`);
     p.and(either.length ? `(${either.join(" OR ")})` : "false");
   }
-  const overlap = (col: string, values: readonly string[]) => { if (values.length) p.and(`e.${col} && ARRAY[${p.bind(values)}]::varchar[]`); };
+  const overlap = (col: string, values: readonly string[]) => {
+    if (values.length) p.and(`e.${col} && ARRAY[${p.bind(values)}]::varchar[]`);
+  };
   overlap("families", q.family);
   overlap("conditions", q.condition);
   overlap("maker_bases", q.basis);
   overlap("grades", q.grade);
-  overlap("hazards", q.hazard.filter((h) => h !== "none"));
+  overlap(
+    "hazards",
+    q.hazard.filter((h) => h !== "none"),
+  );
   if (q.hazard.includes("none")) p.and("cardinality(e.hazards) = 0");
   if (q.tested) p.and(q.tested === "yes" ? "e.tested" : "NOT e.tested");
   if (q.noVacuumLoss) p.and("e.vacuum_loss_tubes = 0");

@@ -1,7 +1,13 @@
 import { QueryTypes } from "sequelize";
 import { ApiError } from "../../api/errors";
 import { decodeCursor, encodeCursor, type CatalogueSort, type Cursor } from "../../catalogue/cursor";
-import { designationTerm, RELATION_ORDER, relationRank, type DesignationTerm, type Relation } from "../../catalogue/relations";
+import {
+  designationTerm,
+  RELATION_ORDER,
+  relationRank,
+  type DesignationTerm,
+  type Relation,
+} from "../../catalogue/relations";
 import type { CatalogueQuery, CatalogueStatus } from "../../validation/catalogue";
 import { db } from "../../../models";
 import { currentReferenceTable } from "../reference-table";
@@ -10,18 +16,62 @@ import { filterSql, wordsQuery, type SqlPart } from "./filters";
 
 export type CatalogueMatch = { designation: string; relation: Relation; quantity: number };
 export type CatalogueLot = {
-  id: string; title: string; status: CatalogueStatus; closesAt: string | null; startsAt: string | null; soldAt: string | null;
-  estimateLowCents: number | null; estimateHighCents: number | null; priceCents: number | null; bids: number | null; tubes: number;
-  families: string[]; grades: string[]; hazards: string[]; vacuumLossTubes: number; pairs: number; quads: number;
-  thumbnail: string | null; saleLotId: string | null; saleId: string | null; matches: CatalogueMatch[];
+  id: string;
+  title: string;
+  status: CatalogueStatus;
+  closesAt: string | null;
+  startsAt: string | null;
+  soldAt: string | null;
+  estimateLowCents: number | null;
+  estimateHighCents: number | null;
+  priceCents: number | null;
+  bids: number | null;
+  tubes: number;
+  families: string[];
+  grades: string[];
+  hazards: string[];
+  vacuumLossTubes: number;
+  pairs: number;
+  quads: number;
+  thumbnail: string | null;
+  saleLotId: string | null;
+  saleId: string | null;
+  matches: CatalogueMatch[];
 };
-export type CatalogueResult = { lots: CatalogueLot[]; facets: CatalogueFacets; nextCursor: string | null; term: { designation: string; typed: string } | null };
+export type CatalogueResult = {
+  lots: CatalogueLot[];
+  facets: CatalogueFacets;
+  nextCursor: string | null;
+  term: { designation: string; typed: string } | null;
+};
 
 type Row = {
-  lot_id: string; title: string; stage: string; sale_lot_id: string | null; sale_starts_at: Date | null; closes_at: Date | null; sold_at: Date | null;
-  hammer_cents: number | null; listed_at: Date; estimate_low_cents: number | null; estimate_high_cents: number | null; tubes: number; families: string[]; grades: string[];
-  hazards: string[]; vacuum_loss_tubes: number; pairs: number; quads: number; thumb_photo_id: string | null; rank: number; listed_us: string; closes_us: string | null;
-  live_price: number | null; live_bids: number | null; live_closes_at: Date | null; sale_id: string | null;
+  lot_id: string;
+  title: string;
+  stage: string;
+  sale_lot_id: string | null;
+  sale_starts_at: Date | null;
+  closes_at: Date | null;
+  sold_at: Date | null;
+  hammer_cents: number | null;
+  listed_at: Date;
+  estimate_low_cents: number | null;
+  estimate_high_cents: number | null;
+  tubes: number;
+  families: string[];
+  grades: string[];
+  hazards: string[];
+  vacuum_loss_tubes: number;
+  pairs: number;
+  quads: number;
+  thumb_photo_id: string | null;
+  rank: number;
+  listed_us: string;
+  closes_us: string | null;
+  live_price: number | null;
+  live_bids: number | null;
+  live_closes_at: Date | null;
+  sale_id: string | null;
 };
 
 type Tier = { rank: number; where: (p: SqlPart) => string };
@@ -38,10 +88,19 @@ function relevanceTiers(term: DesignationTerm, words: string | null): Tier[] {
     const names = [...term.related].filter(([, rel]) => rel === r).map(([d]) => d);
     if (!names.length) continue;
     const before = [...closer];
-    tiers.push({ rank: relationRank(r), where: (p) => `e.designations && ARRAY[${p.bind(names)}]::varchar[]${before.length ? ` AND NOT e.designations && ARRAY[${p.bind(before)}]::varchar[]` : ""}` });
+    tiers.push({
+      rank: relationRank(r),
+      where: (p) =>
+        `e.designations && ARRAY[${p.bind(names)}]::varchar[]${before.length ? ` AND NOT e.designations && ARRAY[${p.bind(before)}]::varchar[]` : ""}`,
+    });
     closer.push(...names);
   }
-  if (words) tiers.push({ rank: 9, where: (p) => `e.search_tsv @@ to_tsquery('simple', ${p.bind(words)}) AND NOT e.designations && ARRAY[${p.bind(closer)}]::varchar[]` });
+  if (words)
+    tiers.push({
+      rank: 9,
+      where: (p) =>
+        `e.search_tsv @@ to_tsquery('simple', ${p.bind(words)}) AND NOT e.designations && ARRAY[${p.bind(closer)}]::varchar[]`,
+    });
   return tiers;
 }
 
@@ -49,33 +108,50 @@ const US = (col: string) => `(extract(epoch from ${col}) * 1000000)::bigint`;
 const AT = (param: string) => `('epoch'::timestamptz + (${param} || ' microseconds')::interval)`;
 
 /** ORDER BY and the keyset condition after a cursor, per index-ordered sort (relevance is read in tiers). */
-function order(sort: Exclude<CatalogueSort, "relevance">, cursor: Cursor | null, p: SqlPart): { orderBy: string; after: string } {
+function order(
+  sort: Exclude<CatalogueSort, "relevance">,
+  cursor: Cursor | null,
+  p: SqlPart,
+): { orderBy: string; after: string } {
   const id = cursor ? p.bind(cursor.id) : "";
   const [k0] = cursor?.k ?? [];
   switch (sort) {
     case "newest":
-      return { orderBy: "listed_at DESC, lot_id DESC", after: cursor ? `(listed_at, lot_id) < (${AT(p.bind(String(k0)))}, ${id}::uuid)` : "" };
+      return {
+        orderBy: "listed_at DESC, lot_id DESC",
+        after: cursor ? `(listed_at, lot_id) < (${AT(p.bind(String(k0)))}, ${id}::uuid)` : "",
+      };
     case "closing":
       return {
         orderBy: "closes_at ASC NULLS LAST, lot_id ASC",
-        after: !cursor ? "" : k0 === null || k0 === undefined ? `(closes_at IS NULL AND lot_id > ${id}::uuid)`
-          : `(closes_at > ${AT(p.bind(String(k0)))} OR (closes_at = ${AT(p.bind(String(k0)))} AND lot_id > ${id}::uuid) OR closes_at IS NULL)`,
+        after: !cursor
+          ? ""
+          : k0 === null || k0 === undefined
+            ? `(closes_at IS NULL AND lot_id > ${id}::uuid)`
+            : `(closes_at > ${AT(p.bind(String(k0)))} OR (closes_at = ${AT(p.bind(String(k0)))} AND lot_id > ${id}::uuid) OR closes_at IS NULL)`,
       };
     case "estimate":
       return {
         orderBy: "estimate_low_cents ASC NULLS LAST, lot_id ASC",
-        after: !cursor ? "" : k0 === null || k0 === undefined ? `(estimate_low_cents IS NULL AND lot_id > ${id}::uuid)`
-          : `(estimate_low_cents > ${p.bind(k0)} OR (estimate_low_cents = ${p.bind(k0)} AND lot_id > ${id}::uuid) OR estimate_low_cents IS NULL)`,
+        after: !cursor
+          ? ""
+          : k0 === null || k0 === undefined
+            ? `(estimate_low_cents IS NULL AND lot_id > ${id}::uuid)`
+            : `(estimate_low_cents > ${p.bind(k0)} OR (estimate_low_cents = ${p.bind(k0)} AND lot_id > ${id}::uuid) OR estimate_low_cents IS NULL)`,
       };
   }
 }
 
 function keyOf(sort: CatalogueSort, r: Row): Cursor["k"] {
   switch (sort) {
-    case "relevance": return [r.rank, Number(r.listed_us)];
-    case "newest": return [Number(r.listed_us)];
-    case "closing": return [r.closes_us === null ? null : Number(r.closes_us)];
-    case "estimate": return [r.estimate_low_cents];
+    case "relevance":
+      return [r.rank, Number(r.listed_us)];
+    case "newest":
+      return [Number(r.listed_us)];
+    case "closing":
+      return [r.closes_us === null ? null : Number(r.closes_us)];
+    case "estimate":
+      return [r.estimate_low_cents];
   }
 }
 
@@ -95,29 +171,60 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
   const term = query.q ? designationTerm(query.q, await currentReferenceTable()) : null;
   const sort: CatalogueSort = query.sort ?? (query.q ? "relevance" : "newest");
   const cursor = query.cursor ? decodeCursor(query.cursor, sort) : null;
-  if (query.cursor && !cursor) throw new ApiError("bad_request", "That page link is not valid (the cursor is malformed or for another sort): start the search again", { cursor: "Not a valid cursor" });
+  if (query.cursor && !cursor)
+    throw new ApiError(
+      "bad_request",
+      "That page link is not valid (the cursor is malformed or for another sort): start the search again",
+      { cursor: "Not a valid cursor" },
+    );
   const facetsPending = catalogueFacets(query, term); // counted alongside the page, not after it
   facetsPending.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
-  const rows = sort === "relevance" && term ? await tieredRows(query, term, cursor) : await sortedRows(query, term, sort, cursor);
+  const rows =
+    sort === "relevance" && term ? await tieredRows(query, term, cursor) : await sortedRows(query, term, sort, cursor);
   const page = rows.slice(0, query.limit);
-  const [matches, facets] = await Promise.all([matchesFor(page.map((r) => r.lot_id), term), facetsPending]);
+  const [matches, facets] = await Promise.all([
+    matchesFor(
+      page.map((r) => r.lot_id),
+      term,
+    ),
+    facetsPending,
+  ]);
   const now = Date.now();
   return {
     lots: page.map((r) => {
       const status = statusOf(r, now);
       return {
-        id: r.lot_id, title: r.title, status, startsAt: r.sale_starts_at?.toISOString() ?? null,
-        closesAt: status === "live" || status === "upcoming" ? (r.live_closes_at ?? r.closes_at)?.toISOString() ?? null : null, soldAt: r.sold_at?.toISOString() ?? null,
-        estimateLowCents: r.estimate_low_cents, estimateHighCents: r.estimate_high_cents,
-        priceCents: status === "sold" ? r.hammer_cents : status === "live" ? r.live_price : null, bids: status === "live" ? r.live_bids : null,
-        tubes: r.tubes, families: r.families, grades: r.grades, hazards: r.hazards, vacuumLossTubes: r.vacuum_loss_tubes, pairs: r.pairs, quads: r.quads,
+        id: r.lot_id,
+        title: r.title,
+        status,
+        startsAt: r.sale_starts_at?.toISOString() ?? null,
+        closesAt:
+          status === "live" || status === "upcoming"
+            ? ((r.live_closes_at ?? r.closes_at)?.toISOString() ?? null)
+            : null,
+        soldAt: r.sold_at?.toISOString() ?? null,
+        estimateLowCents: r.estimate_low_cents,
+        estimateHighCents: r.estimate_high_cents,
+        priceCents: status === "sold" ? r.hammer_cents : status === "live" ? r.live_price : null,
+        bids: status === "live" ? r.live_bids : null,
+        tubes: r.tubes,
+        families: r.families,
+        grades: r.grades,
+        hazards: r.hazards,
+        vacuumLossTubes: r.vacuum_loss_tubes,
+        pairs: r.pairs,
+        quads: r.quads,
         thumbnail: r.thumb_photo_id ? `/api/photos/${r.thumb_photo_id}?size=list` : null,
-        saleLotId: status === "live" || status === "upcoming" ? r.sale_lot_id : null, saleId: status === "live" || status === "upcoming" ? r.sale_id : null,
+        saleLotId: status === "live" || status === "upcoming" ? r.sale_lot_id : null,
+        saleId: status === "live" || status === "upcoming" ? r.sale_id : null,
         matches: matches.get(r.lot_id) ?? [],
       };
     }),
     facets,
-    nextCursor: rows.length > query.limit ? encodeCursor({ s: sort, k: keyOf(sort, page.at(-1)!), id: page.at(-1)!.lot_id }) : null,
+    nextCursor:
+      rows.length > query.limit
+        ? encodeCursor({ s: sort, k: keyOf(sort, page.at(-1)!), id: page.at(-1)!.lot_id })
+        : null,
     term: term ? { designation: term.designation, typed: term.typed } : null,
   };
 }
@@ -128,15 +235,27 @@ const SELECT_ENTRY = `e.lot_id, e.title, e.stage, e.sale_lot_id, e.sale_starts_a
   ${US("e.listed_at")} AS listed_us, ${US("e.closes_at")} AS closes_us`;
 
 /** One page in a sort that follows an index (newest, closing, estimate; relevance by words alone). */
-async function sortedRows(query: CatalogueQuery, term: DesignationTerm | null, sort: CatalogueSort, cursor: Cursor | null): Promise<Row[]> {
+async function sortedRows(
+  query: CatalogueQuery,
+  term: DesignationTerm | null,
+  sort: CatalogueSort,
+  cursor: Cursor | null,
+): Promise<Row[]> {
   const p = filterSql(query, term);
-  const { orderBy, after } = order(sort === "relevance" ? "newest" : sort, cursor && sort === "relevance" ? { ...cursor, k: [cursor.k[1] ?? null] } : cursor, p);
+  const { orderBy, after } = order(
+    sort === "relevance" ? "newest" : sort,
+    cursor && sort === "relevance" ? { ...cursor, k: [cursor.k[1] ?? null] } : cursor,
+    p,
+  );
   return db().query<Row>(
     `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
        FROM (SELECT * FROM (SELECT ${SELECT_ENTRY}, 0 AS rank FROM catalogue_entries e WHERE ${p.where()}) x
               ${after ? `WHERE ${after}` : ""} ORDER BY ${orderBy} LIMIT ${p.bind(query.limit + 1)}) y
        LEFT JOIN sale_lots sl ON sl.id = y.sale_lot_id
-      ORDER BY ${orderBy.split(", ").map((o) => `y.${o}`).join(", ")}`,
+      ORDER BY ${orderBy
+        .split(", ")
+        .map((o) => `y.${o}`)
+        .join(", ")}`,
     { replacements: p.values, type: QueryTypes.SELECT },
   );
 }
@@ -149,7 +268,8 @@ async function tieredRows(query: CatalogueQuery, term: DesignationTerm, cursor: 
     if (cursor && tier.rank < (k0 ?? 0)) continue;
     const p = filterSql(query, term, { search: false });
     p.and(tier.where(p));
-    if (cursor && tier.rank === k0) p.and(`(e.listed_at, e.lot_id) < (${AT(p.bind(String(k1)))}, ${p.bind(cursor.id)}::uuid)`);
+    if (cursor && tier.rank === k0)
+      p.and(`(e.listed_at, e.lot_id) < (${AT(p.bind(String(k1)))}, ${p.bind(cursor.id)}::uuid)`);
     const rows = await db().query<Row>(
       `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
          FROM (SELECT ${SELECT_ENTRY}, ${tier.rank} AS rank FROM catalogue_entries e WHERE ${p.where()}
@@ -174,12 +294,14 @@ async function matchesFor(lotIds: string[], term: DesignationTerm | null): Promi
     const m = { designation: r.designation, relation: term.related.get(r.designation)!, quantity: Number(r.quantity) };
     out.set(r.lot_id, [...(out.get(r.lot_id) ?? []), m]);
   }
-  for (const ms of out.values()) ms.sort((a, b) => relationRank(a.relation) - relationRank(b.relation) || b.quantity - a.quantity);
+  for (const ms of out.values())
+    ms.sort((a, b) => relationRank(a.relation) - relationRank(b.relation) || b.quantity - a.quantity);
   return out;
 }
 
 /** Count the broad searches once at start (every visitor's first page), so nobody waits for them. */
 export async function warmCatalogue(): Promise<void> {
   const { CatalogueQuerySchema } = await import("../../validation/catalogue");
-  for (const status of [[], ["approved"], ["live", "upcoming"], ["sold"]] as const) await searchCatalogue(CatalogueQuerySchema.parse({ status }));
+  for (const status of [[], ["approved"], ["live", "upcoming"], ["sold"]] as const)
+    await searchCatalogue(CatalogueQuerySchema.parse({ status }));
 }

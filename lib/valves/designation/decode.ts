@@ -61,17 +61,24 @@ function heaterFromRow(s: StructuralDecode, row: ReferenceType, reasons: string[
   const range = s.heater.voltsRange;
   const inClass = range !== undefined && configurations.some((c) => c.volts > range[0] && c.volts <= range[1]);
   if (named !== undefined && !matching && !inClass) {
-    reasons.push(`The designation suggests about ${named} V but the reference data gives ${h.volts} V; the data sheet wins ${tag}`);
+    reasons.push(
+      `The designation suggests about ${named} V but the reference data gives ${h.volts} V; the data sheet wins ${tag}`,
+    );
   }
   if (s.heater.seriesCurrentMa !== undefined && Math.abs(s.heater.seriesCurrentMa - h.amps * 1000) > 1) {
-    reasons.push(`Series current ${s.heater.seriesCurrentMa} mA from the letter differs from ${h.amps} A in the reference data ${tag}`);
+    reasons.push(
+      `Series current ${s.heater.seriesCurrentMa} mA from the letter differs from ${h.amps} A in the reference data ${tag}`,
+    );
   }
   const kind = s.heater.kind === "unknown" ? (h.filament && h.volts <= 2 ? "battery" : "voltage") : s.heater.kind;
   const chosen = matching ?? configurations[0];
   return { ...s.heater, kind, volts: chosen.volts, amps: chosen.amps, tapped: Boolean(h.tapped), configurations };
 }
 
-function enrich(table: ReferenceTable, s: StructuralDecode): Omit<DecodedDesignation, "ok" | "input" | "knownType" | "candidates" | "changes"> {
+function enrich(
+  table: ReferenceTable,
+  s: StructuralDecode,
+): Omit<DecodedDesignation, "ok" | "input" | "knownType" | "candidates" | "changes"> {
   const reasons = [...s.reasons];
   const usNumber = s.system === "us-rma" || s.system === "us-special" || s.system === "us-numeric";
   const found = findReferenceType(table, s.normalised);
@@ -83,7 +90,9 @@ function enrich(table: ReferenceTable, s: StructuralDecode): Omit<DecodedDesigna
       );
     }
     if (s.system === "us-rma" && s.envelope?.kind === "unspecified" && !s.envelope.suffix) {
-      reasons.push("No envelope suffix: on an octal-era type often the original all-metal version, on a miniature plain glass [MEM]");
+      reasons.push(
+        "No envelope suffix: on an octal-era type often the original all-metal version, on a miniature plain glass [MEM]",
+      );
     }
     return { ...s, reasons };
   }
@@ -102,7 +111,9 @@ function enrich(table: ReferenceTable, s: StructuralDecode): Omit<DecodedDesigna
     base = dataBase;
     reasons.push(`Reference data: base ${dataBase.label} [${row.source}]`);
   } else if (base.family !== row.base) {
-    reasons.push(`The designation suggests ${base.label} but the reference data gives ${dataBase.label}; the data sheet wins [${row.source}]`);
+    reasons.push(
+      `The designation suggests ${base.label} but the reference data gives ${dataBase.label}; the data sheet wins [${row.source}]`,
+    );
     base = dataBase;
   }
   const loktal = base.family === "loktal" || base.family === "loktal-b10b";
@@ -150,7 +161,9 @@ export function decodeDesignation(table: ReferenceTable, input: string): DecodeR
     candidates: candidateDesignations(table, value),
   });
   if (value.includes("/") && !GT_G.test(value)) {
-    return fail('"/" joins two designations, or is a mistyped suffix; enter one designation (GT/G is the only suffix with "/").');
+    return fail(
+      '"/" joins two designations, or is a mistyped suffix; enter one designation (GT/G is the only suffix with "/").',
+    );
   }
   const known = isKnownDesignation(table, value);
   let structural: StructuralDecode | undefined;
@@ -168,7 +181,8 @@ export function decodeDesignation(table: ReferenceTable, input: string): DecodeR
   if (!structural && known) structural = decodeUsNumeric(value) ?? listedOnly(value);
   if (!structural) {
     if (refusal) return fail(refusal);
-    if (decodeUsNumeric(value)) return fail("Bare numbers (early or transmitting types) are accepted only for types in our lists.");
+    if (decodeUsNumeric(value))
+      return fail("Bare numbers (early or transmitting types) are accepted only for types in our lists.");
     return fail("This follows neither the US nor the European numbering scheme.");
   }
   const decoded = enrich(table, structural);

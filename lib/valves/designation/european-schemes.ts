@@ -61,7 +61,9 @@ function decodeEuropeanParts(
   const base = readEuropeanDigits(digits);
   reasons.push(`Digits ${digits}: ${base.reason}`);
   if (special) {
-    reasons.push("Digits placed between the heater and system letters: special-quality (long-life, industrial) version [PE]");
+    reasons.push(
+      "Digits placed between the heater and system letters: special-quality (long-life, industrial) version [PE]",
+    );
   }
   if (trailing) {
     reasons.push(`Trailing letter ${trailing}: a variant mark with no scheme-wide meaning [MEM]`);
@@ -72,7 +74,9 @@ function decodeEuropeanParts(
     parts: { heaterCode: heaterLetter, letters, number: digits, ...(trailing ? { suffix: trailing } : {}) },
     heater: heater.heater,
     electrodes,
-    ...(base.family ? { base: { family: base.family, label: baseFamilyLabel(base.family), from: "designation" as const } } : {}),
+    ...(base.family
+      ? { base: { family: base.family, label: baseFamilyLabel(base.family), from: "designation" as const } }
+      : {}),
     ...(base.family ? { loktal: base.family === "loktal-b10b" } : {}),
     coldCathode: false,
     specialQuality: special,
@@ -109,7 +113,9 @@ export function decodeMilitary(value: string): StructuralDecode | undefined {
       electrodes: [],
       coldCathode: false,
       specialQuality: true,
-      reasons: ["CV number: a UK military register number, often a special-quality version of a commercial type; no heater or base meaning [MEM]"],
+      reasons: [
+        "CV number: a UK military register number, often a special-quality version of a commercial type; no heater or base meaning [MEM]",
+      ],
     };
   }
   const vt = VT.exec(value);

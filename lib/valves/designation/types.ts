@@ -13,14 +13,7 @@ import type { BaseFamily, HeaterConfiguration, HeaterKind } from "../index-types
  * - other: a type in our lists whose name follows none of the schemes above (KT88)
  */
 export type DesignationSystem =
-  | "us-rma"
-  | "us-special"
-  | "us-numeric"
-  | "european"
-  | "european-special"
-  | "military-cv"
-  | "military-vt"
-  | "other";
+  "us-rma" | "us-special" | "us-numeric" | "european" | "european-special" | "military-cv" | "military-vt" | "other";
 
 /** What the designation (and, where known, reference data) says about the heater. */
 export interface HeaterInfo {

@@ -26,7 +26,10 @@ export function decodeUsRma(value: string): StructuralDecode | StructuralRefusal
   }
   const suffixReading = readUsSuffix(suffix);
   if (suffix && !suffixReading) {
-    return { refused: true, message: `"${suffix}" is not a US suffix we recognise (G, GT, GT/G, A, B, W, WA, Y, X, M...).` };
+    return {
+      refused: true,
+      message: `"${suffix}" is not a US suffix we recognise (G, GT, GT/G, A, B, W, WA, Y, X, M...).`,
+    };
   }
   const n = Number(numberText);
   const heaterReading = readUsHeaterNumber(n, letters);
@@ -51,7 +54,9 @@ export function decodeUsRma(value: string): StructuralDecode | StructuralRefusal
     parts: { heaterCode: numberText, letters, number: elementsText, ...(suffix ? { suffix } : {}) },
     heater: heaterReading.heater,
     electrodes: [],
-    ...(loktal ? { base: { family: "loktal" as const, label: baseFamilyLabel("loktal"), from: "designation" as const } } : {}),
+    ...(loktal
+      ? { base: { family: "loktal" as const, label: baseFamilyLabel("loktal"), from: "designation" as const } }
+      : {}),
     envelope: suffixReading?.envelope ?? { kind: "unspecified", suffix: "", ruggedised: false },
     singleEnded: letterReading.singleEnded,
     ...(loktal !== undefined ? { loktal } : {}),

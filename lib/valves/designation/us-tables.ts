@@ -104,7 +104,9 @@ export function readUsLetters(n: number, letters: string): UsLetterReading {
   const batteryLoktal = letters.length === 2 && letters[0] === "L" && n === 1;
   if (batteryLoktal) reasons.push(`Leading L in "${letters}" on a battery type: battery loktal [LS53, MEM]`);
   if (letters.length === 1 && letters >= "U" && letters <= "Z") {
-    reasons.push(`Single letter ${letters}: rectifiers were allocated backwards from Z, so often a rectifier, not always [LS53]`);
+    reasons.push(
+      `Single letter ${letters}: rectifiers were allocated backwards from Z, so often a rectifier, not always [LS53]`,
+    );
   }
   return { singleEnded, batteryLoktal, reasons };
 }

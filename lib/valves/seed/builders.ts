@@ -7,8 +7,19 @@ import type { NominalCharacteristics, ReferenceHeater, ReferenceType } from "../
 export const H = (volts: number, amps: number, filament = false): ReferenceHeater =>
   filament ? { volts, amps, filament } : { volts, amps };
 /** 12.6 V centre-tapped heater: `amps` in series, twice that at 6.3 V in parallel. */
-export const TAP = (amps: number): ReferenceHeater => ({ volts: 12.6, amps, tapped: { volts: 6.3, amps: Math.round(amps * 2000) / 1000 } });
-export const TRI = (plateVolts: number, bias: number | { rk: number }, mu: number, gm: number, ip: number, rp?: number): NominalCharacteristics => ({
+export const TAP = (amps: number): ReferenceHeater => ({
+  volts: 12.6,
+  amps,
+  tapped: { volts: 6.3, amps: Math.round(amps * 2000) / 1000 },
+});
+export const TRI = (
+  plateVolts: number,
+  bias: number | { rk: number },
+  mu: number,
+  gm: number,
+  ip: number,
+  rp?: number,
+): NominalCharacteristics => ({
   kind: "amplifier",
   plateVolts,
   ...(typeof bias === "number" ? { gridVolts: bias } : { cathodeResistorOhms: bias.rk }),
@@ -17,7 +28,14 @@ export const TRI = (plateVolts: number, bias: number | { rk: number }, mu: numbe
   plateCurrentMa: ip,
   ...(rp !== undefined ? { rpOhms: rp } : {}),
 });
-export const PEN = (plateVolts: number, screenVolts: number, bias: number | { rk: number }, gm: number, ip: number, approximate = false): NominalCharacteristics => ({
+export const PEN = (
+  plateVolts: number,
+  screenVolts: number,
+  bias: number | { rk: number },
+  gm: number,
+  ip: number,
+  approximate = false,
+): NominalCharacteristics => ({
   kind: "amplifier",
   plateVolts,
   screenVolts,
@@ -55,7 +73,6 @@ export const PRIMING_SOURCE: TypeHazard = {
 export type Row = Omit<ReferenceType, "aliases" | "hazards"> & Partial<Pick<ReferenceType, "aliases" | "hazards">>;
 export const row = (r: Row): ReferenceType => ({ ...r, aliases: r.aliases ?? [], hazards: r.hazards ?? [] });
 
-
 /**
  * A bulk seed row: designation, kind, heater, base; source defaults to
  * registered figures recalled from memory ("REG MEM"). Characteristics are
@@ -70,7 +87,18 @@ export const T = (
 ): ReferenceType => row({ designation, kind, heater, base, source: "REG MEM", ...extra });
 
 /** 1.4 V battery filament with a centre tap: `amps` at 2.8 V (halves in series), twice that at 1.4 V. */
-export const B28 = (amps: number): ReferenceHeater => ({ volts: 2.8, amps, filament: true, tapped: { volts: 1.4, amps: Math.round(amps * 2000) / 1000 } });
+export const B28 = (amps: number): ReferenceHeater => ({
+  volts: 2.8,
+  amps,
+  filament: true,
+  tapped: { volts: 1.4, amps: Math.round(amps * 2000) / 1000 },
+});
 /** European seed row: figures from European data books, recalled from memory. */
-export const EU = (designation: string, kind: ReferenceType["kind"], heater: ReferenceHeater | null | undefined, base: ReferenceType["base"], extra: Partial<Row> = {}): ReferenceType =>
+export const EU = (
+  designation: string,
+  kind: ReferenceType["kind"],
+  heater: ReferenceHeater | null | undefined,
+  base: ReferenceType["base"],
+  extra: Partial<Row> = {},
+): ReferenceType =>
   row({ designation, kind, ...(heater !== undefined ? { heater } : {}), base, source: "EU-DS MEM", ...extra });

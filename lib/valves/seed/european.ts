@@ -19,14 +19,20 @@ export const EUROPEAN_ROWS: readonly ReferenceType[] = [
   EU("EF83", "pentode", H(6.3, 0.2), "noval", low),
   EU("EF92", "remote-cutoff-pentode", H(6.3, 0.2), "miniature-7-pin", low),
   EU("EBC81", "duo-diode-triode", H(6.3, 0.23), "noval", { aliases: ["6BD7"], ...low }),
-  EU("EL81", "power-pentode", undefined, "noval", { aliases: ["6CJ6"], note: "Line-output type: anode on a top cap", ...low }),
+  EU("EL81", "power-pentode", undefined, "noval", {
+    aliases: ["6CJ6"],
+    note: "Line-output type: anode on a top cap",
+    ...low,
+  }),
   EU("EL83", "power-pentode", H(6.3, 0.71), "noval", { aliases: ["6CK6"], ...low }),
   EU("EL91", "power-pentode", H(6.3, 0.2), "miniature-7-pin", { aliases: ["6AM5"], ...low }),
   EU("EM81", "tuning-indicator", H(6.3, 0.3), "noval", { aliases: ["6DA5"], ...low }),
   EU("EM87", "tuning-indicator", H(6.3, 0.3), "noval", { aliases: ["6HU6"], ...low }),
   EU("EC86", "triode", H(6.3, 0.175), "noval", { aliases: ["6CM4"], ...low }),
   EU("EY81", "damper-diode", undefined, "noval", low),
-  EU("EY86", "half-wave-rectifier", H(6.3, 0.09), "noval", { note: "EHT rectifier of TV sets: very high voltage in use" }),
+  EU("EY86", "half-wave-rectifier", H(6.3, 0.09), "noval", {
+    note: "EHT rectifier of TV sets: very high voltage in use",
+  }),
   // E series, rimlock (B8A).
   EU("EAF42", "duo-diode-pentode", H(6.3, 0.2), "rimlock", low),
   EU("EBC41", "duo-diode-triode", H(6.3, 0.23), "rimlock", low),
@@ -88,5 +94,8 @@ export const EUROPEAN_ROWS: readonly ReferenceType[] = [
   EU("UL41", "power-pentode", H(45, 0.1), "rimlock", low),
   EU("UY41", "half-wave-rectifier", H(31, 0.1), "rimlock", low),
   // D series battery rectifier for EHT.
-  EU("DY86", "half-wave-rectifier", H(1.4, 0.55, true), "noval", { note: "EHT rectifier of TV sets: very high voltage in use", ...low }),
+  EU("DY86", "half-wave-rectifier", H(1.4, 0.55, true), "noval", {
+    note: "EHT rectifier of TV sets: very high voltage in use",
+    ...low,
+  }),
 ];

@@ -22,11 +22,32 @@ export const RECTIFIER_REGULATOR_ROWS: readonly ReferenceType[] = [
   T("1G3GTA", "half-wave-rectifier", F(1.25, 0.2), "octal", { aliases: ["1G3GT"], note: EHT, ...low }),
   T("1X2B", "half-wave-rectifier", F(1.25, 0.2), "noval", { aliases: ["1X2A"], note: EHT }),
   T("3A3", "half-wave-rectifier", F(3.15, 0.22), "octal", { aliases: ["3A3A", "3A3B"], note: EHT, ...low }),
-  T("872A", "half-wave-rectifier", F(5, 7.5), "four-pin", { hazards: [MERCURY], largeEnvelope: true, note: "Mercury-vapour rectifier, plate on a top cap", ...low }),
-  T("816", "half-wave-rectifier", F(2.5, 2), "four-pin", { hazards: [MERCURY], note: "Mercury-vapour rectifier, plate on a top cap", ...low }),
-  T("0Z4", "full-wave-rectifier", null, "octal", { aliases: ["0Z4A"], note: "Cold-cathode gas rectifier of car sets", ...low }),
+  T("872A", "half-wave-rectifier", F(5, 7.5), "four-pin", {
+    hazards: [MERCURY],
+    largeEnvelope: true,
+    note: "Mercury-vapour rectifier, plate on a top cap",
+    ...low,
+  }),
+  T("816", "half-wave-rectifier", F(2.5, 2), "four-pin", {
+    hazards: [MERCURY],
+    note: "Mercury-vapour rectifier, plate on a top cap",
+    ...low,
+  }),
+  T("0Z4", "full-wave-rectifier", null, "octal", {
+    aliases: ["0Z4A"],
+    note: "Cold-cathode gas rectifier of car sets",
+    ...low,
+  }),
   T("0A3", "voltage-regulator", null, "octal", { aliases: ["VR75"], hazards: [PRIMING_SOURCE], source: "MEM" }),
   T("0B3", "voltage-regulator", null, "octal", { aliases: ["VR90"], hazards: [PRIMING_SOURCE], source: "MEM" }),
-  T("5651", "voltage-regulator", null, "miniature-7-pin", { hazards: [PRIMING_SOURCE], note: "Voltage reference, about 87 V", source: "MEM?" }),
-  T("85A2", "voltage-regulator", null, "miniature-7-pin", { hazards: [PRIMING_SOURCE], note: "Voltage reference, about 85 V", source: "MEM?" }),
+  T("5651", "voltage-regulator", null, "miniature-7-pin", {
+    hazards: [PRIMING_SOURCE],
+    note: "Voltage reference, about 87 V",
+    source: "MEM?",
+  }),
+  T("85A2", "voltage-regulator", null, "miniature-7-pin", {
+    hazards: [PRIMING_SOURCE],
+    note: "Voltage reference, about 85 V",
+    source: "MEM?",
+  }),
 ];

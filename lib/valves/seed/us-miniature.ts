@@ -71,7 +71,10 @@ export const US_MINIATURE_ROWS: readonly ReferenceType[] = [
   T("6BR5", "tuning-indicator", H(6.3, 0.3), "noval", { aliases: ["EM80"], source: "EU-DS MEM" }),
   T("6V4", "full-wave-rectifier", H(6.3, 0.6), "noval", { aliases: ["EZ80"], source: "EU-DS MEM" }),
   T("6973", "beam-tetrode", H(6.3, 0.45), "noval", low),
-  T("7189A", "power-pentode", H(6.3, 0.76), "noval", { aliases: ["7189"], note: "Upward-rated EL84: replaces 6BQ5, not necessarily the reverse" }),
+  T("7189A", "power-pentode", H(6.3, 0.76), "noval", {
+    aliases: ["7189"],
+    note: "Upward-rated EL84: replaces 6BQ5, not necessarily the reverse",
+  }),
   // 12.6 V miniature (150 mA series strings and car sets) and tapped types.
   T("12AD6", "pentagrid-converter", H(12.6, 0.15), "miniature-7-pin", low),
   T("12AF6", "remote-cutoff-pentode", H(12.6, 0.15), "miniature-7-pin", low),

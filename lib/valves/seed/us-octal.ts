@@ -34,14 +34,24 @@ export const US_OCTAL_ROWS: readonly ReferenceType[] = [
   T("6SR7", "duo-diode-triode", H(6.3, 0.3), "octal"),
   T("6AF6G", "tuning-indicator", H(6.3, 0.15), "octal", low),
   // Octal output, 6.3 V.
-  T("6B4G", "power-triode", H(6.3, 1, true), "octal", { ...big, note: "Directly heated; a 2A3 on an octal base with a 6.3 V filament" }),
+  T("6B4G", "power-triode", H(6.3, 1, true), "octal", {
+    ...big,
+    note: "Directly heated; a 2A3 on an octal base with a 6.3 V filament",
+  }),
   T("6BG6GA", "beam-tetrode", H(6.3, 0.9), "octal", { aliases: ["6BG6G"] }),
   T("6W6GT", "beam-tetrode", H(6.3, 1.2), "octal"),
   T("6Y6GA", "beam-tetrode", H(6.3, 1.25), "octal", { aliases: ["6Y6G"] }),
-  T("6146", "beam-tetrode", H(6.3, 1.25), "octal", { aliases: ["6146A"], note: "Plate on a top cap: high voltage at the cap" }),
+  T("6146", "beam-tetrode", H(6.3, 1.25), "octal", {
+    aliases: ["6146A"],
+    note: "Plate on a top cap: high voltage at the cap",
+  }),
   T("7581A", "beam-tetrode", H(6.3, 0.9), "octal", { aliases: ["7581"], ...low }),
   T("7591A", "beam-tetrode", H(6.3, 0.8), "octal", { aliases: ["7591"], ...low }),
-  T("KT77", "beam-tetrode", H(6.3, 1.4), "octal", { ...big, source: "EU-DS MEM?", note: "Substitutes for EL34 with caveats" }),
+  T("KT77", "beam-tetrode", H(6.3, 1.4), "octal", {
+    ...big,
+    source: "EU-DS MEM?",
+    note: "Substitutes for EL34 with caveats",
+  }),
   T("6BL7GTA", "dual-triode", H(6.3, 1.5), "octal", { aliases: ["6BL7GT"] }),
   T("6BX7GT", "dual-triode", H(6.3, 1.5), "octal"),
   T("6080", "dual-power-triode", H(6.3, 2.5), "octal", { ...big, source: "MIL-E-1/REG MEM", note: "Ruggedised 6AS7G" }),
@@ -50,9 +60,15 @@ export const US_OCTAL_ROWS: readonly ReferenceType[] = [
   T("6AX4GTB", "damper-diode", H(6.3, 1.2), "octal", { aliases: ["6AX4GT", "6AX4GTA"] }),
   T("6W4GT", "damper-diode", H(6.3, 1.2), "octal"),
   T("12AX4GTB", "damper-diode", H(12.6, 0.6), "octal", { aliases: ["12AX4GTA"] }),
-  T("6BQ6GTB", "beam-tetrode", H(6.3, 1.2), "octal", { aliases: ["6BQ6GT", "6CU6"], note: "Horizontal-output type: plate on a top cap" }),
+  T("6BQ6GTB", "beam-tetrode", H(6.3, 1.2), "octal", {
+    aliases: ["6BQ6GT", "6CU6"],
+    note: "Horizontal-output type: plate on a top cap",
+  }),
   T("6CD6GA", "beam-tetrode", H(6.3, 2.5), "octal", { ...big, note: "Horizontal-output type: plate on a top cap" }),
-  T("6DQ6B", "beam-tetrode", H(6.3, 1.2), "octal", { aliases: ["6DQ6A"], note: "Horizontal-output type: plate on a top cap" }),
+  T("6DQ6B", "beam-tetrode", H(6.3, 1.2), "octal", {
+    aliases: ["6DQ6A"],
+    note: "Horizontal-output type: plate on a top cap",
+  }),
   T("12DQ6B", "beam-tetrode", H(12.6, 0.6), "octal", { aliases: ["12DQ6A"] }),
   T("6AV5GA", "beam-tetrode", H(6.3, 1.2), "octal", low),
   // 12.6 V octal (150 mA series strings).

@@ -52,7 +52,9 @@ describe("validateLadder", () => {
         { fromCents: 0, incrementCents: 20 },
       ]),
     ).toContain("rung 1: levels must ascend");
-    expect(validateLadder([{ fromCents: 0, incrementCents: 0 }])).toContain("rung 0: incrementCents must be whole cents > 0");
+    expect(validateLadder([{ fromCents: 0, incrementCents: 0 }])).toContain(
+      "rung 0: incrementCents must be whole cents > 0",
+    );
     expect(validateLadder([{ fromCents: 0, incrementCents: 2.5 }])).toHaveLength(1);
     expect(() => incrementAt(10, [{ fromCents: 5, incrementCents: 1 }])).toThrow(/invalid increment ladder/);
   });

@@ -21,14 +21,27 @@ const B = "bellweather-audio";
 const C = "northbank-valve";
 
 // uses a flat $10 increment
-const FLAT10: LotTerms = { openingCents: 1_000, reserveCents: null, ladder: flatLadder(1_000), consignorId: "voss-estate" };
+const FLAT10: LotTerms = {
+  openingCents: 1_000,
+  reserveCents: null,
+  ladder: flatLadder(1_000),
+  consignorId: "voss-estate",
+};
 
 let seq = 0;
-const bid = (bidderId: string, maxCents: number): MaxBid => ({ bidderId, maxCents, placedAtMs: T0 + seq * 1_000, seq: ++seq });
+const bid = (bidderId: string, maxCents: number): MaxBid => ({
+  bidderId,
+  maxCents,
+  placedAtMs: T0 + seq * 1_000,
+  seq: ++seq,
+});
 
 /** Places bids in order, expecting each to be accepted; returns the final state. */
 function run(terms: LotTerms, ...bids: [string, number][]): ProxyState {
-  return bids.reduce((state, [who, max]) => accepted(placeBid(state, bid(who, max), OPEN)).state, initialProxyState(terms));
+  return bids.reduce(
+    (state, [who, max]) => accepted(placeBid(state, bid(who, max), OPEN)).state,
+    initialProxyState(terms),
+  );
 }
 
 function accepted(decision: BidDecision): Extract<BidDecision, { accepted: true }> {
@@ -109,7 +122,12 @@ describe("proxy rules [CTP]", () => {
 });
 
 describe("ladder boundaries in proxy prices (default ladder)", () => {
-  const terms: LotTerms = { openingCents: 100, reserveCents: null, ladder: DEFAULT_INCREMENT_LADDER, consignorId: "voss-estate" };
+  const terms: LotTerms = {
+    openingCents: 100,
+    reserveCents: null,
+    ladder: DEFAULT_INCREMENT_LADDER,
+    consignorId: "voss-estate",
+  };
   it("second maximum $19.99 adds $1; $20.00 adds $2", () => {
     expect(run(terms, [A, 5_000], [B, 1_999]).priceCents).toBe(2_099);
     expect(run(terms, [A, 5_000], [B, 2_000]).priceCents).toBe(2_200);
@@ -117,7 +135,12 @@ describe("ladder boundaries in proxy prices (default ladder)", () => {
 });
 
 describe("reserve [CTP]", () => {
-  const terms: LotTerms = { openingCents: 5_000, reserveCents: 20_000, ladder: DEFAULT_INCREMENT_LADDER, consignorId: "voss-estate" };
+  const terms: LotTerms = {
+    openingCents: 5_000,
+    reserveCents: 20_000,
+    ladder: DEFAULT_INCREMENT_LADDER,
+    consignorId: "voss-estate",
+  };
 
   it("a lone maximum at or above the reserve pays the reserve", () => {
     const s = run(terms, [A, 30_000]);
@@ -166,7 +189,16 @@ describe("refusals", () => {
   it.each([
     ["lot not open", () => placeBid(s0, bid(C, 50_000), { phase: "scheduled" }), "lot-not-open"],
     ["lot sold", () => placeBid(s0, bid(C, 50_000), { phase: "sold" }), "lot-not-open"],
-    ["after close", () => placeBid(s0, { ...bid(C, 50_000), placedAtMs: T0 + 10_000_000 }, { phase: "extended", closesAtMs: T0 + 10_000_000 }), "after-close"],
+    [
+      "after close",
+      () =>
+        placeBid(
+          s0,
+          { ...bid(C, 50_000), placedAtMs: T0 + 10_000_000 },
+          { phase: "extended", closesAtMs: T0 + 10_000_000 },
+        ),
+      "after-close",
+    ],
     ["own lot", () => placeBid(s0, bid("voss-estate", 50_000), OPEN), "own-lot"],
     ["fractional cents", () => placeBid(s0, bid(C, 15_000.5), OPEN), "invalid-amount"],
     ["zero", () => placeBid(s0, bid(C, 0), OPEN), "invalid-amount"],
@@ -189,7 +221,12 @@ describe("refusals", () => {
 
 describe("replay", () => {
   it("replaying accepted bids in seq order rebuilds the same state, whatever order they are stored in", () => {
-    const terms: LotTerms = { openingCents: 2_500, reserveCents: 30_000, ladder: DEFAULT_INCREMENT_LADDER, consignorId: "voss-estate" };
+    const terms: LotTerms = {
+      openingCents: 2_500,
+      reserveCents: 30_000,
+      ladder: DEFAULT_INCREMENT_LADDER,
+      consignorId: "voss-estate",
+    };
     const attempts = [
       bid(A, 4_000),
       bid(B, 3_000),

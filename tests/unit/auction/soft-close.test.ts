@@ -14,7 +14,11 @@ describe("extendOnBid — soft close [CTP]", () => {
   });
 
   it("moves the close to bid time + window for bids inside it", () => {
-    expect(extendOnBid(clock, T - 60 * S, twoMinutes)).toEqual({ closesAtMs: T + 60 * S, extensionCount: 1, extended: true });
+    expect(extendOnBid(clock, T - 60 * S, twoMinutes)).toEqual({
+      closesAtMs: T + 60 * S,
+      extensionCount: 1,
+      extended: true,
+    });
     expect(extendOnBid(clock, T - 1, twoMinutes).closesAtMs).toBe(T + 120 * S - 1);
   });
 

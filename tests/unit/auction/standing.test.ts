@@ -36,18 +36,28 @@ describe("panelMessage", () => {
     expect(m.tone).toBe("lead");
   });
   it("drops a 'you lead' answer once a later bid put the dealer behind", () => {
-    const m = panelMessage({ ...open, leading: false, seq: 8 }, { kind: "bid", outcome: "new-leader", seq: 7, maxCents: 3000 });
+    const m = panelMessage(
+      { ...open, leading: false, seq: 8 },
+      { kind: "bid", outcome: "new-leader", seq: 7, maxCents: 3000 },
+    );
     expect(m.key).toBe("outbid");
     expect(m.last).toBeNull();
   });
   it("drops a 'you lead' answer that disagrees with the standing even at the same seq", () => {
-    expect(panelMessage({ ...open, leading: false }, { kind: "bid", outcome: "first-bid", seq: 7, maxCents: 100 }).key).toBe("outbid");
+    expect(
+      panelMessage({ ...open, leading: false }, { kind: "bid", outcome: "first-bid", seq: 7, maxCents: 100 }).key,
+    ).toBe("outbid");
   });
   it("a leader raising their own maximum hears it privately", () => {
-    expect(panelMessage({ ...open, leading: true }, { kind: "bid", outcome: "max-raised", seq: 7, maxCents: 9000 }).key).toBe("max-raised");
+    expect(
+      panelMessage({ ...open, leading: true }, { kind: "bid", outcome: "max-raised", seq: 7, maxCents: 9000 }).key,
+    ).toBe("max-raised");
   });
   it("after the close only the outcome speaks", () => {
-    const m = panelMessage({ ...open, phase: "sold", leading: false, seq: 9 }, { kind: "bid", outcome: "outbid-by-proxy", seq: 9, maxCents: 100 });
+    const m = panelMessage(
+      { ...open, phase: "sold", leading: false, seq: 9 },
+      { kind: "bid", outcome: "outbid-by-proxy", seq: 9, maxCents: 100 },
+    );
     expect(m.key).toBe("lost");
     expect(m.tone).toBe("behind");
   });
@@ -57,7 +67,12 @@ describe("a leader's private ceiling raise [SUG]", () => {
   it("does not count as a public bid unless it moves the price", async () => {
     const { applyBid, initialProxyState } = await import("@/lib/auction/proxy");
     const { DEFAULT_INCREMENT_LADDER } = await import("@/lib/auction/increments");
-    let st = initialProxyState({ openingCents: 1000, reserveCents: null, ladder: DEFAULT_INCREMENT_LADDER, consignorId: "c" });
+    let st = initialProxyState({
+      openingCents: 1000,
+      reserveCents: null,
+      ladder: DEFAULT_INCREMENT_LADDER,
+      consignorId: "c",
+    });
     const a = applyBid(st, { bidderId: "a", maxCents: 5000, placedAtMs: 1, seq: 1 });
     if (!a.accepted) throw new Error("refused");
     st = a.state;

@@ -8,7 +8,18 @@ describe("safeCallbackPath", () => {
     expect(safeCallbackPath("/invoices/9")).toBe("/invoices/9");
   });
   it("refuses other origins and tricks", () => {
-    for (const bad of ["https://elsewhere.example/", "//elsewhere.example", "/\\elsewhere.example", "javascript:alert(1)", "%2F%2Felsewhere.example", "/\telsewhere", "", null, undefined, "/sign-in?callbackUrl=/x"]) {
+    for (const bad of [
+      "https://elsewhere.example/",
+      "//elsewhere.example",
+      "/\\elsewhere.example",
+      "javascript:alert(1)",
+      "%2F%2Felsewhere.example",
+      "/\telsewhere",
+      "",
+      null,
+      undefined,
+      "/sign-in?callbackUrl=/x",
+    ]) {
       expect(safeCallbackPath(bad)).toBeNull();
     }
   });

@@ -33,7 +33,10 @@ describe("cross-site refusal", () => {
 describe("sign-in throttle", () => {
   it("refuses once an account reaches its failure limit", () => {
     expect(throttleDecision({ byAccount: ACCOUNT_MAX_FAILURES - 1, byAddress: 0 }).allowed).toBe(true);
-    expect(throttleDecision({ byAccount: ACCOUNT_MAX_FAILURES, byAddress: 0 })).toMatchObject({ allowed: false, scope: "account" });
+    expect(throttleDecision({ byAccount: ACCOUNT_MAX_FAILURES, byAddress: 0 })).toMatchObject({
+      allowed: false,
+      scope: "account",
+    });
     expect(throttleDecision({ byAccount: 0, byAddress: 30 })).toMatchObject({ allowed: false, scope: "address" });
   });
 });
@@ -42,8 +45,15 @@ describe("error shape", () => {
   it("maps codes to statuses and keeps fields", () => {
     const e = new ApiError("validation_failed", "Bad", { email: "Enter one" });
     expect(e.status).toBe(400);
-    expect(e.toBody()).toEqual({ error: { code: "validation_failed", message: "Bad", fields: { email: "Enter one" } } });
+    expect(e.toBody()).toEqual({
+      error: { code: "validation_failed", message: "Bad", fields: { email: "Enter one" } },
+    });
     expect(ERROR_STATUS.rate_limited).toBe(429);
-    expect(fieldsFromIssues([{ path: ["a", 0], message: "x" }, { path: ["a", 0], message: "y" }])).toEqual({ "a.0": "x" });
+    expect(
+      fieldsFromIssues([
+        { path: ["a", 0], message: "x" },
+        { path: ["a", 0], message: "y" },
+      ]),
+    ).toEqual({ "a.0": "x" });
   });
 });

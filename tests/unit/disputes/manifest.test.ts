@@ -37,7 +37,14 @@ const SALE: SaleFigures = { hammerCents: 100_000, premiumCents: 15_000, commissi
 
 function expectReconciles(s: RefundSettlement): void {
   // [SUG]: premium refunded and commission reduced pro rata; money moved is exact cents.
-  for (const v of [s.hammerRefundCents, s.premiumRefundCents, s.commissionReductionCents, s.buyerRefundCents, s.consignorChangeCents, s.houseChangeCents]) {
+  for (const v of [
+    s.hammerRefundCents,
+    s.premiumRefundCents,
+    s.commissionReductionCents,
+    s.buyerRefundCents,
+    s.consignorChangeCents,
+    s.houseChangeCents,
+  ]) {
     expect(Number.isInteger(v)).toBe(true);
   }
   expect(s.buyerRefundCents).toBe(s.hammerRefundCents + s.premiumRefundCents);
@@ -61,7 +68,10 @@ describe("buildManifest: one line per item, a matched set is one line [SUG]", ()
   });
 
   it("a 'set' of one tube is a singles line (a set has at least 2 tubes) [SUG]", () => {
-    const [line] = buildManifest([{ id: "lone", position: 9, quantity: 1, soldAsSet: true }], [{ itemId: "lone", valueCents: 4_000 }]);
+    const [line] = buildManifest(
+      [{ id: "lone", position: 9, quantity: 1, soldAsSet: true }],
+      [{ itemId: "lone", valueCents: 4_000 }],
+    );
     expect(line).toEqual({ lineId: "line-9", kind: "singles", quantity: 1, unitValueCents: 4_000 });
   });
 
@@ -105,7 +115,9 @@ describe("claimsFromRulings: one claim item per upheld ruling", () => {
   const lines = buildManifest(ITEMS, VALUES);
 
   it("singles → price adjustment with the tube count and their worth as delivered", () => {
-    const claims = claimsFromRulings(ITEMS, lines, [{ itemId: "item-kestrel", upheld: true, tubes: 8, worthCents: 1_250 }]);
+    const claims = claimsFromRulings(ITEMS, lines, [
+      { itemId: "item-kestrel", upheld: true, tubes: 8, worthCents: 1_250 },
+    ]);
     expect(claims).toEqual([{ kind: "price-adjustment", lineId: "line-1", count: 8, actualUnitValueCents: 1_250 }]);
   });
 
@@ -116,9 +128,9 @@ describe("claimsFromRulings: one claim item per upheld ruling", () => {
   });
 
   it("a set with its worth given → set adjustment at that worth", () => {
-    expect(claimsFromRulings(ITEMS, lines, [{ itemId: "item-quad", upheld: true, tubes: 1, worthCents: 15_000 }])).toEqual([
-      { kind: "set-adjustment", lineId: "line-2", actualSetValueCents: 15_000 },
-    ]);
+    expect(
+      claimsFromRulings(ITEMS, lines, [{ itemId: "item-quad", upheld: true, tubes: 1, worthCents: 15_000 }]),
+    ).toEqual([{ kind: "set-adjustment", lineId: "line-2", actualSetValueCents: 15_000 }]);
   });
 
   it("a set with one bad tube and no worth → the good tubes as singles (setDefectClaim) [SUG]", () => {
@@ -142,7 +154,9 @@ describe("claimsFromRulings: one claim item per upheld ruling", () => {
 
   it("an item outside the lot, or more bad tubes than the set holds → RangeError", () => {
     expect(() => claimsFromRulings(ITEMS, lines, [{ itemId: "stranger", upheld: true, tubes: 1 }])).toThrow(RangeError);
-    expect(() => claimsFromRulings(ITEMS, lines, [{ itemId: "item-quad", upheld: true, tubes: 5 }])).toThrow("the set has 4 tubes");
+    expect(() => claimsFromRulings(ITEMS, lines, [{ itemId: "item-quad", upheld: true, tubes: 5 }])).toThrow(
+      "the set has 4 tubes",
+    );
   });
 });
 
@@ -164,7 +178,9 @@ describe("settling the rulings with lib/money [SUG] partial refunds", () => {
   });
 
   it("the demo story: eight tubes listed Kestrel-made prove Pellham-made, $50 → $12.50 each [SUG]", () => {
-    const claims = claimsFromRulings(ITEMS, lines, [{ itemId: "item-kestrel", upheld: true, tubes: 8, worthCents: 1_250 }]);
+    const claims = claimsFromRulings(ITEMS, lines, [
+      { itemId: "item-kestrel", upheld: true, tubes: 8, worthCents: 1_250 },
+    ]);
     const s = settlePartialRefund(SALE, lines, claims);
     expect(s.claimValueCents).toBe(30_000); // described $400 − actual $100
     expect(s.hammerRefundCents).toBe(15_000); //: refund 150
@@ -218,18 +234,24 @@ describe("undisputedShare: release what a claim cannot touch, hold the rest [SUG
   });
 
   it("any later partial refund on the same values fits inside what is held", () => {
-    const claimed = [{ itemId: "item-kestrel", tubes: 3 }, { itemId: "item-quad", tubes: 1 }];
+    const claimed = [
+      { itemId: "item-kestrel", tubes: 3 },
+      { itemId: "item-quad", tubes: 1 },
+    ];
     const { held } = undisputedShare(SALE, ITEMS, VALUES, claimed);
     const lines = buildManifest(ITEMS, VALUES);
     for (const worth of [0, 1, 999, 2_500, 4_999]) {
-      const s = settlePartialRefund(SALE, lines, claimsFromRulings(ITEMS, lines, [
-        { itemId: "item-kestrel", upheld: true, tubes: 3, worthCents: worth },
-        { itemId: "item-quad", upheld: true, tubes: 1 },
-      ]));
+      const s = settlePartialRefund(
+        SALE,
+        lines,
+        claimsFromRulings(ITEMS, lines, [
+          { itemId: "item-kestrel", upheld: true, tubes: 3, worthCents: worth },
+          { itemId: "item-quad", upheld: true, tubes: 1 },
+        ]),
+      );
       expect(s.hammerRefundCents).toBeLessThanOrEqual(held.hammerCents);
       expect(s.premiumRefundCents).toBeLessThanOrEqual(held.premiumCents);
       expect(s.commissionReductionCents).toBeLessThanOrEqual(held.commissionCents);
     }
   });
 });
-

@@ -18,14 +18,22 @@ describe("parseReadingsText: tube numbers and sections [SUG]", () => {
   });
 
   it("sections separated by spaces instead of '/', and the tube number without a colon", () => {
-    expect(parseReadingsText("2 1480 1500", 8).readings).toEqual([{ tubeNo: 2, measure: "gm", sections: [1_480, 1_500] }]);
+    expect(parseReadingsText("2 1480 1500", 8).readings).toEqual([
+      { tubeNo: 2, measure: "gm", sections: [1_480, 1_500] },
+    ]);
     expect(parseReadingsText("2: 1480 / 1500", 8).readings[0].sections).toEqual([1_480, 1_500]);
   });
 
   it("other ways of writing the tube number: 'tube 3 =', '4)', '5.', '6-', '7:' with no space", () => {
     const { readings, problems } = parseReadingsText("tube 3 = 1520\n4) 1510\n5. 1505\n6- 1490\n7:1480", 8);
     expect(problems).toEqual([]);
-    expect(readings.map((r) => [r.tubeNo, r.sections])).toEqual([[3, [1_520]], [4, [1_510]], [5, [1_505]], [6, [1_490]], [7, [1_480]]]);
+    expect(readings.map((r) => [r.tubeNo, r.sections])).toEqual([
+      [3, [1_520]],
+      [4, [1_510]],
+      [5, [1_505]],
+      [6, [1_490]],
+      [7, [1_480]],
+    ]);
   });
 
   it("decimal values are kept (mA/V charts) [EU-DS]: 1 mA/V = 1,000 µmho", () => {
@@ -91,7 +99,9 @@ describe("parseReadingsText: failed checks as words [CTP] shorts, leakage, gas",
   });
 
   it("values and words together: the sections are kept beside the failures", () => {
-    expect(parseReadingsText("6: 1200/1250 short, gas", 8).readings).toEqual([{ tubeNo: 6, measure: "gm", sections: [1_200, 1_250], shorts: true, gas: true }]);
+    expect(parseReadingsText("6: 1200/1250 short, gas", 8).readings).toEqual([
+      { tubeNo: 6, measure: "gm", sections: [1_200, 1_250], shorts: true, gas: true },
+    ]);
   });
 
   it("a clean reading carries no failure flags at all (not even false ones)", () => {
@@ -119,7 +129,10 @@ describe("parseReadingsText: problems reported, the rest still read [SUG]", () =
 
   it("an out-of-range tube is not remembered: repeating it gives the range problem again, not 'given twice'", () => {
     // 9 is refused for maxTube 8 and not remembered, so no 'given twice' follows.
-    expect(parseReadingsText("9: 1600; 9: 1500", 8).problems).toEqual(["tube 9: this line has tubes 1–8", "tube 9: this line has tubes 1–8"]);
+    expect(parseReadingsText("9: 1600; 9: 1500", 8).problems).toEqual([
+      "tube 9: this line has tubes 1–8",
+      "tube 9: this line has tubes 1–8",
+    ]);
   });
 
   it("a tube with no value and no failure word → 'no reading'", () => {

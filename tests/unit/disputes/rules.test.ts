@@ -50,7 +50,9 @@ describe("openingRefusal: claims only on a delivered lot, inside its inspection 
     expect(reason).not.toBeNull();
     expect(reason).toMatch(/once the lot is delivered/i);
     // A "delivered" state without its dates cannot be judged either.
-    expect(openingRefusal({ state: "delivered", deliveredAtMs: null, inspectionEndsAtMs: null }, DELIVERED)).toMatch(/once the lot is delivered/i);
+    expect(openingRefusal({ state: "delivered", deliveredAtMs: null, inspectionEndsAtMs: null }, DELIVERED)).toMatch(
+      /once the lot is delivered/i,
+    );
   });
 
   it("payment released → refused: the window is over", () => {
@@ -61,7 +63,9 @@ describe("openingRefusal: claims only on a delivered lot, inside its inspection 
   });
 
   it("a claim already open → refused, not opened twice", () => {
-    expect(openingRefusal({ ...delivered, state: "disputed" }, DELIVERED + HOUR)).toBe("A claim is already open on this lot.");
+    expect(openingRefusal({ ...delivered, state: "disputed" }, DELIVERED + HOUR)).toBe(
+      "A claim is already open on this lot.",
+    );
   });
 
   it("refunded or cancelled → refused: the invoice is closed", () => {
@@ -70,7 +74,7 @@ describe("openingRefusal: claims only on a delivered lot, inside its inspection 
   });
 });
 
-describe("openingRefusal: breakage in transit only within 48 h of delivery [CTP/SUG] \"Inspection and escrow\"", () => {
+describe('openingRefusal: breakage in transit only within 48 h of delivery [CTP/SUG] "Inspection and escrow"', () => {
   it("the house allows 48 hours [CTP/SUG]", () => {
     expect(DISPUTE_SETTINGS.breakageClaimHours).toBe(48);
   });
@@ -106,7 +110,9 @@ describe("openingRefusal: breakage in transit only within 48 h of delivery [CTP/
   it("the invoice state still comes first: no breakage claim on an undelivered or already disputed lot", () => {
     const inTransit: ClaimableInvoice = { state: "shipped", deliveredAtMs: null, inspectionEndsAtMs: null };
     expect(openingRefusal(inTransit, DELIVERED + HOUR, "transit-damage")).toMatch(/once the lot is delivered/);
-    expect(openingRefusal({ ...delivered, state: "disputed" }, DELIVERED + 72 * HOUR, "transit-damage")).toBe("A claim is already open on this lot.");
+    expect(openingRefusal({ ...delivered, state: "disputed" }, DELIVERED + 72 * HOUR, "transit-damage")).toBe(
+      "A claim is already open on this lot.",
+    );
   });
 });
 
@@ -135,12 +141,21 @@ describe("misattributionRefusal: a label is not a maker claim [CTP]; rebranding 
   });
 
   it("a named maker may be claimed against, whatever the label [SUG]", () => {
-    expect(misattributionRefusal({ ...labelOnly, makerName: "Kestrel Valve Company", makerBasis: "construction-matched" })).toBeNull();
-    expect(misattributionRefusal({ ...labelOnly, labelBrand: "", makerName: "Vireo Lamp & Valve", makerBasis: "source-code-confirmed" })).toBeNull();
+    expect(
+      misattributionRefusal({ ...labelOnly, makerName: "Kestrel Valve Company", makerBasis: "construction-matched" }),
+    ).toBeNull();
+    expect(
+      misattributionRefusal({
+        ...labelOnly,
+        labelBrand: "",
+        makerName: "Vireo Lamp & Valve",
+        makerBasis: "source-code-confirmed",
+      }),
+    ).toBeNull();
   });
 });
 
-describe("answerDueAt: the consignor answers within 3 business days [SUG, CTP-informed] \"~3 business days\"", () => {
+describe('answerDueAt: the consignor answers within 3 business days [SUG, CTP-informed] "~3 business days"', () => {
   // 7 March 2025 was a Friday.
   const friday = Date.UTC(2025, 2, 7, 9, 30, 0);
 
@@ -181,9 +196,17 @@ describe("trackRecord: each consignor's attribution record [SUG] 'repeat offende
   it("upheld per 1,000 sold = round(upheld × 1,000 ÷ sold) [SUG]", () => {
     const r = trackRecord({ tubesSold: 1_250, tubesDisputed: 40, tubesUpheld: 8, upheldMisattributionClaims: 1 });
     expect(r.upheldPerThousand).toBe(6); // 8 × 1,000 / 1,250 = 6.4 → 6
-    expect(trackRecord({ tubesSold: 3, tubesDisputed: 1, tubesUpheld: 1, upheldMisattributionClaims: 1 }).upheldPerThousand).toBe(333); // 333.3 → 333
-    expect(trackRecord({ tubesSold: 400, tubesDisputed: 1, tubesUpheld: 1, upheldMisattributionClaims: 1 }).upheldPerThousand).toBe(3); // 2.5 rounds up → 3
-    expect(trackRecord({ tubesSold: 120, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 }).upheldPerThousand).toBe(0);
+    expect(
+      trackRecord({ tubesSold: 3, tubesDisputed: 1, tubesUpheld: 1, upheldMisattributionClaims: 1 }).upheldPerThousand,
+    ).toBe(333); // 333.3 → 333
+    expect(
+      trackRecord({ tubesSold: 400, tubesDisputed: 1, tubesUpheld: 1, upheldMisattributionClaims: 1 })
+        .upheldPerThousand,
+    ).toBe(3); // 2.5 rounds up → 3
+    expect(
+      trackRecord({ tubesSold: 120, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 })
+        .upheldPerThousand,
+    ).toBe(0);
   });
 
   it("keeps the counts it was given", () => {
@@ -192,21 +215,27 @@ describe("trackRecord: each consignor's attribution record [SUG] 'repeat offende
   });
 
   it("words: sold with disputes, sold without, and nothing sold", () => {
-    expect(trackRecord({ tubesSold: 1_250, tubesDisputed: 40, tubesUpheld: 8, upheldMisattributionClaims: 1 }).words).toBe(
-      "1,250 tubes sold; 40 disputed, 8 of them upheld against the listing.",
+    expect(
+      trackRecord({ tubesSold: 1_250, tubesDisputed: 40, tubesUpheld: 8, upheldMisattributionClaims: 1 }).words,
+    ).toBe("1,250 tubes sold; 40 disputed, 8 of them upheld against the listing.");
+    expect(trackRecord({ tubesSold: 120, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 }).words).toBe(
+      "120 tubes sold; none disputed.",
     );
-    expect(trackRecord({ tubesSold: 120, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 }).words).toBe("120 tubes sold; none disputed.");
     const none = trackRecord({ tubesSold: 0, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 });
     expect(none.words).toBe("No tubes sold here yet: no record.");
     expect(none.upheldPerThousand).toBeNull(); // no division by zero
   });
 
   it("words: every count with thousands separators", () => {
-    expect(trackRecord({ tubesSold: 12_480, tubesDisputed: 1_040, tubesUpheld: 1_001, upheldMisattributionClaims: 3 }).words).toBe(
-      "12,480 tubes sold; 1,040 disputed, 1,001 of them upheld against the listing.",
-    );
-    expect(trackRecord({ tubesSold: 2_400, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 }).words).toBe("2,400 tubes sold; none disputed.");
-    expect(trackRecord({ tubesSold: 999, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 }).words).toBe("999 tubes sold; none disputed."); // no separator below 1,000
+    expect(
+      trackRecord({ tubesSold: 12_480, tubesDisputed: 1_040, tubesUpheld: 1_001, upheldMisattributionClaims: 3 }).words,
+    ).toBe("12,480 tubes sold; 1,040 disputed, 1,001 of them upheld against the listing.");
+    expect(
+      trackRecord({ tubesSold: 2_400, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 }).words,
+    ).toBe("2,400 tubes sold; none disputed.");
+    expect(trackRecord({ tubesSold: 999, tubesDisputed: 0, tubesUpheld: 0, upheldMisattributionClaims: 0 }).words).toBe(
+      "999 tubes sold; none disputed.",
+    ); // no separator below 1,000
   });
 });
 

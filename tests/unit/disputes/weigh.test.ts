@@ -41,12 +41,49 @@ const KESTREL = "Kestrel Valve Company";
 const PELLHAM = "Pellham Radio Tube Corp.";
 const VIREO = "Vireo Lamp & Valve";
 const HABITS: Record<string, Record<string, string>> = {
-  [KESTREL]: { plateShape: "flat", plateColour: "black", plateSurface: "ribbed", getterShape: "d-shape", getterPosition: "side", flashPlace: "side", micaCount: "2", micaOutline: "notched", supportRodFinish: "dark-iron", markingMethod: "stamped" },
-  [PELLHAM]: { plateShape: "flat", plateColour: "grey", plateSurface: "dimpled", getterShape: "square", getterPosition: "top", flashPlace: "dome", micaCount: "2", micaOutline: "shaped", plateFastening: "rivets", plateFastenerCount: "2", markingMethod: "silk-screen" },
-  [VIREO]: { plateShape: "round", plateColour: "bright", plateSurface: "finned", getterShape: "disc", getterPosition: "bottom", flashPlace: "side", micaCount: "3", micaOutline: "shaped", supportRodFinish: "copper-coloured", markingMethod: "etched" },
+  [KESTREL]: {
+    plateShape: "flat",
+    plateColour: "black",
+    plateSurface: "ribbed",
+    getterShape: "d-shape",
+    getterPosition: "side",
+    flashPlace: "side",
+    micaCount: "2",
+    micaOutline: "notched",
+    supportRodFinish: "dark-iron",
+    markingMethod: "stamped",
+  },
+  [PELLHAM]: {
+    plateShape: "flat",
+    plateColour: "grey",
+    plateSurface: "dimpled",
+    getterShape: "square",
+    getterPosition: "top",
+    flashPlace: "dome",
+    micaCount: "2",
+    micaOutline: "shaped",
+    plateFastening: "rivets",
+    plateFastenerCount: "2",
+    markingMethod: "silk-screen",
+  },
+  [VIREO]: {
+    plateShape: "round",
+    plateColour: "bright",
+    plateSurface: "finned",
+    getterShape: "disc",
+    getterPosition: "bottom",
+    flashPlace: "side",
+    micaCount: "3",
+    micaOutline: "shaped",
+    supportRodFinish: "copper-coloured",
+    markingMethod: "etched",
+  },
 };
 const fromHabit = (makerId: string, makerName: string): ReferenceProfile =>
-  profileFromExample({ profileId: `${makerId}:12AX7`, makerId, makerName, typeFamily: "12AX7" }, featuresFromText(HABITS[makerName]).features);
+  profileFromExample(
+    { profileId: `${makerId}:12AX7`, makerId, makerName, typeFamily: "12AX7" },
+    featuresFromText(HABITS[makerName]).features,
+  );
 // A literal profile built from several reference tubes (counts per value).
 const ALDERGROVE: ReferenceProfile = {
   profileId: "aldergrove:12AX7",
@@ -63,14 +100,25 @@ const ALDERGROVE: ReferenceProfile = {
   },
   sampleCount: 3,
 };
-const PROFILES: ReferenceProfile[] = [fromHabit("kestrel", KESTREL), fromHabit("pellham", PELLHAM), fromHabit("vireo", VIREO), ALDERGROVE];
+const PROFILES: ReferenceProfile[] = [
+  fromHabit("kestrel", KESTREL),
+  fromHabit("pellham", PELLHAM),
+  fromHabit("vireo", VIREO),
+  ALDERGROVE,
+];
 // Invented demo source codes (as in the demo seeder, marked demo there).
 const CODE = { [KESTREL]: "X31", [PELLHAM]: "X46" };
 
 // ── A listed line and the buyer's report ────────────────────────────────────────
 // Tester chart "new" value 1,600 for a 12AX7 section, as.
 const CHART = 1_600;
-const gm = (tubeNo: number, sections: number[], extra: Partial<TubeReading> = {}): TubeReading => ({ tubeNo, measure: "gm", sections, chartNewValue: CHART, ...extra });
+const gm = (tubeNo: number, sections: number[], extra: Partial<TubeReading> = {}): TubeReading => ({
+  tubeNo,
+  measure: "gm",
+  sections,
+  chartNewValue: CHART,
+  ...extra,
+});
 
 function listing(over: Partial<ListingSide> = {}): ListingSide {
   return {
@@ -116,7 +164,13 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP]", () =
   });
 
   it("the fallback chart grades a reading that carries none: 1,200 of 1,600 → 75 % → fair [CTP]", () => {
-    const [g] = gradeAgainstNominal(SEED, "12AX7", [{ tubeNo: 1, measure: "gm", sections: [1_200, 1_300] }], false, CHART);
+    const [g] = gradeAgainstNominal(
+      SEED,
+      "12AX7",
+      [{ tubeNo: 1, measure: "gm", sections: [1_200, 1_300] }],
+      false,
+      CHART,
+    );
     expect(g.chartNewValue).toBe(1_600);
     expect(g.worstPercentOfNew).toBe(75); // weakest section decides [CTP]
     expect(g.grade).toBe("fair");
@@ -124,7 +178,13 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP]", () =
   });
 
   it("the reading's own chart value wins over the fallback; the nominal never enters the grade [CTP]", () => {
-    const [g] = gradeAgainstNominal(SEED, "12AX7", [{ tubeNo: 1, measure: "gm", sections: [1_300], chartNewValue: 1_300 }], false, CHART);
+    const [g] = gradeAgainstNominal(
+      SEED,
+      "12AX7",
+      [{ tubeNo: 1, measure: "gm", sections: [1_300], chartNewValue: 1_300 }],
+      false,
+      CHART,
+    );
     expect(g.chartNewValue).toBe(1_300);
     expect(g.worstPercentOfNew).toBe(100);
     expect(g.grade).toBe("strong"); // ≥ 100 % of its own chart [CTP]
@@ -158,7 +218,9 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP]", () =
     expect(graded[0].reasons.join(" ")).toMatch(/short/);
     expect(graded[1].reasons.join(" ")).toMatch(/gas/);
     expect(graded[2].reasons.join(" ")).toMatch(/leakage/);
-    const [noChart] = gradeAgainstNominal(SEED, "5AR4", [{ tubeNo: 1, measure: "emission", sections: [], shorts: true }]);
+    const [noChart] = gradeAgainstNominal(SEED, "5AR4", [
+      { tubeNo: 1, measure: "emission", sections: [], shorts: true },
+    ]);
     expect(noChart.grade).toBe("reject");
     expect(noChart.hardFail).toBe(true);
   });
@@ -170,7 +232,12 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP]", () =
   });
 
   it("a white getter rejects every reading of the item, as a hard failure [CTP]", () => {
-    const graded = gradeAgainstNominal(SEED, "12AX7", [gm(1, [1_700, 1_650]), { tubeNo: 2, measure: "gm", sections: [1_600] }], true);
+    const graded = gradeAgainstNominal(
+      SEED,
+      "12AX7",
+      [gm(1, [1_700, 1_650]), { tubeNo: 2, measure: "gm", sections: [1_600] }],
+      true,
+    );
     expect(graded.map((g) => g.grade)).toEqual(["reject", "reject"]);
     expect(graded.every((g) => g.hardFail)).toBe(true);
     expect(graded[0].reasons.join(" ")).toMatch(/white getter/);
@@ -186,7 +253,10 @@ describe("gradeAgainstNominal: grades rest on the tester chart only [CTP]", () =
 
 describe("weighItem: maker misattributed [SUG, CTP-informed]", () => {
   it("the buyer's source code belongs to another maker → supports, as evidence not proof [EIA-476]", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[PELLHAM] }), PROFILES, { listing: null, buyer: PELLHAM });
+    const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[PELLHAM] }), PROFILES, {
+      listing: null,
+      buyer: PELLHAM,
+    });
     expect(w.verdict).toBe("supports");
     expect(w.position).toBe(3);
     expect(w.buyer.ranking.sourceCodeMaker).toBe(PELLHAM);
@@ -199,19 +269,36 @@ describe("weighItem: maker misattributed [SUG, CTP-informed]", () => {
     expect(w.verdict).toBe("supports");
     expect(w.findings[0]).toContain(`(as reported) belongs to ${PELLHAM}`);
     expect(w.findings.join(" ")).not.toContain("undefined");
-    const agrees = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: null }), PROFILES, { listing: null, buyer: KESTREL });
+    const agrees = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: null }), PROFILES, {
+      listing: null,
+      buyer: KESTREL,
+    });
     expect(agrees.findings[0]).toBe(`The buyer's source code (as reported) points to ${KESTREL}, as listed.`);
   });
 
   it("a code for another maker still supports when the buyer's construction favours the listed maker only at medium confidence", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[PELLHAM], features: { plateColour: "black", getterShape: "d-shape" } }), PROFILES, { listing: null, buyer: PELLHAM });
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing(),
+      report({ sourceCode: CODE[PELLHAM], features: { plateColour: "black", getterShape: "d-shape" } }),
+      PROFILES,
+      { listing: null, buyer: PELLHAM },
+    );
     expect(w.buyer.ranking.candidates[0]).toMatchObject({ makerName: KESTREL, confidence: "medium" });
     expect(w.verdict).toBe("supports");
     expect(w.findings.some((f) => /But the buyer's own construction/.test(f))).toBe(false);
   });
 
   it("a code for another maker against the buyer's own high-confidence construction for the listed maker → both findings given [EIA-476]", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[PELLHAM], features: HABITS[KESTREL] }), PROFILES, { listing: null, buyer: PELLHAM });
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing(),
+      report({ sourceCode: CODE[PELLHAM], features: HABITS[KESTREL] }),
+      PROFILES,
+      { listing: null, buyer: PELLHAM },
+    );
     expect(w.buyer.ranking.candidates[0]).toMatchObject({ makerName: KESTREL, confidence: "high" });
     expect(w.verdict).not.toBe("supports");
     expect(w.findings[0]).toContain(`(${CODE[PELLHAM]}) belongs to ${PELLHAM}, not ${KESTREL}`);
@@ -222,19 +309,36 @@ describe("weighItem: maker misattributed [SUG, CTP-informed]", () => {
 
   // Once the source-code branch has weighed code against construction, the construction branch adds nothing.
   it("…and the verdict is inconclusive, with those two findings only", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[PELLHAM], features: HABITS[KESTREL] }), PROFILES, { listing: null, buyer: PELLHAM });
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing(),
+      report({ sourceCode: CODE[PELLHAM], features: HABITS[KESTREL] }),
+      PROFILES,
+      { listing: null, buyer: PELLHAM },
+    );
     expect(w.verdict).toBe("inconclusive");
     expect(w.findings).toHaveLength(2);
   });
 
   it("the buyer's source code points to the listed maker → does not support (names compared case-blind)", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[KESTREL] }), PROFILES, { listing: null, buyer: "kestrel valve company " });
+    const w = weighItem(SEED, "maker-misattributed", listing(), report({ sourceCode: CODE[KESTREL] }), PROFILES, {
+      listing: null,
+      buyer: "kestrel valve company ",
+    });
     expect(w.verdict).toBe("does-not-support");
     expect(w.findings[0]).toContain(`points to ${KESTREL}, as listed`);
   });
 
   it("buyer's construction ranks another maker first at high confidence, listed maker conflicting → supports", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ features: HABITS[PELLHAM] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing(),
+      report({ features: HABITS[PELLHAM] }),
+      PROFILES,
+      noCodes,
+    );
     const [top] = w.buyer.ranking.candidates;
     expect(top.makerName).toBe(PELLHAM);
     expect(top.confidence).toBe("high"); // every recorded feature matches, many sub-assemblies [CTP]
@@ -246,20 +350,41 @@ describe("weighItem: maker misattributed [SUG, CTP-informed]", () => {
   });
 
   it("…and at medium confidence (two sub-assemblies only) → supports", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ features: { plateColour: "grey", getterShape: "square" } }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing(),
+      report({ features: { plateColour: "grey", getterShape: "square" } }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.ranking.candidates[0]).toMatchObject({ makerName: PELLHAM, confidence: "medium" });
     expect(w.verdict).toBe("supports");
   });
 
   it("buyer's construction ranks the listed maker first → does not support", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ features: HABITS[KESTREL] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing(),
+      report({ features: HABITS[KESTREL] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.ranking.candidates[0]).toMatchObject({ makerName: KESTREL, confidence: "high" });
     expect(w.verdict).toBe("does-not-support");
     expect(w.findings[0]).toContain(`ranks ${KESTREL} first (high confidence), as listed`);
   });
 
   it("a single feature gives only low confidence → inconclusive [CTP]", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ features: { plateSurface: "dimpled" } }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing(),
+      report({ features: { plateSurface: "dimpled" } }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.ranking.candidates[0]).toMatchObject({ makerName: PELLHAM, confidence: "low" });
     expect(w.verdict).toBe("inconclusive");
     expect(w.findings[0]).toMatch(/not decisive/);
@@ -273,22 +398,42 @@ describe("weighItem: maker misattributed [SUG, CTP-informed]", () => {
   });
 
   it("a line listed with no maker → does not support: a label is no attribution [CTP]", () => {
-    const w = weighItem(SEED, "maker-misattributed", listing({ makerName: null, makerBasis: "unconfirmed" }), report({ features: HABITS[PELLHAM] }), PROFILES, { listing: null, buyer: PELLHAM });
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing({ makerName: null, makerBasis: "unconfirmed" }),
+      report({ features: HABITS[PELLHAM] }),
+      PROFILES,
+      { listing: null, buyer: PELLHAM },
+    );
     expect(w.verdict).toBe("does-not-support");
     expect(w.findings[0]).toMatch(/named no maker/);
   });
 
   it("notes when the listing's own construction ranks another maker, and an unconfirmed basis", () => {
-    const l = listing({ features: { plateColour: "grey", getterShape: "square", getterPosition: "top" }, makerBasis: "unconfirmed" });
+    const l = listing({
+      features: { plateColour: "grey", getterShape: "square", getterPosition: "top" },
+      makerBasis: "unconfirmed",
+    });
     const w = weighItem(SEED, "maker-misattributed", l, report({ features: HABITS[PELLHAM] }), PROFILES, noCodes);
     expect(w.findings).toContain(`Even the listing's own construction notes rank ${PELLHAM} above ${KESTREL}.`);
     expect(w.findings.some((f) => /marked its attribution unconfirmed/.test(f))).toBe(true);
   });
 
   it("profiles of another type family are not compared; unknown features are set apart", () => {
-    const el84Vireo = profileFromExample({ profileId: "vireo:EL84", makerId: "vireo-el84", makerName: "Vireo EL84 reference" }, featuresFromText(HABITS[VIREO]).features);
+    const el84Vireo = profileFromExample(
+      { profileId: "vireo:EL84", makerId: "vireo-el84", makerName: "Vireo EL84 reference" },
+      featuresFromText(HABITS[VIREO]).features,
+    );
     const otherFamily: ReferenceProfile = { ...el84Vireo, typeFamily: "EL84" };
-    const w = weighItem(SEED, "maker-misattributed", listing(), report({ features: { ...HABITS[VIREO], wobble: "lots", getterShape: "sparkly" } }), [otherFamily, ...PROFILES], noCodes);
+    const w = weighItem(
+      SEED,
+      "maker-misattributed",
+      listing(),
+      report({ features: { ...HABITS[VIREO], wobble: "lots", getterShape: "sparkly" } }),
+      [otherFamily, ...PROFILES],
+      noCodes,
+    );
     expect(w.buyer.ranking.candidates.map((c) => c.makerName)).not.toContain("Vireo EL84 reference");
     expect(w.buyer.ranking.candidates[0].makerName).toBe(VIREO);
     expect(w.buyer.ranking.ignored).toEqual(expect.arrayContaining(["wobble", "getterShape=sparkly"]));
@@ -298,13 +443,27 @@ describe("weighItem: maker misattributed [SUG, CTP-informed]", () => {
 
 describe("weighItem: undisclosed vacuum loss [CTP] white getter = air leak", () => {
   it("the listing disclosed the white getter → does not support", () => {
-    const w = weighItem(SEED, "undisclosed-vacuum-loss", listing({ vacuumLoss: true }), report({ vacuumLoss: true }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "undisclosed-vacuum-loss",
+      listing({ vacuumLoss: true }),
+      report({ vacuumLoss: true }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.verdict).toBe("does-not-support");
     expect(w.findings[0]).toMatch(/listing disclosed vacuum loss/);
   });
 
   it("the buyer reports a white getter the listing did not disclose → supports", () => {
-    const w = weighItem(SEED, "undisclosed-vacuum-loss", listing(), report({ vacuumLoss: true, readings: [gm(1, [1_500, 1_550])] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "undisclosed-vacuum-loss",
+      listing(),
+      report({ vacuumLoss: true, readings: [gm(1, [1_500, 1_550])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.verdict).toBe("supports");
     expect(w.findings[0]).toMatch(/white getter flash that the listing did not disclose/);
     expect(w.buyer.readings[0].grade).toBe("reject"); // white getter → reject regardless of reading
@@ -315,7 +474,14 @@ describe("weighItem: undisclosed vacuum loss [CTP] white getter = air leak", () 
     const w = weighItem(SEED, "undisclosed-vacuum-loss", listing(), report(), PROFILES, noCodes);
     expect(w.verdict).toBe("does-not-support");
     expect(w.findings).toEqual(["The buyer does not report a white getter on this line."]);
-    const explicit = weighItem(SEED, "undisclosed-vacuum-loss", listing(), report({ vacuumLoss: false, readings: [gm(1, [900])] }), PROFILES, noCodes);
+    const explicit = weighItem(
+      SEED,
+      "undisclosed-vacuum-loss",
+      listing(),
+      report({ vacuumLoss: false, readings: [gm(1, [900])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(explicit.verdict).toBe("does-not-support"); // a low reading is not a white getter
   });
 });
@@ -329,73 +495,163 @@ describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () 
   });
 
   it("listed strong, buyer reads weak → supports, naming the band floor and the buyer's figure", () => {
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [900, 950])] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [gm(1, [900, 950])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.listing.readings[0].grade).toBe("strong");
     expect(w.buyer.readings[0].grade).toBe("weak"); // 900 / 1,600 = 56 %
     expect(w.verdict).toBe("supports");
-    expect(w.findings).toContain("Tube 1: listed strong (100 % of new or more); the buyer reads 56 %, more than 15 points below the band.");
+    expect(w.findings).toContain(
+      "Tube 1: listed strong (100 % of new or more); the buyer reads 56 %, more than 15 points below the band.",
+    );
   });
 
   it("listed strong, buyer reads fair at 75 %, more than 15 below the 100 % floor → supports [CTP]", () => {
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_200, 1_250])] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [gm(1, [1_200, 1_250])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.readings[0].grade).toBe("fair"); // 75 % [CTP]
     expect(w.verdict).toBe("supports");
   });
 
   it("the edge of the allowance: listed strong, 85 % does not support, 84.9 % does [CTP]", () => {
-    const at = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_360, 1_400])] }), PROFILES, noCodes); // 1,360 / 1,600 = 85.0 %
+    const at = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [gm(1, [1_360, 1_400])] }),
+      PROFILES,
+      noCodes,
+    ); // 1,360 / 1,600 = 85.0 %
     expect(at.buyer.readings[0].worstPercentOfNew).toBe(85);
     expect(at.verdict).toBe("does-not-support");
-    const below = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_358, 1_400])] }), PROFILES, noCodes); // 84.875 %
+    const below = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [gm(1, [1_358, 1_400])] }),
+      PROFILES,
+      noCodes,
+    ); // 84.875 %
     expect(below.verdict).toBe("supports");
   });
 
   it("listed fair (floor 60 %): 45 % does not support, 44 % does [CTP]", () => {
     const fairListing = listing({ readings: [gm(1, [1_000, 1_050])] }); // 62.5 % → fair
-    const at = weighItem(SEED, "readings-not-as-listed", fairListing, report({ readings: [gm(1, [720, 760])] }), PROFILES, noCodes); // 45 %
+    const at = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      fairListing,
+      report({ readings: [gm(1, [720, 760])] }),
+      PROFILES,
+      noCodes,
+    ); // 45 %
     expect(at.listing.readings[0].grade).toBe("fair");
     expect(at.verdict).toBe("does-not-support");
-    const below = weighItem(SEED, "readings-not-as-listed", fairListing, report({ readings: [gm(1, [704, 760])] }), PROFILES, noCodes); // 44 %
+    const below = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      fairListing,
+      report({ readings: [gm(1, [704, 760])] }),
+      PROFILES,
+      noCodes,
+    ); // 44 %
     expect(below.verdict).toBe("supports");
-    expect(below.findings[0]).toBe("Tube 1: listed fair (60 % of new or more); the buyer reads 44 %, more than 15 points below the band.");
+    expect(below.findings[0]).toBe(
+      "Tube 1: listed fair (60 % of new or more); the buyer reads 44 %, more than 15 points below the band.",
+    );
   });
 
   it("listed weak: the band has no floor, so a lower reading alone does not support [CTP]", () => {
     const weakListing = listing({ readings: [gm(1, [800, 850])] }); // 50 % → weak
-    const w = weighItem(SEED, "readings-not-as-listed", weakListing, report({ readings: [gm(1, [160, 200])] }), PROFILES, noCodes); // 10 %
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      weakListing,
+      report({ readings: [gm(1, [160, 200])] }),
+      PROFILES,
+      noCodes,
+    ); // 10 %
     expect(w.listing.readings[0].grade).toBe("weak");
     expect(w.verdict).toBe("does-not-support");
   });
 
   it("listed strong, buyer finds a short → absolute failure → supports [CTP]", () => {
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [], { shorts: true })] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [gm(1, [], { shorts: true })] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.readings[0].grade).toBe("reject");
     expect(w.verdict).toBe("supports");
     expect(w.findings[0]).toMatch(/^Tube 1: listed strong, the buyer finds an absolute failure \(short/);
   });
 
   it("listed strong, buyer finds gas even with a strong Gm → supports [CTP] 'any gas → reject regardless of Gm'", () => {
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_650, 1_700], { gas: true })] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [gm(1, [1_650, 1_700], { gas: true })] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.verdict).toBe("supports");
     expect(w.findings[0]).toMatch(/absolute failure \(gas/);
   });
 
   it("the buyer's white getter makes every tube an absolute failure the listing did not show → supports", () => {
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ vacuumLoss: true, readings: [gm(1, [1_650, 1_700])] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ vacuumLoss: true, readings: [gm(1, [1_650, 1_700])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.readings[0].hardFail).toBe(true);
     expect(w.verdict).toBe("supports");
     expect(w.findings[0]).toMatch(/white getter/);
   });
 
   it("listed strong at 103 %, buyer reads good at 92.5 % (within tester variation) → does not support", () => {
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_500, 1_480])] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [gm(1, [1_500, 1_480])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.readings[0].grade).toBe("good");
     expect(w.verdict).toBe("does-not-support");
-    expect(w.findings).toContain("1 tube reading(s) compared: none falls below its listed band by more than the 15 % testers differ by.");
+    expect(w.findings).toContain(
+      "1 tube reading(s) compared: none falls below its listed band by more than the 15 % testers differ by.",
+    );
   });
 
   it("a buyer's reading without a chart value is graded on the listing's chart for the line [CTP]", () => {
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [{ tubeNo: 1, measure: "gm", sections: [900, 950] }] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [{ tubeNo: 1, measure: "gm", sections: [900, 950] }] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.readings[0].chartNewValue).toBe(1_600);
     expect(w.buyer.readings[0].grade).toBe("weak");
     expect(w.verdict).toBe("supports");
@@ -403,7 +659,14 @@ describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () 
 
   it("a buyer's reading with its own chart value is graded on that chart, not the listing's [CTP]", () => {
     // Buyer's tester chart says 1,400 new: 1,200 → 85.7 % of new (against the listing's 1,600 it would be 75 %).
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [gm(1, [1_200, 1_250], { chartNewValue: 1_400 })] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [gm(1, [1_200, 1_250], { chartNewValue: 1_400 })] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.readings[0].chartNewValue).toBe(1_400);
     expect(w.buyer.readings[0].grade).toBe("good");
     expect(w.verdict).toBe("does-not-support");
@@ -411,7 +674,14 @@ describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () 
 
   it("a listing reading without a chart value is not graded on the data sheet, so nothing is compared [CTP]", () => {
     const noChartListing = listing({ readings: [{ tubeNo: 1, measure: "gm", sections: [1_700, 1_650] }] });
-    const w = weighItem(SEED, "readings-not-as-listed", noChartListing, report({ readings: [gm(1, [900, 950])] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      noChartListing,
+      report({ readings: [gm(1, [900, 950])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.listing.readings[0].grade).toBe("not-graded");
     expect(w.listing.readings[0].percentOfNominal).toBe(103.1); // shown beside it, 1,650 / 1,600
     expect(w.verdict).toBe("inconclusive");
@@ -419,7 +689,14 @@ describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () 
 
   it("only the tubes read on both sides count: one tube falls, another holds → supports, one finding", () => {
     const l = listing({ readings: [gm(1, [1_700, 1_650]), gm(2, [1_600, 1_620])] });
-    const w = weighItem(SEED, "readings-not-as-listed", l, report({ readings: [gm(1, [1_580, 1_600]), gm(2, [800, 820]), gm(7, [300, 300])] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      l,
+      report({ readings: [gm(1, [1_580, 1_600]), gm(2, [800, 820]), gm(7, [300, 300])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.verdict).toBe("supports");
     expect(w.findings).toHaveLength(1); // tube 7 was not read in the listing
     expect(w.findings[0]).toMatch(/^Tube 2: listed strong/);
@@ -427,19 +704,42 @@ describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () 
 
   it("nothing graded on both sides → inconclusive (compare like with like)", () => {
     const buyerEmission: TubeReading = { tubeNo: 1, measure: "emission", sections: [70] };
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [buyerEmission, gm(5, [1_000, 1_000])] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [buyerEmission, gm(5, [1_000, 1_000])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.verdict).toBe("inconclusive"); // tube 5 was not read in the listing
-    expect(w.findings[0]).toBe("No tube has readings of the same measure, graded on a chart value, on both sides: nothing to compare like with like.");
+    expect(w.findings[0]).toBe(
+      "No tube has readings of the same measure, graded on a chart value, on both sides: nothing to compare like with like.",
+    );
   });
 
   it("a failure the listing already disclosed is not a reading 'not as listed' [CTP] test disputes", () => {
     // Tube 2 was listed with a short (so listed as reject); the buyer finds the same short.
     const l = listing({ readings: [gm(1, [1_700, 1_650]), gm(2, [], { shorts: true })] });
-    const w = weighItem(SEED, "readings-not-as-listed", l, report({ readings: [gm(2, [], { shorts: true })] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      l,
+      report({ readings: [gm(2, [], { shorts: true })] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.listing.readings[1].grade).toBe("reject");
     expect(w.verdict).toBe("does-not-support");
     // Nor does a low figure on a tube the listing already called a reject.
-    const w2 = weighItem(SEED, "readings-not-as-listed", l, report({ readings: [gm(2, [300, 320])] }), PROFILES, noCodes);
+    const w2 = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      l,
+      report({ readings: [gm(2, [300, 320])] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w2.verdict).toBe("does-not-support");
   });
 
@@ -447,7 +747,14 @@ describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () 
     // Listing: Gm run, strong. Buyer: emission run at 50 % of its own chart → graded "weak".
     // The two are not comparable, so nothing is compared.
     const buyerEmission: TubeReading = { tubeNo: 1, measure: "emission", sections: [50], chartNewValue: 100 };
-    const w = weighItem(SEED, "readings-not-as-listed", strongListing, report({ readings: [buyerEmission] }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      strongListing,
+      report({ readings: [buyerEmission] }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.buyer.readings[0].grade).toBe("weak");
     expect(w.verdict).toBe("inconclusive");
   });
@@ -456,11 +763,20 @@ describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () 
     // Listed good (band 80–99 %); the buyer reads 60 %, 20 points below the band's floor,
     // beyond the ±10–15 % tester allowance, so a valid claim.
     const l = listing({ readings: [gm(1, [1_590, 1_585])] }); // 99.1 % → good
-    const w = weighItem(SEED, "readings-not-as-listed", l, report({ readings: [gm(1, [960, 970])] }), PROFILES, noCodes); // 60 % → fair
+    const w = weighItem(
+      SEED,
+      "readings-not-as-listed",
+      l,
+      report({ readings: [gm(1, [960, 970])] }),
+      PROFILES,
+      noCodes,
+    ); // 60 % → fair
     expect(w.listing.readings[0].grade).toBe("good");
     expect(w.buyer.readings[0].grade).toBe("fair");
     expect(w.verdict).toBe("supports");
-    expect(w.findings[0]).toBe("Tube 1: listed good (80 % of new or more); the buyer reads 60 %, more than 15 points below the band.");
+    expect(w.findings[0]).toBe(
+      "Tube 1: listed good (80 % of new or more); the buyer reads 60 %, more than 15 points below the band.",
+    );
   });
 });
 
@@ -478,24 +794,47 @@ describe("weighItem: wrong type [MEM] equivalents, short count, transit damage",
     const w = weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "ECC83" }), PROFILES, noCodes);
     expect(w.verdict).toBe("does-not-support");
     expect(w.findings[0]).toBe("ECC83 is listed as an exact equivalent of 12AX7 [MEM].");
-    const reverse = weighItem(SEED, "wrong-type", listing({ designation: "ECC83" }), report({ designationSeen: "12ax7" }), PROFILES, noCodes);
+    const reverse = weighItem(
+      SEED,
+      "wrong-type",
+      listing({ designation: "ECC83" }),
+      report({ designationSeen: "12ax7" }),
+      PROFILES,
+      noCodes,
+    );
     expect(reverse.verdict).toBe("does-not-support");
   });
 
   it("a premium or caveat equivalent is not the type listed → supports, naming the link [MEM]", () => {
     const premium = weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "7025" }), PROFILES, noCodes);
     expect(premium.verdict).toBe("supports");
-    expect(premium.findings[0]).toBe("Listed as 12AX7; the buyer reads 7025 (a premium equivalent, not the type listed).");
+    expect(premium.findings[0]).toBe(
+      "Listed as 12AX7; the buyer reads 7025 (a premium equivalent, not the type listed).",
+    );
     const caveat = weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "5751" }), PROFILES, noCodes);
     expect(caveat.verdict).toBe("supports"); // µ 70 against 100: never "exact" [MEM]
     expect(caveat.findings[0]).toContain("(a caveat equivalent, not the type listed)");
   });
 
   it("near and different-heater relatives → supports, the link kind in words [PE]", () => {
-    const near = weighItem(SEED, "wrong-type", listing({ designation: "6DJ8" }), report({ designationSeen: "6922" }), PROFILES, noCodes);
+    const near = weighItem(
+      SEED,
+      "wrong-type",
+      listing({ designation: "6DJ8" }),
+      report({ designationSeen: "6922" }),
+      PROFILES,
+      noCodes,
+    );
     expect(near.verdict).toBe("supports");
     expect(near.findings[0]).toBe("Listed as 6DJ8; the buyer reads 6922 (a near equivalent, not the type listed).");
-    const heater = weighItem(SEED, "wrong-type", listing({ designation: "6DJ8" }), report({ designationSeen: "PCC88" }), PROFILES, noCodes);
+    const heater = weighItem(
+      SEED,
+      "wrong-type",
+      listing({ designation: "6DJ8" }),
+      report({ designationSeen: "PCC88" }),
+      PROFILES,
+      noCodes,
+    );
     expect(heater.verdict).toBe("supports");
     expect(heater.findings[0]).toContain("(a sibling heater equivalent, not the type listed)");
   });
@@ -504,11 +843,20 @@ describe("weighItem: wrong type [MEM] equivalents, short count, transit damage",
     const w = weighItem(SEED, "wrong-type", listing(), report(), PROFILES, noCodes);
     expect(w.verdict).toBe("inconclusive");
     expect(w.findings).toEqual(["The buyer did not say what type is printed on the tubes."]);
-    expect(weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "" }), PROFILES, noCodes).verdict).toBe("inconclusive");
+    expect(weighItem(SEED, "wrong-type", listing(), report({ designationSeen: "" }), PROFILES, noCodes).verdict).toBe(
+      "inconclusive",
+    );
   });
 
   it("a listed designation that cannot be read → inconclusive: compare the print with the photos", () => {
-    const w = weighItem(SEED, "wrong-type", listing({ designation: "12A#7" }), report({ designationSeen: "12AU7" }), PROFILES, noCodes);
+    const w = weighItem(
+      SEED,
+      "wrong-type",
+      listing({ designation: "12A#7" }),
+      report({ designationSeen: "12AU7" }),
+      PROFILES,
+      noCodes,
+    );
     expect(w.verdict).toBe("inconclusive");
     expect(w.findings[0]).toBe('The listed designation "12A#7" could not be read; compare the print with the photos.');
   });
@@ -532,7 +880,9 @@ describe("weighItem: wrong type [MEM] equivalents, short count, transit damage",
       expect(w.findings).toEqual(["The buyer did not say how many tubes arrived."]);
     }
     // Zero received is a number, not a missing one.
-    expect(weighItem(SEED, "short-count", listing(), report({ tubesReceived: 0 }), PROFILES, noCodes).verdict).toBe("supports");
+    expect(weighItem(SEED, "short-count", listing(), report({ tubesReceived: 0 }), PROFILES, noCodes).verdict).toBe(
+      "supports",
+    );
   });
 
   it("transit damage → inconclusive: judged from photos and the carrier's record [CTP]", () => {
@@ -561,7 +911,11 @@ describe("weighingSummary", () => {
   });
 
   it("one item reads 'of 1 item'; none reads 'of 0 items'", () => {
-    expect(weighingSummary([{ verdict: "supports", tubes: 8 }]).words).toBe("The evidence supports the claim on 1 of 1 item (8 tubes); 0 against, 0 inconclusive.");
-    expect(weighingSummary([]).words).toBe("The evidence supports the claim on 0 of 0 items (0 tubes); 0 against, 0 inconclusive.");
+    expect(weighingSummary([{ verdict: "supports", tubes: 8 }]).words).toBe(
+      "The evidence supports the claim on 1 of 1 item (8 tubes); 0 against, 0 inconclusive.",
+    );
+    expect(weighingSummary([]).words).toBe(
+      "The evidence supports the claim on 0 of 0 items (0 tubes); 0 against, 0 inconclusive.",
+    );
   });
 });

@@ -8,8 +8,13 @@ import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 
-const line = (lotId: string, netHammerCents: number, designation: string, quantity: number, condition: SoldLine["condition"] = "used"): SoldLine =>
-  ({ lotId, netHammerCents, soldAt: "2026-11-20T18:00:00.000Z", designation, condition, quantity });
+const line = (
+  lotId: string,
+  netHammerCents: number,
+  designation: string,
+  quantity: number,
+  condition: SoldLine["condition"] = "used",
+): SoldLine => ({ lotId, netHammerCents, soldAt: "2026-11-20T18:00:00.000Z", designation, condition, quantity });
 
 describe("comparables from our own sold lots [SUG]", () => {
   it("a lot of one family and condition gives one comparable at hammer ÷ tubes", () => {
@@ -26,12 +31,20 @@ describe("comparables from our own sold lots [SUG]", () => {
 
   it("mixed families or conditions are left out, not split by a guess", () => {
     expect(comparablesFromSoldLots(SEED, [line("c", 9_000, "12AX7", 2), line("c", 9_000, "6SN7GT", 2)])).toEqual([]);
-    expect(comparablesFromSoldLots(SEED, [line("d", 9_000, "EL84", 2, "used"), line("d", 9_000, "EL84", 2, "new-old-stock")])).toEqual([]);
+    expect(
+      comparablesFromSoldLots(SEED, [
+        line("d", 9_000, "EL84", 2, "used"),
+        line("d", 9_000, "EL84", 2, "new-old-stock"),
+      ]),
+    ).toEqual([]);
   });
 
   it("feeds the lot estimate: quartiles of the per-tube prices × tubes", () => {
     const comps = comparablesFromSoldLots(SEED, [
-      line("e1", 10_000, "EL84", 4), line("e2", 12_000, "EL84", 4), line("e3", 16_000, "EL84", 4), line("e4", 20_000, "EL84", 4),
+      line("e1", 10_000, "EL84", 4),
+      line("e2", 12_000, "EL84", 4),
+      line("e3", 16_000, "EL84", 4),
+      line("e4", 20_000, "EL84", 4),
     ]); // per tube $25, $30, $40, $50
     const est = estimateLot([{ familyKey: "EL84", familyLabel: "EL84 family", condition: "used", tubes: 6 }], comps);
     expect(est.kind).toBe("range");

@@ -15,12 +15,23 @@ describe("csvTemplate", () => {
     const r = parseLotCsv(SEED, csvTemplate());
     expect(r.errors).toEqual([]);
     expect(r.warnings).toEqual([]);
-    expect(r.rows.map((x) => [x.line, x.item.designation.normalised, x.item.quantity, x.item.condition, x.item.readings.length])).toEqual([
+    expect(
+      r.rows.map((x) => [
+        x.line,
+        x.item.designation.normalised,
+        x.item.quantity,
+        x.item.condition,
+        x.item.readings.length,
+      ]),
+    ).toEqual([
       [2, "12AX7", 1, "new-old-stock", 1],
       [3, "EL84", 1, "used", 1],
       [4, "6V6GT", 12, "new-in-box", 0],
     ]);
-    expect(r.rows[1].item.attributedMaker).toEqual({ makerName: "Kestrel Valve Company", basis: "source-code-confirmed" });
+    expect(r.rows[1].item.attributedMaker).toEqual({
+      makerName: "Kestrel Valve Company",
+      basis: "source-code-confirmed",
+    });
     expect(r.rows[0].item.construction).toEqual({ plates: "grey box", getter: "halo top", micas: "3" });
   });
 });
@@ -57,13 +68,20 @@ describe("parseLotCsv", () => {
   it("imports unknown designations with a warning, never an error [SUG]", () => {
     const r = parseLotCsv(SEED, FILE);
     expect(r.rows[1].item.designation).toMatchObject({ normalised: "6ZZ99", status: "unknown-flagged" });
-    expect(r.warnings).toEqual([{ line: 7, column: "designation", message: expect.stringMatching(/flagged for review/) }]);
+    expect(r.warnings).toEqual([
+      { line: 7, column: "designation", message: expect.stringMatching(/flagged for review/) },
+    ]);
   });
 
   it("refuses a 100,000-row file with one clear file-level error, unparsed", () => {
     const big = `designation\n${"12AX7\n".repeat(100_000)}`;
     const r = parseLotCsv(SEED, big);
-    expect(r.errors).toEqual([{ line: 0, message: "The file has more than 5,000 data rows. Split it into files of at most 5,000 rows and import each." }]);
+    expect(r.errors).toEqual([
+      {
+        line: 0,
+        message: "The file has more than 5,000 data rows. Split it into files of at most 5,000 rows and import each.",
+      },
+    ]);
     expect(r.rows).toEqual([]);
     expect(r.fingerprint).toBeNull();
   });
@@ -72,14 +90,19 @@ describe("parseLotCsv", () => {
     const r = parseLotCsv(SEED, `designation,notes\n12AX7,${"x".repeat(3 * 1024 * 1024)}\n`);
     expect(r.errors).toHaveLength(1);
     expect(r.errors[0].message).toMatch(/larger than 2,097,152 bytes/);
-    expect(parseLotCsv(SEED, "designation\n12AX7\n", { maxBytes: 10 }).errors[0].message).toMatch(/larger than 10 bytes/);
+    expect(parseLotCsv(SEED, "designation\n12AX7\n", { maxBytes: 10 }).errors[0].message).toMatch(
+      /larger than 10 bytes/,
+    );
   });
 
   it("counts records, not lines: line breaks inside quotes do not count as rows", () => {
     const row = '12AX7,"a\nb\nc\nd"';
     const three = `designation,notes\n${[row, row, row].join("\n")}\n`;
     expect(parseLotCsv(SEED, three, { maxRows: 3 }).errors).toEqual([]);
-    expect(parseLotCsv(SEED, `${three}${row}\n`, { maxRows: 3 }).errors[0]).toMatchObject({ line: 0, message: expect.stringMatching(/more than 3 data rows/) });
+    expect(parseLotCsv(SEED, `${three}${row}\n`, { maxRows: 3 }).errors[0]).toMatchObject({
+      line: 0,
+      message: expect.stringMatching(/more than 3 data rows/),
+    });
   });
 
   it("gives the same fingerprint and row keys for the same file, and distinct keys for duplicate rows", () => {
@@ -95,11 +118,14 @@ describe("parseLotCsv", () => {
 
   it("ignores column order and whitespace-only edits; row order changes the fingerprint but not the keys", () => {
     const a = parseLotCsv(SEED, 'designation,qty,notes\n12AX7,4,"boxed, clean"\nEL34,2,\n');
-    const reordered = parseLotCsv(SEED, '  Notes , QTY,designation\r\n"  boxed,   clean ", 4 ,12AX7\r\n\r\n,2,EL34\r\n');
+    const reordered = parseLotCsv(
+      SEED,
+      '  Notes , QTY,designation\r\n"  boxed,   clean ", 4 ,12AX7\r\n\r\n,2,EL34\r\n',
+    );
     expect(reordered.errors).toEqual([]);
     expect(reordered.fingerprint).toBe(a.fingerprint);
     expect(reordered.rowKeys).toEqual(a.rowKeys);
-    const swapped = parseLotCsv(SEED, "designation,qty,notes\nEL34,2,\n12AX7,4,\"boxed, clean\"\n");
+    const swapped = parseLotCsv(SEED, 'designation,qty,notes\nEL34,2,\n12AX7,4,"boxed, clean"\n');
     expect(swapped.fingerprint).not.toBe(a.fingerprint);
     expect([...swapped.rowKeys].sort()).toEqual([...a.rowKeys].sort());
   });
@@ -109,7 +135,9 @@ describe("parseLotCsv", () => {
     expect(r.unknownColumns).toEqual(["colour"]);
     expect(r.warnings).toEqual([{ line: 1, column: "colour", message: 'unknown column "colour" ignored' }]);
     expect(r.rows).toHaveLength(1);
-    expect(parseLotCsv(SEED, "type,qty\n12AX7,1\n").errors).toEqual([{ line: 1, column: "designation", message: "the header has no designation column" }]);
+    expect(parseLotCsv(SEED, "type,qty\n12AX7,1\n").errors).toEqual([
+      { line: 1, column: "designation", message: "the header has no designation column" },
+    ]);
     expect(parseLotCsv(SEED, "").errors[0]).toMatchObject({ line: 0, message: expect.stringMatching(/header row/) });
   });
 
@@ -145,20 +173,28 @@ describe("parseLotCsv", () => {
     expect(at(12)).toEqual(["section_1"]);
     expect(r.rows.map((x) => x.line)).toEqual([13, 14]);
     expect(r.rows[0].item.hazards).toEqual(["mercury-vapour", "radioactive"]);
-    expect(r.rows[1].item.readings).toEqual([{ tubeNo: 1, sections: [], measure: "gm", shorts: true, leakage: false, gas: false }]);
+    expect(r.rows[1].item.readings).toEqual([
+      { tubeNo: 1, sections: [], measure: "gm", shorts: true, leakage: false, gas: false },
+    ]);
   });
 
   it("refuses malformed CSV with the line where reading stopped", () => {
     const r = parseLotCsv(SEED, 'designation,notes\n12AX7,ok\nEL34,"never closed\n6V6GT,fine\n');
     expect(r.rows).toEqual([]);
     expect(r.errors).toHaveLength(1);
-    expect(r.errors[0]).toMatchObject({ line: 0, message: expect.stringMatching(/not valid CSV near line \d+: a quoted field is never closed/) });
+    expect(r.errors[0]).toMatchObject({
+      line: 0,
+      message: expect.stringMatching(/not valid CSV near line \d+: a quoted field is never closed/),
+    });
   });
 });
 
 describe("parseLotCsv construction features", () => {
   it("reads name=value pairs, lower-casing names, and rejects pairs without a value", () => {
-    const r = parseLotCsv(SEED, 'designation,construction\n12AX7,"Plates = grey box;getter=halo top; constructor=two micas"\n12AX7,plates\n');
+    const r = parseLotCsv(
+      SEED,
+      'designation,construction\n12AX7,"Plates = grey box;getter=halo top; constructor=two micas"\n12AX7,plates\n',
+    );
     expect(r.rows[0].item.construction).toEqual({ plates: "grey box", getter: "halo top", constructor: "two micas" });
     expect(r.errors).toEqual([{ line: 3, column: "construction", message: '"plates" is not name=value' }]);
   });

@@ -4,7 +4,12 @@ import { estimateLot, percentile, type ComparableSale } from "@/lib/lots/estimat
 // The estimate rule is ours [SUG]: 25th–75th percentile per tube (linear
 // interpolation, rank h = (n − 1)·p), rounded half up to cents, × tubes.
 
-const sale = (typeFamily: string, condition: ComparableSale["condition"], pricePerTubeCents: number, soldAt = "2026-03-01"): ComparableSale => ({
+const sale = (
+  typeFamily: string,
+  condition: ComparableSale["condition"],
+  pricePerTubeCents: number,
+  soldAt = "2026-03-01",
+): ComparableSale => ({
   typeFamily,
   condition,
   pricePerTubeCents,
@@ -33,14 +38,25 @@ describe("estimateLot", () => {
       sale("12AX7", "new-in-box", 9000), // another condition: not used while used sales exist
       sale("EL34", "used", 5000), // another family
     ];
-    const est = estimateLot([{ familyKey: "12AX7", familyLabel: "12AX7 family", condition: "used", tubes: 6 }], comparables);
+    const est = estimateLot(
+      [{ familyKey: "12AX7", familyLabel: "12AX7 family", condition: "used", tubes: 6 }],
+      comparables,
+    );
     expect(est).toMatchObject({ kind: "range", lowCents: 8550, highCents: 12000 }); // 6 × 1425, 6 × 2000
     if (est.kind !== "range") throw new Error("expected a range");
-    expect(est.parts[0]).toMatchObject({ comparablesUsed: 4, conditionFallback: false, lowPerTubeCents: 1425, highPerTubeCents: 2000 });
+    expect(est.parts[0]).toMatchObject({
+      comparablesUsed: 4,
+      conditionFallback: false,
+      lowPerTubeCents: 1425,
+      highPerTubeCents: 2000,
+    });
   });
 
   it("rounds per tube to whole cents before multiplying", () => {
-    const est = estimateLot([{ familyKey: "6V6", familyLabel: "6V6 family", condition: "used", tubes: 3 }], [sale("6V6", "used", 1000), sale("6V6", "used", 1001)]);
+    const est = estimateLot(
+      [{ familyKey: "6V6", familyLabel: "6V6 family", condition: "used", tubes: 3 }],
+      [sale("6V6", "used", 1000), sale("6V6", "used", 1001)],
+    );
     // 1000.25 → 1000, 1000.75 → 1001 (half up); × 3
     expect(est).toMatchObject({ kind: "range", lowCents: 3000, highCents: 3003 });
   });
@@ -64,12 +80,20 @@ describe("estimateLot", () => {
   it("says 'no comparables yet' when no family has any, and honours the since date", () => {
     const groups = [{ familyKey: "EL84", familyLabel: "EL84 family", condition: "used" as const, tubes: 4 }];
     expect(estimateLot(groups, [])).toMatchObject({ kind: "none", text: "no comparables yet" });
-    expect(estimateLot(groups, [sale("EL84", "used", 1500, "2019-05-01")], { since: "2024-01-01" })).toMatchObject({ kind: "none" });
-    expect(estimateLot(groups, [sale("EL84", "used", 1500, "2025-05-01")], { since: "2024-01-01" })).toMatchObject({ kind: "range", lowCents: 6000 });
+    expect(estimateLot(groups, [sale("EL84", "used", 1500, "2019-05-01")], { since: "2024-01-01" })).toMatchObject({
+      kind: "none",
+    });
+    expect(estimateLot(groups, [sale("EL84", "used", 1500, "2025-05-01")], { since: "2024-01-01" })).toMatchObject({
+      kind: "range",
+      lowCents: 6000,
+    });
   });
 
   it("ignores prices that are not integer cents", () => {
-    const est = estimateLot([{ familyKey: "EL84", familyLabel: "EL84 family", condition: "used", tubes: 1 }], [sale("EL84", "used", 12.5), sale("EL84", "used", -100)]);
+    const est = estimateLot(
+      [{ familyKey: "EL84", familyLabel: "EL84 family", condition: "used", tubes: 1 }],
+      [sale("EL84", "used", 12.5), sale("EL84", "used", -100)],
+    );
     expect(est.kind).toBe("none");
   });
 });

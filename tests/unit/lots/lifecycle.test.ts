@@ -34,11 +34,32 @@ describe("lotStage", () => {
 describe("netProceeds", () => {
   it("is hammer less commission, less hammer refunded, plus commission returned", () => {
     // $250.00 hammer, $25.00 commission, $40.00 refunded, $4.00 commission returned → $189.00
-    expect(netProceeds({ hammerCents: 25000, commissionCents: 2500, hammerRefundedCents: 4000, commissionReturnedCents: 400, cancelled: false })).toBe(18900);
-    expect(netProceeds({ hammerCents: 25000, commissionCents: 2500, hammerRefundedCents: 0, commissionReturnedCents: 0, cancelled: true })).toBe(0);
+    expect(
+      netProceeds({
+        hammerCents: 25000,
+        commissionCents: 2500,
+        hammerRefundedCents: 4000,
+        commissionReturnedCents: 400,
+        cancelled: false,
+      }),
+    ).toBe(18900);
+    expect(
+      netProceeds({
+        hammerCents: 25000,
+        commissionCents: 2500,
+        hammerRefundedCents: 0,
+        commissionReturnedCents: 0,
+        cancelled: true,
+      }),
+    ).toBe(0);
   });
   it("sums per sale, skipping lots with no figure", () => {
-    const m = proceedsBySale([{ saleId: "a", netCents: 100 }, { saleId: "a", netCents: 250 }, { saleId: "b", netCents: null }, { saleId: null, netCents: 5 }]);
+    const m = proceedsBySale([
+      { saleId: "a", netCents: 100 },
+      { saleId: "a", netCents: 250 },
+      { saleId: "b", netCents: null },
+      { saleId: null, netCents: 5 },
+    ]);
     expect(m.get("a")).toBe(350);
     expect(m.has("b")).toBe(false);
   });

@@ -24,19 +24,30 @@ function item(designation: string, quantity: number, extra: Partial<LotItem> = {
     ...extra,
   };
 }
-const gm = (tubeNo: number, sections: number[], extra: Partial<TubeReading> = {}): TubeReading => ({ tubeNo, sections, measure: "gm", ...extra });
+const gm = (tubeNo: number, sections: number[], extra: Partial<TubeReading> = {}): TubeReading => ({
+  tubeNo,
+  sections,
+  measure: "gm",
+  ...extra,
+});
 const confirmed = { makerName: "Kestrel Valve Company", basis: "source-code-confirmed" as const };
 const byConstruction = { makerName: "Aldergrove Electron Works", basis: "construction-matched" as const };
 
 const LOT: LotItem[] = [
   // 0: two 12AX7s; chart "new" 1600 on the reading. 1200/1600 = 75 % → fair [CTP]; 1650/1600 → strong.
-  item("12AX7", 2, { attributedMaker: byConstruction, readings: [gm(1, [1200, 1200], { chartNewValue: 1600 }), gm(2, [1700, 1650], { chartNewValue: 1600 })] }),
+  item("12AX7", 2, {
+    attributedMaker: byConstruction,
+    readings: [gm(1, [1200, 1200], { chartNewValue: 1600 }), gm(2, [1700, 1650], { chartNewValue: 1600 })],
+  }),
   // 1: an ECC83 with a short and no chart value → reject regardless of reading [CTP].
   item("ECC83", 1, { attributedMaker: confirmed, readings: [gm(1, [1600, 1600], { shorts: true })] }),
   // 2: a 12AX7 with a white getter, untested: vacuum loss [CTP].
   item("12AX7", 1, { vacuumLoss: true }),
   // 3: four EL34s and (4) one 6CA7, chart from the lot's values (el34: 11000).
-  item("EL34", 4, { attributedMaker: confirmed, readings: [gm(1, [10000]), gm(2, [10300]), gm(3, [10400]), gm(4, [12000])] }),
+  item("EL34", 4, {
+    attributedMaker: confirmed,
+    readings: [gm(1, [10000]), gm(2, [10300]), gm(3, [10400]), gm(4, [12000])],
+  }),
   item("6CA7", 1, { readings: [gm(1, [10500])] }),
   // 5: an 83, untested: mercury-vapour rectifier [MEM].
   item("83", 1),
@@ -67,7 +78,16 @@ describe("summariseLot", () => {
     const el34 = s.families.find((f) => f.key === "EL34")!.tests;
     // 10000/11000 = 90.9 %, 10300 → 93.6 %, 10400 → 94.5 %, 10500 → 95.5 % good; 12000 → 109 % strong [CTP]
     expect(el34).toMatchObject({ tested: 5, good: 4, strong: 1, reject: 0 });
-    expect(s.tests).toMatchObject({ tested: 9, notTested: 5, strong: 2, good: 4, fair: 1, weak: 0, reject: 1, testedNotGraded: 1 });
+    expect(s.tests).toMatchObject({
+      tested: 9,
+      notTested: 5,
+      strong: 2,
+      good: 4,
+      fair: 1,
+      weak: 0,
+      reject: 1,
+      testedNotGraded: 1,
+    });
   });
 
   it("counts a white getter as vacuum loss", () => {
@@ -99,16 +119,24 @@ describe("summariseLot", () => {
   });
 
   it("flags unknown designations for review", () => {
-    expect(s.unknownDesignations).toEqual([expect.objectContaining({ normalised: "6ZZ99", tubes: 3, itemIndexes: [6] })]);
+    expect(s.unknownDesignations).toEqual([
+      expect.objectContaining({ normalised: "6ZZ99", tubes: 3, itemIndexes: [6] }),
+    ]);
   });
 
   it("says 'no comparables yet' without comparables", () => {
     expect(s.estimate).toMatchObject({ kind: "none", text: "no comparables yet" });
-    if (s.estimate.kind === "none") expect(s.estimate.familiesWithoutComparables.map((f) => f.familyKey)).toEqual(["12AX7", "6ZZ99", "83", "EL34"]);
+    if (s.estimate.kind === "none")
+      expect(s.estimate.familiesWithoutComparables.map((f) => f.familyKey)).toEqual(["12AX7", "6ZZ99", "83", "EL34"]);
   });
 
   it("estimates from comparables, valuing rejects and white getters at zero [SUG]", () => {
-    const comparables: ComparableSale[] = [1000, 2000, 3000, 4000, 5000].map((c) => ({ typeFamily: "12AX7", condition: "used", pricePerTubeCents: c, soldAt: "2026-01-15" }));
+    const comparables: ComparableSale[] = [1000, 2000, 3000, 4000, 5000].map((c) => ({
+      typeFamily: "12AX7",
+      condition: "used",
+      pricePerTubeCents: c,
+      soldAt: "2026-01-15",
+    }));
     const est = summariseLot(LOT, { ...OPTS, comparables });
     // 12AX7 family: 5 tubes, less the shorted ECC83 and the white getter = 3 valued.
     expect(est.zeroValuedTubes).toBe(2);
@@ -138,11 +166,22 @@ describe("readingsVsNominal", () => {
   it("gives each Gm-tested tube's sections as % of nominal Gm", () => {
     // 12AX7 nominal Gm 1,600 µmho at 250 V, −2 V [REG ✓]: 1200 → 75 %, 1280 → 80 %.
     const points = readingsVsNominal(SEED, [item("12AX7", 1, { readings: [gm(1, [1200, 1280])] })]);
-    expect(points).toEqual([{ itemIndex: 0, tubeNo: 1, designation: "12AX7", familyKey: "12AX7", percentOfNominal: 77.5, sectionsPct: [75, 80], failed: false }]);
+    expect(points).toEqual([
+      {
+        itemIndex: 0,
+        tubeNo: 1,
+        designation: "12AX7",
+        familyKey: "12AX7",
+        percentOfNominal: 77.5,
+        sectionsPct: [75, 80],
+        failed: false,
+      },
+    ]);
   });
 
   it("leaves out emission runs and types without a nominal figure, and marks failures", () => {
-    const points = readingsVsNominal(SEED, 
+    const points = readingsVsNominal(
+      SEED,
       [
         item("EL84", 1, { readings: [{ tubeNo: 1, sections: [80], measure: "emission" }] }),
         item("6ZZ99", 1, { readings: [gm(1, [3000])] }),

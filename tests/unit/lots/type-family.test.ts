@@ -42,7 +42,11 @@ describe("typeFamily", () => {
 
   it("uses the normalised designation for unknown types and 'Unidentified' for unreadable ones", () => {
     expect(typeFamily(SEED, "6zz 99")).toEqual({ key: "6ZZ99", label: "6ZZ99", match: "unlisted" });
-    expect(typeFamily(SEED, "12AX7!!")).toEqual({ key: UNIDENTIFIED_FAMILY_KEY, label: "Unidentified", match: "invalid" });
+    expect(typeFamily(SEED, "12AX7!!")).toEqual({
+      key: UNIDENTIFIED_FAMILY_KEY,
+      label: "Unidentified",
+      match: "invalid",
+    });
     expect(typeFamily(SEED, "")).toMatchObject({ label: "Unidentified" });
   });
 });

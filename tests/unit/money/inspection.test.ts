@@ -25,9 +25,9 @@ describe("inspection period", () => {
 
   it("ends that many 24-hour days after delivery", () => {
     expect(inspectionWindowEnd(delivered, 120)).toBe(delivered + 11 * DAY);
-    expect(inspectionWindowEnd(delivered, 3, { baseDays: 3, tubesPerExtraDay: 10, maxDays: 5, breakageClaimHours: 24 })).toBe(
-      delivered + 3 * DAY,
-    );
+    expect(
+      inspectionWindowEnd(delivered, 3, { baseDays: 3, tubesPerExtraDay: 10, maxDays: 5, breakageClaimHours: 24 }),
+    ).toBe(delivered + 3 * DAY);
   });
 
   it("breakage claims close 48 h after delivery [CTP]", () => {

@@ -18,7 +18,10 @@ import { figuresAfterRefunds, settlePartialRefund, type SaleFigures } from "@/li
 import type { ManifestLine } from "@/lib/money/refund-claims";
 
 //: hammer $1,000, premium 15 %, commission 20 % (flat), shipping $40 (our own figure)
-const invoice = invoiceFor({ hammerCents: 100_000, shippingCents: 4_000 }, { ...DEFAULT_FEE_SCHEDULE, buyersPremiumBp: 1_500 });
+const invoice = invoiceFor(
+  { hammerCents: 100_000, shippingCents: 4_000 },
+  { ...DEFAULT_FEE_SCHEDULE, buyersPremiumBp: 1_500 },
+);
 const SALE: SaleFigures = { hammerCents: 100_000, premiumCents: 15_000, commissionCents: 20_000 };
 const LOT: ManifestLine[] = [
   { lineId: "kestrel-labelled", kind: "singles", quantity: 8, unitValueCents: 5_000 },
@@ -30,24 +33,58 @@ const refund = settlePartialRefund(SALE, LOT, [
 
 describe("assertBalanced", () => {
   it("returns the total of a balanced set", () => {
-    expect(assertBalanced([{ account: "cash", debitCents: 500 }, { account: "escrow-held", creditCents: 500 }])).toBe(500);
+    expect(
+      assertBalanced([
+        { account: "cash", debitCents: 500 },
+        { account: "escrow-held", creditCents: 500 },
+      ]),
+    ).toBe(500);
   });
 
   it("rejects unbalanced, empty, zero, negative, fractional and two-sided entries", () => {
-    expect(() => assertBalanced([{ account: "cash", debitCents: 500 }, { account: "escrow-held", creditCents: 499 }])).toThrow(
-      /unbalanced/,
-    );
+    expect(() =>
+      assertBalanced([
+        { account: "cash", debitCents: 500 },
+        { account: "escrow-held", creditCents: 499 },
+      ]),
+    ).toThrow(/unbalanced/);
     expect(() => assertBalanced([])).toThrow(RangeError);
-    expect(() => assertBalanced([{ account: "cash", debitCents: 0 }, { account: "escrow-held", creditCents: 0 }])).toThrow(/zero/);
-    expect(() => assertBalanced([{ account: "cash", debitCents: -5 }, { account: "escrow-held", debitCents: 5 }])).toThrow(RangeError);
-    expect(() => assertBalanced([{ account: "cash", debitCents: 1.5 }, { account: "escrow-held", creditCents: 1.5 }])).toThrow(RangeError);
+    expect(() =>
+      assertBalanced([
+        { account: "cash", debitCents: 0 },
+        { account: "escrow-held", creditCents: 0 },
+      ]),
+    ).toThrow(/zero/);
+    expect(() =>
+      assertBalanced([
+        { account: "cash", debitCents: -5 },
+        { account: "escrow-held", debitCents: 5 },
+      ]),
+    ).toThrow(RangeError);
+    expect(() =>
+      assertBalanced([
+        { account: "cash", debitCents: 1.5 },
+        { account: "escrow-held", creditCents: 1.5 },
+      ]),
+    ).toThrow(RangeError);
     const twoSided = { account: "cash", debitCents: 5, creditCents: 5 } as unknown as LedgerEntry;
     expect(() => assertBalanced([twoSided])).toThrow(/exactly one/);
   });
 
   it("entriesFrom drops zero lines and refuses signed amounts that do not net to zero", () => {
-    expect(entriesFrom([["cash", 10], ["tax-payable", 0], ["escrow-held", -10]])).toHaveLength(2);
-    expect(() => entriesFrom([["cash", 10], ["escrow-held", -9]])).toThrow(/unbalanced/);
+    expect(
+      entriesFrom([
+        ["cash", 10],
+        ["tax-payable", 0],
+        ["escrow-held", -10],
+      ]),
+    ).toHaveLength(2);
+    expect(() =>
+      entriesFrom([
+        ["cash", 10],
+        ["escrow-held", -9],
+      ]),
+    ).toThrow(/unbalanced/);
   });
 });
 
@@ -81,7 +118,11 @@ describe("the §9.22 worked example through the books", () => {
   it("refund while held: escrow returns $172.50, release pays $680 to the consignor [SUG]", () => {
     const remaining = figuresAfterRefunds(SALE, [refund]);
     expect(remaining).toEqual({ hammerCents: 85_000, premiumCents: 12_750, commissionCents: 17_000 });
-    const payout = payoutFor({ hammerCents: 100_000, commissionCents: 20_000, refundsCents: -refund.consignorChangeCents });
+    const payout = payoutFor({
+      hammerCents: 100_000,
+      commissionCents: 20_000,
+      refundsCents: -refund.consignorChangeCents,
+    });
     expect(payout.payoutCents).toBe(68_000); // 1,000 − 200 − 120
     const sets = [
       invoiceIssuedEntries(invoice),

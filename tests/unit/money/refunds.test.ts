@@ -39,7 +39,13 @@ function expectReconciles(s: RefundSettlement): void {
 
 describe("manifest", () => {
   it("V_lot is the sum of line values; a matched set is one line", () => {
-    const quad: MatchedSetLine = { lineId: "quad", kind: "matched-set", tubeCount: 4, setValueCents: 20_000, singleValueCents: 4_000 };
+    const quad: MatchedSetLine = {
+      lineId: "quad",
+      kind: "matched-set",
+      tubeCount: 4,
+      setValueCents: 20_000,
+      singleValueCents: 4_000,
+    };
     expect(lotValueCents(LOT)).toBe(200_000); //: V_lot $2,000
     expect(lotValueCents([...LOT, quad])).toBe(220_000);
     expect(validateManifest(LOT)).toEqual([]);
@@ -50,7 +56,9 @@ describe("manifest", () => {
 
 describe("settlePartialRefund — worked example [SUG]", () => {
   // Eight tubes listed as Kestrel-made turn out Pellham-made: described $400, actual $100.
-  const claim = [{ kind: "price-adjustment" as const, lineId: kestrelLine.lineId, count: 8, actualUnitValueCents: 1_250 }];
+  const claim = [
+    { kind: "price-adjustment" as const, lineId: kestrelLine.lineId, count: 8, actualUnitValueCents: 1_250 },
+  ];
   const s = settlePartialRefund(SALE, LOT, claim);
 
   it("refunds $150 hammer + $22.50 premium", () => {
@@ -74,7 +82,13 @@ describe("settlePartialRefund — worked example [SUG]", () => {
 });
 
 describe("matched sets", () => {
-  const quad: MatchedSetLine = { lineId: "el34-quad", kind: "matched-set", tubeCount: 4, setValueCents: 20_000, singleValueCents: 4_000 };
+  const quad: MatchedSetLine = {
+    lineId: "el34-quad",
+    kind: "matched-set",
+    tubeCount: 4,
+    setValueCents: 20_000,
+    singleValueCents: 4_000,
+  };
   const lines: ManifestLine[] = [quad, { lineId: "rest", kind: "singles", quantity: 30, unitValueCents: 6_000 }];
 
   it("a bad tube in a quad costs the set value minus the good tubes as singles, not a quarter [SUG]", () => {
@@ -82,7 +96,9 @@ describe("matched sets", () => {
     expect(claim).toEqual({ kind: "set-adjustment", lineId: "el34-quad", actualSetValueCents: 12_000 });
     const [valued] = valueClaimItems(lines, [claim]);
     expect(valued.refundValueCents).toBe(8_000); // 200 − 3 × 40 = $80, not 200 / 4 = $50
-    const s = settlePartialRefund({ hammerCents: 100_000, premiumCents: 10_000, commissionCents: 15_000 }, lines, [claim]);
+    const s = settlePartialRefund({ hammerCents: 100_000, premiumCents: 10_000, commissionCents: 15_000 }, lines, [
+      claim,
+    ]);
     expect(s.hammerRefundCents).toBe(4_000); // 1,000 × 80 / 2,000
     expectReconciles(s);
   });
@@ -113,13 +129,24 @@ describe("returns, shortfalls and the rejection threshold", () => {
 
   it("rejection needs MORE than 25 % of V_lot misdescribed [SUG]", () => {
     // V_lot = 10 × $50 + 100 × $15 = $2,000; the whole first line ($500) is exactly 25 %
-    const lines: ManifestLine[] = [{ ...kestrelLine, quantity: 10 }, { ...mixedLine, quantity: 100, unitValueCents: 1_500 }];
-    const allTen = { kind: "price-adjustment" as const, lineId: kestrelLine.lineId, count: 10, actualUnitValueCents: 0 };
+    const lines: ManifestLine[] = [
+      { ...kestrelLine, quantity: 10 },
+      { ...mixedLine, quantity: 100, unitValueCents: 1_500 },
+    ];
+    const allTen = {
+      kind: "price-adjustment" as const,
+      lineId: kestrelLine.lineId,
+      count: 10,
+      actualUnitValueCents: 0,
+    };
     const atThreshold = settlePartialRefund(SALE, lines, [allTen]);
     expect(atThreshold.misdescribedValueCents).toBe(50_000);
     expect(atThreshold.buyerMayRejectLot).toBe(false);
     // one more missing tube ($15) tips it over
-    const above = settlePartialRefund(SALE, lines, [allTen, { kind: "shortfall", lineId: "mixed-receiving", count: 1 }]);
+    const above = settlePartialRefund(SALE, lines, [
+      allTen,
+      { kind: "shortfall", lineId: "mixed-receiving", count: 1 },
+    ]);
     expect(above.misdescribedValueCents).toBe(51_500);
     expect(above.buyerMayRejectLot).toBe(true);
     // a stricter house threshold (20 %) lets the §9.22 lot (20 % + 1 tube) be rejected
@@ -136,7 +163,9 @@ describe("returns, shortfalls and the rejection threshold", () => {
   });
 
   it("refuses claims that do not fit the manifest", () => {
-    expect(() => settlePartialRefund(SALE, LOT, [{ kind: "return", lineId: "nope", count: 1 }])).toThrow(/unknown line/);
+    expect(() => settlePartialRefund(SALE, LOT, [{ kind: "return", lineId: "nope", count: 1 }])).toThrow(
+      /unknown line/,
+    );
     expect(() => settlePartialRefund(SALE, LOT, [{ kind: "shortfall", lineId: kestrelLine.lineId, count: 9 }])).toThrow(
       /more tubes/,
     );
@@ -147,14 +176,21 @@ describe("returns, shortfalls and the rejection threshold", () => {
       ]),
     ).toThrow(/more tubes/);
     expect(() =>
-      settlePartialRefund(SALE, LOT, [{ kind: "price-adjustment", lineId: kestrelLine.lineId, count: 1, actualUnitValueCents: 6_000 }]),
+      settlePartialRefund(SALE, LOT, [
+        { kind: "price-adjustment", lineId: kestrelLine.lineId, count: 1, actualUnitValueCents: 6_000 },
+      ]),
     ).toThrow(/exceeds the described/);
     expect(() => settlePartialRefund({ ...SALE, hammerCents: 10.5 }, LOT, [])).toThrow(RangeError);
   });
 });
 
 describe("rounding and cumulative settlement", () => {
-  const thirds: ManifestLine[] = ["a", "b", "c"].map((id) => ({ lineId: id, kind: "singles", quantity: 1, unitValueCents: 1 }));
+  const thirds: ManifestLine[] = ["a", "b", "c"].map((id) => ({
+    lineId: id,
+    kind: "singles",
+    quantity: 1,
+    unitValueCents: 1,
+  }));
   const sale: SaleFigures = { hammerCents: 100_000, premiumCents: 10_001, commissionCents: 20_000 };
 
   it("refunding one line at a time adds up exactly to refunding all at once", () => {
@@ -187,7 +223,9 @@ describe("rounding and cumulative settlement", () => {
 
 describe("settleLotRejection", () => {
   it("returns everything still unrefunded; with the §9.22 partial refund it completes a full refund", () => {
-    const claim = [{ kind: "price-adjustment" as const, lineId: kestrelLine.lineId, count: 8, actualUnitValueCents: 1_250 }];
+    const claim = [
+      { kind: "price-adjustment" as const, lineId: kestrelLine.lineId, count: 8, actualUnitValueCents: 1_250 },
+    ];
     const partial = settlePartialRefund(SALE, LOT, claim);
     const rest = settleLotRejection(SALE, LOT, claim);
     expect(rest.hammerRefundCents).toBe(85_000);

@@ -5,14 +5,32 @@ import { DEFAULT_SHIPPING_TABLE, shippingQuote, validateShippingTable, type Ship
 describe("shippingQuote", () => {
   it("prices by the first band at or above the weight, plus handling [SUG] house table", () => {
     expect(validateShippingTable(DEFAULT_SHIPPING_TABLE)).toEqual([]);
-    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 500, "home")).toEqual({ kind: "rate", cents: 1_200, bandUpToGrams: 500 });
-    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 501, "home")).toEqual({ kind: "rate", cents: 1_700, bandUpToGrams: 2_000 });
-    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 4_200, "far")).toEqual({ kind: "rate", cents: 9_200, bandUpToGrams: 5_000 });
+    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 500, "home")).toEqual({
+      kind: "rate",
+      cents: 1_200,
+      bandUpToGrams: 500,
+    });
+    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 501, "home")).toEqual({
+      kind: "rate",
+      cents: 1_700,
+      bandUpToGrams: 2_000,
+    });
+    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 4_200, "far")).toEqual({
+      kind: "rate",
+      cents: 9_200,
+      bandUpToGrams: 5_000,
+    });
   });
 
   it("asks for a manual quote when over weight or to an unknown zone", () => {
-    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 20_001, "home")).toEqual({ kind: "quote-needed", reason: "over-weight" });
-    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 100, "moon")).toEqual({ kind: "quote-needed", reason: "unknown-zone" });
+    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 20_001, "home")).toEqual({
+      kind: "quote-needed",
+      reason: "over-weight",
+    });
+    expect(shippingQuote(DEFAULT_SHIPPING_TABLE, 100, "moon")).toEqual({
+      kind: "quote-needed",
+      reason: "unknown-zone",
+    });
   });
 
   it("rejects bad weights and bad tables", () => {

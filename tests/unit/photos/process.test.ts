@@ -25,9 +25,17 @@ describe("processPhoto strips metadata", () => {
       .jpeg()
       .withExif({
         IFD0: { Make: "Bench Camera Works", Copyright: "Consignor 17" },
-        IFD3: { GPSLatitudeRef: "N", GPSLatitude: "51/1 30/1 0/1", GPSLongitudeRef: "W", GPSLongitude: "0/1 7/1 0/1", GPSMapDatum: "WGS-84" },
+        IFD3: {
+          GPSLatitudeRef: "N",
+          GPSLatitude: "51/1 30/1 0/1",
+          GPSLongitudeRef: "W",
+          GPSLongitude: "0/1 7/1 0/1",
+          GPSMapDatum: "WGS-84",
+        },
       })
-      .withXmp('<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:dc="http://purl.org/dc/elements/1.1/" dc:creator="Consignor 17"/></rdf:RDF></x:xmpmeta>')
+      .withXmp(
+        '<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:dc="http://purl.org/dc/elements/1.1/" dc:creator="Consignor 17"/></rdf:RDF></x:xmpmeta>',
+      )
       .withIccProfile("p3")
       .toBuffer();
     const input = withIptcCaption(tagged, "Shelf 4, north wall");
@@ -93,7 +101,9 @@ describe("processPhoto renditions", () => {
   });
 
   it("accepts a PNG with transparency and re-encodes it as a JPEG on white", async () => {
-    const png = await sharp({ create: { width: 64, height: 64, channels: 4, background: { r: 0, g: 0, b: 0, alpha: 0 } } })
+    const png = await sharp({
+      create: { width: 64, height: 64, channels: 4, background: { r: 0, g: 0, b: 0, alpha: 0 } },
+    })
       .png()
       .toBuffer();
     const out = await processPhoto(png, "cutout.png");
@@ -168,7 +178,11 @@ describe("processPhoto refusals", () => {
   it("refuses image formats we do not take, naming the format", async () => {
     const gif = await plain(20, 20).gif().toBuffer();
     const avif = await plain(20, 20).avif().toBuffer();
-    const heicHeader = Buffer.concat([Buffer.from([0, 0, 0, 0x18]), Buffer.from("ftypheic\0\0\0\0mif1heic"), Buffer.alloc(64)]);
+    const heicHeader = Buffer.concat([
+      Buffer.from([0, 0, 0, 0x18]),
+      Buffer.from("ftypheic\0\0\0\0mif1heic"),
+      Buffer.alloc(64),
+    ]);
     const svg = Buffer.from('<?xml version="1.0"?>\n<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"/>');
     for (const [input, name, label] of [
       [gif, "a.gif", "GIF"],
@@ -189,7 +203,15 @@ describe("processPhoto refusals", () => {
   });
 
   it("refuses a damaged JPEG (cut short, or garbage after the magic bytes)", async () => {
-    const whole = await sharp({ create: { width: 400, height: 300, channels: 3, background: "#000000", noise: { type: "gaussian", mean: 128, sigma: 40 } } })
+    const whole = await sharp({
+      create: {
+        width: 400,
+        height: 300,
+        channels: 3,
+        background: "#000000",
+        noise: { type: "gaussian", mean: 128, sigma: 40 },
+      },
+    })
       .jpeg()
       .toBuffer();
     expect((await rejection(whole.subarray(0, Math.floor(whole.length * 0.6)), "cut.jpg")).code).toBe("not-an-image");

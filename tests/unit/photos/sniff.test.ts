@@ -17,17 +17,29 @@ describe("sniffImageType", () => {
     expect(sniffImageType(await tiny().gif().toBuffer())).toMatchObject({ kind: "unsupported", format: "gif" });
     expect(sniffImageType(await tiny().tiff().toBuffer())).toMatchObject({ kind: "unsupported", format: "tiff" });
     expect(sniffImageType(await tiny().avif().toBuffer())).toMatchObject({ kind: "unsupported", format: "avif" });
-    const heic = Buffer.concat([Buffer.from([0, 0, 0, 0x18]), Buffer.from("ftypheic\0\0\0\0mif1heic"), Buffer.alloc(16)]);
+    const heic = Buffer.concat([
+      Buffer.from([0, 0, 0, 0x18]),
+      Buffer.from("ftypheic\0\0\0\0mif1heic"),
+      Buffer.alloc(16),
+    ]);
     expect(sniffImageType(heic)).toMatchObject({ kind: "unsupported", format: "heic" });
     const bmp = Buffer.alloc(64);
     bmp.write("BM");
     bmp.writeUInt32LE(64, 2);
     expect(sniffImageType(bmp)).toMatchObject({ kind: "unsupported", format: "bmp" });
-    expect(sniffImageType(Buffer.from('\uFEFF<!-- drawn by hand -->\n<svg viewBox="0 0 1 1"></svg>'))).toMatchObject({ format: "svg" });
+    expect(sniffImageType(Buffer.from('\uFEFF<!-- drawn by hand -->\n<svg viewBox="0 0 1 1"></svg>'))).toMatchObject({
+      format: "svg",
+    });
   });
 
   it("calls text, HTML with inline SVG, and truncated headers unknown", () => {
-    for (const s of ["hello", "<!doctype html><html><body><svg></svg></body></html>", "RIFF\0\0\0\0WAVE", "BM is a text file", "\x89PNG"]) {
+    for (const s of [
+      "hello",
+      "<!doctype html><html><body><svg></svg></body></html>",
+      "RIFF\0\0\0\0WAVE",
+      "BM is a text file",
+      "\x89PNG",
+    ]) {
       expect(sniffImageType(Buffer.from(s, "latin1")), s).toEqual({ kind: "unknown" });
     }
     expect(sniffImageType(Buffer.from([0xff, 0xd8]))).toEqual({ kind: "unknown" });
@@ -37,6 +49,14 @@ describe("sniffImageType", () => {
 describe("accepted formats for the upload form", () => {
   it("lists the three formats for people and for the file picker", () => {
     expect(ACCEPTED_PHOTO_LABELS).toBe("JPEG, PNG or WebP");
-    expect(PHOTO_ACCEPT_ATTRIBUTE.split(",")).toEqual(["image/jpeg", ".jpg", ".jpeg", "image/png", ".png", "image/webp", ".webp"]);
+    expect(PHOTO_ACCEPT_ATTRIBUTE.split(",")).toEqual([
+      "image/jpeg",
+      ".jpg",
+      ".jpeg",
+      "image/png",
+      ".png",
+      "image/webp",
+      ".webp",
+    ]);
   });
 });

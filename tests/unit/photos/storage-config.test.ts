@@ -18,8 +18,20 @@ describe("storageConfig", () => {
   });
 
   it("uses the provider's endpoint and default credential chain when both are set empty", () => {
-    const c = storageConfig({ S3_ENDPOINT: "", S3_ACCESS_KEY_ID: "", S3_SECRET_ACCESS_KEY: "", S3_BUCKET: "evidence.example", S3_REGION: "eu-west-1" });
-    expect(c).toMatchObject({ endpoint: undefined, forcePathStyle: false, credentials: undefined, bucket: "evidence.example", region: "eu-west-1" });
+    const c = storageConfig({
+      S3_ENDPOINT: "",
+      S3_ACCESS_KEY_ID: "",
+      S3_SECRET_ACCESS_KEY: "",
+      S3_BUCKET: "evidence.example",
+      S3_REGION: "eu-west-1",
+    });
+    expect(c).toMatchObject({
+      endpoint: undefined,
+      forcePathStyle: false,
+      credentials: undefined,
+      bucket: "evidence.example",
+      region: "eu-west-1",
+    });
   });
 
   it("refuses a bad bucket name, a non-http endpoint and half a key pair, naming each", () => {

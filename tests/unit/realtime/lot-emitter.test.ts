@@ -5,15 +5,24 @@ import type { LotLive } from "@/lib/realtime/events";
 // [SUG] Our delivery rule: a lot's events leave a process in seq order even when its writers finish out of order.
 const sent: { event: string; seqs: number[] }[] = [];
 const fakeIo = {
-  local: { to: () => ({ emit: (event: string, p: LotLive | { events: { live: LotLive }[] }) => sent.push({ event, seqs: "events" in p ? p.events.map((e) => e.live.seq) : [p.seq] }) }) },
+  local: {
+    to: () => ({
+      emit: (event: string, p: LotLive | { events: { live: LotLive }[] }) =>
+        sent.push({ event, seqs: "events" in p ? p.events.map((e) => e.live.seq) : [p.seq] }),
+    }),
+  },
   serverSideEmit: () => undefined,
 };
 const live = (saleLotId: string, seq: number) => ({ saleLotId, saleId: "s", seq }) as LotLive;
 
 describe("lot emitter", () => {
   const g = globalThis as { __getterlineIo?: unknown };
-  beforeAll(() => { g.__getterlineIo = fakeIo; });
-  afterAll(() => { delete g.__getterlineIo; });
+  beforeAll(() => {
+    g.__getterlineIo = fakeIo;
+  });
+  afterAll(() => {
+    delete g.__getterlineIo;
+  });
 
   it("holds a later seq until the earlier writer in this process finishes, then sends both in order", async () => {
     sent.length = 0;

@@ -24,7 +24,10 @@ async function card(number: string): Promise<Stripe.PaymentMethod> {
 }
 
 /** Paid PaymentIntent with the always-succeeding test card. */
-async function paid(amount: number, extra: Partial<Stripe.PaymentIntentCreateParams> = {}): Promise<Stripe.PaymentIntent> {
+async function paid(
+  amount: number,
+  extra: Partial<Stripe.PaymentIntentCreateParams> = {},
+): Promise<Stripe.PaymentIntent> {
   const pm = await card("4242424242424242");
   return stripe.paymentIntents.create({ amount, currency: "usd", payment_method: pm.id, confirm: true, ...extra });
 }
@@ -59,18 +62,44 @@ describe("payments", () => {
     const pm = await card("4242424242424242");
     expect(pm.id).toMatch(/^pm_/);
     expect(pm.card).toMatchObject({ last4: "4242", exp_month: 12 });
-    const created = await stripe.paymentIntents.create({ amount: 12_345, currency: "usd", metadata: { lot: "L-7" }, transfer_group: "lot-7" });
-    expect(created).toMatchObject({ object: "payment_intent", status: "requires_payment_method", livemode: false, capture_method: "automatic" });
-    const pi = await stripe.paymentIntents.confirm(created.id, { payment_method: pm.id, expand: ["latest_charge.balance_transaction"] });
+    const created = await stripe.paymentIntents.create({
+      amount: 12_345,
+      currency: "usd",
+      metadata: { lot: "L-7" },
+      transfer_group: "lot-7",
+    });
+    expect(created).toMatchObject({
+      object: "payment_intent",
+      status: "requires_payment_method",
+      livemode: false,
+      capture_method: "automatic",
+    });
+    const pi = await stripe.paymentIntents.confirm(created.id, {
+      payment_method: pm.id,
+      expand: ["latest_charge.balance_transaction"],
+    });
     expect(pi.status).toBe("succeeded");
     expect(pi.amount_received).toBe(12_345);
     expect(pi.metadata).toEqual({ lot: "L-7" });
     const charge = pi.latest_charge as Stripe.Charge;
     expect(charge.id).toMatch(/^ch_/);
-    expect(charge).toMatchObject({ status: "succeeded", paid: true, captured: true, amount_captured: 12_345, transfer_group: "lot-7" });
+    expect(charge).toMatchObject({
+      status: "succeeded",
+      paid: true,
+      captured: true,
+      amount_captured: 12_345,
+      transfer_group: "lot-7",
+    });
     const txn = charge.balance_transaction as Stripe.BalanceTransaction;
     // 2.9 % of 12 345 = 357.9 → 358, + 30
-    expect(txn).toMatchObject({ object: "balance_transaction", type: "charge", amount: 12_345, fee: 388, net: 11_957, source: charge.id });
+    expect(txn).toMatchObject({
+      object: "balance_transaction",
+      type: "charge",
+      amount: 12_345,
+      fee: 388,
+      net: 11_957,
+      source: charge.id,
+    });
     expect(txn.id).toMatch(/^txn_/);
     const again = await stripe.paymentIntents.retrieve(pi.id);
     expect(again.latest_charge).toBe(charge.id);
@@ -79,7 +108,9 @@ describe("payments", () => {
 
   it("answers a declined card with StripeCardError and decline_code, and leaves a failed charge", async () => {
     const pm = await card("4000000000000002");
-    const err = await caught(stripe.paymentIntents.create({ amount: 5000, currency: "usd", payment_method: pm.id, confirm: true }));
+    const err = await caught(
+      stripe.paymentIntents.create({ amount: 5000, currency: "usd", payment_method: pm.id, confirm: true }),
+    );
     expect(err).toBeInstanceOf(Stripe.errors.StripeCardError);
     expect(err.statusCode).toBe(402);
     expect(err.code).toBe("card_declined");
@@ -88,16 +119,28 @@ describe("payments", () => {
     expect(pi.status).toBe("requires_payment_method");
     expect(pi.last_payment_error?.decline_code).toBe("generic_decline");
     const charge = await stripe.charges.retrieve(pi.latest_charge as string);
-    expect(charge).toMatchObject({ status: "failed", paid: false, balance_transaction: null, failure_code: "card_declined" });
+    expect(charge).toMatchObject({
+      status: "failed",
+      paid: false,
+      balance_transaction: null,
+      failure_code: "card_declined",
+    });
   });
 
   it("stops at requires_action and pays once the test authentication is completed", async () => {
     const pm = await card("4000002500003155");
-    const pi = await stripe.paymentIntents.create({ amount: 7000, currency: "usd", payment_method: pm.id, confirm: true });
+    const pi = await stripe.paymentIntents.create({
+      amount: 7000,
+      currency: "usd",
+      payment_method: pm.id,
+      confirm: true,
+    });
     expect(pi.status).toBe("requires_action");
     expect(pi.next_action?.type).toBe("use_stripe_sdk");
     expect(pi.latest_charge).toBeNull();
-    const done = (await stripe.rawRequest("POST", `/_fake/payment_intents/${pi.id}/authenticate`, { outcome: "succeed" })) as unknown as Stripe.PaymentIntent;
+    const done = (await stripe.rawRequest("POST", `/_fake/payment_intents/${pi.id}/authenticate`, {
+      outcome: "succeed",
+    })) as unknown as Stripe.PaymentIntent;
     expect(done.status).toBe("succeeded");
     const charge = await stripe.charges.retrieve((await stripe.paymentIntents.retrieve(pi.id)).latest_charge as string);
     expect(charge.payment_method_details?.card?.three_d_secure?.result).toBe("authenticated");
@@ -119,7 +162,11 @@ describe("payments", () => {
     const page = await fetch(url);
     expect(page.status).toBe(200);
     expect(await page.text()).toContain('value="succeed"');
-    const res = await fetch(url, { method: "POST", body: new URLSearchParams({ outcome: "succeed" }), redirect: "manual" });
+    const res = await fetch(url, {
+      method: "POST",
+      body: new URLSearchParams({ outcome: "succeed" }),
+      redirect: "manual",
+    });
     expect(res.status).toBe(303);
     const back = new URL(res.headers.get("location")!);
     expect(back.pathname).toBe("/checkout/done");
@@ -130,7 +177,12 @@ describe("payments", () => {
 
   it("returns a failed authentication to requires_payment_method", async () => {
     const pm = await card("4000000000003220");
-    const pi = await stripe.paymentIntents.create({ amount: 6000, currency: "usd", payment_method: pm.id, confirm: true });
+    const pi = await stripe.paymentIntents.create({
+      amount: 6000,
+      currency: "usd",
+      payment_method: pm.id,
+      confirm: true,
+    });
     const res = await fetch(`${fake.url}/_fake/payment_intents/${pi.id}/authenticate`, {
       method: "POST",
       headers: { "content-type": "application/json" },
@@ -139,27 +191,43 @@ describe("payments", () => {
     const failed = (await res.json()) as Stripe.PaymentIntent;
     expect(failed.status).toBe("requires_payment_method");
     expect(failed.last_payment_error?.code).toBe("payment_intent_authentication_failure");
-    const twice = await fetch(`${fake.url}/_fake/payment_intents/${pi.id}/authenticate`, { method: "POST", body: new URLSearchParams({ outcome: "succeed" }) });
+    const twice = await fetch(`${fake.url}/_fake/payment_intents/${pi.id}/authenticate`, {
+      method: "POST",
+      body: new URLSearchParams({ outcome: "succeed" }),
+    });
     expect(twice.status).toBe(400);
   });
 
   it("a confirmation with another card supersedes a pending authentication, which can then never complete", async () => {
     // The processor's documented practice: confirming a PaymentIntent again with a new payment method replaces
     // the next_action of the earlier confirmation [Stripe API reference, "Confirm a PaymentIntent"].
-    const pi = await stripe.paymentIntents.create({ amount: 5_000, currency: "usd", payment_method: (await card("4000002500003155")).id, confirm: true, return_url: "http://127.0.0.1:3000/done" });
+    const pi = await stripe.paymentIntents.create({
+      amount: 5_000,
+      currency: "usd",
+      payment_method: (await card("4000002500003155")).id,
+      confirm: true,
+      return_url: "http://127.0.0.1:3000/done",
+    });
     const oldPage = pi.next_action!.redirect_to_url!.url!;
     const oldAuth = oldPage.split("/").at(-1)!;
     const second = await stripe.paymentIntents.confirm(pi.id, { payment_method: (await card("4000000000003220")).id });
     expect(second.status).toBe("requires_action");
     expect(second.next_action!.redirect_to_url!.url).not.toBe(oldPage);
     expect((await fetch(oldPage)).status).toBe(409);
-    const stale = await fetch(`${fake.url}/_fake/payment_intents/${pi.id}/authenticate`, { method: "POST", body: new URLSearchParams({ outcome: "succeed", authentication: oldAuth }) });
+    const stale = await fetch(`${fake.url}/_fake/payment_intents/${pi.id}/authenticate`, {
+      method: "POST",
+      body: new URLSearchParams({ outcome: "succeed", authentication: oldAuth }),
+    });
     expect(stale.status).toBe(400);
     expect((await stripe.paymentIntents.retrieve(pi.id)).status).toBe("requires_action");
     // Paid with a third card: the second check is gone too, and only one charge succeeded.
     const paidNow = await stripe.paymentIntents.confirm(pi.id, { payment_method: (await card("4242424242424242")).id });
     expect(paidNow.status).toBe("succeeded");
-    const late = await fetch(second.next_action!.redirect_to_url!.url!, { method: "POST", body: new URLSearchParams({ outcome: "succeed" }), redirect: "manual" });
+    const late = await fetch(second.next_action!.redirect_to_url!.url!, {
+      method: "POST",
+      body: new URLSearchParams({ outcome: "succeed" }),
+      redirect: "manual",
+    });
     expect(late.status).toBe(400);
     const charges = await stripe.charges.list({ payment_intent: pi.id });
     expect(charges.data.filter((c) => c.status === "succeeded")).toHaveLength(1);
@@ -168,7 +236,10 @@ describe("payments", () => {
   it("holds with capture_method=manual and captures part of it", async () => {
     const pi = await paid(10_000, { capture_method: "manual" });
     expect(pi).toMatchObject({ status: "requires_capture", amount_capturable: 10_000, amount_received: 0 });
-    const captured = await stripe.paymentIntents.capture(pi.id, { amount_to_capture: 4000, expand: ["latest_charge.balance_transaction"] });
+    const captured = await stripe.paymentIntents.capture(pi.id, {
+      amount_to_capture: 4000,
+      expand: ["latest_charge.balance_transaction"],
+    });
     expect(captured.status).toBe("succeeded");
     const txn = (captured.latest_charge as Stripe.Charge).balance_transaction as Stripe.BalanceTransaction;
     expect(txn).toMatchObject({ amount: 4000, fee: 146, net: 3854 });
@@ -184,7 +255,9 @@ describe("payments", () => {
   });
 
   it("refuses bad input in Stripe's error shape", async () => {
-    const badNumber = await caught(stripe.paymentMethods.create({ type: "card", card: { number: "4242424242424241", ...EXP } }));
+    const badNumber = await caught(
+      stripe.paymentMethods.create({ type: "card", card: { number: "4242424242424241", ...EXP } }),
+    );
     expect(badNumber).toBeInstanceOf(Stripe.errors.StripeCardError);
     expect(badNumber.code).toBe("invalid_number");
     const missing = await caught(stripe.paymentIntents.retrieve("pi_doesnotexist"));
@@ -206,7 +279,12 @@ describe("payments", () => {
 
   it("accepts only the configured key when one is given", async () => {
     const strictDir = mkdtempSync(path.join(tmpdir(), "stripe-fake-key-"));
-    const strict = await startStripeFake({ portRange: PORTS, dataDir: strictDir, webhookSecret: SECRET, apiKey: "sk_test_only_this" });
+    const strict = await startStripeFake({
+      portRange: PORTS,
+      dataDir: strictDir,
+      webhookSecret: SECRET,
+      apiKey: "sk_test_only_this",
+    });
     try {
       expect((await client(strict.port, "sk_test_only_this").balance.retrieve()).object).toBe("balance");
       const err = await caught(client(strict.port, "sk_test_another").balance.retrieve());
@@ -221,13 +299,21 @@ describe("payments", () => {
   it("pages lists newest first with limit and starting_after", async () => {
     const group = `page-${Date.now()}`;
     const ids: string[] = [];
-    for (let i = 0; i < 3; i++) ids.push((await stripe.paymentIntents.create({ amount: 1000 + i, currency: "usd", transfer_group: group })).id);
-    const first = await stripe.paymentIntents.list({ limit: 2, transfer_group: group } as Stripe.PaymentIntentListParams);
+    for (let i = 0; i < 3; i++)
+      ids.push((await stripe.paymentIntents.create({ amount: 1000 + i, currency: "usd", transfer_group: group })).id);
+    const first = await stripe.paymentIntents.list({
+      limit: 2,
+      transfer_group: group,
+    } as Stripe.PaymentIntentListParams);
     expect(first.object).toBe("list");
     expect(first.url).toBe("/v1/payment_intents");
     expect(first.data.map((x) => x.id)).toEqual([ids[2], ids[1]]);
     expect(first.has_more).toBe(true);
-    const second = await stripe.paymentIntents.list({ limit: 2, starting_after: ids[1], transfer_group: group } as Stripe.PaymentIntentListParams);
+    const second = await stripe.paymentIntents.list({
+      limit: 2,
+      starting_after: ids[1],
+      transfer_group: group,
+    } as Stripe.PaymentIntentListParams);
     expect(second.data.map((x) => x.id)).toEqual([ids[0]]);
     expect(second.has_more).toBe(false);
   });
@@ -236,11 +322,19 @@ describe("payments", () => {
 describe("idempotency", () => {
   it("replays the same key and refuses it with other parameters or on another endpoint", async () => {
     const key = `lot:1:charge:${Date.now()}`;
-    const a = await stripe.paymentIntents.create({ amount: 2500, currency: "usd", metadata: { lot: "1" } }, { idempotencyKey: key });
-    const b = await stripe.paymentIntents.create({ amount: 2500, currency: "usd", metadata: { lot: "1" } }, { idempotencyKey: key });
+    const a = await stripe.paymentIntents.create(
+      { amount: 2500, currency: "usd", metadata: { lot: "1" } },
+      { idempotencyKey: key },
+    );
+    const b = await stripe.paymentIntents.create(
+      { amount: 2500, currency: "usd", metadata: { lot: "1" } },
+      { idempotencyKey: key },
+    );
     expect(b.id).toBe(a.id);
     expect(b.lastResponse.headers["idempotent-replayed"]).toBe("true");
-    const other = await caught(stripe.paymentIntents.create({ amount: 2600, currency: "usd", metadata: { lot: "1" } }, { idempotencyKey: key }));
+    const other = await caught(
+      stripe.paymentIntents.create({ amount: 2600, currency: "usd", metadata: { lot: "1" } }, { idempotencyKey: key }),
+    );
     expect(other).toBeInstanceOf(Stripe.errors.StripeIdempotencyError);
     expect(other.statusCode).toBe(400);
     const elsewhere = await caught(stripe.refunds.create({ payment_intent: a.id }, { idempotencyKey: key }));
@@ -265,7 +359,12 @@ describe("idempotency", () => {
 
 describe("connected accounts, transfers, reversals, refunds", () => {
   it("moves the platform balance with charges, transfers and reversals", async () => {
-    const account = await stripe.accounts.create({ type: "custom", country: "US", capabilities: { transfers: { requested: true } }, metadata: { dealer: "d-1" } });
+    const account = await stripe.accounts.create({
+      type: "custom",
+      country: "US",
+      capabilities: { transfers: { requested: true } },
+      metadata: { dealer: "d-1" },
+    });
     expect(account.id).toMatch(/^acct_/);
     expect(account.capabilities?.transfers).toBe("active");
     expect((await stripe.accounts.retrieve(account.id)).metadata).toEqual({ dealer: "d-1" });
@@ -275,7 +374,13 @@ describe("connected accounts, transfers, reversals, refunds", () => {
     const afterCharge = await available();
     expect(afterCharge - before).toBe(19_390);
 
-    const transfer = await stripe.transfers.create({ amount: 15_000, currency: "usd", destination: account.id, transfer_group: "lot-20", metadata: { lot: "20" } });
+    const transfer = await stripe.transfers.create({
+      amount: 15_000,
+      currency: "usd",
+      destination: account.id,
+      transfer_group: "lot-20",
+      metadata: { lot: "20" },
+    });
     expect(transfer.id).toMatch(/^tr_/);
     expect(transfer).toMatchObject({ destination: account.id, amount_reversed: 0, reversed: false });
     expect(await available()).toBe(afterCharge - 15_000);
@@ -294,7 +399,12 @@ describe("connected accounts, transfers, reversals, refunds", () => {
     const txns = await stripe.balanceTransactions.list({ limit: 100 });
     const bySource = new Map(txns.data.map((x) => [x.source as string, x]));
     expect(bySource.get(transfer.id)).toMatchObject({ type: "transfer", amount: -15_000, fee: 0, net: -15_000 });
-    expect(bySource.get(reversal.id)).toMatchObject({ type: "transfer_refund", reporting_category: "transfer_reversal", amount: 4000, net: 4000 });
+    expect(bySource.get(reversal.id)).toMatchObject({
+      type: "transfer_refund",
+      reporting_category: "transfer_reversal",
+      amount: 4000,
+      net: 4000,
+    });
     expect(bySource.get(pi.latest_charge as string)).toMatchObject({ type: "charge", fee: 610, net: 19_390 });
     const onlyTransfers = await stripe.balanceTransactions.list({ type: "transfer", limit: 100 });
     expect(onlyTransfers.data.every((x) => x.type === "transfer")).toBe(true);
@@ -303,7 +413,9 @@ describe("connected accounts, transfers, reversals, refunds", () => {
 
   it("refuses a transfer larger than the available balance, and one to an account without the capability", async () => {
     const account = await stripe.accounts.create({ type: "express", capabilities: { transfers: { requested: true } } });
-    const err = await caught(stripe.transfers.create({ amount: (await available()) + 1, currency: "usd", destination: account.id }));
+    const err = await caught(
+      stripe.transfers.create({ amount: (await available()) + 1, currency: "usd", destination: account.id }),
+    );
     expect(err).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect(err.code).toBe("balance_insufficient");
     const bare = await stripe.accounts.create({ type: "custom" });
@@ -317,10 +429,22 @@ describe("connected accounts, transfers, reversals, refunds", () => {
     const account = await stripe.accounts.create({ type: "custom", capabilities: { transfers: { requested: true } } });
     const pi = await paid(8000);
     const charge = pi.latest_charge as string;
-    await stripe.transfers.create({ amount: 6000, currency: "usd", destination: account.id, source_transaction: charge });
-    const err = await caught(stripe.transfers.create({ amount: 2001, currency: "usd", destination: account.id, source_transaction: charge }));
+    await stripe.transfers.create({
+      amount: 6000,
+      currency: "usd",
+      destination: account.id,
+      source_transaction: charge,
+    });
+    const err = await caught(
+      stripe.transfers.create({ amount: 2001, currency: "usd", destination: account.id, source_transaction: charge }),
+    );
     expect(err.code).toBe("balance_insufficient");
-    const rest = await stripe.transfers.create({ amount: 2000, currency: "usd", destination: account.id, source_transaction: charge });
+    const rest = await stripe.transfers.create({
+      amount: 2000,
+      currency: "usd",
+      destination: account.id,
+      source_transaction: charge,
+    });
     expect(rest.source_transaction).toBe(charge);
   });
 

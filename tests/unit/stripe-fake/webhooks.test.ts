@@ -73,7 +73,11 @@ function tempDir(): string {
   return dir;
 }
 
-async function boot(dataDir: string, webhookUrl: string, extra: Partial<StripeFakeOptions> = {}): Promise<{ fake: StripeFake; stripe: Stripe }> {
+async function boot(
+  dataDir: string,
+  webhookUrl: string,
+  extra: Partial<StripeFakeOptions> = {},
+): Promise<{ fake: StripeFake; stripe: Stripe }> {
   const fake = await startStripeFake({
     portRange: PORTS,
     dataDir,
@@ -83,7 +87,13 @@ async function boot(dataDir: string, webhookUrl: string, extra: Partial<StripeFa
     ...extra,
   });
   cleanup.push(() => fake.close());
-  const stripe = new Stripe("sk_test_unit", { host: "127.0.0.1", port: fake.port, protocol: "http", maxNetworkRetries: 0, telemetry: false });
+  const stripe = new Stripe("sk_test_unit", {
+    host: "127.0.0.1",
+    port: fake.port,
+    protocol: "http",
+    maxNetworkRetries: 0,
+    telemetry: false,
+  });
   return { fake, stripe };
 }
 
@@ -95,7 +105,13 @@ async function receiver(statuses: number[] = []): Promise<Receiver> {
 
 async function pay(stripe: Stripe, number = "4242424242424242", amount = 4200): Promise<Stripe.PaymentIntent> {
   const pm = await stripe.paymentMethods.create({ type: "card", card: { number, cvc: "123", ...EXP } });
-  return stripe.paymentIntents.create({ amount, currency: "usd", payment_method: pm.id, confirm: true, metadata: { lot: "9" } });
+  return stripe.paymentIntents.create({
+    amount,
+    currency: "usd",
+    payment_method: pm.id,
+    confirm: true,
+    metadata: { lot: "9" },
+  });
 }
 
 type DeliveryRow = { event: string; state: string; attempts: number; type: string };
@@ -106,7 +122,11 @@ async function deliveries(fake: StripeFake, event: string): Promise<DeliveryRow[
 }
 
 /** Polls the fake until its record of `event`'s delivery satisfies `done` (the receiver has already answered). */
-async function deliveryWhere(fake: StripeFake, event: string, done: (row: DeliveryRow) => boolean): Promise<DeliveryRow> {
+async function deliveryWhere(
+  fake: StripeFake,
+  event: string,
+  done: (row: DeliveryRow) => boolean,
+): Promise<DeliveryRow> {
   for (let i = 0; i < 500; i++) {
     const [row] = await deliveries(fake, event);
     if (row && done(row)) return row;
@@ -157,7 +177,13 @@ describe("webhooks", () => {
     await hook.received(5);
     const types = hook.got.map((g) => g.event.type).sort();
     expect(types).toEqual(
-      ["payment_intent.payment_failed", "payment_intent.requires_action", "payment_intent.succeeded", "transfer.created", "transfer.reversed"].sort(),
+      [
+        "payment_intent.payment_failed",
+        "payment_intent.requires_action",
+        "payment_intent.succeeded",
+        "transfer.created",
+        "transfer.reversed",
+      ].sort(),
     );
     const reversed = hook.got.find((g) => g.event.type === "transfer.reversed")!.event.data.object as Stripe.Transfer;
     expect(reversed).toMatchObject({ id: transfer.id, amount_reversed: 500 });
@@ -176,7 +202,11 @@ describe("webhooks", () => {
     await stripe.refunds.create({ payment_intent: pi.id, amount: 1000 });
     await hook.received(4);
     expect(hook.got[3].event.type).toBe("charge.refunded");
-    expect(hook.got[3].event.data.object).toMatchObject({ id: pi.latest_charge, amount_refunded: 1000, refunded: false });
+    expect(hook.got[3].event.data.object).toMatchObject({
+      id: pi.latest_charge,
+      amount_refunded: 1000,
+      refunded: false,
+    });
   });
 
   it("gives up after maxAttempts and sends again on request", async () => {
@@ -203,7 +233,10 @@ describe("restart", () => {
     // A long retry delay: after the first failure the delivery waits, pending, until the restart.
     const first = await boot(dir, hook.url, { webhookRetry: { baseMs: 600_000, maxAttempts: 8 } });
     const pi = await pay(first.stripe, "4242424242424242", 9100);
-    const account = await first.stripe.accounts.create({ type: "custom", capabilities: { transfers: { requested: true } } });
+    const account = await first.stripe.accounts.create({
+      type: "custom",
+      capabilities: { transfers: { requested: true } },
+    });
     await hook.received(1);
     const eventId = hook.got[0].event.id;
     // The failed attempt is on record and the next one is ten minutes away when the fake stops.
@@ -251,9 +284,17 @@ describe("card data", () => {
     const numbers = ["4242424242424242", "4000000000000002", "4000002500003155", "4000000000009995"];
     for (const [i, number] of numbers.entries()) {
       const key = `pm-${i}`;
-      const pm = await stripe.paymentMethods.create({ type: "card", card: { number, cvc: "123", ...EXP } }, { idempotencyKey: key });
-      await stripe.paymentMethods.create({ type: "card", card: { number, cvc: "123", ...EXP } }, { idempotencyKey: key }); // replayed
-      await stripe.paymentIntents.create({ amount: 1000, currency: "usd", payment_method: pm.id, confirm: true }).catch(() => undefined);
+      const pm = await stripe.paymentMethods.create(
+        { type: "card", card: { number, cvc: "123", ...EXP } },
+        { idempotencyKey: key },
+      );
+      await stripe.paymentMethods.create(
+        { type: "card", card: { number, cvc: "123", ...EXP } },
+        { idempotencyKey: key },
+      ); // replayed
+      await stripe.paymentIntents
+        .create({ amount: 1000, currency: "usd", payment_method: pm.id, confirm: true })
+        .catch(() => undefined);
     }
     await hook.received(4);
     await fake.close();

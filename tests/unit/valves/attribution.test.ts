@@ -16,19 +16,52 @@ import { constructionFeaturesSchema, type ConstructionFeatures } from "../../../
 const HABITS: Record<string, { name: string; features: ConstructionFeatures }> = {
   aldergrove: {
     name: "Aldergrove Electron Works",
-    features: { plateShape: "box", plateColour: "grey", plateSurface: "smooth", getterShape: "halo", getterPosition: "top", micaCount: 3, bulbShape: "miniature" },
+    features: {
+      plateShape: "box",
+      plateColour: "grey",
+      plateSurface: "smooth",
+      getterShape: "halo",
+      getterPosition: "top",
+      micaCount: 3,
+      bulbShape: "miniature",
+    },
   },
   kestrel: {
     name: "Kestrel Valve Company",
-    features: { plateShape: "flat", plateColour: "black", plateSurface: "ribbed", getterShape: "d-shape", getterPosition: "side", micaCount: 2, bulbShape: "miniature" },
+    features: {
+      plateShape: "flat",
+      plateColour: "black",
+      plateSurface: "ribbed",
+      getterShape: "d-shape",
+      getterPosition: "side",
+      micaCount: 2,
+      bulbShape: "miniature",
+    },
   },
   pellham: {
     name: "Pellham Radio Tube Corp.",
-    features: { plateShape: "box", plateColour: "grey", plateSurface: "dimpled", plateFastenerCount: 2, getterShape: "square", getterPosition: "top", micaCount: 2, bulbShape: "miniature" },
+    features: {
+      plateShape: "box",
+      plateColour: "grey",
+      plateSurface: "dimpled",
+      plateFastenerCount: 2,
+      getterShape: "square",
+      getterPosition: "top",
+      micaCount: 2,
+      bulbShape: "miniature",
+    },
   },
   vireo: {
     name: "Vireo Lamp & Valve",
-    features: { plateShape: "flat", plateColour: "bright", plateSurface: "finned", getterShape: "disc", getterPosition: "bottom", micaCount: 2, bulbShape: "miniature" },
+    features: {
+      plateShape: "flat",
+      plateColour: "bright",
+      plateSurface: "finned",
+      getterShape: "disc",
+      getterPosition: "bottom",
+      micaCount: 2,
+      bulbShape: "miniature",
+    },
   },
 };
 const PROFILES = Object.entries(HABITS).map(([id, h]) =>
@@ -75,15 +108,30 @@ describe("rankMakers", () => {
   });
 
   it("no high confidence when another maker's reference fits nearly as well", () => {
-    const twin = profileFromExample({ profileId: "twin:12AX7", makerId: "twin", makerName: "Demo Twin Works" }, HABITS.aldergrove.features);
+    const twin = profileFromExample(
+      { profileId: "twin:12AX7", makerId: "twin", makerName: "Demo Twin Works" },
+      HABITS.aldergrove.features,
+    );
     const [top] = rankMakers(HABITS.aldergrove.features, [...PROFILES, twin]);
     expect(top.confidence).toBe("medium");
     expect(top.reasons.join(" ")).toMatch(/fits nearly as well/);
   });
 
   it("skips profiles of another type family and caps confidence outside a profile's era", () => {
-    const other = profileFromExample({ profileId: "aldergrove:6SN7GT", makerId: "aldergrove", makerName: HABITS.aldergrove.name, typeFamily: "6SN7GT" }, HABITS.kestrel.features);
-    const ranking = rankMakers(HABITS.kestrel.features, [other, ...PROFILES.filter((p) => p.makerId !== "aldergrove")], { typeFamily: "12AX7" });
+    const other = profileFromExample(
+      {
+        profileId: "aldergrove:6SN7GT",
+        makerId: "aldergrove",
+        makerName: HABITS.aldergrove.name,
+        typeFamily: "6SN7GT",
+      },
+      HABITS.kestrel.features,
+    );
+    const ranking = rankMakers(
+      HABITS.kestrel.features,
+      [other, ...PROFILES.filter((p) => p.makerId !== "aldergrove")],
+      { typeFamily: "12AX7" },
+    );
     expect(ranking.map((c) => c.makerId)).not.toContain("aldergrove");
     const dated = { ...PROFILES[1], era: { from: 1955, to: 1965 } };
     const [late] = rankMakers(HABITS.kestrel.features, [dated], { year: 1978 });
@@ -92,7 +140,12 @@ describe("rankMakers", () => {
 });
 
 describe("buildReferenceProfiles and unconfirmedShelf", () => {
-  const confirmed = (itemId: string, maker: string, year: number, features: ConstructionFeatures): AttributableItem => ({
+  const confirmed = (
+    itemId: string,
+    maker: string,
+    year: number,
+    features: ConstructionFeatures,
+  ): AttributableItem => ({
     itemId,
     typeFamily: "12AX7",
     year,
@@ -101,7 +154,12 @@ describe("buildReferenceProfiles and unconfirmedShelf", () => {
     makerId: maker,
     makerName: HABITS[maker].name,
   });
-  const unconfirmed = (itemId: string, features: ConstructionFeatures): AttributableItem => ({ itemId, typeFamily: "12AX7", features, basis: "unconfirmed" });
+  const unconfirmed = (itemId: string, features: ConstructionFeatures): AttributableItem => ({
+    itemId,
+    typeFamily: "12AX7",
+    features,
+    basis: "unconfirmed",
+  });
 
   it("aggregates feature frequencies per maker and type from source-code-confirmed items only", () => {
     const profiles = buildReferenceProfiles([
@@ -111,7 +169,12 @@ describe("buildReferenceProfiles and unconfirmedShelf", () => {
     ]);
     expect(profiles).toHaveLength(1);
     const [pellham] = profiles;
-    expect(pellham).toMatchObject({ makerId: "pellham", typeFamily: "12AX7", sampleCount: 2, era: { from: 1958, to: 1963 } });
+    expect(pellham).toMatchObject({
+      makerId: "pellham",
+      typeFamily: "12AX7",
+      sampleCount: 2,
+      era: { from: 1958, to: 1963 },
+    });
     expect(pellham.features.plateFastenerCount).toEqual({ "2": 1, "3": 1 });
     expect(pellham.features.getterShape).toEqual({ square: 2 });
   });
@@ -137,7 +200,10 @@ describe("buildReferenceProfiles and unconfirmedShelf", () => {
     expect(before.proposals).toEqual([]);
     expect(before.remaining.map((r) => r.itemId)).toEqual(["u1", "u2", "u3"]);
 
-    const evidence = [confirmed("c1", "pellham", 1959, HABITS.pellham.features), confirmed("c2", "vireo", 1961, HABITS.vireo.features)];
+    const evidence = [
+      confirmed("c1", "pellham", 1959, HABITS.pellham.features),
+      confirmed("c2", "vireo", 1961, HABITS.vireo.features),
+    ];
     const after = unconfirmedShelf(shelf, buildReferenceProfiles(evidence));
     expect(after.proposals.map((p) => [p.itemId, p.candidate.makerId])).toEqual([
       ["u1", "pellham"],
@@ -153,8 +219,18 @@ describe("attribute: label brand kept apart from the attributed maker [CTP: labe
   const pellhamRanking = rankMakers(HABITS.pellham.features, PROFILES);
 
   it("demo story: a 'Fairmont Home Radio' tube with Pellham's code and construction is Pellham-made, high confidence", () => {
-    const result = attribute({ labelBrand: "Fairmont Home Radio", sourceCodeMaker: { makerId: "pellham", makerName: HABITS.pellham.name }, ranking: pellhamRanking });
-    expect(result).toMatchObject({ labelBrand: "Fairmont Home Radio", makerId: "pellham", basis: "source-code-confirmed", confidence: "high", disputed: false });
+    const result = attribute({
+      labelBrand: "Fairmont Home Radio",
+      sourceCodeMaker: { makerId: "pellham", makerName: HABITS.pellham.name },
+      ranking: pellhamRanking,
+    });
+    expect(result).toMatchObject({
+      labelBrand: "Fairmont Home Radio",
+      makerId: "pellham",
+      basis: "source-code-confirmed",
+      confidence: "high",
+      disputed: false,
+    });
   });
 
   it("a source code alone is evidence, not proof: medium [EIA-476: code may name the brand owner]", () => {
@@ -163,14 +239,25 @@ describe("attribute: label brand kept apart from the attributed maker [CTP: labe
   });
 
   it("source code and construction disagreeing is marked disputed with low confidence", () => {
-    const result = attribute({ labelBrand: "Kestrel Valve Company", sourceCodeMaker: { makerId: "kestrel", makerName: HABITS.kestrel.name }, ranking: pellhamRanking });
+    const result = attribute({
+      labelBrand: "Kestrel Valve Company",
+      sourceCodeMaker: { makerId: "kestrel", makerName: HABITS.kestrel.name },
+      ranking: pellhamRanking,
+    });
     expect(result).toMatchObject({ makerId: "kestrel", confidence: "low", disputed: true });
     expect(result.reasons.join(" ")).toMatch(/Pellham/);
   });
 
   it("construction alone gives construction-matched; weak evidence leaves it unconfirmed", () => {
-    expect(attribute({ ranking: pellhamRanking })).toMatchObject({ basis: "construction-matched", makerId: "pellham", confidence: "high" });
-    const weak = attribute({ labelBrand: "Tri-County Parts", ranking: rankMakers({ plateColour: "bright" }, PROFILES) });
+    expect(attribute({ ranking: pellhamRanking })).toMatchObject({
+      basis: "construction-matched",
+      makerId: "pellham",
+      confidence: "high",
+    });
+    const weak = attribute({
+      labelBrand: "Tri-County Parts",
+      ranking: rankMakers({ plateColour: "bright" }, PROFILES),
+    });
     expect(weak).toMatchObject({ basis: "unconfirmed", labelBrand: "Tri-County Parts", confidence: null });
     expect(weak.makerId).toBeUndefined();
   });

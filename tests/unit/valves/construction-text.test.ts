@@ -4,7 +4,14 @@ import { featuresFromText, featuresToText } from "../../../lib/valves/constructi
 // Vocabulary round trips: our own feature names [SUG]; no external source applies.
 describe("construction features as text", () => {
   it("reads names in any case and values with spaces, and keeps unknowns apart", () => {
-    const { features, ignored } = featuresFromText({ PlateColour: "Grey", getter_shape: "d shape", micacount: "3", metalSkirt: "yes", colourOfBox: "red", plateShape: "oval" });
+    const { features, ignored } = featuresFromText({
+      PlateColour: "Grey",
+      getter_shape: "d shape",
+      micacount: "3",
+      metalSkirt: "yes",
+      colourOfBox: "red",
+      plateShape: "oval",
+    });
     expect(features).toEqual({ plateColour: "grey", getterShape: "d-shape", micaCount: 3, metalSkirt: true });
     expect(ignored.sort()).toEqual(["colourOfBox", "plateShape=oval"]);
   });

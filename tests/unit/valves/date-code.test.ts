@@ -100,9 +100,15 @@ describe("readDateCode: three digits (YWW)", () => {
   });
 
   it("outside era evidence ranks or rules out decades", () => {
-    const favoured = readDateCode("512", { ...TWELVE_AX7, eraEvidence: [{ earliest: 1960, latest: 1969, source: "box style" }] });
+    const favoured = readDateCode("512", {
+      ...TWELVE_AX7,
+      eraEvidence: [{ earliest: 1960, latest: 1969, source: "box style" }],
+    });
     expect(years(favoured)[0]).toBe(1965);
-    const ruled = readDateCode("512", { ...TWELVE_AX7, eraEvidence: [{ latest: 1959, source: "shouldered bulb", rulesOut: true }] });
+    const ruled = readDateCode("512", {
+      ...TWELVE_AX7,
+      eraEvidence: [{ latest: 1959, source: "shouldered bulb", rulesOut: true }],
+    });
     expect(years(ruled)).toEqual([1955]);
   });
 
@@ -130,7 +136,7 @@ describe("readDateCode: not a date code", () => {
 });
 
 describe("parseEuropeanDateLine [CTP/MEM: factory symbol + year digit + month letter + week digit]", () => {
-  it("splits factory symbol, year digit, month letter and week digit (\"¤\" is an invented factory symbol)", () => {
+  it('splits factory symbol, year digit, month letter and week digit ("¤" is an invented factory symbol)', () => {
     const result = parseEuropeanDateLine("¤7C2", { introducedYear: 1953 });
     if (!result.ok) throw new Error(result.error.message);
     expect(result).toMatchObject({ factorySymbol: "¤", yearDigit: 7, monthLetter: "C", weekDigit: 2 });
@@ -148,14 +154,22 @@ describe("parseEuropeanDateLine [CTP/MEM: factory symbol + year digit + month le
     const plain = parseEuropeanDateLine("X5L", { introducedYear: 1950, endOfProductionYear: 1959 });
     if (!plain.ok) throw new Error("expected a reading");
     expect(plain.readings.map((r) => r.month)).toEqual([12]);
-    const both = parseEuropeanDateLine("X5K", { introducedYear: 1950, endOfProductionYear: 1959, schemes: ["A-L", "skip-I"] });
+    const both = parseEuropeanDateLine("X5K", {
+      introducedYear: 1950,
+      endOfProductionYear: 1959,
+      schemes: ["A-L", "skip-I"],
+    });
     if (!both.ok) throw new Error("expected a reading");
     expect(both.readings.map((r) => [r.month, r.scheme])).toEqual([
       [11, "A-L"],
       [10, "skip-I"],
     ]);
     expect(both.flags).toContain("month-scheme-ambiguous");
-    const sameMonth = parseEuropeanDateLine("X5C", { introducedYear: 1950, endOfProductionYear: 1959, schemes: ["A-L", "skip-I"] });
+    const sameMonth = parseEuropeanDateLine("X5C", {
+      introducedYear: 1950,
+      endOfProductionYear: 1959,
+      schemes: ["A-L", "skip-I"],
+    });
     if (sameMonth.ok) expect(sameMonth.readings).toHaveLength(1);
   });
 

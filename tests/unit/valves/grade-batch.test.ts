@@ -37,7 +37,15 @@ describe("gradeBatch", () => {
   });
 
   it("never matches emission readings against anything [CTP]", () => {
-    const r = gradeBatch({ measure: "emission", chartNewValue: 100, tolerancePct: 5, tubes: [{ id: "e", sections: [90] }, { id: "f", sections: [91] }] });
+    const r = gradeBatch({
+      measure: "emission",
+      chartNewValue: 100,
+      tolerancePct: 5,
+      tubes: [
+        { id: "e", sections: [90] },
+        { id: "f", sections: [91] },
+      ],
+    });
     expect(r.pairs).toBeNull();
     expect(r.grades.every((g) => g.grade === "emission-ok")).toBe(true);
   });

@@ -86,7 +86,9 @@ describe("gradeReading", () => {
     const result = gradeReading({ measure: "gm", sections: [1000, 5000], chartNewValue: [1000, 6250] });
     expect(result.percentOfNew).toEqual([100, 80]);
     expect(result.grade).toBe("good");
-    expect(() => gradeReading({ measure: "gm", sections: [1000], chartNewValue: [1000, 2000] })).toThrow(GradingInputError);
+    expect(() => gradeReading({ measure: "gm", sections: [1000], chartNewValue: [1000, 2000] })).toThrow(
+      GradingInputError,
+    );
   });
 
   it("emission readings pass or fail only, never a Gm band [CTP: emission testers give relative good/bad]", () => {
@@ -104,7 +106,10 @@ describe("gradeReading", () => {
   it("refuses nothing-to-grade input and disordered thresholds", () => {
     expect(() => gradeReading({ measure: "gm", sections: [], chartNewValue: 1600 })).toThrow(GradingInputError);
     expect(() =>
-      gradeReading({ measure: "gm", sections: [1200], chartNewValue: 1600 }, { ...HOUSE_DEFAULT_THRESHOLDS, goodMinPct: 120 }),
+      gradeReading(
+        { measure: "gm", sections: [1200], chartNewValue: 1600 },
+        { ...HOUSE_DEFAULT_THRESHOLDS, goodMinPct: 120 },
+      ),
     ).toThrow(GradingInputError);
   });
 

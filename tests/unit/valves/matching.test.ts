@@ -32,7 +32,15 @@ function bruteForceMax(tubes: MatchReading[], k: number, tolPct: number, onIp: b
   const n = tubes.length;
   const memo = new Map<number, number>();
   const fits = (members: number[]) =>
-    fitsRef(members.map((m) => tubes[m].gm), tolPct) && (!onIp || fitsRef(members.map((m) => tubes[m].plateCurrentMa!), tolPct));
+    fitsRef(
+      members.map((m) => tubes[m].gm),
+      tolPct,
+    ) &&
+    (!onIp ||
+      fitsRef(
+        members.map((m) => tubes[m].plateCurrentMa!),
+        tolPct,
+      ));
   const best = (used: number): number => {
     if (memo.has(used)) return memo.get(used)!;
     let i = 0;
@@ -79,8 +87,19 @@ function checkSets(tubes: MatchReading[], sets: { ids: string[] }[], k: number, 
       seen.add(id);
     }
     const members = set.ids.map((id) => byId.get(id)!);
-    expect(fitsRef(members.map((m) => m.gm), tolPct)).toBe(true);
-    if (onIp) expect(fitsRef(members.map((m) => m.plateCurrentMa!), tolPct)).toBe(true);
+    expect(
+      fitsRef(
+        members.map((m) => m.gm),
+        tolPct,
+      ),
+    ).toBe(true);
+    if (onIp)
+      expect(
+        fitsRef(
+          members.map((m) => m.plateCurrentMa!),
+          tolPct,
+        ),
+      ).toBe(true);
   }
 }
 
@@ -120,9 +139,19 @@ describe("findMatchedPairs", () => {
   });
 
   it("rejects duplicate ids, bad Gm and missing plate current", () => {
-    expect(() => findMatchedPairs([{ id: "a", gm: 1 }, { id: "a", gm: 1 }], { tolerancePct: 5 })).toThrow(MatchingInputError);
+    expect(() =>
+      findMatchedPairs(
+        [
+          { id: "a", gm: 1 },
+          { id: "a", gm: 1 },
+        ],
+        { tolerancePct: 5 },
+      ),
+    ).toThrow(MatchingInputError);
     expect(() => findMatchedPairs([{ id: "a", gm: 0 }], { tolerancePct: 5 })).toThrow(MatchingInputError);
-    expect(() => findMatchedPairs([{ id: "a", gm: 10 }], { tolerancePct: 5, onPlateCurrent: true })).toThrow(/plate current/);
+    expect(() => findMatchedPairs([{ id: "a", gm: 10 }], { tolerancePct: 5, onPlateCurrent: true })).toThrow(
+      /plate current/,
+    );
     expect(() => findMatchedPairs([], { tolerancePct: 0 })).toThrow(MatchingInputError);
     expect(() => findMatchedQuads([], { tolerancePct: 5, exactQuadLimit: 40 })).toThrow(MatchingInputError);
   });

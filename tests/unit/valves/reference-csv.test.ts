@@ -6,7 +6,10 @@ import { SEED_REFERENCE_TYPES } from "@/lib/valves/seed";
 const strip = (r: (typeof SEED_REFERENCE_TYPES)[number]) => {
   const { hazards: _h, introduced: _i, largeEnvelope: _l, ...rest } = r;
   const c = rest.characteristics;
-  if (c?.kind !== "amplifier") { const { characteristics: _c, ...noC } = rest; return noC; }
+  if (c?.kind !== "amplifier") {
+    const { characteristics: _c, ...noC } = rest;
+    return noC;
+  }
   const { cathodeResistorOhms: _rk, approximate: _a, ...amp } = c;
   return { ...rest, characteristics: amp };
 };
@@ -34,6 +37,8 @@ describe("reference CSV", () => {
   });
 
   it("refuses unknown and missing columns on line 1", () => {
-    expect(parseReferenceCsv("designation,kind,colour\n6AU6,pentode,red\n").errors.map((e) => e.line)).toEqual([1, 1, 1]);
+    expect(parseReferenceCsv("designation,kind,colour\n6AU6,pentode,red\n").errors.map((e) => e.line)).toEqual([
+      1, 1, 1,
+    ]);
   });
 });

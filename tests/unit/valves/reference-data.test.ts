@@ -27,7 +27,13 @@ describe("check values, each with its source tag", () => {
 
   it("9.11 12AX7 at 250 V, -2 V: µ 100, Gm 1,600 µmho, Ip 1.2 mA", () => {
     // [REG ✓]
-    expect(amp(row("12AX7"))).toMatchObject({ plateVolts: 250, gridVolts: -2, mu: 100, gmMicromho: 1600, plateCurrentMa: 1.2 });
+    expect(amp(row("12AX7"))).toMatchObject({
+      plateVolts: 250,
+      gridVolts: -2,
+      mu: 100,
+      gmMicromho: 1600,
+      plateCurrentMa: 1.2,
+    });
     expect(row("12AX7").source).toBe("REG ✓");
   });
 
@@ -46,7 +52,9 @@ describe("check values, each with its source tag", () => {
 
   it("9.13 triodes with rp listed obey |µ - Gm·rp| / µ <= 5 %", () => {
     // [LS53] µ ≈ Gm × rp; 12AX7: 0.0016 × 62,500 = 100
-    const triodes = SEED_REFERENCE_TYPES.filter((r) => r.characteristics?.kind === "amplifier" && r.characteristics.rpOhms !== undefined);
+    const triodes = SEED_REFERENCE_TYPES.filter(
+      (r) => r.characteristics?.kind === "amplifier" && r.characteristics.rpOhms !== undefined,
+    );
     expect(triodes.length).toBeGreaterThanOrEqual(15);
     for (const r of triodes) {
       const c = amp(r);
@@ -146,7 +154,14 @@ describe("structure", () => {
   it("has at least 45 types across receiving, audio, rectifier and regulator kinds", () => {
     expect(SEED_REFERENCE_TYPES.length).toBeGreaterThanOrEqual(45);
     const kinds = new Set(SEED_REFERENCE_TYPES.map((r) => r.kind));
-    for (const k of ["dual-triode", "pentode", "beam-tetrode", "power-pentode", "full-wave-rectifier", "voltage-regulator"]) {
+    for (const k of [
+      "dual-triode",
+      "pentode",
+      "beam-tetrode",
+      "power-pentode",
+      "full-wave-rectifier",
+      "voltage-regulator",
+    ]) {
       expect(kinds.has(k as ReferenceType["kind"])).toBe(true);
     }
   });

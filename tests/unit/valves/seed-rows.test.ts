@@ -21,14 +21,29 @@ describe("coverage", () => {
   });
 
   it("answers on file for the service-bench types that used to be flagged", () => {
-    for (const d of ["PCL86", "UCL82", "ECF82", "EZ80", "PL36", "PY88", "ECC85", "EF80", "ECH81", "PCF80", "UY85", "12BE6", "5814"]) {
+    for (const d of [
+      "PCL86",
+      "UCL82",
+      "ECF82",
+      "EZ80",
+      "PL36",
+      "PY88",
+      "ECC85",
+      "EF80",
+      "ECH81",
+      "PCF80",
+      "UY85",
+      "12BE6",
+      "5814",
+    ]) {
       const r = decodeDesignation(SEED, d);
       expect(r.ok && r.knownType, d).toBe(true);
     }
   });
 
   it("every row names its source in a form the sources list knows", () => {
-    for (const r of SEED_REFERENCE_TYPES) expect(parseRowSource(r.source), `${r.designation}: ${r.source}`).toBeDefined();
+    for (const r of SEED_REFERENCE_TYPES)
+      expect(parseRowSource(r.source), `${r.designation}: ${r.source}`).toBeDefined();
     expect(new Set(SOURCE_TAGS).size).toBe(SOURCES.length);
     for (const s of SOURCES) expect(s.publication.length, s.tag).toBeGreaterThan(20);
   });
@@ -87,7 +102,10 @@ describe("review findings", () => {
       if (!r.ok) throw new Error(r.message);
       expect(r.heater.volts, d).toBe(2);
       expect(r.heater.voltsRange, d).toEqual([0, 2]);
-      expect(r.reasons.some((x) => x.includes("suggests about")), d).toBe(false);
+      expect(
+        r.reasons.some((x) => x.includes("suggests about")),
+        d,
+      ).toBe(false);
     }
   });
 
@@ -97,7 +115,15 @@ describe("review findings", () => {
   });
 
   it("mercury-vapour and cold-cathode rows carry their cautions [MEM, verify]", () => {
-    for (const d of ["83", "866A", "872A", "816"]) expect(getReferenceType(SEED, d)?.hazards.map((h) => h.kind), d).toContain("mercury-vapour");
-    for (const d of ["0A2", "0A3", "0B3"]) expect(getReferenceType(SEED, d)?.hazards.map((h) => h.kind), d).toContain("radioactive");
+    for (const d of ["83", "866A", "872A", "816"])
+      expect(
+        getReferenceType(SEED, d)?.hazards.map((h) => h.kind),
+        d,
+      ).toContain("mercury-vapour");
+    for (const d of ["0A2", "0A3", "0B3"])
+      expect(
+        getReferenceType(SEED, d)?.hazards.map((h) => h.kind),
+        d,
+      ).toContain("radioactive");
   });
 });

@@ -62,7 +62,10 @@ describe("lookupSourceCode", () => {
   });
 
   it("flags a code held by several registry entries", () => {
-    const registry = [...DEMO_REGISTRY, { code: "X46", makerName: "Vireo Lamp & Valve", isDemo: true, notes: "demo, later holder" }];
+    const registry = [
+      ...DEMO_REGISTRY,
+      { code: "X46", makerName: "Vireo Lamp & Valve", isDemo: true, notes: "demo, later holder" },
+    ];
     const result = lookupSourceCode("X46", registry);
     if (!result.ok) throw new Error(result.reason);
     expect(result.entries).toHaveLength(2);
@@ -89,7 +92,9 @@ describe("parseMakerRegistryCsv [RFC-4180 quoting]", () => {
   });
 
   it("accepts columns in any order and a byte-order mark", () => {
-    const { rows, errors } = parseMakerRegistryCsv("\uFEFFnotes,is_demo,maker_name,code\nx,true,Aldergrove Electron Works,EIA X17\n");
+    const { rows, errors } = parseMakerRegistryCsv(
+      "\uFEFFnotes,is_demo,maker_name,code\nx,true,Aldergrove Electron Works,EIA X17\n",
+    );
     expect(errors).toEqual([]);
     expect(rows).toEqual([{ code: "X17", makerName: "Aldergrove Electron Works", isDemo: true, notes: "x" }]);
   });
@@ -123,7 +128,9 @@ describe("parseMakerRegistryCsv [RFC-4180 quoting]", () => {
   });
 
   it("refuses text after a closing quote", () => {
-    const { rows, errors } = parseMakerRegistryCsv('code,maker_name,is_demo,notes\n"X17"x,Aldergrove Electron Works,true,\n');
+    const { rows, errors } = parseMakerRegistryCsv(
+      'code,maker_name,is_demo,notes\n"X17"x,Aldergrove Electron Works,true,\n',
+    );
     expect(rows).toEqual([]);
     expect(errors).toEqual([{ line: 2, message: "text after the closing quote of a field" }]);
   });

@@ -17,7 +17,8 @@ describe("source tags", () => {
     for (const f of [...files("tests/unit"), ...files("tests/integration")]) {
       for (const line of readFileSync(f, "utf8").split("\n")) {
         const cited = line.match(/(?:\/\/|\b(?:it|describe|it\.each\([^)]*\))\().*/)?.[0] ?? "";
-        for (const m of cited.matchAll(/\[([A-Z][A-Z0-9-]+)/g)) if (!SOURCE_TAGS.includes(m[1]!)) unknown.add(`${f}: ${m[1]}`);
+        for (const m of cited.matchAll(/\[([A-Z][A-Z0-9-]+)/g))
+          if (!SOURCE_TAGS.includes(m[1]!)) unknown.add(`${f}: ${m[1]}`);
         if (/brief\s*(§|section|\d)/.test(line) && !f.includes("escrow")) unknown.add(`${f}: cites the brief`);
       }
     }

@@ -14,13 +14,29 @@ export default async function WantListsPage() {
       <header className="space-y-2">
         <h1 className="text-2xl font-semibold">Want lists</h1>
         <p className="max-w-3xl text-flash-700">
-          A want list is a standing search for a type. When the house lists a lot that meets it, or offers one in a sale, you hear at once in
-          Getterline and in one e-mail a day at most. Save one from any <Link href="/catalogue" className="underline">catalogue</Link> search for a type.
-          You may keep up to {MAX_WANT_LISTS}.
+          A want list is a standing search for a type. When the house lists a lot that meets it, or offers one in a
+          sale, you hear at once in Getterline and in one e-mail a day at most. Save one from any{" "}
+          <Link href="/catalogue" className="underline">
+            catalogue
+          </Link>{" "}
+          search for a type. You may keep up to {MAX_WANT_LISTS}.
         </p>
       </header>
-      {lists.length ? <ul className="space-y-3">{lists.map((l) => <WantListRow key={l.id} list={l} />)}</ul>
-        : <p className="card text-flash-700">No want lists yet. Search the <Link href="/catalogue" className="underline">catalogue</Link> for a type, then save the search.</p>}
+      {lists.length ? (
+        <ul className="space-y-3">
+          {lists.map((l) => (
+            <WantListRow key={l.id} list={l} />
+          ))}
+        </ul>
+      ) : (
+        <p className="card text-flash-700">
+          No want lists yet. Search the{" "}
+          <Link href="/catalogue" className="underline">
+            catalogue
+          </Link>{" "}
+          for a type, then save the search.
+        </p>
+      )}
     </div>
   );
 }

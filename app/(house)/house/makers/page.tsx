@@ -11,11 +11,26 @@ export default async function MakersPage() {
   return (
     <div className="space-y-5">
       <h1 className="text-2xl font-semibold">Maker registry</h1>
-      <p className="max-w-3xl text-flash-700">Source codes and the makers they are registered to. {SOURCE_CODE_CAVEAT}</p>
+      <p className="max-w-3xl text-flash-700">
+        Source codes and the makers they are registered to. {SOURCE_CODE_CAVEAT}
+      </p>
       <div className="overflow-x-auto rounded-lg border border-flash-200 bg-white">
         <table className="min-w-full text-sm">
           <thead className="bg-flash-100 text-left text-flash-700">
-            <tr><th scope="col" className="px-3 py-2 font-medium">Code</th><th scope="col" className="px-3 py-2 font-medium">Maker</th><th scope="col" className="px-3 py-2 font-medium">Data</th><th scope="col" className="px-3 py-2 font-medium">Notes</th></tr>
+            <tr>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Code
+              </th>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Maker
+              </th>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Data
+              </th>
+              <th scope="col" className="px-3 py-2 font-medium">
+                Notes
+              </th>
+            </tr>
           </thead>
           <tbody>
             {entries.map((e) => (
@@ -26,7 +41,13 @@ export default async function MakersPage() {
                 <td className="px-3 py-1.5 text-flash-700">{e.notes}</td>
               </tr>
             ))}
-            {entries.length === 0 ? <tr><td colSpan={4} className="px-3 py-3 text-flash-600">No codes yet. Import a CSV below.</td></tr> : null}
+            {entries.length === 0 ? (
+              <tr>
+                <td colSpan={4} className="px-3 py-3 text-flash-600">
+                  No codes yet. Import a CSV below.
+                </td>
+              </tr>
+            ) : null}
           </tbody>
         </table>
       </div>

@@ -27,21 +27,64 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
     }
     throw e;
   });
-  const [{ summary, chart }, record, sale] = await Promise.all([summaryFor(data.items), consignorRecord(data.lot.consignorId), saleLotOf(id)]);
+  const [{ summary, chart }, record, sale] = await Promise.all([
+    summaryFor(data.items),
+    consignorRecord(data.lot.consignorId),
+    saleLotOf(id),
+  ]);
   const history = await priceHistoryForFamilies(summary.families.map((f) => f.key));
-  const actions = sale?.phase === "open" ? (
-    <p className="card flex flex-wrap items-center gap-3 text-sm">
-      This lot is offered in <strong>{sale.saleTitle}</strong>.
-      {viewer ? <Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="btn-primary" data-testid="back-to-bidding">Back to bidding on this lot</Link>
-        : <Link href={`/sign-in?from=${encodeURIComponent(`/lots/${id}`)}`} className="btn-primary">Sign in to bid</Link>}
-    </p>
-  ) : sale?.phase === "sold" ? (
-    <p className="card text-sm" data-testid="lot-outcome"><Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="underline underline-offset-2">Sold in <strong>{sale.saleTitle}</strong></Link>{sale.hammerCents != null ? <> for <strong className="code">{formatCents(sale.hammerCents)}</strong></> : null}{sale.closedAt ? <> on <When iso={sale.closedAt} /></> : null}.</p>
-  ) : sale ? (
-    <p className="card text-sm" data-testid="lot-outcome">Offered in <strong>{sale.saleTitle}</strong>; it closed unsold.</p>
-  ) : !viewer ? (
-    <p className="card text-sm"><Link href={`/sign-in?from=${encodeURIComponent(`/lots/${id}`)}`} className="font-medium underline underline-offset-4">Sign in</Link> to watch this lot and bid when it is offered.</p>
-  ) : null;
+  const actions =
+    sale?.phase === "open" ? (
+      <p className="card flex flex-wrap items-center gap-3 text-sm">
+        This lot is offered in <strong>{sale.saleTitle}</strong>.
+        {viewer ? (
+          <Link
+            href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`}
+            className="btn-primary"
+            data-testid="back-to-bidding"
+          >
+            Back to bidding on this lot
+          </Link>
+        ) : (
+          <Link href={`/sign-in?from=${encodeURIComponent(`/lots/${id}`)}`} className="btn-primary">
+            Sign in to bid
+          </Link>
+        )}
+      </p>
+    ) : sale?.phase === "sold" ? (
+      <p className="card text-sm" data-testid="lot-outcome">
+        <Link href={`/sales/${sale.saleId}/lots/${sale.saleLotId}`} className="underline underline-offset-2">
+          Sold in <strong>{sale.saleTitle}</strong>
+        </Link>
+        {sale.hammerCents != null ? (
+          <>
+            {" "}
+            for <strong className="code">{formatCents(sale.hammerCents)}</strong>
+          </>
+        ) : null}
+        {sale.closedAt ? (
+          <>
+            {" "}
+            on <When iso={sale.closedAt} />
+          </>
+        ) : null}
+        .
+      </p>
+    ) : sale ? (
+      <p className="card text-sm" data-testid="lot-outcome">
+        Offered in <strong>{sale.saleTitle}</strong>; it closed unsold.
+      </p>
+    ) : !viewer ? (
+      <p className="card text-sm">
+        <Link
+          href={`/sign-in?from=${encodeURIComponent(`/lots/${id}`)}`}
+          className="font-medium underline underline-offset-4"
+        >
+          Sign in
+        </Link>{" "}
+        to watch this lot and bid when it is offered.
+      </p>
+    ) : null;
   return (
     <div className="space-y-6">
       <LotView data={data} summary={summary} chart={chart} record={record} actions={actions} />

@@ -10,10 +10,17 @@ export default async function InvoicePage({ params }: { params: Promise<{ id: st
   const { id } = await params;
   const viewer = await requirePageViewer("account.read", `/invoices/${id}`);
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
-  const inv = await getInvoice(viewer, id).catch((e) => { if (e instanceof ApiError && e.code === "not_found") notFound(); throw e; });
+  const inv = await getInvoice(viewer, id).catch((e) => {
+    if (e instanceof ApiError && e.code === "not_found") notFound();
+    throw e;
+  });
   return (
     <>
-      {"readOnly" in inv ? <p className="mb-3 rounded-md border border-flash-300 bg-flash-50 px-3 py-2 text-sm" role="note">You mediate this invoice&apos;s claim: you can read it here, but not change it.</p> : null}
+      {"readOnly" in inv ? (
+        <p className="mb-3 rounded-md border border-flash-300 bg-flash-50 px-3 py-2 text-sm" role="note">
+          You mediate this invoice&apos;s claim: you can read it here, but not change it.
+        </p>
+      ) : null}
       <InvoiceView initial={inv} house={viewer.roles.includes("admin")} />
     </>
   );

@@ -10,13 +10,18 @@ export default async function SalePage({ params }: { params: Promise<{ id: strin
   const { id } = await params;
   const viewer = await requirePageViewer("account.read", `/sales/${id}`);
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
-  const data = await getSale(id, viewer).catch((e) => { if (e instanceof ApiError && e.code === "not_found") notFound(); throw e; });
+  const data = await getSale(id, viewer).catch((e) => {
+    if (e instanceof ApiError && e.code === "not_found") notFound();
+    throw e;
+  });
   const secs = data.sale.softCloseSeconds;
   const span = secs % 60 === 0 ? `${secs / 60} ${secs === 60 ? "minute" : "minutes"}` : `${secs} seconds`;
   return (
     <div className="space-y-4">
       <h1 className="text-2xl font-semibold">{data.sale.title}</h1>
-      <p className="text-sm text-flash-700">Prices move live. A bid in a lot&apos;s last {span} moves that lot&apos;s close to {span} after the bid.</p>
+      <p className="text-sm text-flash-700">
+        Prices move live. A bid in a lot&apos;s last {span} moves that lot&apos;s close to {span} after the bid.
+      </p>
       <SaleBoard initial={data} />
     </div>
   );

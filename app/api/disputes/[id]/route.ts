@@ -3,4 +3,6 @@ import { parseParams, route } from "@/lib/api/route";
 import { getCase } from "@/lib/services/disputes";
 import { IdParam } from "@/lib/validation/common";
 
-export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ params, viewer }) => ({ dispute: await getCase(viewer!, parseParams(IdParam, params).id) }));
+export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ params, viewer }) => ({
+  dispute: await getCase(viewer!, parseParams(IdParam, params).id),
+}));

@@ -7,8 +7,11 @@ import { listUnexpectedCharges } from "@/lib/services/unexpected-charges";
 import { recentIgnoredEvents } from "@/lib/services/webhooks";
 
 export const GET = route({ permission: "house.manage" }, async () => ({
-  balances: await balances(), trialBalanceCents: await trialBalance(), reconciliations: await recentReconciliations(),
-  unexpectedCharges: await listUnexpectedCharges(), ignoredEvents: await recentIgnoredEvents(),
+  balances: await balances(),
+  trialBalanceCents: await trialBalance(),
+  reconciliations: await recentReconciliations(),
+  unexpectedCharges: await listUnexpectedCharges(),
+  ignoredEvents: await recentIgnoredEvents(),
 }));
 
 export const POST = route({ permission: "house.manage" }, async () => ({ reconciliation: await reconcile() }));

@@ -3,6 +3,9 @@ import { csvTemplate } from "@/lib/lots/csv-import";
 
 export function GET() {
   return new Response(csvTemplate(), {
-    headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": 'attachment; filename="getterline-lot-template.csv"' },
+    headers: {
+      "content-type": "text/csv; charset=utf-8",
+      "content-disposition": 'attachment; filename="getterline-lot-template.csv"',
+    },
   });
 }

@@ -8,10 +8,22 @@ const Query = z.object({ format: z.enum(["csv", "pdf", "json"]).default("json"),
 
 export const GET = route<{ saleId: string }>({ permission: "account.read" }, async ({ req, params, viewer }) => {
   const { saleId } = parseParams(Params, params);
-  const q = parseWith(Query, { format: req.nextUrl.searchParams.get("format") ?? undefined, consignorId: req.nextUrl.searchParams.get("consignorId") ?? undefined });
+  const q = parseWith(Query, {
+    format: req.nextUrl.searchParams.get("format") ?? undefined,
+    consignorId: req.nextUrl.searchParams.get("consignorId") ?? undefined,
+  });
   const st = await statementFor(viewer!, saleId, q.consignorId);
   const name = `getterline-statement-${saleId.slice(0, 8)}`;
-  if (q.format === "csv") return new Response(statementCsv(st), { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${name}.csv"` } });
-  if (q.format === "pdf") return new Response(new Uint8Array(await statementPdf(st)), { headers: { "content-type": "application/pdf", "content-disposition": `attachment; filename="${name}.pdf"` } });
+  if (q.format === "csv")
+    return new Response(statementCsv(st), {
+      headers: {
+        "content-type": "text/csv; charset=utf-8",
+        "content-disposition": `attachment; filename="${name}.csv"`,
+      },
+    });
+  if (q.format === "pdf")
+    return new Response(new Uint8Array(await statementPdf(st)), {
+      headers: { "content-type": "application/pdf", "content-disposition": `attachment; filename="${name}.pdf"` },
+    });
   return st;
 });

@@ -3,4 +3,6 @@ import { readJson, route } from "@/lib/api/route";
 import { rankForFeatures } from "@/lib/services/shelf";
 import { AttributionQuerySchema } from "@/lib/validation/shelf";
 
-export const POST = route({ permission: "account.read" }, async ({ req }) => rankForFeatures(await readJson(req, AttributionQuerySchema, 32 * 1024)));
+export const POST = route({ permission: "account.read" }, async ({ req }) =>
+  rankForFeatures(await readJson(req, AttributionQuerySchema, 32 * 1024)),
+);

@@ -11,7 +11,8 @@ export const POST = route({ public: true }, async ({ req }) => {
   try {
     return gradeBatch(input);
   } catch (e) {
-    if (e instanceof GradingInputError || e instanceof MatchingInputError) throw new ApiError("validation_failed", e.message);
+    if (e instanceof GradingInputError || e instanceof MatchingInputError)
+      throw new ApiError("validation_failed", e.message);
     throw e;
   }
 });

@@ -20,8 +20,10 @@ export default async function HouseLotPage({ params }: { params: Promise<{ id: s
   const est = summary.estimate.kind === "range" ? summary.estimate : null;
   const items = data.items.map((i) => ({ id: i.id, label: `Line ${i.position}: ${i.designation} ×${i.quantity}` }));
   const actions =
-    data.lot.state === "in-review" ? <DecisionForm lotId={id} suggestedLowCents={est?.lowCents} suggestedHighCents={est?.highCents} />
-    : data.lot.state === "approved" ? <AmendmentForm lotId={id} items={items} />
-    : null;
+    data.lot.state === "in-review" ? (
+      <DecisionForm lotId={id} suggestedLowCents={est?.lowCents} suggestedHighCents={est?.highCents} />
+    ) : data.lot.state === "approved" ? (
+      <AmendmentForm lotId={id} items={items} />
+    ) : null;
   return <LotView data={data} summary={summary} chart={chart} actions={actions} />;
 }

@@ -18,8 +18,16 @@ export default async function EditReferencePage({ params }: { params: Promise<{ 
   const amp = ref.characteristics?.kind === "amplifier" ? ref.characteristics : undefined;
   return (
     <div className="space-y-6">
-      <p className="text-sm"><Link href="/house/reference" className="underline">Reference data</Link> / <span className="code">{designation}</span></p>
-      <h1 className="text-2xl font-semibold">Correct <span className="code">{designation}</span> <span className="text-base font-normal text-flash-600">revision {ref.revision}</span></h1>
+      <p className="text-sm">
+        <Link href="/house/reference" className="underline">
+          Reference data
+        </Link>{" "}
+        / <span className="code">{designation}</span>
+      </p>
+      <h1 className="text-2xl font-semibold">
+        Correct <span className="code">{designation}</span>{" "}
+        <span className="text-base font-normal text-flash-600">revision {ref.revision}</span>
+      </h1>
       <ReferenceEditForm
         designation={designation}
         revision={ref.revision}
@@ -41,22 +49,30 @@ export default async function EditReferencePage({ params }: { params: Promise<{ 
       />
       <p className="text-sm text-flash-700">
         Source: <span className="code">{ref.source}</span> ({describeRowSource(ref.source)}).{" "}
-        {ref.verification ? `Checked against ${ref.verification.against} by ${ref.verification.by} on ${ref.verification.on}.` : "Not yet checked against a data sheet."}
+        {ref.verification
+          ? `Checked against ${ref.verification.against} by ${ref.verification.by} on ${ref.verification.on}.`
+          : "Not yet checked against a data sheet."}
         {ref.retired ? " Retired: not on file." : ""}
       </p>
       <ReferenceRowActions designation={designation} retired={ref.retired} />
       <section aria-labelledby="hist" className="space-y-2">
-        <h2 id="hist" className="text-lg font-semibold">History</h2>
+        <h2 id="hist" className="text-lg font-semibold">
+          History
+        </h2>
         {history.length ? (
           <ol className="space-y-2">
             {history.map((h) => (
               <li key={h.revision} className="card text-sm">
-                <p><strong>Revision {h.revision}</strong> · {h.changedBy} · <When iso={h.at} /></p>
+                <p>
+                  <strong>Revision {h.revision}</strong> · {h.changedBy} · <When iso={h.at} />
+                </p>
                 <p className="text-flash-700">{h.reason}</p>
               </li>
             ))}
           </ol>
-        ) : <p className="text-sm text-flash-700">Unchanged since it was loaded from published figures.</p>}
+        ) : (
+          <p className="text-sm text-flash-700">Unchanged since it was loaded from published figures.</p>
+        )}
       </section>
     </div>
   );

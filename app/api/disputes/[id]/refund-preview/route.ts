@@ -5,5 +5,9 @@ import { IdParam } from "@/lib/validation/common";
 import { RefundPreviewSchema } from "@/lib/validation/disputes";
 
 export const POST = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ req, params, viewer }) => ({
-  settlement: await refundPreview(viewer!, parseParams(IdParam, params).id, await readJson(req, RefundPreviewSchema, 256 * 1024)),
+  settlement: await refundPreview(
+    viewer!,
+    parseParams(IdParam, params).id,
+    await readJson(req, RefundPreviewSchema, 256 * 1024),
+  ),
 }));

@@ -5,5 +5,9 @@ import { IdParam } from "@/lib/validation/common";
 import { LineValuesSchema } from "@/lib/validation/disputes";
 
 export const POST = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ req, params, viewer }) => ({
-  release: await releaseUndisputedShare(viewer!, parseParams(IdParam, params).id, await readJson(req, LineValuesSchema, 256 * 1024)),
+  release: await releaseUndisputedShare(
+    viewer!,
+    parseParams(IdParam, params).id,
+    await readJson(req, LineValuesSchema, 256 * 1024),
+  ),
 }));

@@ -3,4 +3,6 @@ import { parseParams, route } from "@/lib/api/route";
 import { workspace } from "@/lib/services/disputes";
 import { IdParam } from "@/lib/validation/common";
 
-export const GET = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ params, viewer }) => workspace(viewer!, parseParams(IdParam, params).id));
+export const GET = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ params, viewer }) =>
+  workspace(viewer!, parseParams(IdParam, params).id),
+);

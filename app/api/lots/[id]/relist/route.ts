@@ -3,4 +3,6 @@ import { parseParams, route } from "@/lib/api/route";
 import { askToRelist } from "@/lib/services/relist";
 import { IdParam } from "@/lib/validation/common";
 
-export const POST = route<{ id: string }>({ permission: "lots.consign" }, async ({ params, viewer }) => askToRelist(viewer!, parseParams(IdParam, params).id));
+export const POST = route<{ id: string }>({ permission: "lots.consign" }, async ({ params, viewer }) =>
+  askToRelist(viewer!, parseParams(IdParam, params).id),
+);

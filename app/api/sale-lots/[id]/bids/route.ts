@@ -9,6 +9,11 @@ export const POST = route<{ id: string }>({ permission: "lots.bid" }, async ({ r
   const { id } = parseParams(IdParam, params);
   const { maxCents, idempotencyKey } = await readJson(req, BidSchema, 4 * 1024);
   const r = await placeMaxBid(viewer!, id, maxCents, idempotencyKey);
-  if (!r.accepted) throw new ApiError("conflict", r.message, undefined, undefined, { reason: r.reason, minimumCents: r.minimumCents, live: r.live });
+  if (!r.accepted)
+    throw new ApiError("conflict", r.message, undefined, undefined, {
+      reason: r.reason,
+      minimumCents: r.minimumCents,
+      live: r.live,
+    });
   return r;
 });

@@ -4,6 +4,9 @@ import { parseWith, route } from "@/lib/api/route";
 import { lookupRegisteredCode } from "@/lib/services/makers";
 
 export const GET = route<{ code: string }>({ public: true }, async ({ params }) => {
-  const { code } = parseWith(z.object({ code: z.string().trim().min(1).max(24, "A source code is at most 24 characters") }), params);
+  const { code } = parseWith(
+    z.object({ code: z.string().trim().min(1).max(24, "A source code is at most 24 characters") }),
+    params,
+  );
   return lookupRegisteredCode(code);
 });

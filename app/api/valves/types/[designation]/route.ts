@@ -13,9 +13,11 @@ export const GET = route<{ designation: string }>({ public: true }, async ({ par
   return lookupType(designation);
 });
 
-export const PATCH = route<{ designation: string }>({ permission: "reference.edit" }, async ({ req, params, viewer }) => {
-  const { designation } = parseWith(Params, params);
-  const { expectedRevision, ...edit } = await readJson(req, Edit);
-  return { reference: await editReferenceType(viewer!.id, designation, expectedRevision, edit) };
-});
-
+export const PATCH = route<{ designation: string }>(
+  { permission: "reference.edit" },
+  async ({ req, params, viewer }) => {
+    const { designation } = parseWith(Params, params);
+    const { expectedRevision, ...edit } = await readJson(req, Edit);
+    return { reference: await editReferenceType(viewer!.id, designation, expectedRevision, edit) };
+  },
+);

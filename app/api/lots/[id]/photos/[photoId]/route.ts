@@ -5,8 +5,11 @@ import { removePhoto } from "@/lib/services/lot-photos";
 
 const Params = z.object({ id: z.uuid(), photoId: z.uuid() });
 
-export const DELETE = route<{ id: string; photoId: string }>({ permission: "lots.consign" }, async ({ params, viewer }) => {
-  const { id, photoId } = parseParams(Params, params);
-  await removePhoto(viewer!, id, photoId);
-  return { removed: true };
-});
+export const DELETE = route<{ id: string; photoId: string }>(
+  { permission: "lots.consign" },
+  async ({ params, viewer }) => {
+    const { id, photoId } = parseParams(Params, params);
+    await removePhoto(viewer!, id, photoId);
+    return { removed: true };
+  },
+);

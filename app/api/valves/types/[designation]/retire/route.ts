@@ -6,8 +6,11 @@ import { DesignationParam, ReferenceRetireSchema } from "@/lib/validation/valves
 
 const Params = z.object({ designation: DesignationParam });
 
-export const POST = route<{ designation: string }>({ permission: "reference.edit" }, async ({ req, params, viewer }) => {
-  const { designation } = parseWith(Params, params);
-  const { retired, reason } = await readJson(req, ReferenceRetireSchema);
-  return setReferenceRetired(viewer!.id, designation, retired, reason);
-});
+export const POST = route<{ designation: string }>(
+  { permission: "reference.edit" },
+  async ({ req, params, viewer }) => {
+    const { designation } = parseWith(Params, params);
+    const { retired, reason } = await readJson(req, ReferenceRetireSchema);
+    return setReferenceRetired(viewer!.id, designation, retired, reason);
+  },
+);

@@ -6,8 +6,11 @@ import { DesignationParam, ReferenceVerifySchema } from "@/lib/validation/valves
 
 const Params = z.object({ designation: DesignationParam });
 
-export const POST = route<{ designation: string }>({ permission: "reference.edit" }, async ({ req, params, viewer }) => {
-  const { designation } = parseWith(Params, params);
-  const { against } = await readJson(req, ReferenceVerifySchema);
-  return verifyReferenceType(viewer!.id, designation, against);
-});
+export const POST = route<{ designation: string }>(
+  { permission: "reference.edit" },
+  async ({ req, params, viewer }) => {
+    const { designation } = parseWith(Params, params);
+    const { against } = await readJson(req, ReferenceVerifySchema);
+    return verifyReferenceType(viewer!.id, designation, against);
+  },
+);
