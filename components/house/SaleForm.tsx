@@ -25,8 +25,8 @@ const defaultOpening = (l: Offerable) =>
 export function SaleForm({ lots }: { lots: Offerable[] }) {
   const router = useRouter();
   const [title, setTitle] = useState("");
-  const [startsAt, setStartsAt] = useState(local(new Date(Date.now() + 5 * 60_000)));
-  const [firstCloseAt, setFirstCloseAt] = useState(local(new Date(Date.now() + 65 * 60_000)));
+  const [startsAt, setStartsAt] = useState(() => local(new Date(Date.now() + 5 * 60_000)));
+  const [firstCloseAt, setFirstCloseAt] = useState(() => local(new Date(Date.now() + 65 * 60_000)));
   const [gap, setGap] = useState("60");
   const [soft, setSoft] = useState("120");
   const [chosen, setChosen] = useState<Record<string, string>>({});

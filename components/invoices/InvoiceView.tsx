@@ -24,6 +24,8 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
     initialData: initial,
     refetchInterval: (q) => (q.state.data?.state === "awaiting-payment" ? 1500 : false),
   });
+  // Deadlines are judged against the moment the view was first drawn; the server decides again on every action.
+  const [drawnAt] = useState(() => Date.now());
   const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
   const [carrier, setCarrier] = useState("");
   const [tracking, setTracking] = useState("");
@@ -127,7 +129,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
       {inv.isBuyer &&
       inv.state === "delivered" &&
       inv.inspectionEndsAt &&
-      Date.parse(inv.inspectionEndsAt) > Date.now() ? (
+      Date.parse(inv.inspectionEndsAt) > drawnAt ? (
         <div className="flex flex-wrap items-center gap-3">
           <button type="button" className="btn-primary" onClick={() => void act(`/api/invoices/${inv.id}/accept`)}>
             I have inspected the tubes: release payment now
@@ -168,7 +170,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
           </button>
         </form>
       ) : null}
-      {house && inv.state === "awaiting-payment" && Date.parse(inv.dueAt) < Date.now() ? (
+      {house && inv.state === "awaiting-payment" && Date.parse(inv.dueAt) < drawnAt ? (
         <div className="card flex flex-wrap items-center gap-2 text-sm">
           <span>Unpaid past its due date.</span>
           <button

@@ -32,7 +32,7 @@ import { nominalGmFromReference } from "@/lib/lots/readings-chart";
 import { profileFromExample, type ReferenceProfile } from "@/lib/valves/attribution";
 import { featuresFromText } from "@/lib/valves/construction-text";
 import { getReferenceType } from "@/lib/valves/reference-table";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 
