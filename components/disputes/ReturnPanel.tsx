@@ -6,6 +6,8 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { Field, FormAlert } from "@/components/forms/Field";
 import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
+import { formatCents } from "@/lib/money/cents";
+import { MAX_RETURN_POSTAGE_CENTS } from "@/lib/money/return-refund";
 import { ReturnShipmentSchema, type ReturnShipmentInput } from "@/lib/validation/disputes";
 import { utcText } from "./words";
 
@@ -17,6 +19,7 @@ export function ReturnPanel({
   shippedAt,
   carrier,
   tracking,
+  postageCents,
 }: {
   caseId: string;
   role: string;
@@ -24,11 +27,12 @@ export function ReturnPanel({
   shippedAt: string | null;
   carrier: string | null;
   tracking: string | null;
+  postageCents: number;
 }) {
   const router = useRouter();
   const { register, handleSubmit, setError, formState } = useForm<ReturnShipmentInput>({
     resolver: zodResolver(ReturnShipmentSchema),
-    defaultValues: { carrier: "", tracking: "" },
+    defaultValues: { carrier: "", tracking: "", postageCents: 0, postageReceipt: "" },
   });
   const { message, run } = useApiSubmit<ReturnShipmentInput>(setError);
   const done = async (call: () => Promise<unknown>, text: string) => {
@@ -49,12 +53,14 @@ export function ReturnPanel({
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
       {shippedAt ? (
         <p className="text-sm">
-          Shipped back {utcText(shippedAt)} with {carrier}, tracking <span className="code">{tracking}</span>.
+          Shipped back {utcText(shippedAt)} with {carrier}, tracking <span className="code">{tracking}</span>
+          {postageCents > 0 ? <>; return postage {formatCents(postageCents)}, repaid with the refund</> : null}.
         </p>
       ) : (
         <p className="text-sm">
           The buyer ships the whole lot back by {dueAt ? utcText(dueAt) : "the return deadline"}; if it is not shipped
-          by then, the payment goes to the consignor.
+          by then, the payment goes to the consignor. The refund covers the hammer price, premium, shipping and tax;
+          the return postage is repaid too, up to {formatCents(MAX_RETURN_POSTAGE_CENTS)}.
         </p>
       )}
       <p className="text-sm text-flash-700">
@@ -79,6 +85,20 @@ export function ReturnPanel({
           </Field>
           <Field id="r-tracking" label="Tracking number" error={formState.errors.tracking?.message}>
             <input id="r-tracking" className="input code" {...register("tracking")} />
+          </Field>
+          <Field id="r-postage" label="Postage you paid ($)" error={formState.errors.postageCents?.message}>
+            <input
+              id="r-postage"
+              className="input code w-28"
+              inputMode="decimal"
+              placeholder="0.00"
+              {...register("postageCents", {
+                setValueAs: (v: string) => (v === "" || v == null ? 0 : Math.round(Number(v) * 100)),
+              })}
+            />
+          </Field>
+          <Field id="r-receipt" label="Postage receipt no. (optional)" error={formState.errors.postageReceipt?.message}>
+            <input id="r-receipt" className="input code" {...register("postageReceipt")} />
           </Field>
           <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>
             Record the return

@@ -93,7 +93,8 @@ export async function acceptDelivery(viewer: Viewer, invoiceId: string): Promise
   }
 }
 
-async function payoutAccount(userId: string): Promise<string> {
+/** The user's connected payout account at the processor, made on first use (keyed by user). */
+export async function payoutAccount(userId: string): Promise<string> {
   const [row] = await db().query<{ stripe_account_id: string }>(
     `SELECT stripe_account_id FROM payout_accounts WHERE user_id = :userId`,
     { replacements: { userId }, type: QueryTypes.SELECT },

@@ -12,6 +12,8 @@ export type StatementLine = {
   hammerCents: number;
   commissionCents: number;
   feesCents: number;
+  /** The card processor's fee on the buyer's payment, as the ledger records it; a house expense, not deducted. */
+  processorFeesCents: number;
   refundsCents: number;
   payoutCents: number;
   paidOutCents: number;
@@ -28,6 +30,7 @@ export type Statement = {
     hammerCents: number;
     commissionCents: number;
     feesCents: number;
+    processorFeesCents: number;
     refundsCents: number;
     payoutCents: number;
     paidOutCents: number;
@@ -42,6 +45,7 @@ export type Statement = {
 export async function statementFor(viewer: Viewer, saleId: string, consignorId?: string): Promise<Statement> {
   const who = consignorId && viewer.roles.includes("admin") ? consignorId : viewer.id;
   const rows = await db().query<{
+    id: string;
     number: string;
     title: string;
     state: string;
@@ -56,16 +60,19 @@ export async function statementFor(viewer: Viewer, saleId: string, consignorId?:
     consignor: string;
     sale_title: string;
   }>(
-    `SELECT i.number, l.title, i.state, i.hammer_cents, i.commission_cents, i.hammer_refunded_cents, i.commission_returned_cents, i.released_hammer_cents, i.released_commission_cents, i.released_at, i.transfer_id, u.display_name AS consignor, s.title AS sale_title
+    `SELECT i.id, i.number, l.title, i.state, i.hammer_cents, i.commission_cents, i.hammer_refunded_cents, i.commission_returned_cents, i.released_hammer_cents, i.released_commission_cents, i.released_at, i.transfer_id, u.display_name AS consignor, s.title AS sale_title
        FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id JOIN sales s ON s.id = sl.sale_id JOIN users u ON u.id = i.consignor_id
       WHERE sl.sale_id = :saleId AND i.consignor_id = :who ORDER BY sl.position`,
     { replacements: { saleId, who }, type: QueryTypes.SELECT },
   );
   if (!rows.length) throw new ApiError("not_found", "No sold lots of yours in this sale");
+  const posted = await ledgerFigures(rows.map((r) => r.id));
   const lines: StatementLine[] = rows.map((r) => {
-    const fees = 0;
-    // A refund to the buyer takes its share of the hammer from the consignor, who gets that share's commission back.
-    const refunds = r.hammer_refunded_cents - r.commission_returned_cents;
+    const led = posted.get(r.id);
+    const fees = led?.consignorFeesCents ?? 0;
+    // A refund to the buyer takes its share of the hammer from the consignor, who gets that share's commission back;
+    // return postage repaid under an upheld claim is charged to the consignor too [SUG].
+    const refunds = r.hammer_refunded_cents - r.commission_returned_cents + (led?.postageCents ?? 0);
     return {
       invoiceNumber: r.number,
       lotTitle: r.title,
@@ -73,6 +80,7 @@ export async function statementFor(viewer: Viewer, saleId: string, consignorId?:
       hammerCents: r.hammer_cents,
       commissionCents: r.commission_cents,
       feesCents: fees,
+      processorFeesCents: led?.processorFeesCents ?? 0,
       refundsCents: refunds,
       payoutCents: r.hammer_cents - r.commission_cents - fees - refunds,
       // Paid so far: everything once released; before that, any undisputed share released early under a claim.
@@ -95,11 +103,41 @@ export async function statementFor(viewer: Viewer, saleId: string, consignorId?:
       hammerCents: sum("hammerCents"),
       commissionCents: sum("commissionCents"),
       feesCents: sum("feesCents"),
+      processorFeesCents: sum("processorFeesCents"),
       refundsCents: sum("refundsCents"),
       payoutCents: sum("payoutCents"),
       paidOutCents: lines.reduce((n, l) => n + l.paidOutCents, 0),
     },
   };
+}
+
+/** Per invoice, from the ledger's postings: consignor fees charged, the processor's fee, return postage charged. */
+async function ledgerFigures(
+  invoiceIds: string[],
+): Promise<Map<string, { consignorFeesCents: number; processorFeesCents: number; postageCents: number }>> {
+  const rows = await db().query<{
+    invoice_id: string;
+    consignor_fees: string;
+    processor_fees: string;
+    postage: string;
+  }>(
+    `SELECT invoice_id,
+            COALESCE(SUM(credit_cents - debit_cents) FILTER (WHERE account = 'house-revenue-fees'), 0) AS consignor_fees,
+            COALESCE(SUM(debit_cents - credit_cents) FILTER (WHERE account = 'processor-fees'), 0) AS processor_fees,
+            COALESCE(SUM(debit_cents - credit_cents) FILTER (WHERE account = 'consignor-payable' AND txn_kind = 'dispute-return-postage'), 0) AS postage
+       FROM ledger_entries WHERE invoice_id IN (:invoiceIds) GROUP BY invoice_id`,
+    { replacements: { invoiceIds }, type: QueryTypes.SELECT },
+  );
+  return new Map(
+    rows.map((r) => [
+      r.invoice_id,
+      {
+        consignorFeesCents: Number(r.consignor_fees),
+        processorFeesCents: Number(r.processor_fees),
+        postageCents: Number(r.postage),
+      },
+    ]),
+  );
 }
 
 /** CSV cells that a spreadsheet would read as a formula are prefixed with a quote mark. */
@@ -122,6 +160,7 @@ export function statementCsv(st: Statement): string {
     "payout",
     "released_at",
     "transfer",
+    "processor_fee_borne_by_house",
   ];
   const body = st.lines.map((l) => [
     l.invoiceNumber,
@@ -134,6 +173,7 @@ export function statementCsv(st: Statement): string {
     dollars(l.payoutCents),
     l.releasedAt ?? "",
     l.transferId ?? "",
+    dollars(l.processorFeesCents),
   ]);
   const total = [
     "TOTAL",
@@ -146,6 +186,7 @@ export function statementCsv(st: Statement): string {
     dollars(st.totals.payoutCents),
     "",
     "",
+    dollars(st.totals.processorFeesCents),
   ];
   return [head, ...body, total].map((r) => r.map(cell).join(",")).join("\r\n") + "\r\n";
 }
@@ -205,7 +246,7 @@ export function statementPdf(st: Statement): Promise<Buffer> {
       .font("Helvetica")
       .fontSize(9)
       .text(
-        `Paid out so far: ${formatCents(st.totals.paidOutCents)}. Lots not yet released are paid when the buyer's inspection window ends without a claim.`,
+        `Paid out so far: ${formatCents(st.totals.paidOutCents)}. Lots not yet released are paid when the buyer's inspection window ends without a claim. Card processing fees on the buyers' payments (${formatCents(st.totals.processorFeesCents)}) are borne by the house and not deducted.`,
         48,
       );
     doc.end();

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { DISPUTE_REASONS, OUTCOMES, REMEDIES, STANCES } from "../disputes/rules";
+import { MAX_RETURN_POSTAGE_CENTS } from "../money/return-refund";
 import { ReadingSchema } from "./lots";
 
 const text = (max: number) => z.string().trim().max(max, `At most ${max} characters`);
@@ -93,6 +94,15 @@ export const ReturnShipmentSchema = z.object({
     .min(4, "Enter the tracking number")
     .max(80)
     .regex(/^[A-Za-z0-9 -]+$/, "Letters, digits, spaces and hyphens only"),
+  /** Postage the buyer paid to send the lot back, whole cents, repaid up to the house's cap [SUG]. */
+  postageCents: z
+    .number({ message: "Enter the postage as an amount, e.g. 18.40" })
+    .int("Whole cents only")
+    .min(0, "Not below zero")
+    .max(MAX_RETURN_POSTAGE_CENTS, `At most ${MAX_RETURN_POSTAGE_CENTS / 100} is repaid for return postage`)
+    .optional(),
+  /** The carrier's receipt or label reference for that postage. */
+  postageReceipt: text(80).optional(),
 });
 export type ReturnShipmentInput = z.infer<typeof ReturnShipmentSchema>;
 

@@ -1,31 +1,18 @@
-import { QueryTypes } from "sequelize";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ApiError } from "../../lib/api/errors";
-import type { User } from "../../models";
-import { placeMaxBid } from "../../lib/services/bidding";
 import { addDisputePhoto, readDisputePhoto } from "../../lib/services/disputes/evidence";
-import { confirmReturnReceived, recordReturn } from "../../lib/services/disputes/returns";
 import { decide } from "../../lib/services/disputes/decide";
 import { getCase, mediationQueue, myCases } from "../../lib/services/disputes/cases";
 import { openDispute } from "../../lib/services/disputes/open";
 import { postMessage } from "../../lib/services/disputes/conversation";
 import { takeCase, workspace } from "../../lib/services/disputes/mediation";
-import { markDelivered, markShipped, releaseDue } from "../../lib/services/escrow";
-import { balances, trialBalance } from "../../lib/services/ledger";
-import { closeSaleLot } from "../../lib/services/lot-closing";
-import { createLot, addItem } from "../../lib/services/lots";
-import { submitLot } from "../../lib/services/lot-review";
-import { payInvoice } from "../../lib/services/payments";
-import { reconcile } from "../../lib/services/reconcile";
-import { createSale } from "../../lib/services/sales";
+import { releaseDue } from "../../lib/services/escrow";
 import { statementFor } from "../../lib/services/statements";
 import { consignorRecord } from "../../lib/services/track-record";
-import type { OpenDisputeInput } from "../../lib/validation/disputes";
-import { db, Lot } from "../../models";
+import { db } from "../../models";
 import { startTestS3, type TestS3 } from "../setup/s3";
 import { startTestStripe, type TestStripe } from "../setup/stripe";
-import { approvedLot, inbox, itemInput, makeUser, request, sessionCookie, viewerOf } from "../support/factories";
-import { disputeSweep } from "../../lib/services/disputes/sweep";
+import { inbox, makeUser, request, sessionCookie, viewerOf } from "../support/factories";
 import { releaseUndisputedShare } from "../../lib/services/disputes/early-release";
 import { GET as queueRoute } from "../../app/api/mediation/queue/route";
 import { GET as caseRoute } from "../../app/api/disputes/[id]/route";
@@ -35,6 +22,7 @@ import sharp from "sharp";
 import { stripe } from "../../lib/stripe/client";
 import { consignorDesk } from "../../lib/services/consignor-desk";
 import { getInvoice } from "../../lib/services/invoices";
+import { claim, deliveredLot, expectSettled, one, refused } from "../support/claims";
 
 let fake: TestStripe;
 let s3: TestS3;
@@ -45,127 +33,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await fake.stop();
   await s3.stop();
-});
-
-const one = async <T extends object>(sql: string, r: Record<string, unknown>) =>
-  (await db().query<T>(sql, { replacements: r, type: QueryTypes.SELECT }))[0]!;
-const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000): Promise<T> => {
-  const end = Date.now() + ms;
-  let v = await fn();
-  while (!ok(v) && Date.now() < end) {
-    await new Promise((r) => setTimeout(r, 100));
-    v = await fn();
-  }
-  return v;
-};
-/** Nothing left in escrow or owed to the consignor; the house keeps what it should; the ledger balances and matches the processor. */
-async function expectSettled(invoiceId: string, kept: { premiumKeptCents: number; commissionKeptCents: number }) {
-  const led = await balances(invoiceId);
-  expect(led["escrow-held"]).toBe(0);
-  expect(led["consignor-payable"]).toBe(0);
-  expect(led["house-revenue-premium"]).toBe(-kept.premiumKeptCents);
-  expect(led["house-revenue-commission"]).toBe(-kept.commissionKeptCents);
-  expect(await trialBalance()).toBe(0);
-  expect((await reconcile()).differences).toEqual([]);
-}
-const refused = async (p: Promise<unknown>) => {
-  const e = await p.then(
-    () => null,
-    (x: unknown) => x,
-  );
-  expect(e).toBeInstanceOf(ApiError);
-  return e as ApiError;
-};
-
-/** Three lines: four tubes attributed to a maker, two sold by label alone, and a matched quad. */
-const LINES = [
-  itemInput({
-    designation: "12AX7",
-    quantity: 4,
-    labelBrand: "Carrow Instruments",
-    makerName: "Kestrel Valve Company",
-    makerBasis: "construction-matched",
-    features: { plateColour: "black", getterShape: "d-shape" },
-  }),
-  itemInput({ designation: "6SN7GT", quantity: 2, labelBrand: "Fairmont Home Radio" }),
-  itemInput({
-    designation: "EL84",
-    quantity: 4,
-    labelBrand: "Tri-County Parts",
-    makerName: "Vireo Lamp & Valve",
-    makerBasis: "construction-matched",
-    soldAsSet: true,
-  }),
-];
-
-/** A lot sold for a hammer of $27.00, paid, shipped and delivered (inspection window open). */
-async function deliveredLot(consignor?: User) {
-  const admin = await makeUser(["admin"]);
-  const seller = consignor ?? (await makeUser(["consignor"]));
-  const lot = await approvedLot(seller, admin, 2_000, LINES);
-  const sale = await createSale(viewerOf(admin), {
-    title: "Claims test",
-    startsAt: new Date(Date.now() - 60_000).toISOString(),
-    firstCloseAt: new Date(Date.now() + 2_500).toISOString(),
-    gapSeconds: 30,
-    softCloseSeconds: 1,
-    lots: [{ lotId: lot.id, openingCents: 1_000 }],
-  });
-  const sl = await one<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, { id: sale.id });
-  const buyer = await makeUser(["dealer"]);
-  const under = await makeUser(["dealer"]);
-  await placeMaxBid(viewerOf(buyer), sl.id, 3_000, "c-1");
-  await placeMaxBid(viewerOf(under), sl.id, 2_500, "c-2");
-  await new Promise((r) => setTimeout(r, 2_700));
-  expect(await closeSaleLot(sl.id)).toBe("closed");
-  const inv = await one<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, { id: sl.id });
-  await payInvoice(viewerOf(buyer), inv.id, {
-    number: "4242424242424242",
-    expMonth: 12,
-    expYear: 2030,
-    cvc: "123",
-    attemptKey: `pay-${inv.id}`,
-  });
-  await until(
-    () => one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: inv.id }),
-    (i) => i.state === "paid-held",
-  );
-  await markShipped(inv.id, "Demo Parcel Co.", "DP55501");
-  await markDelivered(inv.id);
-  const items = await db().query<{ id: string; position: number }>(
-    `SELECT id, position FROM lot_items WHERE lot_id = :id ORDER BY position`,
-    { replacements: { id: lot.id }, type: QueryTypes.SELECT },
-  );
-  return {
-    invoiceId: inv.id,
-    buyer,
-    consignor: seller,
-    admin,
-    saleId: sale.id,
-    lotId: lot.id,
-    items: items.map((i) => i.id),
-  };
-}
-
-const claim = (itemId: string, over: Partial<OpenDisputeInput> = {}): OpenDisputeInput => ({
-  reason: "maker-misattributed",
-  remedy: "refund-affected-items",
-  statement: "Two of the four carry another maker's source code and square getters.",
-  items: [
-    {
-      itemId,
-      tubes: 2,
-      sourceCode: "X46",
-      dateCode: "6231",
-      features: { getterShape: "square", plateSurface: "dimpled" },
-      readings: [],
-      designationSeen: null,
-      tubesReceived: null,
-      vacuumLoss: false,
-      note: "",
-    },
-  ],
-  ...over,
 });
 
 describe("claims and mediation", () => {
@@ -333,62 +200,6 @@ describe("claims and mediation", () => {
     expect(await releaseDue()).toBeGreaterThanOrEqual(1); // and the sweeper pays the consignor as usual
   }, 60_000);
 
-  it("a refund on return pays the buyer the hammer and premium once the consignor confirms receipt; two upheld misattributions send the next lot to extra review", async () => {
-    const seller = await makeUser(["consignor"]);
-    for (let round = 0; round < 2; round++) {
-      const f = await deliveredLot(seller);
-      const { id } = await openDispute(
-        viewerOf(f.buyer),
-        f.invoiceId,
-        claim(f.items[0]!, { remedy: "return-whole-lot" }),
-      );
-      await postMessage(viewerOf(f.consignor), id, { body: "Send them back, then.", stance: "accepts" });
-      const m = viewerOf(await makeUser(["mediator"]));
-      await takeCase(m, id);
-      await decide(m, id, {
-        outcome: "refund-on-return",
-        reasons: "The consignor accepts the claim; the whole lot goes back for a refund.",
-      });
-      expect((await getCase(viewerOf(f.buyer), id)).state).toBe("awaiting-return");
-      expect((await refused(confirmReturnReceived(viewerOf(f.consignor), id))).status).toBe(409); // nothing shipped yet
-      await recordReturn(viewerOf(f.buyer), id, { carrier: "Demo Parcel Co.", tracking: "RT 000111" });
-      // Two clicks at once: one pays the refund; the other answers 409 with the case as it stands, never a 500.
-      const clicks = await Promise.allSettled([
-        confirmReturnReceived(viewerOf(f.consignor), id),
-        confirmReturnReceived(viewerOf(f.consignor), id),
-      ]);
-      expect(clicks.filter((c) => c.status === "fulfilled")).toHaveLength(1);
-      const second = (clicks.find((c) => c.status === "rejected") as PromiseRejectedResult).reason as ApiError;
-      expect(second).toBeInstanceOf(ApiError);
-      expect(second.status).toBe(409);
-      expect(second.details?.returnReceivedAt).toEqual(expect.any(String));
-      expect((await refused(confirmReturnReceived(viewerOf(f.consignor), id))).details?.state).toBe("closed");
-      const inv = await one<{ state: string; payment_intent_id: string; hammer_cents: number; premium_cents: number }>(
-        `SELECT * FROM invoices WHERE id = :id`,
-        { id: f.invoiceId },
-      );
-      expect(inv.state).toBe("refunded");
-      const refunds = await stripe().refunds.list({ payment_intent: inv.payment_intent_id });
-      expect(refunds.data.map((r) => r.amount)).toEqual([inv.hammer_cents + inv.premium_cents]);
-      expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.payoutCents).toBe(0);
-      const led = await balances(f.invoiceId);
-      expect(led["escrow-held"]).toBe(0);
-      expect(led["house-revenue-commission"]).toBe(0);
-    }
-    expect(await trialBalance()).toBe(0);
-    // House setting: two upheld misattribution claims [SUG] → the next lot is reviewed more closely.
-    const lot = await createLot(viewerOf(seller), {
-      title: "After two upheld claims",
-      provenance: "",
-      shippingOrigin: "",
-      testerKind: "untested",
-      testerNotes: "",
-    });
-    await addItem(viewerOf(seller), lot.id, itemInput());
-    await submitLot(viewerOf(seller), lot.id);
-    expect((await Lot.findByPk(lot.id))!.extraReview).toBe(true);
-  }, 120_000);
-
   it("routes: role checks on the server, one error shape, bad input refused with field messages", async () => {
     const f = await deliveredLot();
     const buyerCookie = await sessionCookie(f.buyer);
@@ -491,73 +302,6 @@ describe("claims and mediation", () => {
         .status,
     ).toBe(404);
   }, 60_000);
-
-  it("deadlines: past the answer deadline the mediator decides on the buyer's evidence; a dismissal releases escrow; an unconfirmed return is refunded, an unsent one released", async () => {
-    // No answer by the deadline: decide on the buyer's evidence alone (dismissed here).
-    const a = await deliveredLot();
-    const c1 = await openDispute(viewerOf(a.buyer), a.invoiceId, claim(a.items[0]!));
-    const m = viewerOf(await makeUser(["mediator"]));
-    await takeCase(m, c1.id);
-    await db().query(`UPDATE disputes SET answer_due_at = now() - interval '1 second' WHERE id = :id`, {
-      replacements: { id: c1.id },
-    });
-    expect((await getCase(m, c1.id)).deadlinePassed).toBe(true);
-    await decide(m, c1.id, {
-      outcome: "dismissed",
-      reasons: "The code the buyer read is registered to the listed maker's brand owner; not misdescribed.",
-    });
-    const inv1 = await one<{ state: string; hammer_cents: number; commission_cents: number; transfer_id: string }>(
-      `SELECT * FROM invoices WHERE id = :id`,
-      { id: a.invoiceId },
-    );
-    expect(inv1.state).toBe("released");
-    expect((await stripe().transfers.retrieve(inv1.transfer_id)).amount).toBe(
-      inv1.hammer_cents - inv1.commission_cents,
-    );
-    expect(await consignorRecord(a.consignor.id)).toMatchObject({ tubesDisputed: 2, tubesUpheld: 0 });
-
-    // Refund on return: shipped back, the consignor never confirms; after the house's days the buyer is refunded anyway.
-    const b = await deliveredLot();
-    const c2 = await openDispute(viewerOf(b.buyer), b.invoiceId, claim(b.items[0]!, { remedy: "return-whole-lot" }));
-    await takeCase(m, c2.id);
-    await db().query(`UPDATE disputes SET answer_due_at = now() - interval '1 second' WHERE id = :id`, {
-      replacements: { id: c2.id },
-    });
-    await decide(m, c2.id, {
-      outcome: "refund-on-return",
-      reasons: "No answer from the consignor; the evidence supports a return of the whole lot.",
-    });
-    await recordReturn(viewerOf(b.buyer), c2.id, { carrier: "Demo Parcel Co.", tracking: "RT 222333" });
-    expect(await disputeSweep()).toBe(0); // not yet due
-    await db().query(`UPDATE disputes SET return_shipped_at = now() - interval '11 days' WHERE id = :id`, {
-      replacements: { id: c2.id },
-    });
-    expect(await disputeSweep()).toBeGreaterThanOrEqual(1);
-    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: b.invoiceId })).state).toBe(
-      "refunded",
-    );
-    expect((await getCase(m, c2.id)).decision?.closingNote).toMatch(/not confirmed in time/);
-
-    // Refund on return, never sent back by the deadline: the consignor is paid.
-    const c = await deliveredLot();
-    const c3 = await openDispute(viewerOf(c.buyer), c.invoiceId, claim(c.items[0]!, { remedy: "return-whole-lot" }));
-    await postMessage(viewerOf(c.consignor), c3.id, { body: "Return them if you must.", stance: "accepts" });
-    await takeCase(m, c3.id);
-    await decide(m, c3.id, {
-      outcome: "refund-on-return",
-      reasons: "The consignor accepts a return of the whole lot for a refund.",
-    });
-    await db().query(`UPDATE disputes SET return_due_at = now() - interval '1 second' WHERE id = :id`, {
-      replacements: { id: c3.id },
-    });
-    expect(await disputeSweep()).toBeGreaterThanOrEqual(1);
-    expect((await one<{ state: string }>(`SELECT state FROM invoices WHERE id = :id`, { id: c.invoiceId })).state).toBe(
-      "released",
-    );
-    expect((await getCase(m, c3.id)).state).toBe("closed");
-    expect(await trialBalance()).toBe(0);
-    expect((await reconcile()).differences).toEqual([]);
-  }, 120_000);
 
   it("releases the undisputed share early, then settles the claimed share: payouts, refund and ledger agree to the cent", async () => {
     const f = await deliveredLot();

@@ -130,6 +130,7 @@ export function presentCase({ d, role, head, items, messages, photos, names }: C
     returnDueAt: iso(d.return_due_at),
     returnCarrier: d.return_carrier,
     returnTracking: d.return_tracking,
+    returnPostageCents: d.return_postage_cents,
     heldLines: d.held_lines,
     undisputedReleasedAt: iso(d.undisputed_released_at),
     returnShippedAt: iso(d.return_shipped_at),

@@ -4,8 +4,12 @@ import type { Viewer } from "../../auth/guards";
 import { buildManifest, defaultLineValues } from "../../disputes/manifest";
 import { DISPUTE_SETTINGS } from "../../disputes/rules";
 import { settleLotRejection } from "../../money/refunds";
+import { repayablePostage, returnedCharges, returnPostageEntries } from "../../money/return-refund";
+import { stripe, stripeConfig } from "../../stripe/client";
 import type { ReturnShipmentInput } from "../../validation/disputes";
 import { db } from "../../../models";
+import { payoutAccount } from "../escrow";
+import { post } from "../ledger";
 import { mail, notice } from "./mail";
 import { saleOf } from "./mediation";
 import { loadCase, requireParty } from "./permissions";
@@ -15,11 +19,12 @@ import {
   closeDispute,
   findDispute,
   markReturnReceived,
+  recordPostageTransfer,
   recordReturnShipment,
   recordSettlement,
   type DisputeRow,
 } from "./tables/disputes";
-import { claimInvoice, markInvoiceRefunded } from "./tables/invoices";
+import { claimInvoice, lockInvoice, markInvoiceRefunded, postedOnInvoice, type CaseInvoice } from "./tables/invoices";
 import { lotItems } from "./tables/lot-items";
 import {
   casePath,
@@ -38,7 +43,12 @@ export async function recordReturn(viewer: Viewer, id: string, input: ReturnShip
     if (d.return_tracking === input.tracking) return; // a retry
     throw new ApiError("conflict", "The return is already recorded");
   }
-  await recordReturnShipment(id, input);
+  await recordReturnShipment(id, {
+    carrier: input.carrier,
+    tracking: input.tracking,
+    postageCents: input.postageCents ?? 0,
+    postageReceipt: input.postageReceipt || null,
+  });
   const facts = { id: d.id, number: d.number, carrier: input.carrier, tracking: input.tracking };
   await notice(d.consignor_id, returnShippedNotice(facts), casePath(d.id));
   await mail(
@@ -55,16 +65,50 @@ export async function refundReturnedLot(d: DisputeRow, why: string): Promise<voi
     saleOf(inv),
     buildManifest(manifestItems, defaultLineValues(manifestItems, inv.hammer_cents)),
   );
-  await payRefund(d, inv, s);
+  // The whole lot came back: its shipping and tax follow it [SUG].
+  const returned = returnedCharges(
+    { shippingCents: inv.shipping_cents, taxCents: inv.tax_cents },
+    { returnedValueCents: s.lotValueCents, lotValueCents: s.lotValueCents },
+  );
+  await payRefund(d, inv, s, returned);
+  const postageCents = await repayPostage(d, inv);
   await db().transaction(async (t) => {
     await markInvoiceRefunded(inv.id, t);
-    await recordSettlement(d.id, { ...s, items: undefined }, t);
+    await recordSettlement(d.id, { ...s, items: undefined, ...returned, postageCents }, t);
   });
   if (await closeDispute(d.id, "awaiting-return", why)) {
-    const facts = { id: d.id, number: d.number, why, buyerRefundCents: s.buyerRefundCents };
+    const cardCents = s.buyerRefundCents + returned.shippingCents + returned.taxCents;
+    const facts = { id: d.id, number: d.number, why, buyerRefundCents: cardCents, postageCents };
     await mail(d.buyer_id, returnRefundedToBuyer(facts));
     await mail(d.consignor_id, returnRefundedToConsignor(facts));
   }
+}
+
+/**
+ * Repay the buyer's return postage (bounded), charged to the consignor [SUG].
+ * A card refund cannot exceed the charge, which the refund of the lot has
+ * used up, so the postage goes to the buyer's payout account as a transfer
+ * keyed by case; posted once per invoice. Returns the amount repaid.
+ */
+async function repayPostage(d: DisputeRow, inv: CaseInvoice): Promise<number> {
+  const postage = repayablePostage(d.return_postage_cents);
+  if (postage <= 0 || (await postedOnInvoice(inv.id, "dispute-return-postage"))) return postage;
+  const transfer = await stripe().transfers.create(
+    {
+      amount: postage,
+      currency: stripeConfig().CURRENCY,
+      destination: await payoutAccount(d.buyer_id),
+      transfer_group: `invoice:${inv.id}`,
+      metadata: { invoice_id: inv.id, dispute_id: d.id, purpose: "return-postage" },
+    },
+    { idempotencyKey: `dispute:${d.id}:postage` },
+  );
+  await db().transaction(async (t) => {
+    await lockInvoice(inv.id, t);
+    if (await post(t, "dispute-return-postage", inv.id, returnPostageEntries(postage), transfer.id))
+      await recordPostageTransfer(d.id, transfer.id, t);
+  });
+  return postage;
 }
 
 /** The consignor confirms the returned lot arrived; the refund is paid at once. */

@@ -7,6 +7,7 @@ import { ApiError } from "../../api/errors";
 import { DISPUTE_SETTINGS } from "../../disputes/rules";
 import { refundEntries } from "../../money/ledger";
 import type { RefundSettlement } from "../../money/refunds";
+import { returnRefundEntries, type ReturnedCharges } from "../../money/return-refund";
 import { stripe } from "../../stripe/client";
 import { db } from "../../../models";
 import { release } from "../escrow";
@@ -14,7 +15,7 @@ import { post } from "../ledger";
 import { mail, notice } from "./mail";
 import { DAY_MS } from "./shared";
 import { awaitReturn, closeDispute, findDispute, isDecided, recordRefund, type DisputeRow } from "./tables/disputes";
-import { addRefunded, claimInvoice, disputeRefundPosted, lockInvoice, type CaseInvoice } from "./tables/invoices";
+import { addRefunded, claimInvoice, lockInvoice, postedOnInvoice, type CaseInvoice } from "./tables/invoices";
 import { displayNames } from "./tables/users";
 import { casePath, decidedNotice, decisionToBuyer, decisionToConsignor, returnNext, settledNext } from "./templates";
 
@@ -29,11 +30,20 @@ export type RefundMoves = Pick<
   | "houseChangeCents"
 >;
 
-/** Pay a refund out of held escrow through the processor and post it, once per case. */
-export async function payRefund(d: DisputeRow, inv: CaseInvoice, s: RefundMoves): Promise<void> {
+/**
+ * Pay a refund out of held escrow through the processor and post it, once per
+ * case. Returned goods also bring back their shipping and tax (`returned`),
+ * in the same card refund.
+ */
+export async function payRefund(
+  d: DisputeRow,
+  inv: CaseInvoice,
+  s: RefundMoves,
+  returned: ReturnedCharges = { shippingCents: 0, taxCents: 0 },
+): Promise<void> {
   if (s.buyerRefundCents <= 0) return;
   if (!inv.payment_intent_id) throw new Error(`invoice ${inv.number} has no payment to refund`);
-  if (await disputeRefundPosted(inv.id)) return; // paid before: a retry, or a second click that raced the first
+  if (await postedOnInvoice(inv.id, "dispute-refund")) return; // paid before: a retry, or a second click that raced the first
   const heldHammer = inv.hammer_cents - inv.hammer_refunded_cents - inv.released_hammer_cents;
   const heldPremium = inv.premium_cents - inv.premium_refunded_cents - inv.released_premium_cents;
   if (s.hammerRefundCents > heldHammer || s.premiumRefundCents > heldPremium) {
@@ -48,7 +58,7 @@ export async function payRefund(d: DisputeRow, inv: CaseInvoice, s: RefundMoves)
   const refund = await stripe().refunds.create(
     {
       payment_intent: inv.payment_intent_id,
-      amount: s.buyerRefundCents,
+      amount: s.buyerRefundCents + returned.shippingCents + returned.taxCents,
       reason: "requested_by_customer",
       metadata: { invoice_id: inv.id, dispute_id: d.id },
     },
@@ -56,7 +66,11 @@ export async function payRefund(d: DisputeRow, inv: CaseInvoice, s: RefundMoves)
   );
   await db().transaction(async (t) => {
     await lockInvoice(inv.id, t);
-    const posted = await post(t, "dispute-refund", inv.id, refundEntries(s as RefundSettlement, "held"), refund.id);
+    const entries =
+      returned.shippingCents + returned.taxCents > 0
+        ? returnRefundEntries({ heldCents: s.buyerRefundCents, ...returned })
+        : refundEntries(s as RefundSettlement, "held");
+    const posted = await post(t, "dispute-refund", inv.id, entries, refund.id);
     if (!posted) return;
     await addRefunded(
       inv.id,
@@ -67,7 +81,7 @@ export async function payRefund(d: DisputeRow, inv: CaseInvoice, s: RefundMoves)
       },
       t,
     );
-    await recordRefund(d.id, refund.id, s.buyerRefundCents, t);
+    await recordRefund(d.id, refund.id, refund.amount, t);
   });
 }
 

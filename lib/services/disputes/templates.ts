@@ -54,7 +54,7 @@ export const undisputedReleasedNotice = (number: string) =>
 
 /** What happens next after a refund-on-return decision. */
 export const returnNext = (due: Date, receiptConfirmDays: number) =>
-  `Ship the whole lot back by ${utc(due)} and enter the carrier and tracking number on the case page. The refund of the hammer price and premium is paid when the consignor confirms receipt, or ${receiptConfirmDays} days after the return ships if they do not.`;
+  `Ship the whole lot back by ${utc(due)} and enter the carrier and tracking number on the case page. Keep the postage receipt and enter what you paid: it is repaid with the refund (up to the house's limit). The refund of the hammer price, premium, shipping and tax is paid when the consignor confirms receipt, or ${receiptConfirmDays} days after the return ships if they do not.`;
 
 /** What happens next after a dismissal or a partial refund. */
 export const settledNext = (outcome: Outcome, buyerRefundCents: number | null) =>
@@ -117,16 +117,19 @@ export const returnShippedToConsignor = (c: Shipped & { receiptConfirmDays: numb
   body: `The buyer has shipped the lot back with ${c.carrier}, tracking ${c.tracking}. Confirm receipt on the case page when it arrives: ${caseUrl(c.id)}. If you do not, the buyer is refunded ${c.receiptConfirmDays} days after shipment.`,
 });
 
-type Refunded = { id: string; number: string; why: string; buyerRefundCents: number };
+type Refunded = { id: string; number: string; why: string; buyerRefundCents: number; postageCents: number };
+
+const postageLine = (c: Refunded, who: "you" | "the buyer") =>
+  c.postageCents > 0 ? ` The return postage (${formatCents(c.postageCents)}) is repaid to ${who}` : "";
 
 /** To the buyer: the returned lot is refunded. */
 export const returnRefundedToBuyer = (c: Refunded): Letter => ({
   subject: `Claim ${c.number} closed: refund paid`,
-  body: `The returned lot is settled (${c.why}): ${formatCents(c.buyerRefundCents)} is refunded to your card.\n\nThe case: ${caseUrl(c.id)}`,
+  body: `The returned lot is settled (${c.why}): ${formatCents(c.buyerRefundCents)} is refunded to your card (hammer, buyer's premium, shipping and tax).${postageLine(c, "you")}${c.postageCents > 0 ? " through your payout account." : ""}\n\nThe case: ${caseUrl(c.id)}`,
 });
 
 /** To the consignor: the returned lot is refunded. */
 export const returnRefundedToConsignor = (c: Refunded): Letter => ({
   subject: `Claim ${c.number} closed: refund paid`,
-  body: `The returned lot is settled (${c.why}): the buyer is refunded ${formatCents(c.buyerRefundCents)}; no payout is due on this lot, and no commission is charged.\n\nThe case: ${caseUrl(c.id)}`,
+  body: `The returned lot is settled (${c.why}): the buyer is refunded ${formatCents(c.buyerRefundCents)}; no payout is due on this lot, and no commission is charged.${postageLine(c, "the buyer")}${c.postageCents > 0 ? " and charged to your account, as the lot came back under an upheld claim." : ""}\n\nThe case: ${caseUrl(c.id)}`,
 });

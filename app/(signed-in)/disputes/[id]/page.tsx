@@ -91,6 +91,7 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           shippedAt={c.returnShippedAt}
           carrier={c.returnCarrier}
           tracking={c.returnTracking}
+          postageCents={c.returnPostageCents}
         />
       ) : null}
       <ClaimedItems items={c.items} />

@@ -66,6 +66,9 @@ export type DisputeRow = {
   updated_at: Date;
   held_lines: LineValue[] | null;
   undisputed_released_at: Date | null;
+  return_postage_cents: number;
+  return_postage_receipt: string | null;
+  postage_transfer_id: string | null;
 };
 
 /** A row whose decision has been recorded. */
@@ -103,6 +106,9 @@ export const DISPUTE_COLUMNS = [
   "updated_at",
   "held_lines",
   "undisputed_released_at",
+  "return_postage_cents",
+  "return_postage_receipt",
+  "postage_transfer_id",
 ] as const satisfies readonly (keyof DisputeRow)[];
 
 const ALL = columns(DISPUTE_COLUMNS);
@@ -280,12 +286,21 @@ export async function awaitReturn(id: string, due: Date): Promise<boolean> {
   return Boolean(row);
 }
 
-/** The buyer's return shipment, recorded once. */
-export async function recordReturnShipment(id: string, ship: { carrier: string; tracking: string }): Promise<void> {
+/** The buyer's return shipment and the postage they paid, recorded once. */
+export async function recordReturnShipment(
+  id: string,
+  ship: { carrier: string; tracking: string; postageCents: number; postageReceipt: string | null },
+): Promise<void> {
   await exec(
-    `UPDATE disputes SET return_carrier = :carrier, return_tracking = :tracking, return_shipped_at = now(), updated_at = now() WHERE id = :id AND return_shipped_at IS NULL`,
-    { carrier: ship.carrier, tracking: ship.tracking, id },
+    `UPDATE disputes SET return_carrier = :carrier, return_tracking = :tracking, return_postage_cents = :postage, return_postage_receipt = :receipt,
+            return_shipped_at = now(), updated_at = now() WHERE id = :id AND return_shipped_at IS NULL`,
+    { carrier: ship.carrier, tracking: ship.tracking, postage: ship.postageCents, receipt: ship.postageReceipt, id },
   );
+}
+
+/** Records the processor transfer that repaid the return postage. */
+export async function recordPostageTransfer(id: string, transferId: string, t: Transaction): Promise<void> {
+  await exec(`UPDATE disputes SET postage_transfer_id = :tr, updated_at = now() WHERE id = :id`, { tr: transferId, id }, t);
 }
 
 /** The consignor's confirmation that the return arrived; false when it was confirmed before. */

@@ -78,11 +78,11 @@ export async function markInvoiceRefunded(id: string, t: Transaction): Promise<v
   );
 }
 
-/** True once a dispute refund has been posted for the invoice. */
-export async function disputeRefundPosted(invoiceId: string): Promise<boolean> {
+/** True once a posting of this kind (e.g. "dispute-refund") has been made for the invoice. */
+export async function postedOnInvoice(invoiceId: string, kind: string): Promise<boolean> {
   const rows = await select<{ n: number }>(
-    `SELECT 1 AS n FROM ledger_entries WHERE invoice_id = :id AND txn_kind = 'dispute-refund' LIMIT 1`,
-    { id: invoiceId },
+    `SELECT 1 AS n FROM ledger_entries WHERE invoice_id = :id AND txn_kind = :kind LIMIT 1`,
+    { id: invoiceId, kind },
   );
   return rows.length > 0;
 }
