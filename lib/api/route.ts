@@ -6,13 +6,20 @@ import type { Permission } from "../auth/roles";
 import { env } from "../config/env";
 import { ApiError, fieldsFromIssues } from "./errors";
 
-type Ctx<P> = { req: NextRequest; params: P; viewer: Viewer | null };
-type RouteOptions = {
-  /** Required permission; omitted = any signed-in person, unless `public`. */
+/** What a handler receives: a guarded route always has its viewer; a public one may have none. */
+type Ctx<P, V extends Viewer | null> = { req: NextRequest; params: P; viewer: V };
+type GuardedOptions = {
+  /** Required permission; omitted = any signed-in person. */
   permission?: Permission;
-  /** No sign-in needed. */
-  public?: boolean;
+  public?: false;
 };
+type PublicOptions = {
+  /** No sign-in needed; the viewer is given when someone is signed in. */
+  public: true;
+  permission?: undefined;
+};
+type RouteOptions = GuardedOptions | PublicOptions;
+type Handler<P> = (req: NextRequest, context: { params: Promise<P> }) => Promise<Response>;
 
 /** Build the error response of the one error shape. Unknown errors leak nothing. */
 export function errorResponse(e: unknown): NextResponse {
@@ -29,10 +36,18 @@ export function errorResponse(e: unknown): NextResponse {
  * through the one guard module, and the one error shape for anything thrown.
  */
 export function route<P = Record<string, string>>(
+  opts: PublicOptions,
+  handler: (ctx: Ctx<P, Viewer | null>) => Promise<Response | unknown>,
+): Handler<P>;
+export function route<P = Record<string, string>>(
+  opts: GuardedOptions,
+  handler: (ctx: Ctx<P, Viewer>) => Promise<Response | unknown>,
+): Handler<P>;
+export function route<P = Record<string, string>>(
   opts: RouteOptions,
-  handler: (ctx: Ctx<P>) => Promise<Response | unknown>,
-) {
-  return async (req: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
+  handler: (ctx: Ctx<P, Viewer>) => Promise<Response | unknown>,
+): Handler<P> {
+  return async (req, context) => {
     try {
       const configured = env()
         .TRUSTED_ORIGINS.split(",")
@@ -45,7 +60,8 @@ export function route<P = Record<string, string>>(
         ? await viewerFromRequest(req).catch(() => null)
         : assertCan(await viewerFromRequest(req), opts.permission);
       const params = (await context?.params) ?? ({} as P);
-      const out = await handler({ req, params, viewer });
+      // The overloads tie a null viewer to `public: true` only; the implementation sees both.
+      const out = await (handler as (ctx: Ctx<P, Viewer | null>) => Promise<unknown>)({ req, params, viewer });
       return out instanceof Response ? out : NextResponse.json(out);
     } catch (e) {
       return errorResponse(e);
