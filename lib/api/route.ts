@@ -69,20 +69,27 @@ export function route<P = Record<string, string>>(
   };
 }
 
+/**
+ * Read a body of one of the given media types: 415 for any other type, 413 over `maxBytes` (checked on the
+ * declared length before reading, and on the bytes read).
+ */
+async function readBody(req: NextRequest, types: readonly string[], what: string, maxBytes: number): Promise<string> {
+  const type = (req.headers.get("content-type") ?? "").toLowerCase();
+  if (!types.some((t) => type.startsWith(t))) throw new ApiError("unsupported_media_type", `Send the body as ${what}`);
+  const tooLarge = () => new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
+  if (Number(req.headers.get("content-length") ?? "0") > maxBytes) throw tooLarge();
+  const text = await req.text();
+  if (Buffer.byteLength(text) > maxBytes) throw tooLarge();
+  return text;
+}
+
 /** Read and validate a JSON body: 415 for the wrong type, 413 over `maxBytes`, 400 otherwise. */
 export async function readJson<S extends z.ZodType>(
   req: NextRequest,
   schema: S,
   maxBytes = 64 * 1024,
 ): Promise<z.infer<S>> {
-  const type = req.headers.get("content-type") ?? "";
-  if (!type.includes("application/json"))
-    throw new ApiError("unsupported_media_type", "Send the body as application/json");
-  const declared = Number(req.headers.get("content-length") ?? "0");
-  if (declared > maxBytes) throw new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
-  const text = await req.text();
-  if (Buffer.byteLength(text) > maxBytes)
-    throw new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
+  const text = await readBody(req, ["application/json"], "application/json", maxBytes);
   let raw: unknown;
   try {
     raw = JSON.parse(text);
@@ -90,6 +97,18 @@ export async function readJson<S extends z.ZodType>(
     throw new ApiError("bad_request", "The body is not valid JSON");
   }
   return parseWith(schema, raw);
+}
+
+/**
+ * Read a text body (a CSV file, say): 415 unless its type is one of `types` (text/plain by default), 413 over
+ * `maxBytes`. What the text means is checked by its own reader.
+ */
+export async function readText(
+  req: NextRequest,
+  opts: { types?: readonly string[]; maxBytes?: number } = {},
+): Promise<string> {
+  const types = opts.types ?? ["text/plain"];
+  return readBody(req, types, types.join(" or "), opts.maxBytes ?? 64 * 1024);
 }
 
 /** Validate route params; anything malformed is answered as "not found". */
