@@ -10,6 +10,7 @@ import { DEFAULT_COMMISSION_TIERS, DEFAULT_FEE_SCHEDULE, invoiceFor, sellersComm
 import { invoiceIssuedEntries } from "../money/ledger";
 import { DEFAULT_SHIPPING_TABLE, shippingQuote } from "../money/shipping";
 import { db, User } from "../../models";
+import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
 import { post } from "./ledger";
 import { forgetComparables } from "./lot-summary";
 
@@ -36,42 +37,7 @@ export function shippingFor(tubes: number): number {
   return cents;
 }
 
-export type InvoiceRow = {
-  id: string;
-  number: string;
-  sale_lot_id: string;
-  lot_id: string;
-  buyer_id: string;
-  consignor_id: string;
-  state: string;
-  hammer_cents: number;
-  premium_bp: number;
-  premium_cents: number;
-  shipping_cents: number;
-  tax_cents: number;
-  total_cents: number;
-  commission_cents: number;
-  processor_fee_cents: number | null;
-  tube_count: number;
-  due_at: Date;
-  payment_intent_id: string | null;
-  last_payment_error: string | null;
-  paid_at: Date | null;
-  carrier: string | null;
-  tracking: string | null;
-  shipped_at: Date | null;
-  delivered_at: Date | null;
-  inspection_ends_at: Date | null;
-  released_at: Date | null;
-  transfer_id: string | null;
-  created_at: Date;
-  hammer_refunded_cents: number;
-  premium_refunded_cents: number;
-  commission_returned_cents: number;
-  released_hammer_cents: number;
-  released_premium_cents: number;
-  released_commission_cents: number;
-};
+export type { InvoiceRow } from "./invoice-rows";
 
 /**
  * Invoice a sold lot once: hammer, buyer's premium (house rate), shipping
@@ -157,7 +123,7 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
 /** One invoice, for its buyer, its consignor (without buyer details) or the house. */
 export async function getInvoice(viewer: Viewer, invoiceId: string) {
   const [inv] = await db().query<InvoiceRow & { title: string; sale_id: string; dispute_id: string | null }>(
-    `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id,
+    `SELECT ${invoiceColumns("i")}, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id,
             (SELECT COALESCE(jsonb_agg(jsonb_build_object('amountCents', u.amount_cents, 'state', u.state, 'refundedAt', u.refunded_at) ORDER BY u.detected_at), '[]'::jsonb)
                FROM unexpected_charges u WHERE u.invoice_id = i.id) AS unexpected
        FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id WHERE i.id = :invoiceId`,
@@ -228,7 +194,7 @@ export function presentInvoice(
 export async function listInvoices(viewer: Viewer) {
   const house = viewer.roles.includes("admin");
   const rows = await db().query<InvoiceRow & { title: string; sale_id: string }>(
-    `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id
+    `SELECT ${invoiceColumns("i")}, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id
       ${house ? "" : "WHERE i.buyer_id = :me OR i.consignor_id = :me"} ORDER BY i.created_at DESC LIMIT 500`,
     { replacements: { me: viewer.id }, type: QueryTypes.SELECT },
   );

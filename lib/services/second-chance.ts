@@ -7,7 +7,7 @@ import { formatCents } from "../money/cents";
 import { DEFAULT_COMMISSION_TIERS, DEFAULT_FEE_SCHEDULE, invoiceFor, sellersCommissionCents } from "../money/fees";
 import { entriesFrom, invoiceIssuedEntries } from "../money/ledger";
 import { db, User } from "../../models";
-import type { InvoiceRow } from "./invoices";
+import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
 import { INVOICE_SETTINGS } from "./invoices";
 import { post } from "./ledger";
 
@@ -23,7 +23,7 @@ export async function cancelUnpaid(
   const s = db();
   const out = await s.transaction(async (t) => {
     const [inv] = await s.query<InvoiceRow & { due_passed: boolean }>(
-      `SELECT *, due_at <= now() AS due_passed FROM invoices WHERE id = :invoiceId FOR UPDATE`,
+      `SELECT ${invoiceColumns()}, due_at <= now() AS due_passed FROM invoices WHERE id = :invoiceId FOR UPDATE`,
       { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t },
     );
     if (!inv) throw new ApiError("not_found", "No such invoice");
