@@ -65,6 +65,20 @@ export const SOURCES: readonly SourceEntry[] = [
     kind: "publication",
   },
   {
+    tag: "UAX-9",
+    title: "Unicode bidirectional algorithm",
+    publication:
+      "Unicode Standard Annex #9, Unicode Bidirectional Algorithm (explicit embeddings, overrides and isolates, U+202A–U+202E and U+2066–U+2069), revision for Unicode 15.1, 2023.",
+    kind: "publication",
+  },
+  {
+    tag: "UNI-23",
+    title: "Unicode control codes",
+    publication:
+      'The Unicode Standard, Version 15.1, chapter 23 "Special Areas and Format Characters", §23.1 Control Codes (C0 U+0000–U+001F, DEL U+007F, C1 U+0080–U+009F), 2023.',
+    kind: "publication",
+  },
+  {
     tag: "CTP",
     title: "Common trade practice",
     publication:
