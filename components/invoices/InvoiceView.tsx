@@ -2,6 +2,7 @@
 
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { When } from "@/components/time/When";
+import { useNow } from "@/components/time/useViewerZone";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -9,6 +10,7 @@ import { FormAlert } from "@/components/forms/Field";
 import { apiFetch } from "@/lib/client/api";
 import { formatCents } from "@/lib/money/cents";
 import type { presentInvoice } from "@/lib/services/invoices";
+import { InvoiceAddresses } from "./InvoiceAddresses";
 import { PayForm } from "./PayForm";
 import { INVOICE_STATE_WORDS } from "./words";
 
@@ -24,6 +26,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
     initialData: initial,
     refetchInterval: (q) => (q.state.data?.state === "awaiting-payment" ? 1500 : false),
   });
+  const now = useNow(); // null during hydration: time-dependent actions appear once the browser's clock is known
   const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
   const [carrier, setCarrier] = useState("");
   const [tracking, setTracking] = useState("");
@@ -43,8 +46,8 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
   const rows: [string, number][] = [
     ["Hammer price", inv.hammerCents],
     [`Buyer's premium (${inv.premiumBp / 100} %)`, inv.premiumCents],
-    ["Shipping", inv.shippingCents],
-    ...(inv.taxCents ? [["Sales tax", inv.taxCents] as [string, number]] : []),
+    [inv.shippingZone ? `Shipping (zone ${inv.shippingZone})` : "Shipping", inv.shippingCents],
+    ...(inv.taxCents ? [[`Sales tax (${inv.taxBp / 100} %)`, inv.taxCents] as [string, number]] : []),
   ];
   return (
     <div className="space-y-5">
@@ -66,7 +69,13 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
       <table className="card w-full max-w-lg text-sm">
         <tbody>
           {rows.map(([k, v]) => (
-            <tr key={k}>
+            <tr
+              key={k}
+              data-testid={`invoice-line-${k
+                .split(" ")[0]!
+                .toLowerCase()
+                .replace(/[^a-z]/g, "")}`}
+            >
               <td className="py-1">{k}</td>
               <td className="code py-1 text-right">{formatCents(v)}</td>
             </tr>
@@ -93,6 +102,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
           ) : null}
         </tbody>
       </table>
+      <InvoiceAddresses buyer={inv.addresses.buyer} origin={inv.addresses.origin} />
       {inv.unexpectedCharges.map((u, i) => (
         <p key={i} data-testid="unexpected-refund" className="card text-sm">
           A further payment of <span className="code">{formatCents(u.amountCents)}</span> was not owed on this invoice.{" "}
@@ -127,7 +137,8 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
       {inv.isBuyer &&
       inv.state === "delivered" &&
       inv.inspectionEndsAt &&
-      Date.parse(inv.inspectionEndsAt) > Date.now() ? (
+      now != null &&
+      Date.parse(inv.inspectionEndsAt) > now ? (
         <div className="flex flex-wrap items-center gap-3">
           <button type="button" className="btn-primary" onClick={() => void act(`/api/invoices/${inv.id}/accept`)}>
             I have inspected the tubes: release payment now
@@ -168,7 +179,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
           </button>
         </form>
       ) : null}
-      {house && inv.state === "awaiting-payment" && Date.parse(inv.dueAt) < Date.now() ? (
+      {house && inv.state === "awaiting-payment" && now != null && Date.parse(inv.dueAt) < now ? (
         <div className="card flex flex-wrap items-center gap-2 text-sm">
           <span>Unpaid past its due date.</span>
           <button

@@ -50,6 +50,7 @@ import type {
 import { db, User } from "../../models";
 import { release, releaseUndisputed } from "./escrow";
 import type { InvoiceRow } from "./invoices";
+import { settingsForInvoice } from "./house-settings";
 import { post } from "./ledger";
 import { registryEntries } from "./makers";
 import { notify } from "./notices";
@@ -207,6 +208,7 @@ export async function openDispute(
       t,
     );
     if (existing) return { ...existing, fresh: false };
+    const { claims } = await settingsForInvoice(invoiceId, t); // the sale's frozen settings
     const refusal = openingRefusal(
       {
         state: inv.state,
@@ -215,6 +217,7 @@ export async function openDispute(
       },
       Date.now(),
       input.reason,
+      claims.breakageClaimHours,
     );
     if (refusal) throw new ApiError("conflict", refusal);
 
@@ -256,7 +259,7 @@ export async function openDispute(
     const id = randomUUID();
     const [{ n }] = (await q<{ n: string }>(`SELECT nextval('dispute_numbers') AS n`, {}, t)) as [{ n: string }];
     const number = `CL-${new Date().getUTCFullYear()}-${n}`;
-    const due = new Date(answerDueAt(Date.now()));
+    const due = new Date(answerDueAt(Date.now(), claims.answerBusinessDays));
     await s.query(
       `INSERT INTO disputes (id, number, invoice_id, lot_id, buyer_id, consignor_id, reason, remedy, state, answer_due_at, created_at, updated_at)
        VALUES (:id, :number, :invoiceId, :lotId, :buyer, :consignor, :reason, :remedy, 'awaiting-answer', :due, now(), now())`,

@@ -26,6 +26,11 @@ export default async function HouseHome() {
           text: "Invoices, escrow, the ledger and its reconciliation with the payment processor.",
         },
         {
+          href: "/house/settings",
+          title: "House settings",
+          text: "Premium, commission, bidding, payment, inspection, claims, shipping zones and tax; every change kept.",
+        },
+        {
           href: "/house/users",
           title: "Accounts and roles",
           text: "Grant mediator and house roles; see who has joined.",
