@@ -135,6 +135,6 @@ export async function changeSettings(
     );
     return next;
   });
-  const [view] = (await settingsHistory(200)).filter((v) => v.version === version);
+  const [view] = (await settingsHistory(5)).filter((v) => v.version === version);
   return view!;
 }
