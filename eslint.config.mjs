@@ -38,13 +38,25 @@ const pureDomain = [
 ];
 
 const config = [
-  { ignores: [".next/**", "node_modules/**", ".data/**", "reports/**", "test-results/**", "playwright-report/**", "next-env.d.ts"] },
+  {
+    ignores: [
+      ".next/**",
+      "node_modules/**",
+      ".data/**",
+      "reports/**",
+      "test-results/**",
+      "playwright-report/**",
+      "next-env.d.ts",
+    ],
+  },
   ...nextVitals,
   ...nextTs,
   prettier,
   {
     rules: {
       "import/no-cycle": ["error", { ignoreExternal: true }],
+      // One file, one concern: past 400 lines a file is split along its seams.
+      "max-lines": ["error", { max: 400, skipBlankLines: false, skipComments: false }],
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
     },
   },

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { usePathname } from "next/navigation";
-import { useEffect, useState } from "react";
+import { useState } from "react";
 
 /** The header's links behind one button on narrow screens; closes when a page is chosen or Escape is pressed. */
 export function MenuButton({
@@ -12,9 +12,11 @@ export function MenuButton({
   items: { href: string; label: string }[];
   children?: React.ReactNode;
 }) {
-  const [open, setOpen] = useState(false);
+  // The menu stays open only on the page it was opened on: choosing a page closes it.
   const path = usePathname();
-  useEffect(() => setOpen(false), [path]);
+  const [openOn, setOpenOn] = useState<string | null>(null);
+  const open = openOn === path;
+  const setOpen = (next: boolean) => setOpenOn(next ? path : null);
   return (
     <div
       className="md:hidden"

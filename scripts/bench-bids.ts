@@ -14,7 +14,7 @@ import { loadEnvConfig } from "@next/env";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import { parseArgs } from "node:util";
+import { readBenchArgs } from "./bench-bids/args";
 import { audit, percentile, round, type Audit } from "./bench-bids/checks";
 import { CpuMeter, cpuLine, machineBusyCores } from "./bench-bids/cpu";
 import {
@@ -48,37 +48,7 @@ import { GAP_WAIT_MS } from "../lib/realtime/sequencer";
 const cwd = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..");
 loadEnvConfig(cwd, false, { info: () => undefined, error: console.error });
 
-const { values: argv } = parseArgs({
-  options: {
-    watchers: { type: "string", default: "200" },
-    bidders: { type: "string", default: "20" },
-    seconds: { type: "string", default: "20" },
-    rate: { type: "string", default: "50" },
-    database: { type: "string", default: "getterline_bench" },
-    profile: { type: "boolean", default: false },
-    "keep-logs": { type: "boolean", default: false },
-    "wait-idle": { type: "string", default: "0" },
-    over: { type: "string", default: "socket" },
-  },
-});
-const int = (name: string, v: string | undefined, min: number, max: number) => {
-  const n = Number(v);
-  if (!Number.isInteger(n) || n < min || n > max) {
-    console.error(`--${name} must be a whole number from ${min} to ${max}`);
-    process.exit(2);
-  }
-  return n;
-};
-const W = int("watchers", argv.watchers, 1, 5000);
-const M = int("bidders", argv.bidders, 1, 500);
-const T = int("seconds", argv.seconds, 1, 600);
-const R = int("rate", argv.rate, 1, 10_000);
-const WAIT_IDLE = int("wait-idle", argv["wait-idle"], 0, 3600);
-const DB = argv.database!;
-if (!/^getterline_bench[a-z0-9_]*$/.test(DB)) {
-  console.error("--database must start with getterline_bench");
-  process.exit(2);
-}
+const { argv, W, M, T, R, WAIT_IDLE, DB } = readBenchArgs();
 
 const log = (m: string) => console.log(`bench-bids: ${m}`);
 const secret = process.env.NEXTAUTH_SECRET;
@@ -91,10 +61,6 @@ const tmp = fs.mkdtempSync(path.join(os.tmpdir(), "getterline-bench-bids-"));
 let server: AppServer | undefined;
 let watchers: Watchers | undefined;
 let client: BidSender | undefined;
-if (argv.over !== "socket" && argv.over !== "http") {
-  console.error("--over must be socket or http");
-  process.exit(2);
-}
 let meter: CpuMeter | undefined;
 let dbCreated = false;
 let failed = false;

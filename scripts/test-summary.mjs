@@ -29,6 +29,16 @@ if (existsSync("reports/playwright.json")) {
   }
 } else problems.push("no playwright report");
 
+// Lint and format count as one check: a tree that fails them does not pass.
+if (existsSync("reports/lint.json")) {
+  const l = JSON.parse(readFileSync("reports/lint.json", "utf8"));
+  if (l.ok) passed += 1;
+  else {
+    failed += 1;
+    problems.push("lint: ESLint or Prettier reported problems (npm run lint)");
+  }
+} else problems.push("no lint report");
+
 for (const m of problems) console.log(`summary: ${m}`);
 console.log(`${passed} passed, ${failed} failed, ${skipped} skipped`);
 process.exit(failed > 0 || problems.length > 0 || passed === 0 ? 1 : 0);

@@ -18,7 +18,10 @@ E2E_DATABASE_URL=$(node -e 'const u=new URL(process.argv[1]);u.pathname="/getter
 export E2E_DATABASE_URL
 
 mkdir -p reports
-rm -f reports/vitest.json reports/playwright.json
+rm -f reports/vitest.json reports/playwright.json reports/lint.json
+
+echo "== lint and format (ESLint, Prettier)"
+if npm run --silent lint; then echo '{"ok":true}' >reports/lint.json; else echo '{"ok":false}' >reports/lint.json; fi
 
 echo "== unit and integration tests (vitest)"
 DATABASE_URL=$BASE_URL npx vitest run --reporter=default --reporter=json --outputFile.json=reports/vitest.json

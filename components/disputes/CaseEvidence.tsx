@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { PhotoPanel } from "@/components/lots/PhotoPanel";
-import type { CaseRole } from "@/lib/services/disputes";
+import type { CaseRole } from "@/lib/disputes/parties";
 import { CASE_ROLE_WORDS } from "./words";
 
 type Photo = {

@@ -7,7 +7,7 @@ import { Field, FormAlert } from "@/components/forms/Field";
 import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
 import { STANCES, STANCE_WORDS } from "@/lib/disputes/rules";
-import type { CaseRole } from "@/lib/services/disputes";
+import type { CaseRole } from "@/lib/disputes/parties";
 import { DisputeMessageSchema, type DisputeMessageInput } from "@/lib/validation/disputes";
 import { CASE_ROLE_TONE, CASE_ROLE_WORDS, utcText } from "./words";
 

@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { formatWhen } from "@/lib/time/format";
 import { useViewerZone } from "@/components/time/useViewerZone";
-import { useFieldArray, useForm, type Path } from "react-hook-form";
+import { useFieldArray, useForm, useWatch, type Path } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
 import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { ConstructionFields } from "@/components/valves/ConstructionFields";
@@ -72,13 +72,13 @@ export function ClaimForm({
 }) {
   const router = useRouter();
   const zone = useViewerZone();
-  const { register, control, handleSubmit, watch, setError, formState } = useForm<Values>({
+  const { register, control, handleSubmit, setError, formState } = useForm<Values>({
     defaultValues: { reason: "", remedy: "", statement: "", items: [] },
   });
   const { fields, append, remove } = useFieldArray({ control, name: "items" });
   const { message, run } = useApiSubmit<Values>(setError);
-  const reason = watch("reason");
-  const items = watch("items");
+  const reason = useWatch({ control, name: "reason" });
+  const items = useWatch({ control, name: "items" });
   const byId = new Map(lines.map((l) => [l.id, l]));
 
   function toggle(line: ClaimLine, on: boolean) {

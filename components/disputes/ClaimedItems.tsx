@@ -1,4 +1,4 @@
-import type { CaseView } from "@/lib/services/disputes";
+import type { CaseView } from "@/lib/services/disputes/presenters";
 import { readingsToText } from "@/lib/disputes/readings-text";
 import { FEATURE_FIELDS } from "@/lib/valves/construction-text";
 import type { FeatureKey } from "@/lib/valves/construction";

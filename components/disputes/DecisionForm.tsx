@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm, type Path } from "react-hook-form";
+import { useForm, useWatch, type Path } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
 import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
@@ -67,7 +67,7 @@ export function DecisionForm({
   const router = useRouter();
   const byItem = new Map((heldLines ?? defaults).map((d) => [d.itemId, d]));
   const locked = heldLines !== null;
-  const { register, handleSubmit, watch, setError, formState, getValues } = useForm<Values>({
+  const { register, control, handleSubmit, setError, formState, getValues } = useForm<Values>({
     defaultValues: {
       outcome: "partial-refund",
       reasons: "",
@@ -80,7 +80,7 @@ export function DecisionForm({
   });
   const { message, run } = useApiSubmit<Values>(setError);
   const [preview, setPreview] = useState<Preview | null>(null);
-  const outcome = watch("outcome");
+  const outcome = useWatch({ control, name: "outcome" });
 
   /** Form text to the schema's shape; money problems become field errors. */
   function payload(

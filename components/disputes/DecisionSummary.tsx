@@ -1,6 +1,6 @@
 import { OUTCOME_WORDS } from "@/lib/disputes/rules";
 import { formatCents } from "@/lib/money/cents";
-import type { CaseView } from "@/lib/services/disputes";
+import type { CaseView } from "@/lib/services/disputes/presenters";
 import { utcText } from "./words";
 
 /** The written decision: outcome, reasons, who decided and when, and the money it moved. */

@@ -1,5 +1,5 @@
 import type { ItemWeighing, SideRanking, GradedReading, Verdict } from "@/lib/disputes/weigh";
-import type { CaseView } from "@/lib/services/disputes";
+import type { CaseView } from "@/lib/services/disputes/presenters";
 import { FEATURE_FIELDS } from "@/lib/valves/construction-text";
 import type { FeatureKey } from "@/lib/valves/construction";
 

@@ -1,4 +1,4 @@
-import type { CaseRole } from "@/lib/services/disputes";
+import type { CaseRole } from "@/lib/disputes/parties";
 
 /** Each author's role in a claim, in words (colour only supports it). */
 export const CASE_ROLE_WORDS: Record<CaseRole, string> = {

@@ -45,7 +45,7 @@ export function ReferenceImportPanel() {
         CSV import and export
       </h2>
       <p className="text-sm">
-        <a className="underline" href="/api/valves/types/export">
+        <a download className="underline" href="/api/valves/types/export">
           Download the table as CSV
         </a>
         . Edit it, then preview and apply; a file with any bad line changes nothing, and importing the same file twice

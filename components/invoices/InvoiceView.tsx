@@ -2,7 +2,6 @@
 
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { When } from "@/components/time/When";
-import { useNow } from "@/components/time/useViewerZone";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -26,7 +25,8 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
     initialData: initial,
     refetchInterval: (q) => (q.state.data?.state === "awaiting-payment" ? 1500 : false),
   });
-  const now = useNow(); // null during hydration: time-dependent actions appear once the browser's clock is known
+  // Deadlines are judged against the moment the view was first drawn; the server decides again on every action.
+  const [drawnAt] = useState(() => Date.now());
   const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
   const [carrier, setCarrier] = useState("");
   const [tracking, setTracking] = useState("");
@@ -137,8 +137,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
       {inv.isBuyer &&
       inv.state === "delivered" &&
       inv.inspectionEndsAt &&
-      now != null &&
-      Date.parse(inv.inspectionEndsAt) > now ? (
+      Date.parse(inv.inspectionEndsAt) > drawnAt ? (
         <div className="flex flex-wrap items-center gap-3">
           <button type="button" className="btn-primary" onClick={() => void act(`/api/invoices/${inv.id}/accept`)}>
             I have inspected the tubes: release payment now
@@ -179,7 +178,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
           </button>
         </form>
       ) : null}
-      {house && inv.state === "awaiting-payment" && now != null && Date.parse(inv.dueAt) < now ? (
+      {house && inv.state === "awaiting-payment" && Date.parse(inv.dueAt) < drawnAt ? (
         <div className="card flex flex-wrap items-center gap-2 text-sm">
           <span>Unpaid past its due date.</span>
           <button

@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
-import { useRef, useState } from "react";
+import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
 import { ApiClientError, apiFetch } from "@/lib/client/api";
@@ -29,18 +29,18 @@ export function PayForm({
   onPaid: (m: { tone: "sound"; text: string }) => void;
 }) {
   const qc = useQueryClient();
-  const attempt = useRef<string>(crypto.randomUUID());
+  const [firstAttempt] = useState(() => crypto.randomUUID());
   const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
   const { register, handleSubmit, formState, reset } = useForm<CardForm, unknown, CardPayment>({
     resolver: zodResolver(CardPaymentSchema),
-    defaultValues: { attemptKey: attempt.current },
+    defaultValues: { attemptKey: firstAttempt },
   });
 
   async function onSubmit(values: CardPayment) {
     setMessage(null);
     try {
       const r = await apiFetch<Outcome>(`/api/invoices/${invoiceId}/pay`, {
-        json: { ...values, attemptKey: attempt.current },
+        json: values,
       });
       if (r.status === "requires_action") {
         setMessage({ tone: "sound", text: "Your card asks you to confirm the payment; taking you there…" });
@@ -58,8 +58,8 @@ export function PayForm({
         void qc.invalidateQueries({ queryKey: ["invoice", invoiceId] });
         return;
       }
-      attempt.current = crypto.randomUUID(); // a refused attempt: the next one is new
-      reset({ ...values, number: "", cvc: "", attemptKey: attempt.current });
+      // A refused attempt: the next one is new.
+      reset({ ...values, number: "", cvc: "", attemptKey: crypto.randomUUID() });
       setMessage({ tone: "fault", text: (e as Error).message });
     }
   }

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
-import { useEffect, useRef, useState } from "react";
+import { useRef, useState, useSyncExternalStore } from "react";
 import { ApiClientError, apiFetch } from "@/lib/client/api";
 import { canBidIn, panelMessage, type LastAction } from "@/lib/auction/standing";
 import { formatCents, parseMoneyToCents } from "@/lib/money/cents";
@@ -27,6 +27,17 @@ type BidAnswer = {
   live: LotLive;
   yourMaxCents: number;
 };
+
+/** Tell React when the live socket connects or drops. */
+function followConnection(changed: () => void): () => void {
+  const s = liveSocket();
+  s.on("connect", changed);
+  s.on("disconnect", changed);
+  return () => {
+    s.off("connect", changed);
+    s.off("disconnect", changed);
+  };
+}
 
 /**
  * Send a bid over the live socket when it is connected (no extra round trip
@@ -83,19 +94,7 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
   const zone = useViewerZone();
   const live = data.live;
   const left = useCountdown(live.closesAt);
-  const [connected, setConnected] = useState(false);
-  useEffect(() => {
-    const s = liveSocket();
-    const on = () => setConnected(true);
-    const off = () => setConnected(false);
-    setConnected(s.connected);
-    s.on("connect", on);
-    s.on("disconnect", off);
-    return () => {
-      s.off("connect", on);
-      s.off("disconnect", off);
-    };
-  }, []);
+  const connected = useSyncExternalStore(followConnection, () => liveSocket().connected, () => false);
 
   const refetchSoon = useRef<ReturnType<typeof setTimeout> | null>(null);
   const refetch = () => void qc.invalidateQueries({ queryKey: key });

@@ -17,7 +17,9 @@ export function useLotEvents(
   onResync: () => void,
 ) {
   const cb = useRef({ seqOf, onApply, onResync });
-  cb.current = { seqOf, onApply, onResync };
+  useEffect(() => {
+    cb.current = { seqOf, onApply, onResync };
+  });
   useEffect(() => {
     const queues = new Map<string, Sequencer<LotLive>>();
     const timers = new Map<string, ReturnType<typeof setTimeout>>();

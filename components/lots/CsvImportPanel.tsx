@@ -85,7 +85,7 @@ export function CsvImportPanel({ lotId, onApplied }: { lotId: string; onApplied:
       </h2>
       <p className="text-sm text-flash-700">
         One row per tested tube, or one row per bundle of untested tubes.{" "}
-        <a href="/api/lots/import-template" className="underline">
+        <a download href="/api/lots/import-template" className="underline">
           Download the template
         </a>{" "}
         (the columns are explained in the README). Nothing is added until you confirm; importing the same rows again

@@ -42,7 +42,7 @@ export function LotEditor({
   });
   const [editing, setEditing] = useState<ItemView | "new" | null>(null);
   const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
-  const refresh = useCallback(() => qc.invalidateQueries({ queryKey: key }), [qc, key.join()]); // eslint-disable-line react-hooks/exhaustive-deps
+  const refresh = useCallback(() => qc.invalidateQueries({ queryKey: ["lot", id] }), [qc, id]);
   const editable = data.lot.state === "draft" || data.lot.state === "needs-changes";
 
   const quick = useMutation({

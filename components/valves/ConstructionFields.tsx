@@ -1,6 +1,6 @@
 "use client";
 
-import type { UseFormRegister } from "react-hook-form";
+import type { FieldValues, Path, UseFormRegister } from "react-hook-form";
 import { FEATURE_FIELDS } from "@/lib/valves/construction-text";
 import type { FeatureKey } from "@/lib/valves/construction";
 
@@ -34,12 +34,11 @@ const words = (v: string) => v.replace(/-/g, " ");
  * Construction features as choices from our vocabulary, stored as text under
  * `features.<name>`. Leave a feature blank when it cannot be seen.
  */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
-export function ConstructionFields({
+export function ConstructionFields<T extends FieldValues>({
   register,
   prefix = "features",
 }: {
-  register: UseFormRegister<any>;
+  register: UseFormRegister<T>;
   prefix?: string;
 }) {
   return (
@@ -65,7 +64,7 @@ export function ConstructionFields({
                   <select
                     id={id}
                     className="input mt-0.5 py-1.5"
-                    {...register(`${prefix}.${k}`, { setValueAs: (v: string) => v ?? "" })}
+                    {...register(`${prefix}.${k}` as Path<T>, { setValueAs: (v: string) => v ?? "" })}
                   >
                     <option value="">not seen</option>
                     {options.map((o) => (

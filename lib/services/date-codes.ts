@@ -1,5 +1,6 @@
 import { ApiError } from "../api/errors";
-import { readDateCode, parseEuropeanDateLine, type DateCodeResult, type EuropeanDateResult } from "../valves/date-code";
+import { readDateCode, type DateCodeResult } from "../valves/date-code";
+import { parseEuropeanDateLine, type EuropeanDateResult } from "../valves/date-line-eu";
 import { decodeDesignation } from "../valves/designation";
 import type { DateCodeQueryInput } from "../validation/valves";
 import type { SourceCodeLookup } from "../valves/source-code";

@@ -2,7 +2,7 @@ import { QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { standingOf, type Standing } from "../auction/standing";
 import { db } from "../../models";
-import { myCases } from "./disputes";
+import { myCases } from "./disputes/cases";
 import { watchlist } from "./sales";
 
 export type DeskBid = {

@@ -9,7 +9,7 @@ import { emitLot } from "../realtime/lot-emitter";
 import { db, User } from "../../models";
 import { scheduleClose } from "./close-schedule";
 import { liveFrom } from "./live-lot";
-import { disputeSweep } from "./disputes";
+import { disputeSweep } from "./disputes/sweep";
 import { releaseDue } from "./escrow";
 import { refundDueUnexpectedCharges } from "./unexpected-charges";
 import { lotChanged } from "./catalogue/events";

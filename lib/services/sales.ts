@@ -1,10 +1,9 @@
 import { Op, QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
-import { applyBid, initialProxyState, type ProxyState } from "../auction/proxy";
+import { initialProxyState, type ProxyState } from "../auction/proxy";
 import { staggeredCloseTimes } from "../auction/soft-close";
 import { type LotLive } from "../realtime/events";
-import { emitLot } from "../realtime/lot-emitter";
 import type { SaleCreateInput } from "../validation/sales";
 import { db, Lot, Sale, SaleLot } from "../../models";
 import { lotChanged } from "./catalogue/events";
@@ -312,75 +311,6 @@ export async function setWatch(viewer: Viewer, saleLotId: string, on: boolean): 
 /** The viewer's watchlist with live states, read in one query. */
 export async function watchlist(viewer: Viewer) {
   return liveRows("sl.id IN (SELECT sale_lot_id FROM watches WHERE user_id = :u)", { u: viewer.id }, "sl.closes_at");
-}
-
-/**
- * The house retracts a bid, with the reason on record. The lot's state is
- * rebuilt from the remaining bids in sequence (a bid that no longer stands
- * alone is skipped), and the new state is broadcast.
- */
-export async function retractBid(admin: Viewer, saleLotId: string, bidId: string, reason: string): Promise<LotLive> {
-  const s = db();
-  const row = await s.transaction(async (t) => {
-    const [sl] = await s.query<{
-      id: string;
-      sale_id: string;
-      phase: LotLive["phase"];
-      seq: number;
-      state: ProxyState;
-      closes_at: Date;
-      hammer_cents: number | null;
-    }>(
-      `SELECT id, sale_id, phase, seq, state, closes_at, hammer_cents FROM sale_lots WHERE id = :saleLotId FOR UPDATE`,
-      { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
-    );
-    if (!sl) throw new ApiError("not_found", "No such lot in a sale");
-    if (sl.phase !== "open") throw new ApiError("conflict", "The lot has closed; bids can no longer be retracted");
-    const [hit] = await s.query(
-      `UPDATE bids SET retracted_at = now(), retracted_by = :admin, retract_reason = :reason WHERE id = :bidId AND sale_lot_id = :saleLotId AND retracted_at IS NULL RETURNING id`,
-      { replacements: { admin: admin.id, reason, bidId, saleLotId }, type: QueryTypes.SELECT, transaction: t },
-    );
-    if (!hit) throw new ApiError("not_found", "No such standing bid on this lot");
-    const remaining = await s.query<{ bidder_id: string; max_cents: number; placed_at: Date; seq: number }>(
-      `SELECT bidder_id, max_cents, placed_at, seq FROM bids WHERE sale_lot_id = :saleLotId AND retracted_at IS NULL ORDER BY seq`,
-      { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
-    );
-    let state = initialProxyState(sl.state.terms);
-    for (const b of remaining) {
-      const d = applyBid(state, {
-        bidderId: b.bidder_id,
-        maxCents: b.max_cents,
-        placedAtMs: b.placed_at.getTime(),
-        seq: b.seq,
-      });
-      if (d.accepted) state = d.state;
-    }
-    const seq = sl.seq + 1;
-    await s.query(
-      `UPDATE sale_lots SET state = :state::jsonb, seq = :seq, price_cents = :price, bid_count = :count, leader_id = :leader, reserve_met = :met, updated_at = now() WHERE id = :saleLotId`,
-      {
-        replacements: {
-          state: JSON.stringify(state),
-          seq,
-          price: state.priceCents,
-          count: state.bidCount,
-          leader: state.leader?.bidderId ?? null,
-          met: state.reserveMet,
-          saleLotId,
-        },
-        transaction: t,
-      },
-    );
-    return { ...sl, seq, state };
-  });
-  const leader = row.state.leader
-    ? ((await paddlesOf(row.sale_id, [row.state.leader.bidderId]).catch(() => new Map<string, number>())).get(
-        row.state.leader.bidderId,
-      ) ?? null)
-    : null;
-  const live = liveFrom(row, leader);
-  emitLot("lot.bid", live);
-  return live;
 }
 
 /** Approved lots not yet offered in any sale, for the house's sale form. */

@@ -67,13 +67,13 @@ export class SocketBidClient implements BidSender {
         saleLotId: this.saleLotId,
         maxCents,
         idempotencyKey: key,
-      })) as Record<string, any>;
+      })) as SocketAnswer;
       if (ack.ok)
         return {
           kind: "accepted",
-          seq: Number(ack.result.seq),
-          minimumCents: Number(ack.result.live?.minimumCents ?? 0),
-          replayed: Boolean(ack.result.replayed),
+          seq: Number(ack.result?.seq),
+          minimumCents: Number(ack.result?.live?.minimumCents ?? 0),
+          replayed: Boolean(ack.result?.replayed),
         };
       if (ack.error?.code === "conflict" && ack.error.details?.reason) {
         return {
@@ -92,6 +92,24 @@ export class SocketBidClient implements BidSender {
     for (const s of this.sockets) s.disconnect();
   }
 }
+
+/** What the server's answers carry, as far as the bench reads them. */
+type Refusal = {
+  code?: string;
+  details?: { reason?: string; minimumCents?: number; live?: { minimumCents?: number } };
+};
+type SocketAnswer = {
+  ok?: boolean;
+  result?: { seq?: number; replayed?: boolean; live?: { minimumCents?: number } };
+  error?: Refusal;
+};
+type HttpAnswer = {
+  accepted?: boolean;
+  seq?: number;
+  replayed?: boolean;
+  live?: { minimumCents?: number };
+  error?: Refusal;
+};
 
 /** A keep-alive HTTP client for the bid route, one cookie per dealer. */
 export class BidClient implements BidSender {
@@ -129,9 +147,9 @@ export class BidClient implements BidSender {
           res.on("data", (c: Buffer) => chunks.push(c));
           res.on("end", () => {
             const status = res.statusCode ?? 0;
-            let j: Record<string, any>;
+            let j: HttpAnswer;
             try {
-              j = JSON.parse(Buffer.concat(chunks).toString("utf8")) as Record<string, any>;
+              j = JSON.parse(Buffer.concat(chunks).toString("utf8")) as HttpAnswer;
             } catch {
               return resolve({ kind: "error", status, message: "not json" });
             }

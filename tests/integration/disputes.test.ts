@@ -3,20 +3,13 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ApiError } from "../../lib/api/errors";
 import type { User } from "../../models";
 import { placeMaxBid } from "../../lib/services/bidding";
-import {
-  addDisputePhoto,
-  confirmReturnReceived,
-  decide,
-  getCase,
-  mediationQueue,
-  myCases,
-  openDispute,
-  postMessage,
-  readDisputePhoto,
-  recordReturn,
-  takeCase,
-  workspace,
-} from "../../lib/services/disputes";
+import { addDisputePhoto, readDisputePhoto } from "../../lib/services/disputes/evidence";
+import { confirmReturnReceived, recordReturn } from "../../lib/services/disputes/returns";
+import { decide } from "../../lib/services/disputes/decide";
+import { getCase, mediationQueue, myCases } from "../../lib/services/disputes/cases";
+import { openDispute } from "../../lib/services/disputes/open";
+import { postMessage } from "../../lib/services/disputes/conversation";
+import { takeCase, workspace } from "../../lib/services/disputes/mediation";
 import { markDelivered, markShipped, releaseDue } from "../../lib/services/escrow";
 import { balances, trialBalance } from "../../lib/services/ledger";
 import { closeSaleLot } from "../../lib/services/lot-closing";
@@ -32,7 +25,8 @@ import { db, Lot } from "../../models";
 import { startTestS3, type TestS3 } from "../setup/s3";
 import { startTestStripe, type TestStripe } from "../setup/stripe";
 import { approvedLot, inbox, itemInput, makeUser, request, sessionCookie, viewerOf } from "../support/factories";
-import { disputeSweep, releaseUndisputedShare } from "../../lib/services/disputes";
+import { disputeSweep } from "../../lib/services/disputes/sweep";
+import { releaseUndisputedShare } from "../../lib/services/disputes/early-release";
 import { GET as queueRoute } from "../../app/api/mediation/queue/route";
 import { GET as caseRoute } from "../../app/api/disputes/[id]/route";
 import { POST as decisionRoute } from "../../app/api/disputes/[id]/decision/route";

@@ -1,7 +1,7 @@
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import { io as connect, type Socket } from "socket.io-client";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { gracefulShutdown } from "../../server/shutdown";
 import { createSale, getSale } from "../../lib/services/sales";
 import { approvedLot, makeUser, sessionCookie, viewerOf } from "../support/factories";

@@ -4,7 +4,8 @@ import { TakeCaseButton } from "@/components/disputes/TakeCaseButton";
 import { utcText } from "@/components/disputes/words";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { REASON_WORDS, OUTCOME_WORDS } from "@/lib/disputes/rules";
-import { mediationQueue, type CaseSummary } from "@/lib/services/disputes";
+import { mediationQueue } from "@/lib/services/disputes/cases";
+import { type CaseSummary } from "@/lib/services/disputes/presenters";
 
 export const metadata = { title: "Mediation" };
 

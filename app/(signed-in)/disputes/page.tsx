@@ -3,7 +3,7 @@ import { CaseStateBadge } from "@/components/disputes/CaseStateBadge";
 import { utcText } from "@/components/disputes/words";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { REASON_WORDS } from "@/lib/disputes/rules";
-import { myCases } from "@/lib/services/disputes";
+import { myCases } from "@/lib/services/disputes/cases";
 
 export const metadata = { title: "Claims" };
 

@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { comparablesFromSoldLots, type SoldLine } from "@/lib/lots/comparables";
 import { estimateLot } from "@/lib/lots/estimate";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { csvTemplate, IMPORT_COLUMNS, parseLotCsv } from "@/lib/lots/csv-import";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { describeDesignation, type LotItem, type TubeReading } from "@/lib/lots/item";
 import { readingsVsNominal, summariseLot, type ComparableSale } from "@/lib/lots/summary";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { familyMembers, typeFamily, UNIDENTIFIED_FAMILY_KEY } from "@/lib/lots/type-family";
 import { describeDesignation } from "@/lib/lots/item";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 

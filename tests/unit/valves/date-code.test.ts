@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { hasIsoWeek53, parseEuropeanDateLine, readDateCode } from "../../../lib/valves/date-code";
+import { hasIsoWeek53, readDateCode } from "../../../lib/valves/date-code";
+import { parseEuropeanDateLine } from "../../../lib/valves/date-line-eu";
 
 // 12AX7 introduced September 1947 [MEM, secondary histories].
 const TWELVE_AX7 = { introducedYear: 1947 };

@@ -6,7 +6,7 @@ import {
   isKnownDesignation,
   knownDesignations,
 } from "@/lib/valves/designation";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { decodeDesignation, type DecodedDesignation } from "@/lib/valves/designation";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 

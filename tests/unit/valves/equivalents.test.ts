@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { normaliseDesignation } from "@/lib/valves/designation";
 import { EQUIVALENT_GROUPS, composeLinks, findEquivalents, type LinkKind } from "@/lib/valves/equivalents";
 import { getReferenceType } from "@/lib/valves/reference-table";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { HAZARD_CAUTIONS, hazardsForType } from "@/lib/valves/hazards";
 import type { HazardKind } from "@/lib/valves/index-types";
-import { SEED_REFERENCE_TYPES, seedReferenceTable } from "@/lib/valves/seed";
+import { seedReferenceTable } from "@/lib/valves/seed";
 
 const SEED = seedReferenceTable();
 

@@ -10,7 +10,7 @@ import { utcText } from "@/components/disputes/words";
 import { ApiError } from "@/lib/api/errors";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { REASON_WORDS, REMEDY_WORDS, STANCE_WORDS, type Remedy } from "@/lib/disputes/rules";
-import { getCase } from "@/lib/services/disputes";
+import { getCase } from "@/lib/services/disputes/cases";
 import { getLot } from "@/lib/services/lots";
 
 export const metadata = { title: "Claim" };

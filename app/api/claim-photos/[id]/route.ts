@@ -2,7 +2,7 @@
 import { z } from "zod";
 import { parseParams, parseWith, route } from "@/lib/api/route";
 import { photoResponse } from "@/lib/api/upload";
-import { readDisputePhoto } from "@/lib/services/disputes";
+import { readDisputePhoto } from "@/lib/services/disputes/evidence";
 import { IdParam } from "@/lib/validation/common";
 
 const Query = z.object({ size: z.enum(["thumb", "full"]).default("thumb") });

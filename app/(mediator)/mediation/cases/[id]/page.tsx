@@ -12,7 +12,8 @@ import { ApiError } from "@/lib/api/errors";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { REASON_WORDS, REMEDY_WORDS, STANCE_WORDS, type Remedy } from "@/lib/disputes/rules";
 import { formatCents } from "@/lib/money/cents";
-import { getCase, workspace } from "@/lib/services/disputes";
+import { getCase } from "@/lib/services/disputes/cases";
+import { workspace } from "@/lib/services/disputes/mediation";
 
 export const metadata = { title: "Mediator's workspace" };
 

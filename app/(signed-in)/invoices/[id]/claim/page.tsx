@@ -10,6 +10,18 @@ import { getLot } from "@/lib/services/lots";
 
 export const metadata = { title: "Open a claim" };
 
+/** Why a claim cannot be opened now, judged at the time of this request (the page renders per request). */
+function refusalAtRequest(inv: { state: string; deliveredAt: string | null; inspectionEndsAt: string | null }) {
+  return openingRefusal(
+    {
+      state: inv.state,
+      deliveredAtMs: inv.deliveredAt ? Date.parse(inv.deliveredAt) : null,
+      inspectionEndsAtMs: inv.inspectionEndsAt ? Date.parse(inv.inspectionEndsAt) : null,
+    },
+    Date.now(),
+  );
+}
+
 export default async function ClaimPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const viewer = await requirePageViewer("lots.bid", `/invoices/${id}/claim`);
@@ -20,14 +32,7 @@ export default async function ClaimPage({ params }: { params: Promise<{ id: stri
   });
   if (!inv.isBuyer) notFound();
   if (inv.disputeId) redirect(`/disputes/${inv.disputeId}`);
-  const refusal = openingRefusal(
-    {
-      state: inv.state,
-      deliveredAtMs: inv.deliveredAt ? Date.parse(inv.deliveredAt) : null,
-      inspectionEndsAtMs: inv.inspectionEndsAt ? Date.parse(inv.inspectionEndsAt) : null,
-    },
-    Date.now(),
-  );
+  const refusal = refusalAtRequest(inv);
   const { items } = await getLot(viewer, inv.lotId);
   return (
     <div className="space-y-5">

@@ -1,6 +1,6 @@
 // POST /api/disputes/:id/decision — the case's mediator decides, once; the money moves
 import { parseParams, readJson, route } from "@/lib/api/route";
-import { decide } from "@/lib/services/disputes";
+import { decide } from "@/lib/services/disputes/decide";
 import { IdParam } from "@/lib/validation/common";
 import { DecisionSchema } from "@/lib/validation/disputes";
 

@@ -1,6 +1,6 @@
 // POST /api/disputes/:id/messages — post to a claim's conversation (the consignor's first message is their answer)
 import { parseParams, readJson, route } from "@/lib/api/route";
-import { postMessage } from "@/lib/services/disputes";
+import { postMessage } from "@/lib/services/disputes/conversation";
 import { IdParam } from "@/lib/validation/common";
 import { DisputeMessageSchema } from "@/lib/validation/disputes";
 

@@ -1,7 +1,7 @@
 // POST /api/disputes/:id/photos — add a photo to a claim's evidence (multipart: file, itemId?, caption?)
 import { parseParams, parseWith, route } from "@/lib/api/route";
 import { readPhotoUpload } from "@/lib/api/upload";
-import { addDisputePhoto } from "@/lib/services/disputes";
+import { addDisputePhoto } from "@/lib/services/disputes/evidence";
 import { IdParam, PhotoFieldsSchema } from "@/lib/validation/common";
 
 export const POST = route<{ id: string }>({ permission: "account.read" }, async ({ req, params, viewer }) => {

@@ -1,6 +1,6 @@
 // POST /api/disputes/:id/refund-preview — the refund a partial-refund decision would pay, to the cent; nothing moves
 import { parseParams, readJson, route } from "@/lib/api/route";
-import { refundPreview } from "@/lib/services/disputes";
+import { refundPreview } from "@/lib/services/disputes/mediation";
 import { IdParam } from "@/lib/validation/common";
 import { RefundPreviewSchema } from "@/lib/validation/disputes";
 

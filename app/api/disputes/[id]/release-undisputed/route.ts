@@ -1,6 +1,6 @@
 // POST /api/disputes/:id/release-undisputed — the case's mediator pays the consignor the share the claim does not touch
 import { parseParams, readJson, route } from "@/lib/api/route";
-import { releaseUndisputedShare } from "@/lib/services/disputes";
+import { releaseUndisputedShare } from "@/lib/services/disputes/early-release";
 import { IdParam } from "@/lib/validation/common";
 import { LineValuesSchema } from "@/lib/validation/disputes";
 

@@ -1,6 +1,6 @@
 // POST /api/disputes/:id/return — the buyer records the return shipment (carrier and tracking)
 import { parseParams, readJson, route } from "@/lib/api/route";
-import { recordReturn } from "@/lib/services/disputes";
+import { recordReturn } from "@/lib/services/disputes/returns";
 import { IdParam } from "@/lib/validation/common";
 import { ReturnShipmentSchema } from "@/lib/validation/disputes";
 

@@ -1,6 +1,6 @@
 // POST /api/invoices/:id/dispute — the buyer opens a claim on a delivered lot, inside its inspection window
 import { parseParams, readJson, route } from "@/lib/api/route";
-import { openDispute } from "@/lib/services/disputes";
+import { openDispute } from "@/lib/services/disputes/open";
 import { IdParam } from "@/lib/validation/common";
 import { OpenDisputeSchema } from "@/lib/validation/disputes";
 

@@ -1,7 +1,7 @@
 // POST /api/sale-lots/:id/bids/:bidId/retract — the house retracts a bid, with the reason on record
 import { z } from "zod";
 import { parseParams, readJson, route } from "@/lib/api/route";
-import { retractBid } from "@/lib/services/sales";
+import { retractBid } from "@/lib/services/bid-retraction";
 import { RetractSchema } from "@/lib/validation/sales";
 
 const Params = z.object({ id: z.uuid(), bidId: z.string().regex(/^\d{1,18}$/) });

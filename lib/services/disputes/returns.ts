@@ -1,0 +1,88 @@
+/** The return of a lot after a refund-on-return decision: shipment, receipt, and the full refund. */
+import { ApiError } from "../../api/errors";
+import type { Viewer } from "../../auth/guards";
+import { buildManifest, defaultLineValues } from "../../disputes/manifest";
+import { DISPUTE_SETTINGS } from "../../disputes/rules";
+import { settleLotRejection } from "../../money/refunds";
+import type { ReturnShipmentInput } from "../../validation/disputes";
+import { db } from "../../../models";
+import { mail, notice } from "./mail";
+import { saleOf } from "./mediation";
+import { loadCase, requireParty } from "./permissions";
+import { payRefund } from "./settle";
+import { asManifestItem } from "./shared";
+import {
+  closeDispute,
+  findDispute,
+  markReturnReceived,
+  recordReturnShipment,
+  recordSettlement,
+  type DisputeRow,
+} from "./tables/disputes";
+import { claimInvoice, markInvoiceRefunded } from "./tables/invoices";
+import { lotItems } from "./tables/lot-items";
+import {
+  casePath,
+  returnRefundedToBuyer,
+  returnRefundedToConsignor,
+  returnShippedNotice,
+  returnShippedToConsignor,
+} from "./templates";
+
+/** The buyer records the return shipment (refund-on-return). */
+export async function recordReturn(viewer: Viewer, id: string, input: ReturnShipmentInput): Promise<void> {
+  const { d, role } = await loadCase(viewer, id);
+  requireParty(role, "buyer", "Only the buyer records the return");
+  if (d.state !== "awaiting-return") throw new ApiError("conflict", "No return is expected on this case");
+  if (d.return_shipped_at) {
+    if (d.return_tracking === input.tracking) return; // a retry
+    throw new ApiError("conflict", "The return is already recorded");
+  }
+  await recordReturnShipment(id, input);
+  const facts = { id: d.id, number: d.number, carrier: input.carrier, tracking: input.tracking };
+  await notice(d.consignor_id, returnShippedNotice(facts), casePath(d.id));
+  await mail(
+    d.consignor_id,
+    returnShippedToConsignor({ ...facts, receiptConfirmDays: DISPUTE_SETTINGS.receiptConfirmDays }),
+  );
+}
+
+/** Pay the full refund on a returned lot and close the case (the consignor confirmed, or the deadline passed). */
+export async function refundReturnedLot(d: DisputeRow, why: string): Promise<void> {
+  const inv = await claimInvoice(d.invoice_id);
+  const manifestItems = (await lotItems(d.lot_id)).map(asManifestItem);
+  const s = settleLotRejection(
+    saleOf(inv),
+    buildManifest(manifestItems, defaultLineValues(manifestItems, inv.hammer_cents)),
+  );
+  await payRefund(d, inv, s);
+  await db().transaction(async (t) => {
+    await markInvoiceRefunded(inv.id, t);
+    await recordSettlement(d.id, { ...s, items: undefined }, t);
+  });
+  if (await closeDispute(d.id, "awaiting-return", why)) {
+    const facts = { id: d.id, number: d.number, why, buyerRefundCents: s.buyerRefundCents };
+    await mail(d.buyer_id, returnRefundedToBuyer(facts));
+    await mail(d.consignor_id, returnRefundedToConsignor(facts));
+  }
+}
+
+/** The consignor confirms the returned lot arrived; the refund is paid at once. */
+export async function confirmReturnReceived(viewer: Viewer, id: string): Promise<void> {
+  const { d, role } = await loadCase(viewer, id);
+  requireParty(role, "consignor", "Only the consignor confirms receipt");
+  if (d.state !== "awaiting-return" || !d.return_shipped_at || d.return_received_at) throw returnConflict(d);
+  if (!(await markReturnReceived(id))) throw returnConflict((await findDispute(id)) ?? d);
+  await refundReturnedLot(d, "the consignor confirmed receipt");
+}
+
+/** A second confirmation of a return (a double click, or two tabs): 409 with the case as it stands. */
+function returnConflict(d: DisputeRow): ApiError {
+  const message = d.return_received_at
+    ? `Receipt of the return was already confirmed on ${d.return_received_at.toISOString().slice(0, 10)}; the refund ${d.state === "closed" ? "has been paid" : "is being paid"}`
+    : "The buyer has not recorded a return shipment yet";
+  return new ApiError("conflict", message, undefined, undefined, {
+    state: d.state,
+    returnReceivedAt: d.return_received_at?.toISOString() ?? null,
+  });
+}
