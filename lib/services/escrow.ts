@@ -7,6 +7,7 @@ import { formatCents } from "../money/cents";
 import { inspectionWindowEnd } from "../money/inspection";
 import { escrowReleasedEntries, payoutSentEntries } from "../money/ledger";
 import { stripe, stripeConfig } from "../stripe/client";
+import { settingsForInvoice } from "./house-settings";
 import { notify } from "./notices";
 import { db, User } from "../../models";
 import type { InvoiceState } from "../money/invoice-states";
@@ -48,11 +49,16 @@ export async function markShipped(invoiceId: string, carrier: string, tracking: 
   );
 }
 
-/** The house records delivery; the inspection window starts (house setting: 7 days + 1 per 25 tubes, at most 21). */
+/**
+ * The house records delivery; the inspection window starts (the sale's frozen settings: 7 days + 1 per 25 tubes, at
+ * most 21, in version 1).
+ */
 export async function markDelivered(invoiceId: string): Promise<Date> {
   let ends = new Date();
+  const { inspection, claims } = await settingsForInvoice(invoiceId);
+  const rule = { ...inspection, breakageClaimHours: claims.breakageClaimHours };
   const inv = await step(invoiceId, "shipped", async (i, t) => {
-    ends = new Date(inspectionWindowEnd(Date.now(), i.tube_count));
+    ends = new Date(inspectionWindowEnd(Date.now(), i.tube_count, rule));
     await db().query(
       `UPDATE invoices SET state = 'delivered', delivered_at = now(), inspection_ends_at = :ends, updated_at = now() WHERE id = :invoiceId`,
       { replacements: { ends, invoiceId }, transaction: t },

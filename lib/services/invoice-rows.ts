@@ -23,6 +23,13 @@ export type InvoiceRow = {
   commission_cents: number;
   processor_fee_cents: number | null;
   tube_count: number;
+  /** The house settings version the sale froze (null only on invoices older than versions). */
+  settings_version: number | null;
+  /** The buyer's and consignor's addresses as they stood when the invoice was issued. */
+  buyer_address: unknown;
+  origin_address: unknown;
+  shipping_zone: string | null;
+  tax_bp: number;
   due_at: Date;
   payment_intent_id: string | null;
   last_payment_error: string | null;
@@ -61,6 +68,11 @@ export const INVOICE_COLUMNS = [
   "commission_cents",
   "processor_fee_cents",
   "tube_count",
+  "settings_version",
+  "buyer_address",
+  "origin_address",
+  "shipping_zone",
+  "tax_bp",
   "due_at",
   "payment_intent_id",
   "last_payment_error",

@@ -8,7 +8,8 @@ export const SaleCreateSchema = z
     startsAt: z.iso.datetime({ offset: true, message: "Give a start date and time" }),
     firstCloseAt: z.iso.datetime({ offset: true, message: "Give the first closing time" }),
     gapSeconds: z.number().int().min(10, "At least 10 seconds between closings").max(3600),
-    softCloseSeconds: z.number().int().min(30, "At least 30 seconds").max(1800),
+    /** Omitted: the late-bid window of the house settings in force. */
+    softCloseSeconds: z.number().int().min(30, "At least 30 seconds").max(1800).optional(),
     lots: z
       .array(
         z.object({

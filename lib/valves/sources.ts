@@ -79,6 +79,19 @@ export const SOURCES: readonly SourceEntry[] = [
     kind: "publication",
   },
   {
+    tag: "ISO-3166",
+    title: "Country codes",
+    publication:
+      "ISO 3166-1:2020, Codes for the representation of names of countries and their subdivisions — Part 1: Country code (alpha-2).",
+    kind: "publication",
+  },
+  {
+    tag: "PG-INT",
+    title: "Integer column range",
+    publication: "PostgreSQL documentation, section 8.1.1 Integer Types: integer is −2147483648 to +2147483647.",
+    kind: "publication",
+  },
+  {
     tag: "CTP",
     title: "Common trade practice",
     publication:

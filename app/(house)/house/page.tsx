@@ -26,6 +26,11 @@ export default async function HouseHome() {
       intro="What needs the house now, then the work you can start from here."
       actions={[
         { href: "/house/sales/new", title: "Schedule a sale", text: "Offer approved lots in a live sale." },
+        {
+          href: "/house/settings",
+          title: "House settings",
+          text: "Premium, commission, bidding, payment, inspection, claims, shipping zones and tax; every change kept.",
+        },
         { href: "/house/users", title: "Accounts and roles", text: "Grant mediator and house roles." },
         { href: "/house/reference", title: "Reference data", text: "Correct the figures readings are graded against." },
         { href: "/house/makers", title: "Maker registry", text: "Source codes and their makers." },
