@@ -35,7 +35,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
             {children}
           </main>
         </Providers>
-        <footer className="border-t border-flash-200 bg-white">
+        <footer className="border-t border-flash-200 bg-white print:hidden">
           <div className="mx-auto flex max-w-6xl flex-wrap gap-x-6 gap-y-2 px-4 py-4 text-sm text-flash-600">
             <span>Getterline Exchange</span>
             <Link href="/cautions" className="underline underline-offset-2">

@@ -36,7 +36,7 @@ export function navFor(viewer: Viewer | null): NavItem[] {
 export function SiteHeader({ viewer }: { viewer: Viewer | null }) {
   const items = navFor(viewer);
   return (
-    <header className="relative border-b border-flash-200 bg-white">
+    <header className="relative border-b border-flash-200 bg-white print:hidden">
       <div className="mx-auto flex max-w-6xl items-center gap-x-6 gap-y-2 px-4 py-3 md:flex-wrap">
         <Link href="/" className="flex items-center gap-2 font-semibold text-flash-900">
           <Mark />

@@ -15,6 +15,10 @@ export class Sale extends Model<InferAttributes<Sale>, InferCreationAttributes<S
   declare title: string;
   declare startsAt: Date;
   declare softCloseSeconds: CreationOptional<number>;
+  /** The house settings version in force when the sale was scheduled; all its money and timing read it. */
+  declare settingsVersion: CreationOptional<number>;
+  /** Most late-bid extensions per lot (from that version), or null for no cap. */
+  declare maxExtensions: CreationOptional<number | null>;
   declare isDemo: CreationOptional<boolean>;
   declare createdBy: string | null;
   declare createdAt: CreationOptional<Date>;
@@ -28,6 +32,8 @@ export class Sale extends Model<InferAttributes<Sale>, InferCreationAttributes<S
         title: { type: DataTypes.STRING(140), allowNull: false },
         startsAt: { type: DataTypes.DATE, allowNull: false },
         softCloseSeconds: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 120 },
+        settingsVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        maxExtensions: { type: DataTypes.INTEGER, allowNull: true },
         isDemo: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         createdBy: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,

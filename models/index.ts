@@ -1,5 +1,6 @@
 import type { Sequelize } from "sequelize";
 import { getSequelize } from "../lib/db/sequelize";
+import { HouseSettingsVersion, UserAddress } from "./HouseSettings";
 import { Lot } from "./Lot";
 import { LotEvent, LotImport } from "./LotEvent";
 import { LotItem } from "./LotItem";
@@ -51,6 +52,8 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Sale.hasMany(SaleLot, { foreignKey: "saleId", as: "saleLots" });
   SaleLot.belongsTo(Sale, { foreignKey: "saleId", as: "sale" });
   SaleLot.belongsTo(Lot, { foreignKey: "lotId", as: "lot" });
+  HouseSettingsVersion.initModel(sequelize);
+  UserAddress.initModel(sequelize);
   initialisedFor = sequelize;
   return sequelize;
 }
@@ -60,7 +63,7 @@ export function db(): Sequelize {
   return initModels(getSequelize());
 }
 
-export { Notice, Sale, SaleLot };
+export { HouseSettingsVersion, Notice, Sale, SaleLot, UserAddress };
 export {
   Lot,
   LotEvent,

@@ -11,6 +11,7 @@ import { getSequelize } from "../lib/db/sequelize";
 import { initModels } from "../models";
 import { startQueue, stopQueue } from "../lib/jobs/queue";
 import { startClosingWorker } from "../lib/services/lot-closing";
+import { startPeriodicJobs } from "../lib/services/periodic-jobs";
 import { startWantListWorker } from "../lib/services/want-list-matching";
 import { repairCatalogue } from "../lib/services/catalogue/entries";
 import { warmCatalogue } from "../lib/services/catalogue/search";
@@ -42,21 +43,15 @@ async function main(): Promise<void> {
   pool.on("connect", (client) => client.on("error", (err) => console.error("[socket pool client]", err.message)));
   const io = await attachSockets(server, pool);
 
-  await startQueue(e.DATABASE_URL);
-  const stopSweeper = await startClosingWorker();
+  const boss = await startQueue(e.DATABASE_URL);
+  await startClosingWorker();
+  // Sweeps and reconciliation: once per period for the whole cluster, however many instances run.
+  const periodic = await startPeriodicJobs(boss);
   await startWantListWorker();
   void repairCatalogue()
     .then((n) => n && console.log(`[catalogue] ${n} lot(s) added to the catalogue`))
     .then(() => warmCatalogue())
     .catch((err: Error) => console.error("[catalogue] repair failed", err.message));
-  const reconcileTimer = setInterval(
-    () =>
-      void import("../lib/services/reconcile")
-        .then((m) => m.reconcile())
-        .catch((err: Error) => console.error("[reconcile]", err.message)),
-    10 * 60_000,
-  );
-  reconcileTimer.unref();
   const stopDemo =
     process.env.DEMO_LIVE === "1" ? await (await import("./demo-live")).startDemoLife() : () => undefined;
 
@@ -80,8 +75,7 @@ async function main(): Promise<void> {
     closers: [
       async () => {
         stopDemo();
-        stopSweeper();
-        clearInterval(reconcileTimer);
+        periodic.stop();
       },
       () => stopQueue(),
       () => getSequelize().close(),

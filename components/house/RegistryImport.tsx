@@ -1,8 +1,10 @@
 "use client";
 
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
+import { ApiClientError, apiFetch } from "@/lib/client/api";
 
 type Row = {
   code: string;
@@ -16,22 +18,15 @@ type Preview = { rows: Row[]; errors: { line: number; message: string }[]; count
 
 const TEMPLATE = "code,maker_name,is_demo,notes\nX17,Aldergrove Electron Works,true,Invented demo code\n";
 
-async function post(csv: string, mode: "preview" | "apply"): Promise<Preview> {
-  const res = await fetch(`/api/valves/makers/import?mode=${mode}`, {
-    method: "POST",
-    headers: { "content-type": "text/csv" },
-    body: csv,
-  });
-  const body = await res.json();
-  if (!res.ok) {
-    const fields = body?.error?.fields
-      ? Object.entries(body.error.fields as Record<string, string>)
-          .map(([k, v]) => `${k}: ${v}`)
-          .join("; ")
-      : "";
-    throw new Error(`${body?.error?.message ?? "Import failed"}${fields ? ` (${fields})` : ""}`);
-  }
-  return body as Preview;
+/** The route's message, with any per-field messages after it. */
+function describe(e: unknown): string {
+  if (!(e instanceof ApiClientError)) return e instanceof Error ? e.message : "Import failed";
+  const fields = e.fields
+    ? Object.entries(e.fields)
+        .map(([k, v]) => `${k}: ${v}`)
+        .join("; ")
+    : "";
+  return `${e.message}${fields ? ` (${fields})` : ""}`;
 }
 
 /** Import the maker registry from CSV: preview every row, then apply in one go. */
@@ -40,13 +35,11 @@ export function RegistryImport() {
   const [csv, setCsv] = useState("");
   const [preview, setPreview] = useState<Preview | null>(null);
   const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
-  const [busy, setBusy] = useState(false);
-
-  async function run(mode: "preview" | "apply") {
-    setBusy(true);
-    setMessage(null);
-    try {
-      const p = await post(csv, mode);
+  const send = useMutation({
+    mutationFn: (mode: "preview" | "apply") =>
+      apiFetch<Preview>(`/api/valves/makers/import?mode=${mode}`, { body: csv, contentType: "text/csv" }),
+    onMutate: () => setMessage(null),
+    onSuccess: (p, mode) => {
       setPreview(p);
       if (mode === "apply") {
         setMessage({
@@ -55,12 +48,11 @@ export function RegistryImport() {
         });
         router.refresh();
       }
-    } catch (e) {
-      setMessage({ tone: "fault", text: e instanceof Error ? e.message : "Import failed" });
-    } finally {
-      setBusy(false);
-    }
-  }
+    },
+    onError: (e) => setMessage({ tone: "fault", text: describe(e) }),
+  });
+  const busy = send.isPending;
+  const run = (mode: "preview" | "apply") => send.mutate(mode);
 
   return (
     <div className="card space-y-3">
@@ -108,14 +100,14 @@ export function RegistryImport() {
       />
       {message ? <FormAlert tone={message.tone}>{message.text}</FormAlert> : null}
       <div className="flex gap-2">
-        <button type="button" className="btn-quiet" disabled={!csv || busy} onClick={() => void run("preview")}>
+        <button type="button" className="btn-quiet" disabled={!csv || busy} onClick={() => run("preview")}>
           Preview
         </button>
         <button
           type="button"
           className="btn-primary"
           disabled={!preview || preview.errors.length > 0 || busy}
-          onClick={() => void run("apply")}
+          onClick={() => run("apply")}
         >
           Apply import
         </button>

@@ -22,13 +22,13 @@ const defaultOpening = (l: Offerable) =>
   Math.max(100, Math.min(l.reserveCents ?? Infinity, Math.round(((l.estimateLowCents ?? 1000) * 0.25) / 100) * 100));
 
 /** The house schedules approved lots into a sale with staggered closing times. */
-export function SaleForm({ lots }: { lots: Offerable[] }) {
+export function SaleForm({ lots, softCloseSeconds = 120 }: { lots: Offerable[]; softCloseSeconds?: number }) {
   const router = useRouter();
   const [title, setTitle] = useState("");
   const [startsAt, setStartsAt] = useState(() => local(new Date(Date.now() + 5 * 60_000)));
   const [firstCloseAt, setFirstCloseAt] = useState(() => local(new Date(Date.now() + 65 * 60_000)));
   const [gap, setGap] = useState("60");
-  const [soft, setSoft] = useState("120");
+  const [soft, setSoft] = useState(String(softCloseSeconds));
   const [chosen, setChosen] = useState<Record<string, string>>({});
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [problem, setProblem] = useState<string | null>(null);

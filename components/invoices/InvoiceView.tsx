@@ -9,6 +9,7 @@ import { FormAlert } from "@/components/forms/Field";
 import { apiFetch } from "@/lib/client/api";
 import { formatCents } from "@/lib/money/cents";
 import type { presentInvoice } from "@/lib/services/invoices";
+import { InvoiceAddresses } from "./InvoiceAddresses";
 import { PayForm } from "./PayForm";
 import { INVOICE_STATE_WORDS } from "./words";
 
@@ -45,8 +46,8 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
   const rows: [string, number][] = [
     ["Hammer price", inv.hammerCents],
     [`Buyer's premium (${inv.premiumBp / 100} %)`, inv.premiumCents],
-    ["Shipping", inv.shippingCents],
-    ...(inv.taxCents ? [["Sales tax", inv.taxCents] as [string, number]] : []),
+    [inv.shippingZone ? `Shipping (zone ${inv.shippingZone})` : "Shipping", inv.shippingCents],
+    ...(inv.taxCents ? [[`Sales tax (${inv.taxBp / 100} %)`, inv.taxCents] as [string, number]] : []),
   ];
   return (
     <div className="space-y-5">
@@ -68,7 +69,13 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
       <table className="card w-full max-w-lg text-sm">
         <tbody>
           {rows.map(([k, v]) => (
-            <tr key={k}>
+            <tr
+              key={k}
+              data-testid={`invoice-line-${k
+                .split(" ")[0]!
+                .toLowerCase()
+                .replace(/[^a-z]/g, "")}`}
+            >
               <td className="py-1">{k}</td>
               <td className="code py-1 text-right">{formatCents(v)}</td>
             </tr>
@@ -95,6 +102,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
           ) : null}
         </tbody>
       </table>
+      <InvoiceAddresses buyer={inv.addresses.buyer} origin={inv.addresses.origin} />
       {inv.unexpectedCharges.map((u, i) => (
         <p key={i} data-testid="unexpected-refund" className="card text-sm">
           A further payment of <span className="code">{formatCents(u.amountCents)}</span> was not owed on this invoice.{" "}

@@ -1,7 +1,9 @@
 "use client";
 
+import { useMutation } from "@tanstack/react-query";
 import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
+import { apiFetch } from "@/lib/client/api";
 import { ACCEPTED_PHOTO_LABELS, MAX_PHOTO_BYTES, PHOTO_ACCEPT_ATTRIBUTE } from "@/lib/photos/formats";
 
 type Photo = { id: string; itemId: string | null; caption: string; width: number; height: number; byline?: string };
@@ -94,12 +96,13 @@ export function PhotoPanel({
     onChange?.();
   }
 
-  async function remove(id: string) {
-    setProblem(null);
-    const res = await fetch(`/api/lots/${lotId}/photos/${id}`, { method: "DELETE" });
-    if (!res.ok) setProblem((await res.json()).error?.message ?? "Could not remove the photo");
-    onChange?.();
-  }
+  const removal = useMutation({
+    mutationFn: (id: string) => apiFetch(`/api/lots/${lotId}/photos/${id}`, { method: "DELETE" }),
+    onMutate: () => setProblem(null),
+    onError: (e) => setProblem(e instanceof Error ? e.message : "Could not remove the photo"),
+    onSettled: () => onChange?.(),
+  });
+  const remove = (id: string) => removal.mutate(id);
 
   const itemLabel = (id: string | null) => (id ? (items.find((i) => i.id === id)?.label ?? "an item") : "the lot");
   return (
@@ -193,7 +196,7 @@ export function PhotoPanel({
                 {p.byline ? ` · ${p.byline}` : ""}
               </p>
               {removable ? (
-                <button type="button" className="text-xs underline" onClick={() => void remove(p.id)}>
+                <button type="button" className="text-xs underline" onClick={() => remove(p.id)}>
                   Remove
                 </button>
               ) : null}

@@ -6,13 +6,20 @@ import type { Permission } from "../auth/roles";
 import { env } from "../config/env";
 import { ApiError, fieldsFromIssues } from "./errors";
 
-type Ctx<P> = { req: NextRequest; params: P; viewer: Viewer | null };
-type RouteOptions = {
-  /** Required permission; omitted = any signed-in person, unless `public`. */
+/** What a handler receives: a guarded route always has its viewer; a public one may have none. */
+type Ctx<P, V extends Viewer | null> = { req: NextRequest; params: P; viewer: V };
+type GuardedOptions = {
+  /** Required permission; omitted = any signed-in person. */
   permission?: Permission;
-  /** No sign-in needed. */
-  public?: boolean;
+  public?: false;
 };
+type PublicOptions = {
+  /** No sign-in needed; the viewer is given when someone is signed in. */
+  public: true;
+  permission?: undefined;
+};
+type RouteOptions = GuardedOptions | PublicOptions;
+type Handler<P> = (req: NextRequest, context: { params: Promise<P> }) => Promise<Response>;
 
 /** Build the error response of the one error shape. Unknown errors leak nothing. */
 export function errorResponse(e: unknown): NextResponse {
@@ -29,10 +36,18 @@ export function errorResponse(e: unknown): NextResponse {
  * through the one guard module, and the one error shape for anything thrown.
  */
 export function route<P = Record<string, string>>(
+  opts: PublicOptions,
+  handler: (ctx: Ctx<P, Viewer | null>) => Promise<Response | unknown>,
+): Handler<P>;
+export function route<P = Record<string, string>>(
+  opts: GuardedOptions,
+  handler: (ctx: Ctx<P, Viewer>) => Promise<Response | unknown>,
+): Handler<P>;
+export function route<P = Record<string, string>>(
   opts: RouteOptions,
-  handler: (ctx: Ctx<P>) => Promise<Response | unknown>,
-) {
-  return async (req: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
+  handler: (ctx: Ctx<P, Viewer>) => Promise<Response | unknown>,
+): Handler<P> {
+  return async (req, context) => {
     try {
       const configured = env()
         .TRUSTED_ORIGINS.split(",")
@@ -45,12 +60,27 @@ export function route<P = Record<string, string>>(
         ? await viewerFromRequest(req).catch(() => null)
         : assertCan(await viewerFromRequest(req), opts.permission);
       const params = (await context?.params) ?? ({} as P);
-      const out = await handler({ req, params, viewer });
+      // The overloads tie a null viewer to `public: true` only; the implementation sees both.
+      const out = await (handler as (ctx: Ctx<P, Viewer | null>) => Promise<unknown>)({ req, params, viewer });
       return out instanceof Response ? out : NextResponse.json(out);
     } catch (e) {
       return errorResponse(e);
     }
   };
+}
+
+/**
+ * Read a body of one of the given media types: 415 for any other type, 413 over `maxBytes` (checked on the
+ * declared length before reading, and on the bytes read).
+ */
+async function readBody(req: NextRequest, types: readonly string[], what: string, maxBytes: number): Promise<string> {
+  const type = (req.headers.get("content-type") ?? "").toLowerCase();
+  if (!types.some((t) => type.startsWith(t))) throw new ApiError("unsupported_media_type", `Send the body as ${what}`);
+  const tooLarge = () => new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
+  if (Number(req.headers.get("content-length") ?? "0") > maxBytes) throw tooLarge();
+  const text = await req.text();
+  if (Buffer.byteLength(text) > maxBytes) throw tooLarge();
+  return text;
 }
 
 /** Read and validate a JSON body: 415 for the wrong type, 413 over `maxBytes`, 400 otherwise. */
@@ -59,14 +89,7 @@ export async function readJson<S extends z.ZodType>(
   schema: S,
   maxBytes = 64 * 1024,
 ): Promise<z.infer<S>> {
-  const type = req.headers.get("content-type") ?? "";
-  if (!type.includes("application/json"))
-    throw new ApiError("unsupported_media_type", "Send the body as application/json");
-  const declared = Number(req.headers.get("content-length") ?? "0");
-  if (declared > maxBytes) throw new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
-  const text = await req.text();
-  if (Buffer.byteLength(text) > maxBytes)
-    throw new ApiError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
+  const text = await readBody(req, ["application/json"], "application/json", maxBytes);
   let raw: unknown;
   try {
     raw = JSON.parse(text);
@@ -74,6 +97,18 @@ export async function readJson<S extends z.ZodType>(
     throw new ApiError("bad_request", "The body is not valid JSON");
   }
   return parseWith(schema, raw);
+}
+
+/**
+ * Read a text body (a CSV file, say): 415 unless its type is one of `types` (text/plain by default), 413 over
+ * `maxBytes`. What the text means is checked by its own reader.
+ */
+export async function readText(
+  req: NextRequest,
+  opts: { types?: readonly string[]; maxBytes?: number } = {},
+): Promise<string> {
+  const types = opts.types ?? ["text/plain"];
+  return readBody(req, types, types.join(" or "), opts.maxBytes ?? 64 * 1024);
 }
 
 /** Validate route params; anything malformed is answered as "not found". */

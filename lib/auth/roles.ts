@@ -12,6 +12,7 @@ export const PERMISSIONS = {
   "account.read": ["consignor", "dealer", "mediator", "admin"],
   "lots.consign": ["consignor"],
   "lots.bid": ["dealer"],
+  "address.keep": ["consignor", "dealer"],
   "shelf.use": ["dealer", "admin", "mediator"],
   "disputes.mediate": ["mediator"],
   "house.manage": ["admin"],

@@ -111,9 +111,14 @@ export interface ClaimableInvoice {
 /**
  * Why a claim cannot be opened now, or null when it can: only on a
  * delivered lot, and only before its inspection window ends; breakage in
- * transit only within 48 hours of delivery [CTP].
+ * transit only within 48 hours of delivery [CTP] (the sale's frozen settings may say otherwise).
  */
-export function openingRefusal(inv: ClaimableInvoice, nowMs: number, reason?: DisputeReason): string | null {
+export function openingRefusal(
+  inv: ClaimableInvoice,
+  nowMs: number,
+  reason?: DisputeReason,
+  breakageClaimHours: number = DISPUTE_SETTINGS.breakageClaimHours,
+): string | null {
   if (inv.state === "disputed") return "A claim is already open on this lot.";
   if (inv.state === "released")
     return "The payment has been released to the consignor: the inspection window is over, so a claim can no longer be opened.";
@@ -121,8 +126,8 @@ export function openingRefusal(inv: ClaimableInvoice, nowMs: number, reason?: Di
   if (inv.state !== "delivered" || inv.deliveredAtMs == null || inv.inspectionEndsAtMs == null) {
     return "A claim can be opened once the lot is delivered, during its inspection window.";
   }
-  if (reason === "transit-damage" && nowMs > inv.deliveredAtMs + DISPUTE_SETTINGS.breakageClaimHours * 3_600_000) {
-    return `Breakage in transit must be claimed within ${DISPUTE_SETTINGS.breakageClaimHours} hours of delivery, with photos of the packaging; this lot was delivered on ${new Date(inv.deliveredAtMs).toISOString().slice(0, 16).replace("T", " ")} UTC.`;
+  if (reason === "transit-damage" && nowMs > inv.deliveredAtMs + breakageClaimHours * 3_600_000) {
+    return `Breakage in transit must be claimed within ${breakageClaimHours} hours of delivery, with photos of the packaging; this lot was delivered on ${new Date(inv.deliveredAtMs).toISOString().slice(0, 16).replace("T", " ")} UTC.`;
   }
   if (nowMs >= inv.inspectionEndsAtMs) {
     return `The inspection window closed on ${new Date(inv.inspectionEndsAtMs).toISOString().slice(0, 16).replace("T", " ")} UTC; claims must be opened before it ends.`;

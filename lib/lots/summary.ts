@@ -125,7 +125,7 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
   const issues: string[] = [];
   const charts = chartLookup(opts.chartNewValues, issues);
   const families = new Map<string, FamilySummary>();
-  const batches = new Map<string, { familyKey: string; measure: TestMeasure; tubes: BatchTube[] }>();
+  const batches = new Map<string, Batch>();
   const attribution: Record<AttributionBasis, number> = {
     "source-code-confirmed": 0,
     "construction-matched": 0,
@@ -196,6 +196,39 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     });
   });
 
+  const rejectsByItem = gradeBatches(batches, families, tolerancePct);
+  const { groups, zeroValuedTubes } = estimateGroups(items, families, itemFamily, rejectsByItem);
+
+  const tests = emptyCounts();
+  const familyList = [...families.values()].sort((a, b) => b.tubes - a.tubes || a.key.localeCompare(b.key));
+  for (const f of familyList) addCounts(tests, f.tests);
+  return {
+    tubeCount,
+    families: familyList,
+    tests,
+    vacuumLoss,
+    matched: {
+      pairs: familyList.reduce((s, f) => s + f.pairs, 0),
+      quads: familyList.reduce((s, f) => s + f.quads, 0),
+      tolerancePct,
+    },
+    attribution,
+    hazards: lotHazardFlags(opts.reference, items, itemTubeCount),
+    unknownDesignations: [...unknown.values()],
+    estimate: estimateLot([...groups.values()], opts.comparables, { since: opts.comparablesSince }),
+    zeroValuedTubes,
+    issues,
+  };
+}
+
+type Batch = { familyKey: string; measure: TestMeasure; tubes: BatchTube[] };
+
+/** Grade each family's batch of like readings together; add the counts to the family and return rejects per item. */
+function gradeBatches(
+  batches: ReadonlyMap<string, Batch>,
+  families: ReadonlyMap<string, FamilySummary>,
+  tolerancePct: number,
+): Map<number, number> {
   const rejectsByItem = new Map<number, number>();
   for (const batch of batches.values()) {
     const result = gradeBatch({ measure: batch.measure, tolerancePct, tubes: batch.tubes });
@@ -218,7 +251,16 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     f.quads += result.quads?.sets.length ?? 0;
     if (result.quads && !result.quads.proven) f.quadsProven = false;
   }
+  return rejectsByItem;
+}
 
+/** Tubes worth pricing, grouped by family and condition; vacuum-lost and rejected tubes are valued at nothing. */
+function estimateGroups(
+  items: readonly LotItem[],
+  families: ReadonlyMap<string, FamilySummary>,
+  itemFamily: readonly string[],
+  rejectsByItem: ReadonlyMap<number, number>,
+): { groups: Map<string, EstimateGroup>; zeroValuedTubes: number } {
   const groups = new Map<string, EstimateGroup>();
   let zeroValuedTubes = 0;
   items.forEach((item, i) => {
@@ -236,25 +278,5 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     g.tubes += tubes - zero;
     groups.set(key, g);
   });
-
-  const tests = emptyCounts();
-  const familyList = [...families.values()].sort((a, b) => b.tubes - a.tubes || a.key.localeCompare(b.key));
-  for (const f of familyList) addCounts(tests, f.tests);
-  return {
-    tubeCount,
-    families: familyList,
-    tests,
-    vacuumLoss,
-    matched: {
-      pairs: familyList.reduce((s, f) => s + f.pairs, 0),
-      quads: familyList.reduce((s, f) => s + f.quads, 0),
-      tolerancePct,
-    },
-    attribution,
-    hazards: lotHazardFlags(opts.reference, items, itemTubeCount),
-    unknownDesignations: [...unknown.values()],
-    estimate: estimateLot([...groups.values()], opts.comparables, { since: opts.comparablesSince }),
-    zeroValuedTubes,
-    issues,
-  };
+  return { groups, zeroValuedTubes };
 }

@@ -15,6 +15,8 @@ export type LockedLot = {
   hammer_cents: number | null;
   starts_at: Date;
   soft_close_seconds: number;
+  /** Extension cap frozen on the sale from its settings version (null = no cap). */
+  max_extensions: number | null;
   db_now: Date;
   leader_paddle: number | null;
   prior_seq: number | null;
@@ -63,7 +65,7 @@ export async function withLotLock<T>(
     const res = (await client.query(
       `BEGIN;
        SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.extension_count, sl.seq, sl.state, sl.hammer_cents,
-              s.starts_at, s.soft_close_seconds, now() AS db_now, p.number AS leader_paddle,
+              s.starts_at, s.soft_close_seconds, s.max_extensions, now() AS db_now, p.number AS leader_paddle,
               b.seq AS prior_seq, b.outcome AS prior_outcome, b.max_cents AS prior_max
          FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id
          LEFT JOIN paddles p ON p.sale_id = sl.sale_id AND p.user_id = sl.leader_id

@@ -46,6 +46,8 @@ type Row = {
   state: ProxyState;
   starts_at: Date;
   soft_close_seconds: number;
+  /** Extension cap frozen on the sale from its settings version (null = no cap). */
+  max_extensions: number | null;
   db_now: Date;
   hammer_cents: number | null;
 };
@@ -153,7 +155,7 @@ export async function placeMaxBid(
         };
       const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, {
         windowSeconds: row.soft_close_seconds,
-        maxExtensions: null,
+        maxExtensions: row.max_extensions,
       });
       const next = decision.state;
       const seq = row.seq + 1;

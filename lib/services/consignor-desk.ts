@@ -66,9 +66,9 @@ export async function consignorDesk(viewer: Viewer) {
             i.id AS invoice_id, i.state AS invoice_state, i.hammer_cents AS inv_hammer, i.commission_cents, i.hammer_refunded_cents, i.commission_returned_cents,
             d.id AS claim_id, (d.state IS NOT NULL AND d.state <> 'closed') AS claim_open
        FROM lots l
-       LEFT JOIN LATERAL (SELECT * FROM sale_lots WHERE lot_id = l.id ORDER BY created_at DESC LIMIT 1) sl ON true
+       LEFT JOIN LATERAL (SELECT id, sale_id, phase, price_cents, bid_count, reserve_met, closes_at, hammer_cents FROM sale_lots WHERE lot_id = l.id ORDER BY created_at DESC LIMIT 1) sl ON true
        LEFT JOIN sales s ON s.id = sl.sale_id
-       LEFT JOIN LATERAL (SELECT * FROM invoices WHERE sale_lot_id = sl.id ORDER BY created_at DESC LIMIT 1) i ON true
+       LEFT JOIN LATERAL (SELECT id, state, hammer_cents, commission_cents, hammer_refunded_cents, commission_returned_cents FROM invoices WHERE sale_lot_id = sl.id ORDER BY created_at DESC LIMIT 1) i ON true
        LEFT JOIN LATERAL (SELECT id, state FROM disputes WHERE invoice_id = i.id ORDER BY created_at DESC LIMIT 1) d ON true
       WHERE l.consignor_id = :me ORDER BY COALESCE(sl.closes_at, l.updated_at) DESC LIMIT 500`,
     { replacements: { me: viewer.id }, type: QueryTypes.SELECT },

@@ -7,25 +7,23 @@ import { formatCents } from "../money/cents";
 import { inspectionWindowEnd } from "../money/inspection";
 import { escrowReleasedEntries, payoutSentEntries } from "../money/ledger";
 import { stripe, stripeConfig } from "../stripe/client";
+import { settingsForInvoice } from "./house-settings";
 import { notify } from "./notices";
 import { db, User } from "../../models";
-import type { InvoiceRow } from "./invoices";
+import type { InvoiceState } from "../money/invoice-states";
+import { findInvoice, type InvoiceRow } from "./invoice-rows";
 import { post } from "./ledger";
 import { statementCsv, statementFor, statementPdf } from "./statements";
 
 /** Move an invoice from one state to the next under its row lock; 409 from any other state. */
 async function step(
   invoiceId: string,
-  from: string,
+  from: InvoiceState,
   fn: (inv: InvoiceRow, t: import("sequelize").Transaction) => Promise<void>,
 ) {
   const s = db();
   return s.transaction(async (t) => {
-    const [inv] = await s.query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, {
-      replacements: { invoiceId },
-      type: QueryTypes.SELECT,
-      transaction: t,
-    });
+    const inv = await findInvoice(invoiceId, { transaction: t, lock: true });
     if (!inv) throw new ApiError("not_found", "No such invoice");
     if (inv.state !== from)
       throw new ApiError("conflict", `The invoice is ${inv.state}, not ${from}`, undefined, undefined, {
@@ -51,11 +49,16 @@ export async function markShipped(invoiceId: string, carrier: string, tracking: 
   );
 }
 
-/** The house records delivery; the inspection window starts (house setting: 7 days + 1 per 25 tubes, at most 21). */
+/**
+ * The house records delivery; the inspection window starts (the sale's frozen settings: 7 days + 1 per 25 tubes, at
+ * most 21, in version 1).
+ */
 export async function markDelivered(invoiceId: string): Promise<Date> {
   let ends = new Date();
+  const { inspection, claims } = await settingsForInvoice(invoiceId);
+  const rule = { ...inspection, breakageClaimHours: claims.breakageClaimHours };
   const inv = await step(invoiceId, "shipped", async (i, t) => {
-    ends = new Date(inspectionWindowEnd(Date.now(), i.tube_count));
+    ends = new Date(inspectionWindowEnd(Date.now(), i.tube_count, rule));
     await db().query(
       `UPDATE invoices SET state = 'delivered', delivered_at = now(), inspection_ends_at = :ends, updated_at = now() WHERE id = :invoiceId`,
       { replacements: { ends, invoiceId }, transaction: t },
@@ -71,10 +74,7 @@ export async function markDelivered(invoiceId: string): Promise<Date> {
 
 /** The buyer accepts the lot before the window ends: release at once. */
 export async function acceptDelivery(viewer: Viewer, invoiceId: string): Promise<void> {
-  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, {
-    replacements: { invoiceId },
-    type: QueryTypes.SELECT,
-  });
+  const inv = await findInvoice(invoiceId);
   if (!inv || inv.buyer_id !== viewer.id) throw new ApiError("not_found", "No such invoice");
   if (!(await release(invoiceId, "accepted by the buyer"))) {
     const [now] = await db().query<{ state: string; released_at: Date | null }>(
@@ -130,13 +130,11 @@ export async function payoutAccount(userId: string): Promise<string> {
  * by its case's decision (`fromDispute`).
  */
 export async function release(invoiceId: string, why: string, opts: { fromDispute?: boolean } = {}): Promise<boolean> {
-  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, {
-    replacements: { invoiceId },
-    type: QueryTypes.SELECT,
-  });
+  const inv = await findInvoice(invoiceId);
   if (!inv) throw new ApiError("not_found", "No such invoice");
   if (inv.state === "released") return false;
-  const releasable = (state: string) => state === "delivered" || (opts.fromDispute === true && state === "disputed");
+  const releasable = (state: InvoiceState) =>
+    state === "delivered" || (opts.fromDispute === true && state === "disputed");
   if (!releasable(inv.state)) {
     throw new ApiError(
       "conflict",
@@ -161,11 +159,7 @@ export async function release(invoiceId: string, why: string, opts: { fromDisput
       )
     : null;
   const released = await db().transaction(async (t) => {
-    const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, {
-      replacements: { invoiceId },
-      type: QueryTypes.SELECT,
-      transaction: t,
-    });
+    const locked = await findInvoice(invoiceId, { transaction: t, lock: true });
     if (!locked || !releasable(locked.state)) return false;
     if (left.hammerCents + left.premiumCents > 0)
       await post(t, "escrow-released", invoiceId, escrowReleasedEntries(left));
@@ -217,10 +211,7 @@ export async function releaseUndisputed(
   share: { hammerCents: number; premiumCents: number; commissionCents: number },
   why: string,
 ): Promise<{ payoutCents: number; done: boolean }> {
-  const [inv] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId`, {
-    replacements: { invoiceId },
-    type: QueryTypes.SELECT,
-  });
+  const inv = await findInvoice(invoiceId);
   if (!inv) throw new ApiError("not_found", "No such invoice");
   if (inv.state !== "disputed")
     throw new ApiError("conflict", "Only a lot under a claim has an undisputed share to release early");
@@ -242,11 +233,7 @@ export async function releaseUndisputed(
       )
     : null;
   const done = await db().transaction(async (t) => {
-    const [locked] = await db().query<InvoiceRow>(`SELECT * FROM invoices WHERE id = :invoiceId FOR UPDATE`, {
-      replacements: { invoiceId },
-      type: QueryTypes.SELECT,
-      transaction: t,
-    });
+    const locked = await findInvoice(invoiceId, { transaction: t, lock: true });
     if (!locked || locked.state !== "disputed" || locked.released_hammer_cents > 0 || locked.released_premium_cents > 0)
       return false;
     await post(t, "escrow-released-undisputed", invoiceId, escrowReleasedEntries(share));

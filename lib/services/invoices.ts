@@ -6,77 +6,38 @@ import { ApiError } from "../api/errors";
 import { env } from "../config/env";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
-import { DEFAULT_COMMISSION_TIERS, DEFAULT_FEE_SCHEDULE, invoiceFor, sellersCommissionCents } from "../money/fees";
 import { invoiceIssuedEntries } from "../money/ledger";
-import { DEFAULT_SHIPPING_TABLE, shippingQuote } from "../money/shipping";
+import { lotShippingCents, priceSoldLot } from "../money/settings-pricing";
+import { INITIAL_HOUSE_SETTINGS } from "../validation/house-settings";
 import { db, User } from "../../models";
+import { addressOf, invoiceAddressBlocks } from "./addresses";
+import { settingsVersion } from "./house-settings";
+import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
 import { post } from "./ledger";
 import { forgetComparables } from "./lot-summary";
 
-/** House settings for invoices (our own figures; see lib/money for the rules). */
+/**
+ * The invoice figures of the first settings version, for code that has no sale at hand. Sales read their own frozen
+ * version (lib/services/house-settings.ts); these stay equal to version 1.
+ */
 export const INVOICE_SETTINGS = {
-  dueDays: 7,
+  dueDays: INITIAL_HOUSE_SETTINGS.payment.dueDays,
   /** Packed weight per tube, grams: the tube, its box and cushioning [SUG, house figure]. */
-  gramsPerTube: 60,
-  zone: "home",
+  gramsPerTube: INITIAL_HOUSE_SETTINGS.shipping.gramsPerTube,
+  zone: INITIAL_HOUSE_SETTINGS.shipping.sameCountryZone,
 };
 
-/** Shipping for a lot: parcels of at most the table's heaviest band, each priced by our table. */
+/** Domestic shipping for a lot under the first settings version (sales price by zone from their own version). */
 export function shippingFor(tubes: number): number {
-  const maxParcel = DEFAULT_SHIPPING_TABLE.bands[DEFAULT_SHIPPING_TABLE.bands.length - 1]!.upToGrams;
-  let grams = Math.max(1, tubes) * INVOICE_SETTINGS.gramsPerTube;
-  let cents = 0;
-  while (grams > 0) {
-    const parcel = Math.min(grams, maxParcel);
-    const q = shippingQuote(DEFAULT_SHIPPING_TABLE, parcel, INVOICE_SETTINGS.zone);
-    if (q.kind !== "rate") throw new Error(`shipping table cannot price ${parcel} g to ${INVOICE_SETTINGS.zone}`);
-    cents += q.cents;
-    grams -= parcel;
-  }
-  return cents;
+  return lotShippingCents(INITIAL_HOUSE_SETTINGS.shipping, tubes, INVOICE_SETTINGS.zone);
 }
 
-export type InvoiceRow = {
-  id: string;
-  number: string;
-  sale_lot_id: string;
-  lot_id: string;
-  buyer_id: string;
-  consignor_id: string;
-  state: string;
-  hammer_cents: number;
-  premium_bp: number;
-  premium_cents: number;
-  shipping_cents: number;
-  tax_cents: number;
-  total_cents: number;
-  commission_cents: number;
-  processor_fee_cents: number | null;
-  tube_count: number;
-  due_at: Date;
-  payment_intent_id: string | null;
-  last_payment_error: string | null;
-  paid_at: Date | null;
-  carrier: string | null;
-  tracking: string | null;
-  shipped_at: Date | null;
-  delivered_at: Date | null;
-  inspection_ends_at: Date | null;
-  released_at: Date | null;
-  transfer_id: string | null;
-  created_at: Date;
-  hammer_refunded_cents: number;
-  premium_refunded_cents: number;
-  commission_returned_cents: number;
-  released_hammer_cents: number;
-  released_premium_cents: number;
-  released_commission_cents: number;
-};
+export type { InvoiceRow } from "./invoice-rows";
 
 /**
- * Invoice a sold lot once: hammer, buyer's premium (house rate), shipping
- * from our weight-band table, tax where configured; the commission is fixed
- * now from the house's tiers. Posts the invoice to the ledger in the same
+ * Invoice a sold lot once, by the settings version frozen on its sale: hammer, buyer's premium, shipping by zone from
+ * the consignor's address to the buyer's over the weight bands, tax by the destination's rule (none without one);
+ * the commission is fixed now from the version's tiers, and both addresses are copied onto the invoice. Posts the invoice to the ledger in the same
  * transaction and e-mails the buyer. Calling it again changes nothing.
  */
 export async function invoiceSoldLot(saleLotId: string): Promise<string | null> {
@@ -90,10 +51,11 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
       hammer_cents: number | null;
       phase: string;
       tubes: string;
+      settings_version: number;
     }>(
-      `SELECT sl.id, sl.lot_id, sl.buyer_id, sl.consignor_id, sl.hammer_cents, sl.phase,
+      `SELECT sl.id, sl.lot_id, sl.buyer_id, sl.consignor_id, sl.hammer_cents, sl.phase, s.settings_version,
               (SELECT COALESCE(SUM(quantity), 0) FROM lot_items WHERE lot_id = sl.lot_id) AS tubes
-         FROM sale_lots sl WHERE sl.id = :saleLotId FOR UPDATE`,
+         FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.id = :saleLotId FOR UPDATE OF sl`,
       { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );
     if (!sl || sl.phase !== "sold" || !sl.buyer_id || sl.hammer_cents == null) return null;
@@ -104,9 +66,10 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
     });
     if (existing) return null; // invoiced already (a second-chance invoice is written by offerToUnderbidder)
     const tubes = Number(sl.tubes);
-    const shippingCents = shippingFor(tubes);
-    const inv = invoiceFor({ hammerCents: sl.hammer_cents, shippingCents }, DEFAULT_FEE_SCHEDULE);
-    const commission = sellersCommissionCents(sl.hammer_cents, DEFAULT_COMMISSION_TIERS);
+    const settings = await settingsVersion(sl.settings_version, t);
+    const destination = await addressOf(sl.buyer_id, t);
+    const origin = await addressOf(sl.consignor_id, t);
+    const inv = priceSoldLot({ hammerCents: sl.hammer_cents, tubes, origin, destination }, settings);
     const id = randomUUID();
     const [{ n }] = (await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, {
       type: QueryTypes.SELECT,
@@ -114,8 +77,10 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
     })) as [{ n: string }];
     await s.query(
       `INSERT INTO invoices (id, number, sale_lot_id, lot_id, buyer_id, consignor_id, state, hammer_cents, premium_bp, premium_cents, shipping_cents, tax_cents, total_cents,
-                             commission_cents, tube_count, due_at, created_at, updated_at)
+                             commission_cents, tube_count, settings_version, buyer_address, origin_address, shipping_zone, tax_bp,
+                             due_at, created_at, updated_at)
        VALUES (:id, :number, :saleLotId, :lotId, :buyer, :consignor, 'awaiting-payment', :hammer, :bp, :premium, :shipping, :tax, :total, :commission, :tubes,
+               :version, CAST(:buyerAddress AS jsonb), CAST(:originAddress AS jsonb), :zone, :taxBp,
                now() + (:dueDays || ' days')::interval, now(), now())`,
       {
         replacements: {
@@ -126,20 +91,25 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
           buyer: sl.buyer_id,
           consignor: sl.consignor_id,
           hammer: inv.hammerCents,
-          bp: DEFAULT_FEE_SCHEDULE.buyersPremiumBp,
+          bp: inv.premiumBp,
           premium: inv.premiumCents,
           shipping: inv.shippingCents,
           tax: inv.taxCents,
           total: inv.totalCents,
-          commission,
+          commission: inv.commissionCents,
           tubes,
-          dueDays: String(INVOICE_SETTINGS.dueDays),
+          version: sl.settings_version,
+          buyerAddress: destination ? JSON.stringify(destination) : null,
+          originAddress: origin ? JSON.stringify(origin) : null,
+          zone: inv.zone,
+          taxBp: inv.taxBp,
+          dueDays: String(settings.payment.dueDays),
         },
         transaction: t,
       },
     );
     await post(t, "invoice-issued", id, invoiceIssuedEntries(inv));
-    return { id, buyerId: sl.buyer_id, total: inv.totalCents };
+    return { id, buyerId: sl.buyer_id, total: inv.totalCents, dueDays: settings.payment.dueDays };
   });
   if (!created) return null;
   forgetComparables(); // a new sale for estimates and price history
@@ -148,7 +118,7 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
     await sendMail({
       to: buyer.email,
       subject: "Your Getterline invoice",
-      text: `Hello ${buyer.displayName},\n\nYour invoice for the lot you won is ready: ${formatCents(created.total)} due within ${INVOICE_SETTINGS.dueDays} days.\nThe house holds your payment until you have received and inspected the tubes.\n\nPay: ${env().NEXTAUTH_URL}/invoices/${created.id}\n\nGetterline Exchange`,
+      text: `Hello ${buyer.displayName},\n\nYour invoice for the lot you won is ready: ${formatCents(created.total)} due within ${created.dueDays} days.\nThe house holds your payment until you have received and inspected the tubes.\n\nPay: ${env().NEXTAUTH_URL}/invoices/${created.id}\n\nGetterline Exchange`,
     }).catch((e: Error) => console.error("[mail] invoice failed", e.message));
   }
   return created.id;
@@ -157,7 +127,7 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
 /** One invoice, for its buyer, its consignor (without buyer details) or the house. */
 export async function getInvoice(viewer: Viewer, invoiceId: string) {
   const [inv] = await db().query<InvoiceRow & { title: string; sale_id: string; dispute_id: string | null }>(
-    `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id,
+    `SELECT ${invoiceColumns("i")}, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id,
             (SELECT COALESCE(jsonb_agg(jsonb_build_object('amountCents', u.amount_cents, 'state', u.state, 'refundedAt', u.refunded_at) ORDER BY u.detected_at), '[]'::jsonb)
                FROM unexpected_charges u WHERE u.invoice_id = i.id) AS unexpected
        FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id WHERE i.id = :invoiceId`,
@@ -203,6 +173,8 @@ export function presentInvoice(
     premiumCents: inv.premium_cents,
     shippingCents: inv.shipping_cents,
     taxCents: inv.tax_cents,
+    taxBp: inv.tax_bp,
+    shippingZone: inv.shipping_zone,
     totalCents: inv.total_cents,
     tubeCount: inv.tube_count,
     dueAt: inv.due_at.toISOString(),
@@ -220,15 +192,24 @@ export function presentInvoice(
     refundedCents: inv.hammer_refunded_cents + inv.premium_refunded_cents,
     commissionReturnedCents: buyerView && !viewer.roles.includes("admin") ? undefined : inv.commission_returned_cents,
     disputeId: inv.dispute_id ?? null,
+    // The consignor sees where the lot goes (they ship it); the buyer sees where it comes from.
+    addresses: shownAddresses(inv, viewer),
     unexpectedCharges: buyerView ? (inv.unexpected ?? []) : [],
   };
+}
+
+/** The buyer's address for every party; where the lot ships from only for the house and the consignor. */
+function shownAddresses(inv: InvoiceRow, viewer: Viewer) {
+  const blocks = invoiceAddressBlocks(inv);
+  const seesOrigin = viewer.roles.includes("admin") || inv.consignor_id === viewer.id;
+  return { buyer: blocks.buyer, origin: seesOrigin ? blocks.origin : null };
 }
 
 /** Invoices the viewer is party to (the house sees all). */
 export async function listInvoices(viewer: Viewer) {
   const house = viewer.roles.includes("admin");
   const rows = await db().query<InvoiceRow & { title: string; sale_id: string }>(
-    `SELECT i.*, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id
+    `SELECT ${invoiceColumns("i")}, l.title, sl.sale_id, (SELECT id FROM disputes WHERE invoice_id = i.id) AS dispute_id FROM invoices i JOIN lots l ON l.id = i.lot_id JOIN sale_lots sl ON sl.id = i.sale_lot_id
       ${house ? "" : "WHERE i.buyer_id = :me OR i.consignor_id = :me"} ORDER BY i.created_at DESC LIMIT 500`,
     { replacements: { me: viewer.id }, type: QueryTypes.SELECT },
   );
@@ -236,8 +217,8 @@ export async function listInvoices(viewer: Viewer) {
 }
 
 /**
- * Reminders for unpaid invoices: one two days before the due date, one when
- * it is overdue. Each is sent once (the count is kept on the invoice).
+ * Reminders for unpaid invoices: one some days before the due date (the sale's frozen settings say how many; 2 in
+ * version 1), one when it is overdue. Each is sent once (the count is kept on the invoice).
  */
 export async function sendReminders(): Promise<number> {
   const due = await db().query<{
@@ -248,9 +229,14 @@ export async function sendReminders(): Promise<number> {
     due_at: Date;
     reminders_sent: number;
   }>(
-    `UPDATE invoices SET reminders_sent = reminders_sent + 1, updated_at = now()
-      WHERE state = 'awaiting-payment' AND ((reminders_sent = 0 AND due_at - interval '2 days' <= now()) OR (reminders_sent = 1 AND due_at <= now()))
-      RETURNING id, number, buyer_id, total_cents, due_at, reminders_sent`,
+    `UPDATE invoices i SET reminders_sent = i.reminders_sent + 1, updated_at = now()
+       FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id
+       JOIN house_settings_versions v ON v.version = s.settings_version
+      WHERE sl.id = i.sale_lot_id AND i.state = 'awaiting-payment'
+        AND ((i.reminders_sent = 0
+              AND i.due_at - make_interval(days => (v.settings->'payment'->>'reminderDaysBefore')::int) <= now())
+          OR (i.reminders_sent = 1 AND i.due_at <= now()))
+      RETURNING i.id, i.number, i.buyer_id, i.total_cents, i.due_at, i.reminders_sent`,
     { type: QueryTypes.SELECT },
   );
   for (const inv of due) {

@@ -9,11 +9,8 @@ import { emitLot } from "../realtime/lot-emitter";
 import { db, User } from "../../models";
 import { scheduleClose } from "./close-schedule";
 import { liveFrom } from "./live-lot";
-import { disputeSweep } from "./disputes/sweep";
-import { releaseDue } from "./escrow";
-import { refundDueUnexpectedCharges } from "./unexpected-charges";
 import { lotChanged } from "./catalogue/events";
-import { invoiceSoldLot, sendReminders } from "./invoices";
+import { invoiceSoldLot } from "./invoices";
 import { notify } from "./notices";
 import { startOutbidWorker } from "./outbid-notices";
 import { paddlesOf } from "./paddles";
@@ -151,8 +148,12 @@ export async function sweepDueLots(): Promise<number> {
   return due.length;
 }
 
-/** Start this process's close worker and the sweeper. */
-export async function startClosingWorker(): Promise<() => void> {
+/**
+ * Start this process's close worker and the outbid-notice worker, and sweep once. The periodic sweeps
+ * (this one, escrow release, reminders, disputes, unexpected charges, reconciliation) run once per cluster
+ * as pg-boss jobs: see lib/services/periodic-jobs.ts.
+ */
+export async function startClosingWorker(): Promise<void> {
   const boss = queue();
   if (!boss) throw new Error("start the job queue first");
   await boss.work<{ saleLotId: string }>(
@@ -164,15 +165,4 @@ export async function startClosingWorker(): Promise<() => void> {
   );
   await startOutbidWorker();
   await sweepDueLots();
-  const timer = setInterval(() => {
-    void sweepDueLots().catch((e: Error) => console.error("[close] sweep failed", e.message));
-    void releaseDue().catch((e: Error) => console.error("[escrow] sweep failed", e.message));
-    void sendReminders().catch((e: Error) => console.error("[invoice] reminders failed", e.message));
-    void disputeSweep().catch((e: Error) => console.error("[disputes] sweep failed", e.message));
-    void refundDueUnexpectedCharges().catch((e: Error) =>
-      console.error("[payments] unexpected-charge sweep failed", e.message),
-    );
-  }, 10_000);
-  timer.unref();
-  return () => clearInterval(timer);
 }

@@ -6,23 +6,25 @@ import { db } from "../../models";
 import { post } from "./ledger";
 import type { UnexpectedWhy } from "../money/unexpected";
 import { recordUnexpectedCharge, refundUnexpectedCharge } from "./unexpected-charges";
+import type { InvoiceRow } from "./invoice-rows";
 
 /** What we did with one processor event: kept for audit on the event's row. */
 export type EventOutcome = { outcome: "handled" | "ignored"; reason?: string };
 
-type PaidInvoice = {
-  id: string;
-  number: string;
-  sale_lot_id: string;
-  state: string;
-  paid_at: Date | null;
-  payment_intent_id: string | null;
-  hammer_cents: number;
-  premium_cents: number;
-  shipping_cents: number;
-  tax_cents: number;
-  total_cents: number;
-};
+type PaidInvoice = Pick<
+  InvoiceRow,
+  | "id"
+  | "number"
+  | "sale_lot_id"
+  | "state"
+  | "paid_at"
+  | "payment_intent_id"
+  | "hammer_cents"
+  | "premium_cents"
+  | "shipping_cents"
+  | "tax_cents"
+  | "total_cents"
+>;
 
 /**
  * The processor says a payment succeeded. The invoice it names is paid and the money held, once. A charge

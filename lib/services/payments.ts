@@ -7,22 +7,17 @@ import { ATTEMPT_REFUSALS, nextAttemptStep, type IntentStatus } from "../money/p
 import { stripe, stripeConfig } from "../stripe/client";
 import type { CardPayment } from "../validation/payments";
 import { db } from "../../models";
+import type { InvoiceState } from "../money/invoice-states";
+import type { InvoiceRow } from "./invoice-rows";
 
 export type PayOutcome =
   { status: "succeeded" } | { status: "requires_action"; redirectUrl: string } | { status: "processing" };
 
-type PayableInvoice = {
-  id: string;
-  number: string;
-  buyer_id: string;
-  state: string;
-  total_cents: number;
-  payment_intent_id: string | null;
-};
+type PayableInvoice = Pick<InvoiceRow, "id" | "number" | "buyer_id" | "state" | "total_cents" | "payment_intent_id">;
 
 const PAYABLE_COLUMNS = "id, number, buyer_id, state, total_cents, payment_intent_id";
 
-function notPayable(state: string): ApiError {
+function notPayable(state: InvoiceState): ApiError {
   const paid = state !== "cancelled";
   return new ApiError(
     "conflict",

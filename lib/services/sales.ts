@@ -1,7 +1,6 @@
 import { Op, QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
-import { DEFAULT_INCREMENT_LADDER } from "../auction/increments";
 import { initialProxyState, type ProxyState } from "../auction/proxy";
 import { staggeredCloseTimes } from "../auction/soft-close";
 import { type LotLive } from "../realtime/events";
@@ -9,17 +8,19 @@ import type { SaleCreateInput } from "../validation/sales";
 import { db, Lot, Sale, SaleLot } from "../../models";
 import { lotChanged } from "./catalogue/events";
 import { scheduleClose } from "./close-schedule";
+import { currentSettings } from "./house-settings";
 import { liveFrom } from "./live-lot";
 import { paddlesOf } from "./paddles";
 
 /**
  * The house schedules approved lots into a sale with staggered closing
- * times, and queues each lot's close. Lots already offered are refused.
+ * times, and queues each lot's close. Lots already offered are refused. It freezes the house settings version in force.
  */
 export async function createSale(admin: Viewer | null, input: SaleCreateInput, opts: { isDemo?: boolean } = {}) {
   const s = db();
   const closes = staggeredCloseTimes(Date.parse(input.firstCloseAt), input.gapSeconds, input.lots.length);
   const sale = await s.transaction(async (t) => {
+    const { version, settings } = await currentSettings(t);
     const lots = await Lot.findAll({
       where: { id: { [Op.in]: input.lots.map((l) => l.lotId) } },
       lock: t.LOCK.UPDATE,
@@ -48,7 +49,9 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
       {
         title: input.title,
         startsAt: new Date(input.startsAt),
-        softCloseSeconds: input.softCloseSeconds,
+        softCloseSeconds: input.softCloseSeconds ?? settings.softClose.windowSeconds,
+        settingsVersion: version,
+        maxExtensions: settings.softClose.maxExtensions,
         isDemo: opts.isDemo ?? false,
         createdBy: admin?.id ?? null,
       },
@@ -69,7 +72,7 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
           state: initialProxyState({
             openingCents: l.openingCents,
             reserveCents: reserve,
-            ladder: DEFAULT_INCREMENT_LADDER,
+            ladder: settings.incrementLadder,
             consignorId: lot.consignorId,
           }),
         };

@@ -4,11 +4,12 @@ import { ApiError } from "../api/errors";
 import { env } from "../config/env";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
-import { DEFAULT_COMMISSION_TIERS, DEFAULT_FEE_SCHEDULE, invoiceFor, sellersCommissionCents } from "../money/fees";
 import { entriesFrom, invoiceIssuedEntries } from "../money/ledger";
+import { priceSoldLot } from "../money/settings-pricing";
 import { db, User } from "../../models";
-import type { InvoiceRow } from "./invoices";
-import { INVOICE_SETTINGS } from "./invoices";
+import { addressOf } from "./addresses";
+import { settingsForInvoice } from "./house-settings";
+import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
 import { post } from "./ledger";
 
 /**
@@ -23,7 +24,7 @@ export async function cancelUnpaid(
   const s = db();
   const out = await s.transaction(async (t) => {
     const [inv] = await s.query<InvoiceRow & { due_passed: boolean }>(
-      `SELECT *, due_at <= now() AS due_passed FROM invoices WHERE id = :invoiceId FOR UPDATE`,
+      `SELECT ${invoiceColumns()}, due_at <= now() AS due_passed FROM invoices WHERE id = :invoiceId FOR UPDATE`,
       { replacements: { invoiceId }, type: QueryTypes.SELECT, transaction: t },
     );
     if (!inv) throw new ApiError("not_found", "No such invoice");
@@ -57,7 +58,11 @@ export async function cancelUnpaid(
     );
     if (!under) return { offeredTo: null, newInvoiceId: null };
     const hammer = Math.min(under.max_cents, inv.hammer_cents);
-    const next = invoiceFor({ hammerCents: hammer, shippingCents: inv.shipping_cents }, DEFAULT_FEE_SCHEDULE);
+    // The sale's frozen settings; shipping and tax to the under-bidder's own address.
+    const settings = await settingsForInvoice(invoiceId, t);
+    const destination = await addressOf(under.bidder_id, t);
+    const origin = await addressOf(inv.consignor_id, t);
+    const next = priceSoldLot({ hammerCents: hammer, tubes: inv.tube_count, origin, destination }, settings);
     const id = randomUUID();
     const [{ n }] = (await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, {
       type: QueryTypes.SELECT,
@@ -65,8 +70,10 @@ export async function cancelUnpaid(
     })) as [{ n: string }];
     await s.query(
       `INSERT INTO invoices (id, number, sale_lot_id, lot_id, buyer_id, consignor_id, state, hammer_cents, premium_bp, premium_cents, shipping_cents, tax_cents, total_cents,
-                             commission_cents, tube_count, due_at, second_chance, created_at, updated_at)
+                             commission_cents, tube_count, settings_version, buyer_address, origin_address, shipping_zone, tax_bp,
+                             due_at, second_chance, created_at, updated_at)
        VALUES (:id, :number, :sl, :lot, :buyer, :consignor, 'awaiting-payment', :hammer, :bp, :premium, :shipping, :tax, :total, :commission, :tubes,
+               :version, CAST(:buyerAddress AS jsonb), CAST(:originAddress AS jsonb), :zone, :taxBp,
                now() + (:dueDays || ' days')::interval, true, now(), now())`,
       {
         replacements: {
@@ -77,20 +84,31 @@ export async function cancelUnpaid(
           buyer: under.bidder_id,
           consignor: inv.consignor_id,
           hammer,
-          bp: DEFAULT_FEE_SCHEDULE.buyersPremiumBp,
+          bp: next.premiumBp,
           premium: next.premiumCents,
           shipping: next.shippingCents,
           tax: next.taxCents,
           total: next.totalCents,
-          commission: sellersCommissionCents(hammer, DEFAULT_COMMISSION_TIERS),
+          commission: next.commissionCents,
           tubes: inv.tube_count,
-          dueDays: String(INVOICE_SETTINGS.dueDays),
+          version: inv.settings_version,
+          buyerAddress: destination ? JSON.stringify(destination) : null,
+          originAddress: origin ? JSON.stringify(origin) : null,
+          zone: next.zone,
+          taxBp: next.taxBp,
+          dueDays: String(settings.payment.dueDays),
         },
         transaction: t,
       },
     );
     await post(t, "invoice-issued", id, invoiceIssuedEntries(next));
-    return { offeredTo: under.bidder_id, newInvoiceId: id, total: next.totalCents, hammer };
+    return {
+      offeredTo: under.bidder_id,
+      newInvoiceId: id,
+      total: next.totalCents,
+      hammer,
+      dueDays: settings.payment.dueDays,
+    };
   });
   if (out.offeredTo && out.newInvoiceId) {
     const u = await User.findByPk(out.offeredTo, { attributes: ["email", "displayName"] });
@@ -98,7 +116,7 @@ export async function cancelUnpaid(
       await sendMail({
         to: u.email,
         subject: "A second chance at a lot you bid on",
-        text: `Hello ${u.displayName},\n\nThe winner of a lot you bid on did not pay. The house offers it to you at your last bid, ${formatCents((out as { hammer: number }).hammer)} hammer (${formatCents((out as { total: number }).total)} with premium and shipping). If you want it, pay within ${INVOICE_SETTINGS.dueDays} days:\n\n${env().NEXTAUTH_URL}/invoices/${out.newInvoiceId}\n\nIf not, simply let it lapse.\n\nGetterline Exchange`,
+        text: `Hello ${u.displayName},\n\nThe winner of a lot you bid on did not pay. The house offers it to you at your last bid, ${formatCents((out as { hammer: number }).hammer)} hammer (${formatCents((out as { total: number }).total)} with premium and shipping). If you want it, pay within ${(out as { dueDays: number }).dueDays} days:\n\n${env().NEXTAUTH_URL}/invoices/${out.newInvoiceId}\n\nIf not, simply let it lapse.\n\nGetterline Exchange`,
       }).catch((e: Error) => console.error("[mail] second chance failed", e.message));
     }
   }

@@ -49,7 +49,8 @@ type Row = {
   refunded_at: Date | null;
 };
 
-const SELECT_ROWS = `SELECT u.*, i.number, i.buyer_id FROM unexpected_charges u JOIN invoices i ON i.id = u.invoice_id`;
+const SELECT_ROWS = `SELECT u.id, u.invoice_id, u.payment_intent_id, u.charge_id, u.amount_cents, u.fee_cents, u.why, u.state, u.refund_id, u.last_error,
+       u.detected_at, u.refunded_at, i.number, i.buyer_id FROM unexpected_charges u JOIN invoices i ON i.id = u.invoice_id`;
 
 /** Record the charge and post it, inside the caller's transaction. Returns false when it was recorded already. */
 export async function recordUnexpectedCharge(

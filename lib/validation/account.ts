@@ -1,9 +1,10 @@
 import { z } from "zod";
+import { lineText } from "./text";
 import { SELF_SERVICE_ROLES } from "../auth/roles";
 
 /** Shared by the sign-up form and POST /api/account/sign-up. */
 export const SignUpSchema = z.object({
-  displayName: z.string().trim().min(2, "Enter a name of at least 2 characters").max(80, "At most 80 characters"),
+  displayName: lineText().trim().min(2, "Enter a name of at least 2 characters").max(80, "At most 80 characters"),
   email: z.email("Enter a valid e-mail address").max(254),
   password: z.string().min(10, "Use at least 10 characters").max(200, "At most 200 characters"),
   role: z.enum(SELF_SERVICE_ROLES, { message: "Choose consignor or dealer" }),

@@ -1,9 +1,10 @@
 import { z } from "zod";
+import { lineText, multilineText } from "./text";
 import { DISPUTE_REASONS, OUTCOMES, REMEDIES, STANCES } from "../disputes/rules";
 import { MAX_RETURN_POSTAGE_CENTS } from "../money/return-refund";
 import { ReadingSchema } from "./lots";
 
-const text = (max: number) => z.string().trim().max(max, `At most ${max} characters`);
+const text = (max: number) => lineText().trim().max(max, `At most ${max} characters`);
 const code = text(16).nullable().optional();
 const cents = z.number().int("Whole cents only").min(0, "Not below zero").max(100_000_000, "Too large");
 
@@ -21,7 +22,7 @@ export const ClaimedItemSchema = z.object({
     .refine((f) => Object.keys(f).length <= 30, "At most 30 features")
     .default({}),
   readings: z.array(ReadingSchema).max(100).default([]),
-  note: text(1000).optional(),
+  note: multilineText().trim().max(1000, "At most 1000 characters").optional(),
 });
 export type ClaimedItemInput = z.infer<typeof ClaimedItemSchema>;
 
@@ -29,8 +30,7 @@ export type ClaimedItemInput = z.infer<typeof ClaimedItemSchema>;
 export const OpenDisputeSchema = z.object({
   reason: z.enum(DISPUTE_REASONS, { message: "Choose what is wrong" }),
   remedy: z.enum(REMEDIES, { message: "Choose what you ask for" }),
-  statement: z
-    .string()
+  statement: multilineText()
     .trim()
     .min(20, "Describe the problem in at least 20 characters")
     .max(4000, "At most 4,000 characters"),
@@ -44,7 +44,7 @@ export type OpenDisputeInput = z.infer<typeof OpenDisputeSchema>;
 
 /** A message in a case's conversation; the consignor's first message may carry their stance. */
 export const DisputeMessageSchema = z.object({
-  body: z.string().trim().min(2, "Write a message").max(4000, "At most 4,000 characters"),
+  body: multilineText().trim().min(2, "Write a message").max(4000, "At most 4,000 characters"),
   stance: z.enum(STANCES).optional(),
   clientKey: z.string().min(8).max(64).optional(),
 });
@@ -87,7 +87,7 @@ export type DecisionInput = z.infer<typeof DecisionSchema>;
 
 /** The buyer's return shipment. */
 export const ReturnShipmentSchema = z.object({
-  carrier: z.string().trim().min(2, "Name the carrier").max(60),
+  carrier: lineText().trim().min(2, "Name the carrier").max(60),
   tracking: z
     .string()
     .trim()

@@ -1,6 +1,8 @@
 import { z } from "zod";
+import { lineText, multilineText } from "./text";
 
-const text = (max: number) => z.string().trim().max(max, `At most ${max} characters`);
+const text = (max: number) => lineText().trim().max(max, `At most ${max} characters`);
+const longText = (max: number) => multilineText().trim().max(max, `At most ${max} characters`);
 
 export const TESTER_KIND_VALUES = ["untested", "mutual-conductance", "emission", "curve-tracer", "other"] as const;
 export const CONDITION_VALUES = ["new-in-box", "new-old-stock", "used"] as const;
@@ -9,11 +11,11 @@ export const HAZARD_VALUES = ["beryllium-oxide", "radioactive", "mercury-vapour"
 
 /** The lot's own details: shared by the consignor's form and POST/PATCH /api/lots. */
 export const LotDetailsSchema = z.object({
-  title: z.string().trim().min(3, "Give the lot a title of at least 3 characters").max(140),
-  provenance: text(4000),
+  title: lineText().trim().min(3, "Give the lot a title of at least 3 characters").max(140),
+  provenance: longText(4000),
   shippingOrigin: text(140),
   testerKind: z.enum(TESTER_KIND_VALUES, { message: "Choose how the tubes were tested" }),
-  testerNotes: text(500),
+  testerNotes: longText(500),
 });
 export type LotDetailsInput = z.infer<typeof LotDetailsSchema>;
 
@@ -35,7 +37,7 @@ export type ReadingInput = z.infer<typeof ReadingSchema>;
 /** One line of a lot: shared by the item form, the grid and POST/PATCH /api/lots/:id/items. */
 export const ItemSchema = z
   .object({
-    designation: z.string().trim().min(1, "Enter the designation as printed").max(40, "At most 40 characters"),
+    designation: lineText().trim().min(1, "Enter the designation as printed").max(40, "At most 40 characters"),
     quantity: z.number().int("Whole tubes only").min(1, "At least 1").max(10_000),
     labelBrand: text(120),
     makerName: text(120).nullable(),
@@ -52,7 +54,7 @@ export const ItemSchema = z
     defects: z.array(text(200)).max(10),
     hazards: z.array(z.enum(HAZARD_VALUES)).max(4),
     readings: z.array(ReadingSchema).max(500),
-    notes: text(1000),
+    notes: longText(1000),
   })
   .refine((i) => i.readings.every((r) => r.sections.length > 0 || r.shorts || r.leakage || r.gas), {
     message: "Each reading needs a section value, or a short, leakage or gas failure",
@@ -91,7 +93,7 @@ export function withoutBlankSections(values: ItemInput): ItemInput {
 export const ReviewDecisionSchema = z.discriminatedUnion("action", [
   z.object({
     action: z.literal("request-changes"),
-    comment: z.string().trim().min(5, "Say what needs changing").max(4000),
+    comment: multilineText().trim().min(5, "Say what needs changing").max(4000),
   }),
   z
     .object({
@@ -112,7 +114,7 @@ export const ReviewDecisionSchema = z.discriminatedUnion("action", [
     }),
   z.object({
     action: z.literal("decline"),
-    comment: z.string().trim().min(5, "Say why the lot is declined").max(4000),
+    comment: multilineText().trim().min(5, "Say why the lot is declined").max(4000),
   }),
 ]);
 export type ReviewDecision = z.infer<typeof ReviewDecisionSchema>;
@@ -120,10 +122,10 @@ export type ReviewDecision = z.infer<typeof ReviewDecisionSchema>;
 /** A correction after approval: visible and dated on the lot page. */
 export const AmendmentSchema = z.object({
   itemId: z.uuid().nullable(),
-  description: z.string().trim().min(5, "Describe the correction").max(2000),
+  description: multilineText().trim().min(5, "Describe the correction").max(2000),
   quantity: z.number().int().min(1).max(10_000).optional(),
   vacuumLoss: z.boolean().optional(),
   condition: z.enum(CONDITION_VALUES).optional(),
-  notes: text(1000).optional(),
+  notes: longText(1000).optional(),
 });
 export type AmendmentInput = z.infer<typeof AmendmentSchema>;

@@ -1,13 +1,15 @@
 import { z } from "zod";
+import { lineText, multilineText } from "./text";
 
 /** The house schedules approved lots into a sale (shared by its form and POST /api/sales). */
 export const SaleCreateSchema = z
   .object({
-    title: z.string().trim().min(3, "Give the sale a title").max(140),
+    title: lineText().trim().min(3, "Give the sale a title").max(140),
     startsAt: z.iso.datetime({ offset: true, message: "Give a start date and time" }),
     firstCloseAt: z.iso.datetime({ offset: true, message: "Give the first closing time" }),
     gapSeconds: z.number().int().min(10, "At least 10 seconds between closings").max(3600),
-    softCloseSeconds: z.number().int().min(30, "At least 30 seconds").max(1800),
+    /** Omitted: the late-bid window of the house settings in force. */
+    softCloseSeconds: z.number().int().min(30, "At least 30 seconds").max(1800).optional(),
     lots: z
       .array(
         z.object({
@@ -33,7 +35,9 @@ export const BidSchema = z.object({
 export type BidInput = z.infer<typeof BidSchema>;
 
 /** POST /api/sale-lots/:id/bids/:bidId/retract (house only). */
-export const RetractSchema = z.object({ reason: z.string().trim().min(5, "Give the reason for the record").max(500) });
+export const RetractSchema = z.object({
+  reason: multilineText().trim().min(5, "Give the reason for the record").max(500),
+});
 
 /** A bid sent over the socket: the lot named in the message. */
 export const SocketBidSchema = BidSchema.extend({ saleLotId: z.uuid("No such lot") });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { lineText, multilineText } from "./text";
 import { BASE_FAMILY_LABELS } from "../valves/designation/base-families";
 import type { BaseFamily } from "../valves/index-types";
 import { VALVE_KINDS, type ValveKind } from "../valves/reference-row";
@@ -23,7 +24,7 @@ const positive = z.number().finite().positive().max(1_000_000);
 
 /** Correction of a reference row by the house (PATCH /api/valves/types/{designation}). */
 export const ReferenceEditSchema = z.object({
-  reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
+  reason: multilineText().trim().min(5, "Say why (at least 5 characters)").max(500),
   source: z
     .string()
     .trim()
@@ -39,13 +40,13 @@ export const ReferenceEditSchema = z.object({
   gmMicromho: positive.nullable(),
   plateCurrentMa: positive.nullable(),
   rpOhms: positive.nullable(),
-  note: z.string().trim().max(500),
+  note: multilineText().trim().max(500),
 });
 export type ReferenceEditInput = z.infer<typeof ReferenceEditSchema>;
 
 /** Recording that a row was checked against a data sheet (POST /api/valves/types/{designation}/verify). */
 export const ReferenceVerifySchema = z.object({
-  against: z.string().trim().min(3, "Name the data sheet or handbook page").max(200),
+  against: lineText().trim().min(3, "Name the data sheet or handbook page").max(200),
 });
 
 /** The house adds a type (POST /api/valves/types). Figures may be left empty: never invent one to fill a column. */
@@ -65,8 +66,8 @@ export const ReferenceAddSchema = z
         (v) => parseRowSource(v) !== undefined,
         "Use a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM",
       ),
-    note: z.string().trim().max(500),
-    reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
+    note: multilineText().trim().max(500),
+    reason: multilineText().trim().min(5, "Say why (at least 5 characters)").max(500),
   })
   .refine((v) => (v.heaterVolts === null) === (v.heaterAmps === null), {
     message: "Give heater volts and amps together, or neither",
@@ -76,7 +77,7 @@ export type ReferenceAddInput = z.infer<typeof ReferenceAddSchema>;
 
 /** Retiring a type (POST /api/valves/types/{designation}/retire). */
 export const ReferenceRetireSchema = z.object({
-  reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
+  reason: multilineText().trim().min(5, "Say why (at least 5 characters)").max(500),
   retired: z.boolean(),
 });
 
@@ -87,7 +88,7 @@ export const ReferenceImportSchema = z.object({
     .min(1, "Paste or choose a CSV file")
     .max(2 * 1024 * 1024, "At most 2 MB"),
   apply: z.boolean(),
-  reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(500),
+  reason: multilineText().trim().min(5, "Say why (at least 5 characters)").max(500),
 });
 
 /** Most tubes one grading request may carry; a bigger batch is split by the caller. */

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { lineText } from "./text";
 import { CLOSENESS } from "../catalogue/want-list";
 import { normaliseDesignation } from "../valves/designation/normalise";
 import { BASIS_VALUES, CONDITION_VALUES } from "./lots";
@@ -23,7 +24,7 @@ export const WantCriteriaSchema = z.object({
 
 /** POST /api/want-lists and the form that saves a search. */
 export const WantListCreateSchema = z.object({
-  name: z.string().trim().min(1, "Give the list a name").max(80),
+  name: lineText().trim().min(1, "Give the list a name").max(80),
   criteria: WantCriteriaSchema,
 });
 export type WantListCreateInput = z.infer<typeof WantListCreateSchema>;

@@ -6,6 +6,7 @@
  * so on a rebranded tube it may name the brand owner rather than the factory.
  * A match is therefore evidence towards an attribution, never proof.
  */
+import { parse } from "csv-parse/sync";
 import { z } from "zod";
 
 /** One row of the house's maker registry (demo rows carry invented codes). */
@@ -138,7 +139,7 @@ const registryRowSchema = z.object({
 export function parseMakerRegistryCsv(text: string): { rows: MakerRegistryEntry[]; errors: CsvRowError[] } {
   const rows: MakerRegistryEntry[] = [];
   const errors: CsvRowError[] = [];
-  const { records, errors: syntaxErrors } = parseCsvRecords(text.replace(/^\uFEFF/, ""));
+  const { records, errors: syntaxErrors } = parseCsvRecords(text);
   errors.push(...syntaxErrors);
   const header = records.shift();
   if (!header)
@@ -187,68 +188,41 @@ export function parseMakerRegistryCsv(text: string): { rows: MakerRegistryEntry[
   return { rows, errors };
 }
 
+/** Our own words for csv-parse's syntax errors (its codes), so a house user reads what to fix. */
+const CSV_SYNTAX_MESSAGES: Record<string, string> = {
+  CSV_QUOTE_NOT_CLOSED: "a quoted field is not closed before the end of the file",
+  CSV_INVALID_CLOSING_QUOTE: "text after the closing quote of a field",
+  INVALID_OPENING_QUOTE: "stray quote inside an unquoted field",
+};
+
 /**
- * Minimal RFC 4180 reader: commas, double-quoted fields with "" escapes,
- * CRLF or LF line ends, line breaks inside quotes. Each record keeps the
- * line number it starts on. (A library such as csv-parse would also do.)
+ * Read RFC 4180 records with csv-parse (commas, double-quoted fields with ""
+ * escapes, CRLF or LF line ends, line breaks inside quotes). Each record keeps
+ * the line it starts on, counted from the raw text (csv-parse's own count
+ * runs ahead after a CRLF inside quotes). A syntax error stops the reading:
+ * the records before it are kept and the error names the line its record
+ * starts on.
  */
 function parseCsvRecords(text: string): { records: { line: number; fields: string[] }[]; errors: CsvRowError[] } {
   const records: { line: number; fields: string[] }[] = [];
-  const errors: CsvRowError[] = [];
-  let fields: string[] = [];
-  let field = "";
-  let inQuotes = false;
-  let quotedField = false;
   let line = 1;
-  let recordLine = 1;
-  const endRecord = () => {
-    fields.push(field);
-    records.push({ line: recordLine, fields });
-    fields = [];
-    field = "";
-    quotedField = false;
-  };
-  for (let i = 0; i < text.length; i += 1) {
-    const char = text[i];
-    if (inQuotes) {
-      if (char === '"' && text[i + 1] === '"') {
-        field += '"';
-        i += 1;
-      } else if (char === '"') {
-        inQuotes = false;
-      } else {
-        if (char === "\n") line += 1;
-        field += char;
-      }
-    } else if (char === '"' && field === "" && !quotedField) {
-      inQuotes = true;
-      quotedField = true;
-    } else if (char === '"') {
-      errors.push({ line: recordLine, message: "stray quote inside an unquoted field" });
-      field += char;
-    } else if (quotedField && char !== "," && char !== "\n" && char !== "\r") {
-      errors.push({ line: recordLine, message: "text after the closing quote of a field" });
-      field += char;
-    } else if (char === ",") {
-      fields.push(field);
-      field = "";
-      quotedField = false;
-    } else if (char === "\n" || char === "\r") {
-      if (char === "\r" && text[i + 1] === "\n") i += 1;
-      endRecord();
-      line += 1;
-      recordLine = line;
-    } else {
-      field += char;
-    }
+  try {
+    parse(text, {
+      bom: true,
+      relax_column_count: true,
+      raw: true,
+      on_record: ({ record, raw }: { record: string[]; raw: string }) => {
+        records.push({ line, fields: record });
+        line += raw.match(/\r\n|\n|\r/g)?.length ?? 0;
+        return null;
+      },
+    });
+  } catch (e) {
+    const code = (e as { code?: string }).code ?? "";
+    return {
+      records,
+      errors: [{ line, message: CSV_SYNTAX_MESSAGES[code] ?? "the file is not valid CSV (RFC 4180)" }],
+    };
   }
-  if (inQuotes) errors.push({ line: recordLine, message: "a quoted field is not closed before the end of the file" });
-  if (field !== "" || fields.length > 0 || quotedField) endRecord();
-  // records containing a syntax error are dropped so they never import half-read
-  const badLines = new Set(errors.map((error) => error.line));
-  const unique = errors.filter(
-    (error, index) =>
-      errors.findIndex((other) => other.line === error.line && other.message === error.message) === index,
-  );
-  return { records: records.filter((record, index) => index === 0 || !badLines.has(record.line)), errors: unique };
+  return { records, errors: [] };
 }

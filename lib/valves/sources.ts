@@ -65,6 +65,33 @@ export const SOURCES: readonly SourceEntry[] = [
     kind: "publication",
   },
   {
+    tag: "UAX-9",
+    title: "Unicode bidirectional algorithm",
+    publication:
+      "Unicode Standard Annex #9, Unicode Bidirectional Algorithm (explicit embeddings, overrides and isolates, U+202A–U+202E and U+2066–U+2069), revision for Unicode 15.1, 2023.",
+    kind: "publication",
+  },
+  {
+    tag: "UNI-23",
+    title: "Unicode control codes",
+    publication:
+      'The Unicode Standard, Version 15.1, chapter 23 "Special Areas and Format Characters", §23.1 Control Codes (C0 U+0000–U+001F, DEL U+007F, C1 U+0080–U+009F), 2023.',
+    kind: "publication",
+  },
+  {
+    tag: "ISO-3166",
+    title: "Country codes",
+    publication:
+      "ISO 3166-1:2020, Codes for the representation of names of countries and their subdivisions — Part 1: Country code (alpha-2).",
+    kind: "publication",
+  },
+  {
+    tag: "PG-INT",
+    title: "Integer column range",
+    publication: "PostgreSQL documentation, section 8.1.1 Integer Types: integer is −2147483648 to +2147483647.",
+    kind: "publication",
+  },
+  {
     tag: "CTP",
     title: "Common trade practice",
     publication:

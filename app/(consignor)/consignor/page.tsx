@@ -22,7 +22,10 @@ export default async function ConsignorHome() {
             commission, after any refund on a claim.
           </p>
         </div>
-        <Link href="/consignor/lots/new" className="btn-primary ml-auto">
+        <Link href="/consignor/address" className="btn-secondary ml-auto">
+          Shipping address
+        </Link>
+        <Link href="/consignor/lots/new" className="btn-primary">
           Start a lot
         </Link>
       </header>

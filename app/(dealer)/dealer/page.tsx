@@ -60,6 +60,11 @@ export default async function DealerHome() {
           text: "Decode a designation, list its equivalents and nominal figures, or read a date code.",
         },
         {
+          href: "/dealer/address",
+          title: "Shipping address",
+          text: "Where lots you win ship to; shipping and tax on new invoices follow it.",
+        },
+        {
           href: "/shelf",
           title: "Unconfirmed shelf",
           text: "Tubes whose maker is not yet confirmed, with their best candidate makers.",

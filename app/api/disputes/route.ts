@@ -2,4 +2,4 @@
 import { route } from "@/lib/api/route";
 import { myCases } from "@/lib/services/disputes/cases";
 
-export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({ disputes: await myCases(viewer!) }));
+export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({ disputes: await myCases(viewer) }));

@@ -3,5 +3,5 @@ import { route } from "@/lib/api/route";
 import { listInvoices } from "@/lib/services/invoices";
 
 export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({
-  invoices: await listInvoices(viewer!),
+  invoices: await listInvoices(viewer),
 }));

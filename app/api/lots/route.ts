@@ -11,10 +11,10 @@ const SCOPE_PERMISSION = { mine: "lots.consign", approved: "account.read", revie
 export const GET = route({ permission: "account.read" }, async ({ req, viewer }) => {
   const { scope } = parseWith(Scope, { scope: req.nextUrl.searchParams.get("scope") ?? undefined });
   assertCan(viewer, SCOPE_PERMISSION[scope]);
-  return { lots: await listLots(viewer!, scope) };
+  return { lots: await listLots(viewer, scope) };
 });
 
 export const POST = route({ permission: "lots.consign" }, async ({ req, viewer }) => {
-  const lot = await createLot(viewer!, await readJson(req, LotDetailsSchema));
+  const lot = await createLot(viewer, await readJson(req, LotDetailsSchema));
   return Response.json({ lot }, { status: 201 });
 });

@@ -3,5 +3,5 @@ import { route } from "@/lib/api/route";
 import { listNotices } from "@/lib/services/notices";
 
 export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({
-  notices: await listNotices(viewer!.id),
+  notices: await listNotices(viewer.id),
 }));

@@ -6,6 +6,6 @@ import { SaleCreateSchema } from "@/lib/validation/sales";
 export const GET = route({ permission: "account.read" }, async () => ({ sales: await listSales() }));
 
 export const POST = route({ permission: "house.manage" }, async ({ req, viewer }) => {
-  const sale = await createSale(viewer!, await readJson(req, SaleCreateSchema));
+  const sale = await createSale(viewer, await readJson(req, SaleCreateSchema));
   return Response.json({ sale }, { status: 201 });
 });

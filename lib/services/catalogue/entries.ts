@@ -38,7 +38,7 @@ export async function refreshCatalogueEntry(lotId: string, t?: Transaction): Pro
             sl.id AS sale_lot_id, sl.phase, s.starts_at, sl.closes_at, sl.closed_at, sl.hammer_cents,
             (SELECT p.id FROM lot_photos p WHERE p.lot_id = l.id ORDER BY p.created_at, p.id LIMIT 1) AS thumb
        FROM lots l
-       LEFT JOIN LATERAL (SELECT * FROM sale_lots WHERE lot_id = l.id ORDER BY created_at DESC LIMIT 1) sl ON true -- the latest offer (a lot may be relisted)
+       LEFT JOIN LATERAL (SELECT id, sale_id, phase, closes_at, closed_at, hammer_cents FROM sale_lots WHERE lot_id = l.id ORDER BY created_at DESC LIMIT 1) sl ON true -- the latest offer (a lot may be relisted)
        LEFT JOIN sales s ON s.id = sl.sale_id
       WHERE l.id = :lotId`,
     { replacements: { lotId }, type: QueryTypes.SELECT, transaction: t },

@@ -233,6 +233,32 @@ export async function searchCatalogue(query: CatalogueQuery): Promise<CatalogueR
 const SELECT_ENTRY = `e.lot_id, e.title, e.stage, e.sale_lot_id, e.sale_starts_at, e.closes_at, e.sold_at, e.hammer_cents, e.listed_at,
   e.estimate_low_cents, e.estimate_high_cents, e.tubes, e.families, e.grades, e.hazards, e.vacuum_loss_tubes, e.pairs, e.quads, e.thumb_photo_id,
   ${US("e.listed_at")} AS listed_us, ${US("e.closes_at")} AS closes_us`;
+/** The names SELECT_ENTRY yields plus the rank, for the outer queries' select lists. */
+const ENTRY_OUT = [
+  "lot_id",
+  "title",
+  "stage",
+  "sale_lot_id",
+  "sale_starts_at",
+  "closes_at",
+  "sold_at",
+  "hammer_cents",
+  "listed_at",
+  "estimate_low_cents",
+  "estimate_high_cents",
+  "tubes",
+  "families",
+  "grades",
+  "hazards",
+  "vacuum_loss_tubes",
+  "pairs",
+  "quads",
+  "thumb_photo_id",
+  "listed_us",
+  "closes_us",
+  "rank",
+] as const;
+const entryOut = (alias: string) => ENTRY_OUT.map((c) => `${alias}.${c}`).join(", ");
 
 /** One page in a sort that follows an index (newest, closing, estimate; relevance by words alone). */
 async function sortedRows(
@@ -248,8 +274,8 @@ async function sortedRows(
     p,
   );
   return db().query<Row>(
-    `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
-       FROM (SELECT * FROM (SELECT ${SELECT_ENTRY}, 0 AS rank FROM catalogue_entries e WHERE ${p.where()}) x
+    `SELECT ${entryOut("y")}, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
+       FROM (SELECT ${entryOut("x")} FROM (SELECT ${SELECT_ENTRY}, 0 AS rank FROM catalogue_entries e WHERE ${p.where()}) x
               ${after ? `WHERE ${after}` : ""} ORDER BY ${orderBy} LIMIT ${p.bind(query.limit + 1)}) y
        LEFT JOIN sale_lots sl ON sl.id = y.sale_lot_id
       ORDER BY ${orderBy
@@ -271,7 +297,7 @@ async function tieredRows(query: CatalogueQuery, term: DesignationTerm, cursor: 
     if (cursor && tier.rank === k0)
       p.and(`(e.listed_at, e.lot_id) < (${AT(p.bind(String(k1)))}, ${p.bind(cursor.id)}::uuid)`);
     const rows = await db().query<Row>(
-      `SELECT y.*, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
+      `SELECT ${entryOut("y")}, sl.price_cents AS live_price, sl.bid_count AS live_bids, sl.closes_at AS live_closes_at, sl.sale_id
          FROM (SELECT ${SELECT_ENTRY}, ${tier.rank} AS rank FROM catalogue_entries e WHERE ${p.where()}
                 ORDER BY e.listed_at DESC, e.lot_id DESC LIMIT ${p.bind(query.limit + 1 - out.length)}) y
          LEFT JOIN sale_lots sl ON sl.id = y.sale_lot_id ORDER BY y.listed_at DESC, y.lot_id DESC`,

@@ -7,6 +7,7 @@ import type { BuyerReport } from "../../disputes/weigh";
 import type { TubeReading } from "../../lots/item";
 import type { OpenDisputeInput } from "../../validation/disputes";
 import { db } from "../../../models";
+import { settingsForInvoice } from "../house-settings";
 import { mail, notice } from "./mail";
 import { findDisputeForInvoice, insertDispute, nextDisputeSerial } from "./tables/disputes";
 import { insertDisputeItem } from "./tables/dispute-items";
@@ -77,6 +78,7 @@ export async function openDispute(
     if (!inv || inv.buyer_id !== viewer.id) throw new ApiError("not_found", "No such invoice");
     const existing = await findDisputeForInvoice(invoiceId, t);
     if (existing) return { fresh: false, id: existing.id, number: existing.number };
+    const { claims } = await settingsForInvoice(invoiceId, t); // the sale's frozen settings
     const refusal = openingRefusal(
       {
         state: inv.state,
@@ -85,6 +87,7 @@ export async function openDispute(
       },
       Date.now(),
       input.reason,
+      claims.breakageClaimHours,
     );
     if (refusal) throw new ApiError("conflict", refusal);
 
@@ -100,7 +103,7 @@ export async function openDispute(
 
     const id = randomUUID();
     const number = `CL-${new Date().getUTCFullYear()}-${await nextDisputeSerial(t)}`;
-    const due = new Date(answerDueAt(Date.now()));
+    const due = new Date(answerDueAt(Date.now(), claims.answerBusinessDays));
     await insertDispute(
       {
         id,

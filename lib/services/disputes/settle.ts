@@ -4,7 +4,6 @@
  * released, the case closed, and the written decision sent.
  */
 import { ApiError } from "../../api/errors";
-import { DISPUTE_SETTINGS } from "../../disputes/rules";
 import { refundEntries } from "../../money/ledger";
 import type { RefundSettlement } from "../../money/refunds";
 import { returnRefundEntries, type ReturnedCharges } from "../../money/return-refund";
@@ -17,6 +16,7 @@ import { DAY_MS } from "./shared";
 import { awaitReturn, closeDispute, findDispute, isDecided, recordRefund, type DisputeRow } from "./tables/disputes";
 import { addRefunded, claimInvoice, lockInvoice, postedOnInvoice, type CaseInvoice } from "./tables/invoices";
 import { displayNames } from "./tables/users";
+import { settingsForInvoice } from "../house-settings";
 import { casePath, decidedNotice, decisionToBuyer, decisionToConsignor, returnNext, settledNext } from "./templates";
 
 /** The parts of a settlement a refund moves. */
@@ -98,8 +98,9 @@ export async function settleDecision(id: string): Promise<void> {
   const inv = await claimInvoice(d.invoice_id);
   const decision = d.decision;
   if (decision.outcome === "refund-on-return") {
-    const due = new Date(Date.now() + DISPUTE_SETTINGS.returnShipDays * DAY_MS);
-    if (await awaitReturn(id, due)) await mailDecision(d, inv, returnNext(due, DISPUTE_SETTINGS.receiptConfirmDays));
+    const { claims } = await settingsForInvoice(d.invoice_id); // the sale's frozen settings
+    const due = new Date(Date.now() + claims.returnShipDays * DAY_MS);
+    if (await awaitReturn(id, due)) await mailDecision(d, inv, returnNext(due, claims.receiptConfirmDays));
     return;
   }
   if (decision.outcome === "partial-refund" && decision.settlement) await payRefund(d, inv, decision.settlement);

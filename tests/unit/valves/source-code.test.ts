@@ -121,6 +121,22 @@ describe("parseMakerRegistryCsv [RFC-4180 quoting]", () => {
     expect(byLine[8]).toMatch(/not closed/);
   });
 
+  it("counts lines from the text itself, also after a CRLF inside quotes", () => {
+    const text = [
+      "code,maker_name,is_demo,notes", // line 1
+      'X46,Pellham Radio Tube Corp.,true,"two', // 2
+      'lines"', // 3
+      "90,Short Code Co,true,", // 4
+      '"X17"x,Aldergrove Electron Works,true,', // 5
+    ].join("\r\n");
+    const { rows, errors } = parseMakerRegistryCsv(text);
+    expect(rows.map((r) => r.code)).toEqual(["X46"]);
+    const sorted = [...errors].sort((a, b) => a.line - b.line);
+    expect(sorted.map((e) => e.line)).toEqual([4, 5]);
+    expect(sorted[0]!.message).toMatch(/three digits/);
+    expect(sorted[1]!.message).toBe("text after the closing quote of a field");
+  });
+
   it("requires the header columns", () => {
     const { rows, errors } = parseMakerRegistryCsv("code,maker\nX17,Aldergrove Electron Works\n");
     expect(rows).toEqual([]);

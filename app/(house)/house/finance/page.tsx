@@ -5,6 +5,7 @@ import { UnexpectedCharges } from "@/components/house/UnexpectedCharges";
 import { INVOICE_STATE_WORDS } from "@/components/invoices/words";
 import { requirePageViewer } from "@/lib/auth/guards";
 import { formatCents } from "@/lib/money/cents";
+import { accountWords } from "@/lib/money/account-words";
 import { ACCOUNTS } from "@/lib/money/ledger";
 import { listInvoices } from "@/lib/services/invoices";
 import { balances, trialBalance } from "@/lib/services/ledger";
@@ -43,7 +44,7 @@ export default async function FinancePage() {
             <tbody>
               {ACCOUNTS.map((a) => (
                 <tr key={a} className="border-t border-flash-100">
-                  <td className="py-1">{a.replace(/-/g, " ")}</td>
+                  <td className="py-1">{accountWords(a)}</td>
                   <td className="code py-1 text-right">{signed(b[a])}</td>
                 </tr>
               ))}
@@ -56,7 +57,7 @@ export default async function FinancePage() {
             </tbody>
           </table>
         </section>
-        <section aria-labelledby="rec-h" className="card space-y-2">
+        <section id="reconciliation" aria-labelledby="rec-h" className="card space-y-2">
           <div className="flex items-center justify-between">
             <h2 id="rec-h" className="font-semibold">
               Reconciliation with the processor
@@ -126,7 +127,7 @@ export default async function FinancePage() {
           </ul>
         </section>
       ) : null}
-      <section aria-labelledby="inv-h" className="space-y-2">
+      <section id="invoices" aria-labelledby="inv-h" className="space-y-2">
         <h2 id="inv-h" className="text-lg font-semibold">
           Invoices
         </h2>

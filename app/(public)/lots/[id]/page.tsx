@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { PriceHistory } from "@/components/catalogue/PriceHistory";
+import { DocumentLinks } from "@/components/documents/DocumentLinks";
 import { When } from "@/components/time/When";
 import { LotView } from "@/components/lots/LotView";
 import { formatCents } from "@/lib/money/cents";
@@ -88,6 +89,12 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
   return (
     <div className="space-y-6">
       <LotView data={data} summary={summary} chart={chart} record={record} actions={actions} />
+      <DocumentLinks
+        links={[
+          { href: `/api/lots/${id}/sheet`, label: "Lot sheet (PDF)" },
+          ...(sale ? [{ href: `/api/sales/${sale.saleId}/catalogue`, label: "Sale catalogue (PDF)" }] : []),
+        ]}
+      />
       <PriceHistory series={history} />
     </div>
   );

@@ -1,4 +1,5 @@
 import { notFound } from "next/navigation";
+import { DocumentLinks } from "@/components/documents/DocumentLinks";
 import { SaleBoard } from "@/components/live/SaleBoard";
 import { ApiError } from "@/lib/api/errors";
 import { requirePageViewer } from "@/lib/auth/guards";
@@ -22,6 +23,7 @@ export default async function SalePage({ params }: { params: Promise<{ id: strin
       <p className="text-sm text-flash-700">
         Prices move live. A bid in a lot&apos;s last {span} moves that lot&apos;s close to {span} after the bid.
       </p>
+      <DocumentLinks links={[{ href: `/api/sales/${id}/catalogue`, label: "Sale catalogue (PDF)" }]} />
       <SaleBoard initial={data} />
     </div>
   );

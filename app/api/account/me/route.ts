@@ -3,9 +3,9 @@ import { route } from "@/lib/api/route";
 import { homeFor } from "@/lib/auth/roles";
 
 export const GET = route({ permission: "account.read" }, async ({ viewer }) => ({
-  id: viewer!.id,
-  email: viewer!.email,
-  name: viewer!.name,
-  roles: viewer!.roles,
-  home: homeFor(viewer!.roles),
+  id: viewer.id,
+  email: viewer.email,
+  name: viewer.name,
+  roles: viewer.roles,
+  home: homeFor(viewer.roles),
 }));

@@ -10,5 +10,5 @@ const Query = z.object({ size: z.enum(["thumb", "full"]).default("thumb") });
 export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
   const { size } = parseWith(Query, { size: req.nextUrl.searchParams.get("size") ?? undefined });
-  return photoResponse(await readDisputePhoto(viewer!, id, size));
+  return photoResponse(await readDisputePhoto(viewer, id, size));
 });

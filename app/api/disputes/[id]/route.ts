@@ -4,5 +4,5 @@ import { getCase } from "@/lib/services/disputes/cases";
 import { IdParam } from "@/lib/validation/common";
 
 export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ params, viewer }) => ({
-  dispute: await getCase(viewer!, parseParams(IdParam, params).id),
+  dispute: await getCase(viewer, parseParams(IdParam, params).id),
 }));

@@ -4,5 +4,5 @@ import { getInvoice } from "@/lib/services/invoices";
 import { IdParam } from "@/lib/validation/common";
 
 export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ params, viewer }) =>
-  getInvoice(viewer!, parseParams(IdParam, params).id),
+  getInvoice(viewer, parseParams(IdParam, params).id),
 );

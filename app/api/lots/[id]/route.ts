@@ -12,5 +12,5 @@ export const GET = route<{ id: string }>({ permission: "account.read" }, async (
 
 export const PATCH = route<{ id: string }>({ permission: "lots.consign" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  return { lot: await updateLotDetails(viewer!, id, await readJson(req, LotDetailsSchema)) };
+  return { lot: await updateLotDetails(viewer, id, await readJson(req, LotDetailsSchema)) };
 });

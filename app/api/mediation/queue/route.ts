@@ -2,4 +2,4 @@
 import { route } from "@/lib/api/route";
 import { mediationQueue } from "@/lib/services/disputes/cases";
 
-export const GET = route({ permission: "disputes.mediate" }, async ({ viewer }) => mediationQueue(viewer!));
+export const GET = route({ permission: "disputes.mediate" }, async ({ viewer }) => mediationQueue(viewer));

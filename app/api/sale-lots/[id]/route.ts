@@ -4,5 +4,5 @@ import { getSaleLot } from "@/lib/services/sales";
 import { IdParam } from "@/lib/validation/common";
 
 export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ params, viewer }) =>
-  getSaleLot(viewer!, parseParams(IdParam, params).id),
+  getSaleLot(viewer, parseParams(IdParam, params).id),
 );

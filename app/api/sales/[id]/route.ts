@@ -4,5 +4,5 @@ import { getSale } from "@/lib/services/sales";
 import { IdParam } from "@/lib/validation/common";
 
 export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ params, viewer }) =>
-  getSale(parseParams(IdParam, params).id, viewer ?? undefined),
+  getSale(parseParams(IdParam, params).id, viewer),
 );

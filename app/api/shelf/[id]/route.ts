@@ -5,5 +5,5 @@ import { IdParam } from "@/lib/validation/common";
 
 export const GET = route<{ id: string }>({ permission: "shelf.use" }, async ({ params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  return shelfTube(viewer!, id);
+  return shelfTube(viewer, id);
 });

@@ -12,7 +12,7 @@ export const GET = route<{ saleId: string }>({ permission: "account.read" }, asy
     format: req.nextUrl.searchParams.get("format") ?? undefined,
     consignorId: req.nextUrl.searchParams.get("consignorId") ?? undefined,
   });
-  const st = await statementFor(viewer!, saleId, q.consignorId);
+  const st = await statementFor(viewer, saleId, q.consignorId);
   const name = `getterline-statement-${saleId.slice(0, 8)}`;
   if (q.format === "csv")
     return new Response(statementCsv(st), {

@@ -4,5 +4,5 @@ import { addReferenceType } from "@/lib/services/reference-curation";
 import { ReferenceAddSchema } from "@/lib/validation/valves";
 
 export const POST = route({ permission: "reference.edit" }, async ({ req, viewer }) => {
-  return { reference: await addReferenceType(viewer!.id, await readJson(req, ReferenceAddSchema)) };
+  return { reference: await addReferenceType(viewer.id, await readJson(req, ReferenceAddSchema)) };
 });

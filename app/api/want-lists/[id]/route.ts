@@ -6,10 +6,10 @@ import { WantListPatchSchema } from "@/lib/validation/want-lists";
 
 export const PATCH = route<{ id: string }>({ permission: "lots.bid" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  return { wantList: await updateWantList(viewer!, id, await readJson(req, WantListPatchSchema, 2 * 1024)) };
+  return { wantList: await updateWantList(viewer, id, await readJson(req, WantListPatchSchema, 2 * 1024)) };
 });
 
 export const DELETE = route<{ id: string }>({ permission: "lots.bid" }, async ({ params, viewer }) => {
-  await deleteWantList(viewer!, parseParams(IdParam, params).id);
+  await deleteWantList(viewer, parseParams(IdParam, params).id);
   return { deleted: true };
 });

@@ -9,5 +9,5 @@ const Params = z.object({ id: z.uuid("Not an account id") });
 export const PATCH = route<{ id: string }>({ permission: "users.manage" }, async ({ req, params, viewer }) => {
   const { id } = parseWith(Params, params);
   const { roles } = await readJson(req, RolesUpdateSchema);
-  return { account: await setRoles(viewer!.id, id, roles) };
+  return { account: await setRoles(viewer.id, id, roles) };
 });

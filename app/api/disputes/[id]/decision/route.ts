@@ -5,5 +5,5 @@ import { IdParam } from "@/lib/validation/common";
 import { DecisionSchema } from "@/lib/validation/disputes";
 
 export const POST = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ req, params, viewer }) => ({
-  dispute: await decide(viewer!, parseParams(IdParam, params).id, await readJson(req, DecisionSchema, 256 * 1024)),
+  dispute: await decide(viewer, parseParams(IdParam, params).id, await readJson(req, DecisionSchema, 256 * 1024)),
 }));

@@ -5,10 +5,6 @@ import { IdParam } from "@/lib/validation/common";
 import { DisputeMessageSchema } from "@/lib/validation/disputes";
 
 export const POST = route<{ id: string }>({ permission: "account.read" }, async ({ req, params, viewer }) => {
-  const message = await postMessage(
-    viewer!,
-    parseParams(IdParam, params).id,
-    await readJson(req, DisputeMessageSchema),
-  );
+  const message = await postMessage(viewer, parseParams(IdParam, params).id, await readJson(req, DisputeMessageSchema));
   return Response.json({ message }, { status: 201 });
 });

@@ -11,6 +11,6 @@ export const POST = route<{ id: string }>({ permission: "account.read" }, async 
     itemId: upload.field("itemId") || null,
     caption: upload.field("caption") ?? "",
   });
-  const photo = await addDisputePhoto(viewer!, id, { name: upload.name, bytes: upload.bytes }, fields);
+  const photo = await addDisputePhoto(viewer, id, { name: upload.name, bytes: upload.bytes }, fields);
   return Response.json({ photo }, { status: 201 });
 });

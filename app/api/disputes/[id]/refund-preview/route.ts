@@ -6,7 +6,7 @@ import { RefundPreviewSchema } from "@/lib/validation/disputes";
 
 export const POST = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ req, params, viewer }) => ({
   settlement: await refundPreview(
-    viewer!,
+    viewer,
     parseParams(IdParam, params).id,
     await readJson(req, RefundPreviewSchema, 256 * 1024),
   ),

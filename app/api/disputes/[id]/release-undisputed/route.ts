@@ -6,7 +6,7 @@ import { LineValuesSchema } from "@/lib/validation/disputes";
 
 export const POST = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ req, params, viewer }) => ({
   release: await releaseUndisputedShare(
-    viewer!,
+    viewer,
     parseParams(IdParam, params).id,
     await readJson(req, LineValuesSchema, 256 * 1024),
   ),

@@ -4,6 +4,6 @@ import { confirmReturnReceived } from "@/lib/services/disputes/returns";
 import { IdParam } from "@/lib/validation/common";
 
 export const POST = route<{ id: string }>({ permission: "lots.consign" }, async ({ params, viewer }) => {
-  await confirmReturnReceived(viewer!, parseParams(IdParam, params).id);
+  await confirmReturnReceived(viewer, parseParams(IdParam, params).id);
   return { refunded: true };
 });

@@ -5,6 +5,6 @@ import { IdParam } from "@/lib/validation/common";
 import { ReturnShipmentSchema } from "@/lib/validation/disputes";
 
 export const POST = route<{ id: string }>({ permission: "lots.bid" }, async ({ req, params, viewer }) => {
-  await recordReturn(viewer!, parseParams(IdParam, params).id, await readJson(req, ReturnShipmentSchema));
+  await recordReturn(viewer, parseParams(IdParam, params).id, await readJson(req, ReturnShipmentSchema));
   return { recorded: true };
 });

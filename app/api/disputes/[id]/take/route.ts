@@ -4,6 +4,6 @@ import { takeCase } from "@/lib/services/disputes/mediation";
 import { IdParam } from "@/lib/validation/common";
 
 export const POST = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ params, viewer }) => {
-  await takeCase(viewer!, parseParams(IdParam, params).id);
+  await takeCase(viewer, parseParams(IdParam, params).id);
   return { taken: true };
 });

@@ -4,5 +4,5 @@ import { workspace } from "@/lib/services/disputes/mediation";
 import { IdParam } from "@/lib/validation/common";
 
 export const GET = route<{ id: string }>({ permission: "disputes.mediate" }, async ({ params, viewer }) =>
-  workspace(viewer!, parseParams(IdParam, params).id),
+  workspace(viewer, parseParams(IdParam, params).id),
 );

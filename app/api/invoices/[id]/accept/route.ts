@@ -4,6 +4,6 @@ import { acceptDelivery } from "@/lib/services/escrow";
 import { IdParam } from "@/lib/validation/common";
 
 export const POST = route<{ id: string }>({ permission: "lots.bid" }, async ({ params, viewer }) => {
-  await acceptDelivery(viewer!, parseParams(IdParam, params).id);
+  await acceptDelivery(viewer, parseParams(IdParam, params).id);
   return { released: true };
 });

@@ -6,6 +6,6 @@ import { OpenDisputeSchema } from "@/lib/validation/disputes";
 
 export const POST = route<{ id: string }>({ permission: "lots.bid" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  const dispute = await openDispute(viewer!, id, await readJson(req, OpenDisputeSchema, 512 * 1024));
+  const dispute = await openDispute(viewer, id, await readJson(req, OpenDisputeSchema, 512 * 1024));
   return Response.json({ dispute }, { status: 201 });
 });

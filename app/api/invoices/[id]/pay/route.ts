@@ -6,5 +6,5 @@ import { CardPaymentSchema } from "@/lib/validation/payments";
 
 export const POST = route<{ id: string }>({ permission: "lots.bid" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  return payInvoice(viewer!, id, await readJson(req, CardPaymentSchema, 4 * 1024));
+  return payInvoice(viewer, id, await readJson(req, CardPaymentSchema, 4 * 1024));
 });

@@ -25,5 +25,5 @@ export const POST = route<{ id: string }>({ permission: "lots.consign" }, async 
     throw new ApiError("payload_too_large", limit);
   const csv = await req.text();
   if (Buffer.byteLength(csv) > DEFAULT_MAX_BYTES) throw new ApiError("payload_too_large", limit);
-  return mode === "preview" ? previewImport(viewer!, id, csv) : applyImport(viewer!, id, csv, name);
+  return mode === "preview" ? previewImport(viewer, id, csv) : applyImport(viewer, id, csv, name);
 });

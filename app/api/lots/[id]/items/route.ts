@@ -6,6 +6,6 @@ import { ItemSchema } from "@/lib/validation/lots";
 
 export const POST = route<{ id: string }>({ permission: "lots.consign" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  const item = await addItem(viewer!, id, await readJson(req, ItemSchema, 256 * 1024));
+  const item = await addItem(viewer, id, await readJson(req, ItemSchema, 256 * 1024));
   return Response.json({ item }, { status: 201 });
 });

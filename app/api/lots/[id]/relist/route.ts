@@ -4,5 +4,5 @@ import { askToRelist } from "@/lib/services/relist";
 import { IdParam } from "@/lib/validation/common";
 
 export const POST = route<{ id: string }>({ permission: "lots.consign" }, async ({ params, viewer }) =>
-  askToRelist(viewer!, parseParams(IdParam, params).id),
+  askToRelist(viewer, parseParams(IdParam, params).id),
 );

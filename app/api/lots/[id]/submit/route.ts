@@ -5,5 +5,5 @@ import { IdParam } from "@/lib/validation/common";
 
 export const POST = route<{ id: string }>({ permission: "lots.consign" }, async ({ params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  return { lot: await submitLot(viewer!, id) };
+  return { lot: await submitLot(viewer, id) };
 });

@@ -8,7 +8,7 @@ import { BidSchema } from "@/lib/validation/sales";
 export const POST = route<{ id: string }>({ permission: "lots.bid" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
   const { maxCents, idempotencyKey } = await readJson(req, BidSchema, 4 * 1024);
-  const r = await placeMaxBid(viewer!, id, maxCents, idempotencyKey);
+  const r = await placeMaxBid(viewer, id, maxCents, idempotencyKey);
   if (!r.accepted)
     throw new ApiError("conflict", r.message, undefined, undefined, {
       reason: r.reason,

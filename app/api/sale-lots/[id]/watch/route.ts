@@ -7,5 +7,5 @@ import { IdParam } from "@/lib/validation/common";
 export const POST = route<{ id: string }>({ permission: "lots.bid" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
   const { on } = await readJson(req, z.object({ on: z.boolean() }));
-  return setWatch(viewer!, id, on);
+  return setWatch(viewer, id, on);
 });

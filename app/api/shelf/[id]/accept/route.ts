@@ -9,5 +9,5 @@ const Body = z.object({ makerName: z.string().trim().min(1).max(120) });
 export const POST = route<{ id: string }>({ permission: "shelf.use" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
   const { makerName } = await readJson(req, Body);
-  return { tube: await acceptMatch(viewer!, id, makerName) };
+  return { tube: await acceptMatch(viewer, id, makerName) };
 });

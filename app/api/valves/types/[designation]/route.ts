@@ -18,6 +18,6 @@ export const PATCH = route<{ designation: string }>(
   async ({ req, params, viewer }) => {
     const { designation } = parseWith(Params, params);
     const { expectedRevision, ...edit } = await readJson(req, Edit);
-    return { reference: await editReferenceType(viewer!.id, designation, expectedRevision, edit) };
+    return { reference: await editReferenceType(viewer.id, designation, expectedRevision, edit) };
   },
 );

@@ -5,5 +5,5 @@ import { ReferenceImportSchema } from "@/lib/validation/valves";
 
 export const POST = route({ permission: "reference.edit" }, async ({ req, viewer }) => {
   const { csv, apply, reason } = await readJson(req, ReferenceImportSchema, 3 * 1024 * 1024);
-  return importReferenceCsv(viewer!.id, csv, apply, reason);
+  return importReferenceCsv(viewer.id, csv, apply, reason);
 });

@@ -6,6 +6,6 @@ import { AmendmentSchema } from "@/lib/validation/lots";
 
 export const POST = route<{ id: string }>({ permission: "house.manage" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  await amendLot(viewer!, id, await readJson(req, AmendmentSchema));
+  await amendLot(viewer, id, await readJson(req, AmendmentSchema));
   return Response.json({ amended: true }, { status: 201 });
 });

@@ -6,5 +6,5 @@ import { ReviewDecisionSchema } from "@/lib/validation/lots";
 
 export const POST = route<{ id: string }>({ permission: "house.manage" }, async ({ req, params, viewer }) => {
   const { id } = parseParams(IdParam, params);
-  return { lot: await decideLot(viewer!, id, await readJson(req, ReviewDecisionSchema)) };
+  return { lot: await decideLot(viewer, id, await readJson(req, ReviewDecisionSchema)) };
 });

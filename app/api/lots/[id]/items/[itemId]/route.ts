@@ -8,11 +8,11 @@ type P = { id: string; itemId: string };
 
 export const PUT = route<P>({ permission: "lots.consign" }, async ({ req, params, viewer }) => {
   const { id, itemId } = parseParams(LotItemParams, params);
-  return { item: await updateItem(viewer!, id, itemId, await readJson(req, ItemSchema, 256 * 1024)) };
+  return { item: await updateItem(viewer, id, itemId, await readJson(req, ItemSchema, 256 * 1024)) };
 });
 
 export const DELETE = route<P>({ permission: "lots.consign" }, async ({ params, viewer }) => {
   const { id, itemId } = parseParams(LotItemParams, params);
-  await removeItem(viewer!, id, itemId);
+  await removeItem(viewer, id, itemId);
   return { removed: true };
 });

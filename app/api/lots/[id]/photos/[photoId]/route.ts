@@ -9,7 +9,7 @@ export const DELETE = route<{ id: string; photoId: string }>(
   { permission: "lots.consign" },
   async ({ params, viewer }) => {
     const { id, photoId } = parseParams(Params, params);
-    await removePhoto(viewer!, id, photoId);
+    await removePhoto(viewer, id, photoId);
     return { removed: true };
   },
 );

@@ -11,6 +11,6 @@ export const POST = route<{ designation: string }>(
   async ({ req, params, viewer }) => {
     const { designation } = parseWith(Params, params);
     const { retired, reason } = await readJson(req, ReferenceRetireSchema);
-    return setReferenceRetired(viewer!.id, designation, retired, reason);
+    return setReferenceRetired(viewer.id, designation, retired, reason);
   },
 );

@@ -11,6 +11,6 @@ export const POST = route<{ designation: string }>(
   async ({ req, params, viewer }) => {
     const { designation } = parseWith(Params, params);
     const { against } = await readJson(req, ReferenceVerifySchema);
-    return verifyReferenceType(viewer!.id, designation, against);
+    return verifyReferenceType(viewer.id, designation, against);
   },
 );

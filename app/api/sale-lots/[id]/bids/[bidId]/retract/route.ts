@@ -11,6 +11,6 @@ export const POST = route<{ id: string; bidId: string }>(
   async ({ req, params, viewer }) => {
     const { id, bidId } = parseParams(Params, params);
     const { reason } = await readJson(req, RetractSchema);
-    return { live: await retractBid(viewer!, id, bidId, reason) };
+    return { live: await retractBid(viewer, id, bidId, reason) };
   },
 );
