@@ -31,7 +31,18 @@ import type { OpenDisputeInput } from "../../lib/validation/disputes";
 import { db, Lot } from "../../models";
 import { startTestS3, type TestS3 } from "../setup/s3";
 import { startTestStripe, type TestStripe } from "../setup/stripe";
-import { approvedLot, inbox, itemInput, makeUser, request, sessionCookie, viewerOf } from "../support/factories";
+import {
+  approvedLot,
+  inbox,
+  itemInput,
+  makeUser,
+  request,
+  sessionCookie,
+  untilClosingTimePassed,
+  viewerOf,
+} from "../support/factories";
+import { until } from "../support/wait";
+import { invoiceColumns } from "../../lib/services/invoice-rows";
 import { disputeSweep, releaseUndisputedShare } from "../../lib/services/disputes";
 import { GET as queueRoute } from "../../app/api/mediation/queue/route";
 import { GET as caseRoute } from "../../app/api/disputes/[id]/route";
@@ -55,15 +66,6 @@ afterAll(async () => {
 
 const one = async <T extends object>(sql: string, r: Record<string, unknown>) =>
   (await db().query<T>(sql, { replacements: r, type: QueryTypes.SELECT }))[0]!;
-const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000): Promise<T> => {
-  const end = Date.now() + ms;
-  let v = await fn();
-  while (!ok(v) && Date.now() < end) {
-    await new Promise((r) => setTimeout(r, 100));
-    v = await fn();
-  }
-  return v;
-};
 /** Nothing left in escrow or owed to the consignor; the house keeps what it should; the ledger balances and matches the processor. */
 async function expectSettled(invoiceId: string, kept: { premiumKeptCents: number; commissionKeptCents: number }) {
   const led = await balances(invoiceId);
@@ -122,7 +124,7 @@ async function deliveredLot(consignor?: User) {
   const under = await makeUser(["dealer"]);
   await placeMaxBid(viewerOf(buyer), sl.id, 3_000, "c-1");
   await placeMaxBid(viewerOf(under), sl.id, 2_500, "c-2");
-  await new Promise((r) => setTimeout(r, 2_700));
+  await untilClosingTimePassed(sl.id);
   expect(await closeSaleLot(sl.id)).toBe("closed");
   const inv = await one<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, { id: sl.id });
   await payInvoice(viewerOf(buyer), inv.id, {
@@ -299,7 +301,7 @@ describe("claims and mediation", () => {
       commission_returned_cents: number;
       payment_intent_id: string;
       transfer_id: string;
-    }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+    }>(`SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`, { id: f.invoiceId });
     expect(inv.state).toBe("released");
     expect([inv.hammer_refunded_cents, inv.premium_refunded_cents, inv.commission_returned_cents]).toEqual([
       378, 38, 76,
@@ -370,7 +372,7 @@ describe("claims and mediation", () => {
       expect(second.details?.returnReceivedAt).toEqual(expect.any(String));
       expect((await refused(confirmReturnReceived(viewerOf(f.consignor), id))).details?.state).toBe("closed");
       const inv = await one<{ state: string; payment_intent_id: string; hammer_cents: number; premium_cents: number }>(
-        `SELECT * FROM invoices WHERE id = :id`,
+        `SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`,
         { id: f.invoiceId },
       );
       expect(inv.state).toBe("refunded");
@@ -513,7 +515,7 @@ describe("claims and mediation", () => {
       reasons: "The code the buyer read is registered to the listed maker's brand owner; not misdescribed.",
     });
     const inv1 = await one<{ state: string; hammer_cents: number; commission_cents: number; transfer_id: string }>(
-      `SELECT * FROM invoices WHERE id = :id`,
+      `SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`,
       { id: a.invoiceId },
     );
     expect(inv1.state).toBe("released");
@@ -581,9 +583,12 @@ describe("claims and mediation", () => {
     expect(r.payoutCents).toBe(1_728);
     expect(r.held).toEqual({ hammerCents: 540, premiumCents: 54, commissionCents: 108 });
     expect(await releaseDue()).toBe(0);
-    const early = await one<{ state: string; released_hammer_cents: number }>(`SELECT * FROM invoices WHERE id = :id`, {
-      id: f.invoiceId,
-    });
+    const early = await one<{ state: string; released_hammer_cents: number }>(
+      `SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`,
+      {
+        id: f.invoiceId,
+      },
+    );
     expect(early.state).toBe("disputed");
     expect(early.released_hammer_cents).toBe(2_160);
     expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.paidOutCents).toBe(1_728);
@@ -634,7 +639,7 @@ describe("claims and mediation", () => {
     });
     // Refund as in the first test ($4.16); what is left, $1.62 − $0.32 = $1.30, goes to the consignor: $17.28 + $1.30 = $18.58 in all.
     const inv = await one<{ state: string; payment_intent_id: string; transfer_id: string }>(
-      `SELECT * FROM invoices WHERE id = :id`,
+      `SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`,
       { id: f.invoiceId },
     );
     expect(inv.state).toBe("released");
