@@ -12,6 +12,7 @@ import { lotChanged } from "./catalogue/events";
 import { scheduleClose } from "./close-schedule";
 import { liveFrom } from "./live-lot";
 import { paddlesOf } from "./paddles";
+import { BID_LOG_COLUMNS, bidColumns, type BidLogRow, type BidRow } from "./bid-rows";
 
 /**
  * The house schedules approved lots into a sale with staggered closing
@@ -203,19 +204,8 @@ export async function getSaleLot(viewer: Viewer, saleLotId: string) {
     `SELECT title, starts_at, soft_close_seconds FROM sales WHERE id = :id`,
     { replacements: { id: live.saleId }, type: QueryTypes.SELECT },
   );
-  const bids = await s.query<{
-    id: string;
-    seq: number;
-    bidder_id: string;
-    max_cents: number;
-    price_after_cents: number;
-    outcome: string;
-    placed_at: Date;
-    retracted_at: Date | null;
-    retract_reason: string | null;
-    number: number | null;
-  }>(
-    `SELECT b.id, b.seq, b.bidder_id, b.max_cents, b.price_after_cents, b.outcome, b.placed_at, b.retracted_at, b.retract_reason, p.number
+  const bids = await s.query<BidLogRow & { number: number | null }>(
+    `SELECT ${bidColumns(BID_LOG_COLUMNS, "b")}, p.number
        FROM bids b LEFT JOIN paddles p ON p.sale_id = :saleId AND p.user_id = b.bidder_id WHERE b.sale_lot_id = :saleLotId ORDER BY b.seq DESC LIMIT 200`,
     { replacements: { saleId: live.saleId, saleLotId }, type: QueryTypes.SELECT },
   );
@@ -338,7 +328,7 @@ export async function retractBid(admin: Viewer, saleLotId: string, bidId: string
       { replacements: { admin: admin.id, reason, bidId, saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );
     if (!hit) throw new ApiError("not_found", "No such standing bid on this lot");
-    const remaining = await s.query<{ bidder_id: string; max_cents: number; placed_at: Date; seq: number }>(
+    const remaining = await s.query<Pick<BidRow, "bidder_id" | "max_cents" | "placed_at" | "seq">>(
       `SELECT bidder_id, max_cents, placed_at, seq FROM bids WHERE sale_lot_id = :saleLotId AND retracted_at IS NULL ORDER BY seq`,
       { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );

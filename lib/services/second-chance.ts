@@ -7,6 +7,7 @@ import { formatCents } from "../money/cents";
 import { DEFAULT_COMMISSION_TIERS, DEFAULT_FEE_SCHEDULE, invoiceFor, sellersCommissionCents } from "../money/fees";
 import { entriesFrom, invoiceIssuedEntries } from "../money/ledger";
 import { db, User } from "../../models";
+import type { BidRow } from "./bid-rows";
 import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
 import { INVOICE_SETTINGS } from "./invoices";
 import { post } from "./ledger";
@@ -51,7 +52,7 @@ export async function cancelUnpaid(
       ),
     );
     if (!offerToUnderbidder) return { offeredTo: null, newInvoiceId: null };
-    const [under] = await s.query<{ bidder_id: string; max_cents: number }>(
+    const [under] = await s.query<Pick<BidRow, "bidder_id" | "max_cents">>(
       `SELECT bidder_id, MAX(max_cents) AS max_cents FROM bids WHERE sale_lot_id = :sl AND retracted_at IS NULL AND bidder_id <> :buyer GROUP BY bidder_id ORDER BY MAX(max_cents) DESC LIMIT 1`,
       { replacements: { sl: inv.sale_lot_id, buyer: inv.buyer_id }, type: QueryTypes.SELECT, transaction: t },
     );
