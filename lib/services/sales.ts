@@ -11,7 +11,7 @@ import { scheduleClose } from "./close-schedule";
 import { currentSettings } from "./house-settings";
 import { liveFrom } from "./live-lot";
 import { paddlesOf } from "./paddles";
-import { BID_LOG_COLUMNS, bidColumns, type BidLogRow, type BidRow } from "./bid-rows";
+import { BID_LOG_COLUMNS, bidColumns, type BidLogRow } from "./bid-rows";
 
 /**
  * The house schedules approved lots into a sale with staggered closing
