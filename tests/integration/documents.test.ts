@@ -97,6 +97,30 @@ describe("printable documents", () => {
     expect(text).toContain("licensed practice");
   }, 60_000);
 
+  it("prints the buyer's address as the invoice recorded it on the invoice and the packing slip", async () => {
+    const f = await invoicedLot([3_000, 2_500], items);
+    // The snapshot the invoice keeps (an invented address; country by ISO 3166-1 alpha-2 [ISO-3166]).
+    const address = {
+      name: "Wren Hollow Estate",
+      line1: "14 Lantern Row",
+      line2: "",
+      city: "Marrowby",
+      region: "",
+      postalCode: "MB4 2QT",
+      country: "GB",
+    };
+    await db().query(`UPDATE invoices SET buyer_address = :a::jsonb WHERE id = :id`, {
+      replacements: { a: JSON.stringify(address), id: f.invoiceId },
+    });
+    const invoice = await textOf(await get(invoicePdfRoute, `/api/invoices/${f.invoiceId}/pdf`, f.invoiceId, f.buyer));
+    expect(invoice).toMatch(/bill to[\s\S]*Wren Hollow Estate[\s\S]*14 Lantern Row[\s\S]*Marrowby, MB4 2QT/i);
+    expect(invoice).toContain("United Kingdom");
+    const slip = await textOf(
+      await get(packingSlipRoute, `/api/invoices/${f.invoiceId}/packing-slip`, f.invoiceId, f.buyer),
+    );
+    expect(slip).toMatch(/ship to[\s\S]*Wren Hollow Estate[\s\S]*14 Lantern Row/i);
+  });
+
   it("keeps the invoice papers to the buyer, the house and the claim's mediator (401/403/404)", async () => {
     const f = await invoicedLot([3_000, 2_500]);
     const url = `/api/invoices/${f.invoiceId}/pdf`;

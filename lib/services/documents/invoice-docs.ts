@@ -5,6 +5,7 @@ import type { AddressBlock } from "../../documents/layout";
 import type { InvoiceDoc } from "../../documents/invoice";
 import type { PackingDoc } from "../../documents/packing-slip";
 import { db, LotItem } from "../../../models";
+import { invoiceAddresses } from "../addresses";
 import { getInvoice } from "../invoices";
 import { presentItem } from "../lots";
 import { summaryFor } from "../lot-summary";
@@ -32,20 +33,22 @@ async function readable(viewer: Viewer, invoiceId: string, kind: Kind) {
   return { inv, extra: extra! };
 }
 
-/**
- * Postal blocks for the invoice's parties. None are kept yet; when buyer addresses arrive they are passed
- * here and the documents print them.
- */
+/** Postal blocks for the invoice's papers: the buyer's address as it stood when the invoice was issued. */
 export type InvoiceAddresses = { buyer: AddressBlock; house: AddressBlock };
-const NO_ADDRESSES: InvoiceAddresses = { buyer: null, house: null };
+
+/**
+ * The buyer's block comes from the invoice's own snapshot; where the lot ships from (the consignor's address) stays
+ * off the buyer's papers, as on the web invoice, and the house keeps no postal address of its own yet.
+ */
+async function papersAddresses(invoiceId: string): Promise<InvoiceAddresses> {
+  const { buyer } = await invoiceAddresses(invoiceId);
+  return { buyer, house: null };
+}
 
 /** The invoice document's data, for a viewer allowed to print it. Money lines are the invoice row's own. */
-export async function invoiceDocument(
-  viewer: Viewer,
-  invoiceId: string,
-  addresses: InvoiceAddresses = NO_ADDRESSES,
-): Promise<InvoiceDoc> {
+export async function invoiceDocument(viewer: Viewer, invoiceId: string): Promise<InvoiceDoc> {
   const { inv, extra } = await readable(viewer, invoiceId, "invoice");
+  const addresses = await papersAddresses(invoiceId);
   return {
     number: inv.number,
     state: inv.state,
@@ -68,12 +71,9 @@ export async function invoiceDocument(
 }
 
 /** The packing slip's data: the lot's items by type, condition and count, and the cautions its types need. */
-export async function packingSlipDocument(
-  viewer: Viewer,
-  invoiceId: string,
-  addresses: InvoiceAddresses = NO_ADDRESSES,
-): Promise<PackingDoc> {
+export async function packingSlipDocument(viewer: Viewer, invoiceId: string): Promise<PackingDoc> {
   const { inv, extra } = await readable(viewer, invoiceId, "packing-slip");
+  const addresses = await papersAddresses(invoiceId);
   db();
   const items = (await LotItem.findAll({ where: { lotId: inv.lotId }, order: [["position", "ASC"]] })).map(presentItem);
   const { summary } = await summaryFor(items);
