@@ -4,6 +4,8 @@
 import { performance } from "node:perf_hooks";
 import { gradeReading, type TesterReading } from "../lib/valves/grading";
 import { findMatchedPairs, findMatchedQuads, type MatchReading, type MatchResult } from "../lib/valves/matching";
+import { decodeDesignation } from "../lib/valves/designation";
+import { seedReferenceTable } from "../lib/valves/seed";
 
 const count = Number(process.argv[2] ?? 10_000);
 const tolerancePct = Number(process.argv[3] ?? 5);
@@ -74,4 +76,12 @@ time("pairs, Gm", () => findMatchedPairs(tubes, { tolerancePct }), describeMatch
 time("pairs, Gm + plate current", () => findMatchedPairs(tubes, { tolerancePct, onPlateCurrent: true }), describeMatch);
 time("quads, Gm", () => findMatchedQuads(tubes, { tolerancePct }), describeMatch);
 time("quads, Gm + plate current", () => findMatchedQuads(tubes, { tolerancePct, onPlateCurrent: true }), describeMatch);
+// Designation decoding runs on every keystroke of the item form: 2,000 mixed inputs (known, unknown, garbage).
+const table = seedReferenceTable();
+const inputs = ["12ax7", "ECC38", "12AX8", "KT89", "6SN7GTB", "E88CC", "garbage!", "5751"];
+time(
+  "decode 2,000 designations",
+  () => Array.from({ length: 2000 }, (_, i) => decodeDesignation(table, inputs[i % inputs.length]!)),
+  (r) => `${r.filter((d) => d.ok).length} decoded`,
+);
 console.log(`peak RSS ${mb(process.memoryUsage().rss)}`);

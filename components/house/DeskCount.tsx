@@ -21,7 +21,7 @@ export function DeskCount({
     <Link
       href={href}
       data-testid={testId}
-      className={`card block h-full hover:border-glow-400 ${alert ? "border-fault-300" : ""}`}
+      className={`card block h-full hover:border-glow-400 ${alert ? "border-fault-600" : ""}`}
     >
       <span className={`code block text-3xl font-semibold ${alert ? "text-fault-700" : "text-flash-900"}`}>
         {count}

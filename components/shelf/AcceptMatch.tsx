@@ -1,7 +1,7 @@
 "use client";
 
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
 import { apiFetch } from "@/lib/client/api";
 
@@ -16,22 +16,14 @@ export function AcceptMatch({
   confidence: string;
 }) {
   const router = useRouter();
-  const [problem, setProblem] = useState<string | null>(null);
+  const accept = useMutation({
+    mutationFn: () => apiFetch(`/api/shelf/${tubeId}/accept`, { json: { makerName } }),
+    onSuccess: () => router.refresh(),
+  });
   return (
     <div className="space-y-2">
-      {problem ? <FormAlert>{problem}</FormAlert> : null}
-      <button
-        type="button"
-        className="btn-primary"
-        onClick={async () => {
-          try {
-            await apiFetch(`/api/shelf/${tubeId}/accept`, { json: { makerName } });
-            router.refresh();
-          } catch (e) {
-            setProblem((e as Error).message);
-          }
-        }}
-      >
+      {accept.error ? <FormAlert>{accept.error.message}</FormAlert> : null}
+      <button type="button" className="btn-primary" disabled={accept.isPending} onClick={() => accept.mutate()}>
         Accept {makerName} as matched by construction ({confidence})
       </button>
     </div>

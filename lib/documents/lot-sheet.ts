@@ -72,7 +72,7 @@ export function lotSheetPdf(s: LotSheetDoc): Promise<Buffer> {
           `${BASIS_WORDS[i.basis] ?? i.basis}${i.maker ? `: ${i.maker}` : ""}`,
           i.codes || "-",
           String(i.readings),
-          i.vacuumLoss ? "WHITE: vacuum lost" : "silver",
+          i.vacuumLoss ? "WHITE" : "silver",
         ],
       })),
     );

@@ -18,6 +18,8 @@ import { normaliseDesignation } from "../valves/designation";
 import { IMPORT_COLUMN_NAMES } from "./csv-columns";
 import type { ReferenceTable } from "../valves/reference-table";
 import { cleanText, newRowCache, readLotRow, type CsvIssue, type RowContent } from "./csv-row";
+import type { ItemInput } from "../validation/lots";
+import { checkRowItem } from "./csv-item";
 import type { LotItem } from "./item";
 
 export { IMPORT_COLUMNS, IMPORT_COLUMN_NAMES, csvTemplate, type ImportColumn } from "./csv-columns";
@@ -35,6 +37,8 @@ export interface ParsedRow extends RowContent {
   /** Stable across re-imports: see rowKey. */
   key: string;
   item: LotItem;
+  /** The row as the item form would send it, checked by the form's schema (ItemSchema). */
+  input: ItemInput;
 }
 
 /**
@@ -231,10 +235,12 @@ export function parseLotCsv(table: ReferenceTable, text: string, options: ParseL
     });
     const content = readLotRow(r.line, fields, errors, warnings, cache);
     if (!content) continue;
+    const input = checkRowItem(r.line, content, errors); // the item form's own schema, on the CSV's columns
+    if (!input) continue;
     const contentKey = rowKey(content, 0);
     const occurrence = seen.get(contentKey) ?? 0;
     seen.set(contentKey, occurrence + 1);
-    rows.push({ ...content, line: r.line, key: occurrence === 0 ? contentKey : rowKey(content, occurrence) });
+    rows.push({ ...content, input, line: r.line, key: occurrence === 0 ? contentKey : rowKey(content, occurrence) });
   }
   return { rows, errors, warnings, unknownColumns, fingerprint, rowKeys: rows.map((r) => r.key) };
 }

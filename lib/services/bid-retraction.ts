@@ -8,6 +8,7 @@ import { emitLot } from "../realtime/lot-emitter";
 import { db } from "../../models";
 import { liveFrom } from "./live-lot";
 import { paddlesOf } from "./paddles";
+import type { BidRow } from "./bid-rows";
 
 /**
  * The house retracts a bid, with the reason on record. The lot's state is
@@ -36,7 +37,7 @@ export async function retractBid(admin: Viewer, saleLotId: string, bidId: string
       { replacements: { admin: admin.id, reason, bidId, saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );
     if (!hit) throw new ApiError("not_found", "No such standing bid on this lot");
-    const remaining = await s.query<{ bidder_id: string; max_cents: number; placed_at: Date; seq: number }>(
+    const remaining = await s.query<Pick<BidRow, "bidder_id" | "max_cents" | "placed_at" | "seq">>(
       `SELECT bidder_id, max_cents, placed_at, seq FROM bids WHERE sale_lot_id = :saleLotId AND retracted_at IS NULL ORDER BY seq`,
       { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );

@@ -2,6 +2,7 @@ import { randomUUID } from "node:crypto";
 import { QueryTypes, type Transaction } from "sequelize";
 import { ACCOUNTS, assertBalanced, type AccountName, type LedgerEntry } from "../money/ledger";
 import { db } from "../../models";
+import { ledgerColumns, type LedgerEntryRow } from "./ledger-rows";
 
 /**
  * Post one balanced set of entries inside the caller's transaction (the same
@@ -62,14 +63,10 @@ export async function trialBalance(): Promise<number> {
 
 /** The postings of one invoice, oldest first. */
 export async function entriesFor(invoiceId: string) {
-  const rows = await db().query<{
-    txn_kind: string;
-    account: string;
-    debit_cents: string;
-    credit_cents: string;
-    created_at: Date;
-  }>(
-    `SELECT txn_kind, account, debit_cents, credit_cents, created_at FROM ledger_entries WHERE invoice_id = :invoiceId ORDER BY id`,
+  const rows = await db().query<
+    Pick<LedgerEntryRow, "txn_kind" | "account" | "debit_cents" | "credit_cents" | "created_at">
+  >(
+    `SELECT ${ledgerColumns(["txn_kind", "account", "debit_cents", "credit_cents", "created_at"])} FROM ledger_entries WHERE invoice_id = :invoiceId ORDER BY id`,
     { replacements: { invoiceId }, type: QueryTypes.SELECT },
   );
   return rows.map((r) => ({

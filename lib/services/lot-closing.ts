@@ -1,6 +1,5 @@
 import { QueryTypes } from "sequelize";
 import { closeOutcome } from "../auction/lot-phase";
-import type { ProxyState } from "../auction/proxy";
 import { env } from "../config/env";
 import { queue, QUEUES } from "../jobs/queue";
 import { sendMail } from "../mail/mailer";
@@ -14,19 +13,12 @@ import { invoiceSoldLot } from "./invoices";
 import { notify } from "./notices";
 import { startOutbidWorker } from "./outbid-notices";
 import { paddlesOf } from "./paddles";
+import type { SaleLotRow } from "./sale-lot-rows";
 
-type Closing = {
-  id: string;
-  sale_id: string;
-  lot_id: string;
-  phase: "open" | "sold" | "unsold" | "withdrawn";
-  seq: number;
-  state: ProxyState;
-  closes_at: Date;
-  hammer_cents: number | null;
-  consignor_id: string;
-  due: boolean;
-};
+type Closing = Pick<
+  SaleLotRow,
+  "id" | "sale_id" | "lot_id" | "phase" | "seq" | "state" | "closes_at" | "hammer_cents" | "consignor_id"
+> & { due: boolean };
 
 /**
  * Close a lot exactly once. Under the row lock: a lot already closed is left

@@ -26,32 +26,30 @@ export type ImportReport = {
   fileSeenBefore: boolean;
 };
 
+/** A checked row as a lot_items row: its values passed the item form's schema, so each fits its column. */
 function toValues(lotId: string, row: ParsedRow, position: number) {
-  const i = row.item;
-  const notes = [row.tubeRef ? `Tube ref ${row.tubeRef}` : "", row.notes ?? ""]
-    .filter(Boolean)
-    .join(" · ")
-    .slice(0, 1000);
+  const i = row.input;
+  const d = row.item.designation;
   return {
     lotId,
     position,
     importKey: row.key,
-    designationTyped: i.designation.typed.slice(0, 64),
-    designation: (i.designation.normalised ?? i.designation.typed.toUpperCase()).slice(0, 40),
-    designationKnown: i.designation.status === "known",
+    designationTyped: i.designation,
+    designation: d.normalised ?? i.designation.toUpperCase(),
+    designationKnown: d.status === "known",
     quantity: i.quantity,
-    labelBrand: i.labelBrand ?? "",
-    makerName: i.attributedMaker.makerName,
-    makerBasis: i.attributedMaker.basis,
-    sourceCode: i.codes.source ?? null,
-    dateCode: i.codes.date ?? null,
-    features: normaliseFeatures({ ...i.construction, ...(i.codes.other ? { otherCode: i.codes.other } : {}) }),
+    labelBrand: i.labelBrand,
+    makerName: i.makerName,
+    makerBasis: i.makerBasis,
+    sourceCode: i.sourceCode,
+    dateCode: i.dateCode,
+    features: normaliseFeatures(i.features),
     condition: i.condition,
     vacuumLoss: i.vacuumLoss,
     defects: i.defects,
     hazards: i.hazards,
-    readings: i.readings.map((r) => ({ ...r, tubeNo: r.tubeNo ?? 1 })),
-    notes,
+    readings: i.readings,
+    notes: i.notes,
   };
 }
 

@@ -11,6 +11,7 @@ import { scheduleClose } from "./close-schedule";
 import { currentSettings } from "./house-settings";
 import { liveFrom } from "./live-lot";
 import { paddlesOf } from "./paddles";
+import { BID_LOG_COLUMNS, bidColumns, type BidLogRow } from "./bid-rows";
 
 /**
  * The house schedules approved lots into a sale with staggered closing
@@ -205,19 +206,8 @@ export async function getSaleLot(viewer: Viewer, saleLotId: string) {
     `SELECT title, starts_at, soft_close_seconds FROM sales WHERE id = :id`,
     { replacements: { id: live.saleId }, type: QueryTypes.SELECT },
   );
-  const bids = await s.query<{
-    id: string;
-    seq: number;
-    bidder_id: string;
-    max_cents: number;
-    price_after_cents: number;
-    outcome: string;
-    placed_at: Date;
-    retracted_at: Date | null;
-    retract_reason: string | null;
-    number: number | null;
-  }>(
-    `SELECT b.id, b.seq, b.bidder_id, b.max_cents, b.price_after_cents, b.outcome, b.placed_at, b.retracted_at, b.retract_reason, p.number
+  const bids = await s.query<BidLogRow & { number: number | null }>(
+    `SELECT ${bidColumns(BID_LOG_COLUMNS, "b")}, p.number
        FROM bids b LEFT JOIN paddles p ON p.sale_id = :saleId AND p.user_id = b.bidder_id WHERE b.sale_lot_id = :saleLotId ORDER BY b.seq DESC LIMIT 200`,
     { replacements: { saleId: live.saleId, saleLotId }, type: QueryTypes.SELECT },
   );

@@ -9,6 +9,7 @@ import { priceSoldLot } from "../money/settings-pricing";
 import { db, User } from "../../models";
 import { addressOf } from "./addresses";
 import { settingsForInvoice } from "./house-settings";
+import type { BidRow } from "./bid-rows";
 import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
 import { post } from "./ledger";
 
@@ -52,7 +53,7 @@ export async function cancelUnpaid(
       ),
     );
     if (!offerToUnderbidder) return { offeredTo: null, newInvoiceId: null };
-    const [under] = await s.query<{ bidder_id: string; max_cents: number }>(
+    const [under] = await s.query<Pick<BidRow, "bidder_id" | "max_cents">>(
       `SELECT bidder_id, MAX(max_cents) AS max_cents FROM bids WHERE sale_lot_id = :sl AND retracted_at IS NULL AND bidder_id <> :buyer GROUP BY bidder_id ORDER BY MAX(max_cents) DESC LIMIT 1`,
       { replacements: { sl: inv.sale_lot_id, buyer: inv.buyer_id }, type: QueryTypes.SELECT, transaction: t },
     );

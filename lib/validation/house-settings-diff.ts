@@ -19,8 +19,8 @@ const SECTION_WORDS: Record<keyof HouseSettings, string> = {
 
 function flatten(value: unknown, path: string, out: Map<string, string>): void {
   if (value !== null && typeof value === "object") {
+    // An empty list or record adds no line: its entries, appearing or going, say what changed.
     const entries = Array.isArray(value) ? value.map((v, i) => [String(i), v] as const) : Object.entries(value);
-    if (entries.length === 0) out.set(path, Array.isArray(value) ? "(none)" : "{}");
     for (const [k, v] of entries) flatten(v, path ? `${path}.${k}` : k, out);
   } else {
     out.set(path, value === null ? "none" : String(value));

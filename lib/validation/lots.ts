@@ -1,8 +1,10 @@
 import { z } from "zod";
+import { centsColumn, COLUMN_LENGTHS, multilineColumn, textColumn } from "./columns";
 import { lineText, multilineText } from "./text";
 
-const text = (max: number) => lineText().trim().max(max, `At most ${max} characters`);
-const longText = (max: number) => multilineText().trim().max(max, `At most ${max} characters`);
+const text = textColumn;
+const longText = multilineColumn;
+const ITEM = COLUMN_LENGTHS.lot_items;
 
 export const TESTER_KIND_VALUES = ["untested", "mutual-conductance", "emission", "curve-tracer", "other"] as const;
 export const CONDITION_VALUES = ["new-in-box", "new-old-stock", "used"] as const;
@@ -37,13 +39,13 @@ export type ReadingInput = z.infer<typeof ReadingSchema>;
 /** One line of a lot: shared by the item form, the grid and POST/PATCH /api/lots/:id/items. */
 export const ItemSchema = z
   .object({
-    designation: lineText().trim().min(1, "Enter the designation as printed").max(40, "At most 40 characters"),
+    designation: textColumn(ITEM.designation).min(1, "Enter the designation as printed"),
     quantity: z.number().int("Whole tubes only").min(1, "At least 1").max(10_000),
-    labelBrand: text(120),
-    makerName: text(120).nullable(),
+    labelBrand: text(ITEM.label_brand),
+    makerName: text(ITEM.maker_name).nullable(),
     makerBasis: z.enum(BASIS_VALUES),
-    sourceCode: text(16).nullable(),
-    dateCode: text(16).nullable(),
+    sourceCode: text(ITEM.source_code).nullable(),
+    dateCode: text(ITEM.date_code).nullable(),
     features: z
       .record(z.string().max(40), z.string().max(80))
       .refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
@@ -51,10 +53,10 @@ export const ItemSchema = z
     vacuumLoss: z.boolean(),
     /** Listed as one matched set (pair, quad…): refunds treat it as one line. */
     soldAsSet: z.boolean().optional(),
-    defects: z.array(text(200)).max(10),
+    defects: z.array(text(ITEM.defect)).max(10),
     hazards: z.array(z.enum(HAZARD_VALUES)).max(4),
     readings: z.array(ReadingSchema).max(500),
-    notes: longText(1000),
+    notes: multilineColumn(ITEM.notes),
   })
   .refine((i) => i.readings.every((r) => r.sections.length > 0 || r.shorts || r.leakage || r.gas), {
     message: "Each reading needs a section value, or a short, leakage or gas failure",
@@ -99,9 +101,9 @@ export const ReviewDecisionSchema = z.discriminatedUnion("action", [
     .object({
       action: z.literal("approve"),
       comment: text(4000),
-      estimateLowCents: z.number().int().min(0),
-      estimateHighCents: z.number().int().min(0),
-      reserveCents: z.number().int().min(0),
+      estimateLowCents: centsColumn(),
+      estimateHighCents: centsColumn(),
+      reserveCents: centsColumn(),
       reserveAgreed: z.literal(true, { message: "Approve only with a reserve the consignor has agreed" }),
     })
     .refine((d) => d.estimateHighCents >= d.estimateLowCents, {

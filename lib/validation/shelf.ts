@@ -1,16 +1,18 @@
 import { z } from "zod";
-import { lineText, multilineText } from "./text";
+import { COLUMN_LENGTHS, multilineColumn, textColumn } from "./columns";
+
+const SHELF = COLUMN_LENGTHS.shelf_tubes;
 
 /** A tube put on the unconfirmed shelf: shared by the shelf form and POST /api/shelf. */
 export const ShelfTubeSchema = z.object({
-  designation: z.string().trim().min(1, "Enter the designation").max(40),
-  labelBrand: lineText().trim().max(120),
-  sourceCode: z.string().trim().max(16).nullable(),
-  dateCode: z.string().trim().max(16).nullable(),
+  designation: textColumn(SHELF.designation).min(1, "Enter the designation"),
+  labelBrand: textColumn(SHELF.label_brand),
+  sourceCode: textColumn(SHELF.source_code).nullable(),
+  dateCode: textColumn(SHELF.date_code).nullable(),
   features: z
     .record(z.string().max(40), z.string().max(80))
     .refine((f) => Object.keys(f).length <= 30, "At most 30 features"),
-  notes: multilineText().trim().max(2000),
+  notes: multilineColumn(SHELF.notes),
   /** Set by the form once per submission, so a retried request adds nothing. */
   clientKey: z.string().trim().min(8).max(64).nullable(),
 });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { COLUMN_LENGTHS } from "./columns";
 import { lineText, multilineText } from "./text";
 import { BASE_FAMILY_LABELS } from "../valves/designation/base-families";
 import type { BaseFamily } from "../valves/index-types";
@@ -52,8 +53,18 @@ export const ReferenceVerifySchema = z.object({
 /** The house adds a type (POST /api/valves/types). Figures may be left empty: never invent one to fill a column. */
 export const ReferenceAddSchema = z
   .object({
-    designation: DesignationParam,
-    aliases: z.string().trim().max(400),
+    designation: DesignationParam.max(
+      COLUMN_LENGTHS.valve_types.designation,
+      `A reference designation is at most ${COLUMN_LENGTHS.valve_types.designation} characters`,
+    ),
+    aliases: z
+      .string()
+      .trim()
+      .max(400)
+      .refine(
+        (v) => v.split(/[;,]/).every((a) => a.trim().length <= COLUMN_LENGTHS.valve_types.alias),
+        `Each alias is at most ${COLUMN_LENGTHS.valve_types.alias} characters`,
+      ),
     kind: z.enum(VALVE_KINDS as [ValveKind, ...ValveKind[]]),
     base: z.enum(Object.keys(BASE_FAMILY_LABELS) as [BaseFamily, ...BaseFamily[]]),
     coldCathode: z.boolean(),
@@ -62,6 +73,7 @@ export const ReferenceAddSchema = z
     source: z
       .string()
       .trim()
+      .max(COLUMN_LENGTHS.valve_types.source)
       .refine(
         (v) => parseRowSource(v) !== undefined,
         "Use a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM",

@@ -6,7 +6,8 @@ import { placeMaxBid } from "../../lib/services/bidding";
 import { closeSaleLot, startClosingWorker } from "../../lib/services/lot-closing";
 import { createSale } from "../../lib/services/sales";
 import { db, User } from "../../models";
-import { approvedLot, makeUser, viewerOf, waitForSubject } from "../support/factories";
+import { approvedLot, makeUser, untilClosingTimePassed, viewerOf, waitForSubject } from "../support/factories";
+import { until } from "../support/wait";
 
 async function saleWith(closeInMs: number, reserveCents = 5_000, softCloseSeconds = 120) {
   const admin = await makeUser(["admin"]);
@@ -130,7 +131,7 @@ describe("closing", () => {
     const b = await makeUser(["dealer"]);
     await placeMaxBid(viewerOf(a), saleLotId, 3_000, "a-1");
     await placeMaxBid(viewerOf(b), saleLotId, 2_500, "b-1"); // A leads; price = 2,500 + one increment (1-2-5 ladder: $1 under $20, $2 from $20) = 2,700
-    await new Promise((r) => setTimeout(r, 3_200));
+    await untilClosingTimePassed(saleLotId);
     const results = await Promise.all(Array.from({ length: 8 }, () => closeSaleLot(saleLotId)));
     expect(results.filter((x) => x === "closed").length).toBeLessThanOrEqual(1);
     const [row] = await db().query<{ phase: string; buyer_id: string; hammer_cents: number }>(
@@ -146,16 +147,17 @@ describe("closing", () => {
 
   it("the job queue closes a lot at its time without anyone asking; no bids means unsold", async () => {
     const { saleLotId } = await saleWith(1_000);
-    const deadline = Date.now() + 15_000;
-    let phase = "open";
-    while (Date.now() < deadline && phase === "open") {
-      await new Promise((r) => setTimeout(r, 300));
-      const [row] = await db().query<{ phase: string; unsold_reason: string | null }>(
-        `SELECT phase, unsold_reason FROM sale_lots WHERE id = :saleLotId`,
-        { replacements: { saleLotId }, type: QueryTypes.SELECT },
-      );
-      phase = row!.phase;
-    }
+    const { phase } = await until(
+      async () =>
+        (
+          await db().query<{ phase: string; unsold_reason: string | null }>(
+            `SELECT phase, unsold_reason FROM sale_lots WHERE id = :saleLotId`,
+            { replacements: { saleLotId }, type: QueryTypes.SELECT },
+          )
+        )[0]!,
+      (row) => row.phase !== "open",
+      { timeout: 15_000, interval: 300 },
+    );
     expect(phase).toBe("unsold");
   }, 30_000);
 });

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { invoiceColumns } from "../../lib/services/invoice-rows";
 import { ApiError } from "../../lib/api/errors";
 import { confirmReturnReceived, recordReturn, refundReturnedLot } from "../../lib/services/disputes/returns";
 import { findDispute } from "../../lib/services/disputes/tables/disputes";
@@ -115,7 +116,7 @@ describe("claims settled by a return", () => {
       reasons: "The code the buyer read is registered to the listed maker's brand owner; not misdescribed.",
     });
     const inv1 = await one<{ state: string; hammer_cents: number; commission_cents: number; transfer_id: string }>(
-      `SELECT * FROM invoices WHERE id = :id`,
+      `SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`,
       { id: a.invoiceId },
     );
     expect(inv1.state).toBe("released");

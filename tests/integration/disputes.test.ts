@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { invoiceColumns } from "../../lib/services/invoice-rows";
 import { ApiError } from "../../lib/api/errors";
 import { addDisputePhoto, readDisputePhoto } from "../../lib/services/disputes/evidence";
 import { decide } from "../../lib/services/disputes/decide";
@@ -160,7 +161,7 @@ describe("claims and mediation", () => {
       commission_returned_cents: number;
       payment_intent_id: string;
       transfer_id: string;
-    }>(`SELECT * FROM invoices WHERE id = :id`, { id: f.invoiceId });
+    }>(`SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`, { id: f.invoiceId });
     expect(inv.state).toBe("released");
     expect([inv.hammer_refunded_cents, inv.premium_refunded_cents, inv.commission_returned_cents]).toEqual([
       378, 38, 76,
@@ -319,9 +320,12 @@ describe("claims and mediation", () => {
     expect(r.payoutCents).toBe(1_728);
     expect(r.held).toEqual({ hammerCents: 540, premiumCents: 54, commissionCents: 108 });
     expect(await releaseDue()).toBe(0);
-    const early = await one<{ state: string; released_hammer_cents: number }>(`SELECT * FROM invoices WHERE id = :id`, {
-      id: f.invoiceId,
-    });
+    const early = await one<{ state: string; released_hammer_cents: number }>(
+      `SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`,
+      {
+        id: f.invoiceId,
+      },
+    );
     expect(early.state).toBe("disputed");
     expect(early.released_hammer_cents).toBe(2_160);
     expect((await statementFor(viewerOf(f.consignor), f.saleId)).totals.paidOutCents).toBe(1_728);
@@ -372,7 +376,7 @@ describe("claims and mediation", () => {
     });
     // Refund as in the first test ($4.16); what is left, $1.62 − $0.32 = $1.30, goes to the consignor: $17.28 + $1.30 = $18.58 in all.
     const inv = await one<{ state: string; payment_intent_id: string; transfer_id: string }>(
-      `SELECT * FROM invoices WHERE id = :id`,
+      `SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`,
       { id: f.invoiceId },
     );
     expect(inv.state).toBe("released");

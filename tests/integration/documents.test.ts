@@ -141,7 +141,7 @@ describe("printable documents", () => {
     for (const t of ["12AX7", "866A", "6V6GT"]) expect(text).toContain(t);
     // Gm 1650 / 1620 of 1600 new: >= 100 % strong; 1100 / 1120: 69-70 %, fair (60-79 %) [CTP grading bands].
     expect(text).toMatch(/12AX7 family\s+2\s+2\s+1\s+0\s+1\s+0\s+0/);
-    expect(text).toContain("WHITE: vacuum lost");
+    expect(text).toMatch(/6V6GT\s+1\s+Used\s+Unconfirmed\s+-\s+0\s+WHITE/); // the dead tube, flagged on its line
     expect(text).toContain("1 tube(s) show a white getter");
     expect(text).toContain("Mercury (866A)");
     expect(text).not.toContain(consignor.displayName); // the public reads the evidence, not who consigned it

@@ -13,7 +13,9 @@ import { createSale } from "../../lib/services/sales";
 import { statementCsv, statementFor } from "../../lib/services/statements";
 import { db } from "../../models";
 import { startTestStripe, type TestStripe } from "../setup/stripe";
-import { approvedLot, inbox, makeUser, viewerOf } from "../support/factories";
+import { approvedLot, inbox, makeUser, untilClosingTimePassed, viewerOf } from "../support/factories";
+import { until } from "../support/wait";
+import { invoiceColumns } from "../../lib/services/invoice-rows";
 
 let fake: TestStripe;
 const logged: string[] = [];
@@ -32,15 +34,6 @@ afterAll(async () => {
   await fake.stop();
 });
 
-const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000): Promise<T> => {
-  const end = Date.now() + ms;
-  let v = await fn();
-  while (!ok(v) && Date.now() < end) {
-    await new Promise((r) => setTimeout(r, 100));
-    v = await fn();
-  }
-  return v;
-};
 const invoice = async (id: string) =>
   (
     await db().query<{
@@ -53,7 +46,7 @@ const invoice = async (id: string) =>
       processor_fee_cents: number | null;
       last_payment_error: string | null;
       payment_intent_id: string | null;
-    }>(`SELECT * FROM invoices WHERE id = :id`, { replacements: { id }, type: QueryTypes.SELECT })
+    }>(`SELECT ${invoiceColumns()} FROM invoices WHERE id = :id`, { replacements: { id }, type: QueryTypes.SELECT })
   )[0]!;
 
 async function soldLot(hammerMaxes: [number, number]) {
@@ -76,7 +69,7 @@ async function soldLot(hammerMaxes: [number, number]) {
   const under = await makeUser(["dealer"]);
   await placeMaxBid(viewerOf(buyer), sl!.id, hammerMaxes[0], "e-1");
   await placeMaxBid(viewerOf(under), sl!.id, hammerMaxes[1], "e-2");
-  await new Promise((r) => setTimeout(r, 2_700));
+  await untilClosingTimePassed(sl!.id);
   expect(await closeSaleLot(sl!.id)).toBe("closed");
   const [inv] = await db().query<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, {
     replacements: { id: sl!.id },
@@ -133,8 +126,13 @@ describe("escrow through the Stripe SDK against the local fake", () => {
       );
     const before = await entries();
     const evt = fake.received.at(-1)!;
-    for (let k = 0; k < 3; k++) await fetch(`${fake.url}/_fake/events/${evt}/redeliver`, { method: "POST" });
-    await new Promise((r) => setTimeout(r, 800));
+    const handled = () => fake.received.filter((id) => id === evt).length;
+    for (let k = 0; k < 3; k++) {
+      // The signal: our webhook route has answered this redelivery (the test receiver logs each 2xx).
+      const seen = handled();
+      await fetch(`${fake.url}/_fake/events/${evt}/redeliver`, { method: "POST" });
+      await until(handled, (n) => n > seen);
+    }
     expect(await entries()).toBe(before);
     expect((await invoice(invoiceId)).state).toBe("paid-held");
 

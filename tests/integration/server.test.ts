@@ -1,11 +1,12 @@
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import { io as connect, type Socket } from "socket.io-client";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { gracefulShutdown } from "../../server/shutdown";
 import { createSale, getSale } from "../../lib/services/sales";
 import { approvedLot, makeUser, sessionCookie, viewerOf } from "../support/factories";
 import { socketServer } from "../support/socket-server";
+import { until } from "../support/wait";
 
 describe("socket.io handshake uses the same guard as the routes", () => {
   const live = socketServer();
@@ -86,11 +87,16 @@ describe("bids over the socket", () => {
 describe("graceful shutdown", () => {
   it("stops accepting, lets an in-flight request finish, then runs the closers in order", async () => {
     const order: string[] = [];
+    let received = false;
+    let finish: () => void = () => {};
+    const released = new Promise<void>((r) => (finish = r));
+    // The request is held open until the test releases it, so it is in flight for as long as the test needs.
     const server = http.createServer((_req, res) => {
-      setTimeout(() => {
+      received = true;
+      void released.then(() => {
         order.push("request finished");
         res.end("done");
-      }, 300);
+      });
     });
     const stopper = gracefulShutdown(server, {
       closeSockets: async () => {
@@ -101,10 +107,15 @@ describe("graceful shutdown", () => {
     await new Promise<void>((r) => server.listen(0, "127.0.0.1", () => r()));
     const port = (server.address() as AddressInfo).port;
     const pending = fetch(`http://127.0.0.1:${port}/slow`).then((r) => r.text());
-    await new Promise((r) => setTimeout(r, 50));
+    await until(() => received, Boolean);
     const done = stopper.shutdown();
-    await new Promise((r) => setTimeout(r, 20));
-    await expect(fetch(`http://127.0.0.1:${port}/again`)).rejects.toThrow();
+    // Stopped accepting: poll until a new connection is refused, while the first request is still held open.
+    await vi.waitFor(() => expect(fetch(`http://127.0.0.1:${port}/again`)).rejects.toThrow(), {
+      timeout: 5_000,
+      interval: 20,
+    });
+    expect(order).not.toContain("request finished");
+    finish();
     expect(await pending).toBe("done");
     await done;
     expect(order).toEqual(["sockets closed", "request finished", "database closed"]);

@@ -37,12 +37,26 @@ export async function startMailCatcher(): Promise<ChildProcess | null> {
       MAIL_CATCHER_HTTP_PORT: String(TEST_INBOX_PORT),
       MAIL_CATCHER_DIR: ".data/mail-test",
     },
-    stdio: "ignore",
+    stdio: ["ignore", "pipe", "ignore"],
   });
-  for (let i = 0; i < 100; i++) {
-    if (await portOpen(TEST_INBOX_PORT)) return child;
-    await new Promise((r) => setTimeout(r, 100));
-  }
+  // The signal: the catcher prints one line once both its ports listen (server/mail-catcher.ts).
+  const ready = await new Promise<boolean>((resolve) => {
+    let out = "";
+    const timer = setTimeout(() => resolve(false), 10_000); // a deadline, not a wait: ready resolves first
+    child.stdout!.on("data", (chunk: Buffer) => {
+      out += chunk.toString("utf8");
+      if (out.includes("mail catcher:")) {
+        clearTimeout(timer);
+        child.stdout!.resume(); // keep draining, so the pipe never fills
+        resolve(true);
+      }
+    });
+    child.once("exit", () => {
+      clearTimeout(timer);
+      resolve(false);
+    });
+  });
+  if (ready) return child;
   child.kill();
   throw new Error("mail catcher did not start");
 }

@@ -14,19 +14,13 @@ import { reconcile } from "../../lib/services/reconcile";
 import { createSale } from "../../lib/services/sales";
 import type { OpenDisputeInput } from "../../lib/validation/disputes";
 import { db } from "../../models";
-import { approvedLot, itemInput, makeUser, viewerOf } from "./factories";
+import { approvedLot, itemInput, makeUser, untilClosingTimePassed, viewerOf } from "./factories";
 
 export const one = async <T extends object>(sql: string, r: Record<string, unknown>) =>
   (await db().query<T>(sql, { replacements: r, type: QueryTypes.SELECT }))[0]!;
-export const until = async <T>(fn: () => Promise<T>, ok: (v: T) => boolean, ms = 8_000): Promise<T> => {
-  const end = Date.now() + ms;
-  let v = await fn();
-  while (!ok(v) && Date.now() < end) {
-    await new Promise((r) => setTimeout(r, 100));
-    v = await fn();
-  }
-  return v;
-};
+import { until } from "./wait";
+
+export { until };
 /** Nothing left in escrow or owed to the consignor; the house keeps what it should; the ledger balances and matches the processor. */
 export async function expectSettled(
   invoiceId: string,
@@ -92,7 +86,7 @@ export async function deliveredLot(consignor?: User, opts: { taxCents?: number }
   const under = await makeUser(["dealer"]);
   await placeMaxBid(viewerOf(buyer), sl.id, 3_000, "c-1");
   await placeMaxBid(viewerOf(under), sl.id, 2_500, "c-2");
-  await new Promise((r) => setTimeout(r, 2_700));
+  await untilClosingTimePassed(sl.id);
   expect(await closeSaleLot(sl.id)).toBe("closed");
   const inv = await one<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, { id: sl.id });
   const tax = opts.taxCents ?? 0;

@@ -4,6 +4,7 @@ import { NextRequest } from "next/server";
 import type { Role } from "../../lib/auth/roles";
 import { hashPassword } from "../../lib/services/accounts";
 import { db, User } from "../../models";
+import { until } from "./wait";
 
 let n = 0;
 
@@ -60,23 +61,42 @@ export async function inbox(to: string): Promise<CaughtMail[]> {
 
 /** The newest message for an address whose subject matches, waiting for it to arrive. */
 export async function waitForSubject(to: string, subject: RegExp, timeoutMs = 8000): Promise<CaughtMail> {
-  const end = Date.now() + timeoutMs;
-  while (Date.now() < end) {
-    const hit = (await inbox(to)).find((m) => subject.test(m.subject));
-    if (hit) return hit;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no mail matching ${subject} for ${to}`);
+  const mails = await until(
+    () => inbox(to),
+    (m) => m.some((x) => subject.test(x.subject)),
+    timeoutMs,
+  ).catch(() => {
+    throw new Error(`no mail matching ${subject} for ${to}`);
+  });
+  return mails.find((m) => subject.test(m.subject))!;
 }
 
 export async function waitForMail(to: string, timeoutMs = 5000): Promise<CaughtMail> {
-  const end = Date.now() + timeoutMs;
-  while (Date.now() < end) {
-    const m = await inbox(to);
-    if (m.length) return m[0]!;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no mail for ${to}`);
+  const mails = await until(
+    () => inbox(to),
+    (m) => m.length > 0,
+    timeoutMs,
+  ).catch(() => {
+    throw new Error(`no mail for ${to}`);
+  });
+  return mails[0]!;
+}
+
+/** Wait until a sale lot's closing time has passed by the database's clock (the one the closer reads). */
+export async function untilClosingTimePassed(saleLotId: string, timeoutMs = 10_000): Promise<void> {
+  const { QueryTypes } = await import("sequelize");
+  const { db } = await import("../../models");
+  await until(
+    async () =>
+      (
+        await db().query<{ due: boolean }>(`SELECT closes_at <= now() AS due FROM sale_lots WHERE id = :id`, {
+          replacements: { id: saleLotId },
+          type: QueryTypes.SELECT,
+        })
+      )[0]?.due === true,
+    (due) => due,
+    timeoutMs,
+  );
 }
 
 /** The viewer object the guards produce, for calling services directly. */
@@ -167,7 +187,7 @@ export async function invoicedLot(
   const under = await makeUser(["dealer"]);
   await placeMaxBid(viewerOf(buyer), sl.id, maxes[0], `win-${sl.id}`);
   await placeMaxBid(viewerOf(under), sl.id, maxes[1], `under-${sl.id}`);
-  await new Promise((r) => setTimeout(r, 2_700)); // the sale's first close, with its one-second soft close
+  await untilClosingTimePassed(sl.id); // the sale's first close, with its one-second soft close
   if ((await closeSaleLot(sl.id)) !== "closed") throw new Error("the test lot did not close");
   const inv = await one<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, sl.id);
   return { invoiceId: inv.id, saleId: sale.id, saleLotId: sl.id, lotId: lot.id, admin, consignor, buyer, under };

@@ -22,7 +22,7 @@ export default async function ConsignorHome() {
             commission, after any refund on a claim.
           </p>
         </div>
-        <Link href="/consignor/address" className="btn-secondary ml-auto">
+        <Link href="/consignor/address" className="btn-quiet ml-auto">
           Shipping address
         </Link>
         <Link href="/consignor/lots/new" className="btn-primary">

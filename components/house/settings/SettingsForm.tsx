@@ -67,7 +67,7 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
               <NumberField api={api} name={`settings.commissionTiers.${i}.rateBp`} label="Rate (bp)" unit="bp" />
               <button
                 type="button"
-                className="btn-secondary"
+                className="btn-quiet"
                 onClick={() => tiers.remove(i)}
                 disabled={tiers.fields.length < 2}
               >
@@ -80,11 +80,7 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
               {errorAt(formState.errors, "settings.commissionTiers")}
             </p>
           ) : null}
-          <button
-            type="button"
-            className="btn-secondary"
-            onClick={() => tiers.append({ upToCents: null, rateBp: 1000 })}
-          >
+          <button type="button" className="btn-quiet" onClick={() => tiers.append({ upToCents: null, rateBp: 1000 })}>
             Add a tier
           </button>
         </fieldset>
@@ -109,7 +105,7 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
               />
               <button
                 type="button"
-                className="btn-secondary"
+                className="btn-quiet"
                 onClick={() => ladder.remove(i)}
                 disabled={ladder.fields.length < 2}
               >
@@ -119,7 +115,7 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
           ))}
           <button
             type="button"
-            className="btn-secondary"
+            className="btn-quiet"
             onClick={() => ladder.append({ fromCents: 0, incrementCents: 100 })}
           >
             Add a rung

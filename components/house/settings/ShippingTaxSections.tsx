@@ -108,7 +108,7 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
               ))}
               <button
                 type="button"
-                className="btn-secondary"
+                className="btn-quiet"
                 onClick={() => bands.remove(i)}
                 disabled={bands.fields.length < 2}
               >
@@ -118,7 +118,7 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
           ))}
           <button
             type="button"
-            className="btn-secondary"
+            className="btn-quiet"
             onClick={() => bands.append({ upToGrams: 0, ratesCents: Object.fromEntries(zones.map((z) => [z, 0])) })}
           >
             Add a band
@@ -140,14 +140,14 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
                 list
                 upper
               />
-              <button type="button" className="btn-secondary" onClick={() => groups.remove(i)}>
+              <button type="button" className="btn-quiet" onClick={() => groups.remove(i)}>
                 Remove group
               </button>
             </div>
           ))}
           <button
             type="button"
-            className="btn-secondary"
+            className="btn-quiet"
             onClick={() => groups.append({ name: "", zone: zones[1] ?? zones[0] ?? "", countries: [] })}
           >
             Add a group
@@ -187,7 +187,7 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
                   {k === "taxHammer" ? "on hammer" : k === "taxPremium" ? "on premium" : "on shipping"}
                 </label>
               ))}
-              <button type="button" className="btn-secondary" onClick={() => rules.remove(i)}>
+              <button type="button" className="btn-quiet" onClick={() => rules.remove(i)}>
                 Remove rule
               </button>
             </div>
@@ -195,7 +195,7 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
         })}
         <button
           type="button"
-          className="btn-secondary"
+          className="btn-quiet"
           onClick={() =>
             rules.append({
               country: "US",

@@ -5,7 +5,7 @@ import http from "node:http";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import Stripe from "stripe";
-import { afterEach, describe, expect, it } from "vitest";
+import { afterEach, describe, expect, it, vi } from "vitest";
 import { startStripeFake, type StripeFake, type StripeFakeOptions } from "@/server/stripe-fake";
 import { listenOn } from "@/server/stripe-fake/ports";
 
@@ -127,12 +127,14 @@ async function deliveryWhere(
   event: string,
   done: (row: DeliveryRow) => boolean,
 ): Promise<DeliveryRow> {
-  for (let i = 0; i < 500; i++) {
-    const [row] = await deliveries(fake, event);
-    if (row && done(row)) return row;
-    await new Promise((r) => setTimeout(r, 10));
-  }
-  throw new Error(`delivery of ${event} never reached the expected state`);
+  return vi.waitFor(
+    async () => {
+      const [row] = await deliveries(fake, event);
+      if (!row || !done(row)) throw new Error(`delivery of ${event} has not reached the expected state`);
+      return row;
+    },
+    { timeout: 5_000, interval: 10 },
+  );
 }
 
 function settled(fake: StripeFake, event: string): Promise<DeliveryRow> {

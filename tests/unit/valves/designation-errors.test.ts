@@ -108,11 +108,4 @@ describe("known designations", () => {
     expect(isKnownDesignation(SEED, "7189A")).toBe(true);
     expect(isKnownDesignation(SEED, "12AX8")).toBe(false);
   });
-
-  it("decoding is fast enough for form validation", () => {
-    const inputs = ["12ax7", "ECC38", "12AX8", "KT89", "6SN7GTB", "E88CC", "garbage!", "5751"];
-    const start = performance.now();
-    for (let i = 0; i < 2000; i++) decodeDesignation(SEED, inputs[i % inputs.length]);
-    expect(performance.now() - start).toBeLessThan(3000);
-  });
 });

@@ -88,12 +88,22 @@ export default async function LotPage({ params }: { params: Promise<{ id: string
     ) : null;
   return (
     <div className="space-y-6">
-      <LotView data={data} summary={summary} chart={chart} record={record} actions={actions} />
-      <DocumentLinks
-        links={[
-          { href: `/api/lots/${id}/sheet`, label: "Lot sheet (PDF)" },
-          ...(sale ? [{ href: `/api/sales/${sale.saleId}/catalogue`, label: "Sale catalogue (PDF)" }] : []),
-        ]}
+      <LotView
+        data={data}
+        summary={summary}
+        chart={chart}
+        record={record}
+        actions={
+          <>
+            {actions}
+            <DocumentLinks
+              links={[
+                { href: `/api/lots/${id}/sheet`, label: "Lot sheet (PDF)" },
+                ...(sale ? [{ href: `/api/sales/${sale.saleId}/catalogue`, label: "Sale catalogue (PDF)" }] : []),
+              ]}
+            />
+          </>
+        }
       />
       <PriceHistory series={history} />
     </div>
