@@ -99,7 +99,10 @@ export const ReturnShipmentSchema = z.object({
     .number({ message: "Enter the postage as an amount, e.g. 18.40" })
     .int("Whole cents only")
     .min(0, "Not below zero")
-    .max(MAX_RETURN_POSTAGE_CENTS, `At most ${MAX_RETURN_POSTAGE_CENTS / 100} is repaid for return postage`)
+    .max(
+      MAX_RETURN_POSTAGE_CENTS,
+      `At most $${(MAX_RETURN_POSTAGE_CENTS / 100).toFixed(2)} is repaid for return postage`,
+    )
     .optional(),
   /** The carrier's receipt or label reference for that postage. */
   postageReceipt: text(80).optional(),

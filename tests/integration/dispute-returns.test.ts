@@ -222,6 +222,7 @@ describe("claims settled by a return", () => {
       return { refunds: refunds.data.map((r) => r.amount), postage: transfer?.amount ?? 0 };
     };
     expect(await repaid()).toEqual({ refunds: [card], postage: 1_840 });
+    expect((await getCase(viewerOf(f.buyer), id)).decision?.buyerRefundCents).toBe(card + 1_840);
 
     // A retry (the sweep resuming, a second run after a crash) moves no more money and posts nothing twice.
     const postings = async () =>

@@ -70,7 +70,13 @@ function presentDecision(d: DisputeRow, moneyView: boolean) {
     outcome: decision.outcome,
     reasons: decision.reasons,
     closingNote: decision.closingNote ?? null,
-    buyerRefundCents: decision.settlement?.buyerRefundCents ?? null,
+    // Everything repaid to the buyer: hammer and premium, and for a returned lot its shipping, tax and return postage.
+    buyerRefundCents: decision.settlement
+      ? decision.settlement.buyerRefundCents +
+        (decision.settlement.shippingCents ?? 0) +
+        (decision.settlement.taxCents ?? 0) +
+        (decision.settlement.postageCents ?? 0)
+      : null,
     consignorChangeCents: moneyView ? (decision.settlement?.consignorChangeCents ?? null) : null,
     commissionReductionCents: moneyView ? (decision.settlement?.commissionReductionCents ?? null) : null,
   };

@@ -70,8 +70,9 @@ export async function refundReturnedLot(d: DisputeRow, why: string): Promise<voi
     { shippingCents: inv.shipping_cents, taxCents: inv.tax_cents },
     { returnedValueCents: s.lotValueCents, lotValueCents: s.lotValueCents },
   );
-  await payRefund(d, inv, s, returned);
+  // Postage first: its transfer draws on the buyer's charge (source_transaction) while the charge still holds funds.
   const postageCents = await repayPostage(d, inv);
+  await payRefund(d, inv, s, returned);
   await db().transaction(async (t) => {
     await markInvoiceRefunded(inv.id, t);
     await recordSettlement(d.id, { ...s, items: undefined, ...returned, postageCents }, t);
@@ -86,19 +87,24 @@ export async function refundReturnedLot(d: DisputeRow, why: string): Promise<voi
 
 /**
  * Repay the buyer's return postage (bounded), charged to the consignor [SUG].
- * A card refund cannot exceed the charge, which the refund of the lot has
- * used up, so the postage goes to the buyer's payout account as a transfer
- * keyed by case; posted once per invoice. Returns the amount repaid.
+ * A card refund cannot exceed the charge, which the refund of the lot uses
+ * up, so the postage goes to the buyer's payout account as a transfer keyed
+ * by case, drawn on the buyer's own charge; posted once per invoice. Returns
+ * the amount repaid.
  */
 async function repayPostage(d: DisputeRow, inv: CaseInvoice): Promise<number> {
   const postage = repayablePostage(d.return_postage_cents);
   if (postage <= 0 || (await postedOnInvoice(inv.id, "dispute-return-postage"))) return postage;
+  if (!inv.payment_intent_id) throw new Error(`invoice ${inv.number} has no payment to draw the postage from`);
+  const pi = await stripe().paymentIntents.retrieve(inv.payment_intent_id);
+  const charge = typeof pi.latest_charge === "string" ? pi.latest_charge : (pi.latest_charge?.id ?? undefined);
   const transfer = await stripe().transfers.create(
     {
       amount: postage,
       currency: stripeConfig().CURRENCY,
       destination: await payoutAccount(d.buyer_id),
       transfer_group: `invoice:${inv.id}`,
+      source_transaction: charge,
       metadata: { invoice_id: inv.id, dispute_id: d.id, purpose: "return-postage" },
     },
     { idempotencyKey: `dispute:${d.id}:postage` },

@@ -23,13 +23,16 @@ export type StoredSettlement = Pick<
   | "houseChangeCents"
 >;
 
+/** What else a returned lot's refund repaid: its shipping and tax on the card, the return postage by transfer. */
+export type StoredReturnExtras = { shippingCents?: number; taxCents?: number; postageCents?: number };
+
 /** The decision as recorded: outcome, reasons, the mediator's values and rulings, and the money it moved. */
 export type StoredDecision = {
   outcome: Outcome;
   reasons: string;
   lines?: LineValue[];
   rulings?: Ruling[];
-  settlement?: StoredSettlement;
+  settlement?: StoredSettlement & StoredReturnExtras;
   closingNote?: string;
 };
 
@@ -300,7 +303,11 @@ export async function recordReturnShipment(
 
 /** Records the processor transfer that repaid the return postage. */
 export async function recordPostageTransfer(id: string, transferId: string, t: Transaction): Promise<void> {
-  await exec(`UPDATE disputes SET postage_transfer_id = :tr, updated_at = now() WHERE id = :id`, { tr: transferId, id }, t);
+  await exec(
+    `UPDATE disputes SET postage_transfer_id = :tr, updated_at = now() WHERE id = :id`,
+    { tr: transferId, id },
+    t,
+  );
 }
 
 /** The consignor's confirmation that the return arrived; false when it was confirmed before. */
