@@ -8,7 +8,11 @@ type Ctx = { context: QueryInterface };
  * processor transfer that repaid it.
  */
 export async function up({ context: qi }: Ctx): Promise<void> {
-  await qi.addColumn("disputes", "return_postage_cents", { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
+  await qi.addColumn("disputes", "return_postage_cents", {
+    type: DataTypes.INTEGER,
+    allowNull: false,
+    defaultValue: 0,
+  });
   await qi.addColumn("disputes", "return_postage_receipt", { type: DataTypes.STRING(80), allowNull: true });
   await qi.addColumn("disputes", "postage_transfer_id", { type: DataTypes.STRING(64), allowNull: true });
   await qi.sequelize.query(

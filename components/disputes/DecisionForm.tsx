@@ -83,9 +83,7 @@ export function DecisionForm({
   const outcome = useWatch({ control, name: "outcome" });
 
   /** Form text to the schema's shape; money problems become field errors. */
-  function payload(
-    v: Values,
-  ):
+  function payload(v: Values):
     | {
         ok: true;
         lines: { itemId: string; valueCents: number; singleValueCents?: number }[];

@@ -59,8 +59,8 @@ export function ReturnPanel({
       ) : (
         <p className="text-sm">
           The buyer ships the whole lot back by {dueAt ? utcText(dueAt) : "the return deadline"}; if it is not shipped
-          by then, the payment goes to the consignor. The refund covers the hammer price, premium, shipping and tax;
-          the return postage is repaid too, up to {formatCents(MAX_RETURN_POSTAGE_CENTS)}.
+          by then, the payment goes to the consignor. The refund covers the hammer price, premium, shipping and tax; the
+          return postage is repaid too, up to {formatCents(MAX_RETURN_POSTAGE_CENTS)}.
         </p>
       )}
       <p className="text-sm text-flash-700">

@@ -94,7 +94,11 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
   const zone = useViewerZone();
   const live = data.live;
   const left = useCountdown(live.closesAt);
-  const connected = useSyncExternalStore(followConnection, () => liveSocket().connected, () => false);
+  const connected = useSyncExternalStore(
+    followConnection,
+    () => liveSocket().connected,
+    () => false,
+  );
 
   const refetchSoon = useRef<ReturnType<typeof setTimeout> | null>(null);
   const refetch = () => void qc.invalidateQueries({ queryKey: key });

@@ -253,9 +253,7 @@ export async function removeItem(viewer: Viewer, lotId: string, itemId: string):
 }
 
 /** The sale a lot is (or was) offered in, if any: for the lot page's way to bidding. */
-export async function saleLotOf(
-  lotId: string,
-): Promise<{
+export async function saleLotOf(lotId: string): Promise<{
   saleLotId: string;
   saleId: string;
   saleTitle: string;
