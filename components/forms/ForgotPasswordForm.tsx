@@ -4,24 +4,24 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/client/api";
+import { useApiSubmit } from "./useApiSubmit";
 import { ResetRequestSchema, type ResetRequestInput } from "@/lib/validation/account";
 import { Field, FormAlert } from "./Field";
 
 export function ForgotPasswordForm() {
   const [sent, setSent] = useState(false);
-  const [problem, setProblem] = useState<string | null>(null);
+  const { message, run } = useApiSubmit<ResetRequestInput>();
   const { register, handleSubmit, formState } = useForm<ResetRequestInput>({
     resolver: zodResolver(ResetRequestSchema),
   });
 
   async function onSubmit(values: ResetRequestInput) {
-    setProblem(null);
-    try {
-      await apiFetch("/api/account/password-reset", { json: values });
+    if (
+      await run(async () => {
+        await apiFetch("/api/account/password-reset", { json: values });
+      })
+    )
       setSent(true);
-    } catch (err) {
-      setProblem(err instanceof Error ? err.message : "Could not send the link");
-    }
   }
 
   if (sent) {
@@ -33,7 +33,7 @@ export function ForgotPasswordForm() {
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} className="space-y-4" noValidate>
-      {problem ? <FormAlert>{problem}</FormAlert> : null}
+      {message ? <FormAlert>{message.text}</FormAlert> : null}
       <Field id="email" label="E-mail" error={formState.errors.email?.message}>
         <input id="email" type="email" autoComplete="email" className="input" {...register("email")} />
       </Field>

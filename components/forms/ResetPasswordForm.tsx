@@ -5,25 +5,25 @@ import Link from "next/link";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/client/api";
+import { useApiSubmit } from "./useApiSubmit";
 import { ResetConfirmSchema, type ResetConfirmInput } from "@/lib/validation/account";
 import { Field, FormAlert } from "./Field";
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const [done, setDone] = useState(false);
-  const [problem, setProblem] = useState<string | null>(null);
+  const { message, run } = useApiSubmit<ResetConfirmInput>();
   const { register, handleSubmit, formState } = useForm<ResetConfirmInput>({
     resolver: zodResolver(ResetConfirmSchema),
     defaultValues: { token },
   });
 
   async function onSubmit(values: ResetConfirmInput) {
-    setProblem(null);
-    try {
-      await apiFetch("/api/account/password-reset/confirm", { json: values });
+    if (
+      await run(async () => {
+        await apiFetch("/api/account/password-reset/confirm", { json: values });
+      })
+    )
       setDone(true);
-    } catch (err) {
-      setProblem(err instanceof Error ? err.message : "Could not set the password");
-    }
   }
 
   if (done) {
@@ -39,7 +39,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   const e = formState.errors;
   return (
     <form onSubmit={handleSubmit(onSubmit)} className="space-y-4" noValidate>
-      {problem ? <FormAlert>{problem}</FormAlert> : null}
+      {message ? <FormAlert>{message.text}</FormAlert> : null}
       <input type="hidden" {...register("token")} />
       <Field id="password" label="New password" hint="At least 10 characters." error={e.password?.message}>
         <input id="password" type="password" autoComplete="new-password" className="input" {...register("password")} />

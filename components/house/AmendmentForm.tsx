@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Field, FormAlert } from "@/components/forms/Field";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
 import { CONDITION_VALUES } from "@/lib/validation/lots";
 import { CONDITION_WORDS } from "@/components/lots/words";
@@ -15,12 +16,11 @@ export function AmendmentForm({ lotId, items }: { lotId: string; items: { id: st
   const [quantity, setQuantity] = useState("");
   const [condition, setCondition] = useState("");
   const [vacuum, setVacuum] = useState("");
-  const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
+  const { message, run } = useApiSubmit();
 
   async function submit(e: React.FormEvent) {
     e.preventDefault();
-    setMessage(null);
-    try {
+    await run(async () => {
       await apiFetch(`/api/house/lots/${lotId}/amendments`, {
         json: {
           itemId: itemId || null,
@@ -30,12 +30,10 @@ export function AmendmentForm({ lotId, items }: { lotId: string; items: { id: st
           ...(itemId && vacuum ? { vacuumLoss: vacuum === "lost" } : {}),
         },
       });
-      setMessage({ tone: "sound", text: "Amendment recorded." });
       setDescription("");
       router.refresh();
-    } catch (err) {
-      setMessage({ tone: "fault", text: (err as Error).message });
-    }
+      return "Amendment recorded.";
+    });
   }
 
   return (

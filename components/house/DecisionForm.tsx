@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Field, FormAlert } from "@/components/forms/Field";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
 import { parseMoneyToCents } from "@/lib/money/cents";
 import { ReviewDecisionSchema } from "@/lib/validation/lots";
@@ -31,8 +32,7 @@ export function DecisionForm({
   const [reserve, setReserve] = useState("");
   const [agreed, setAgreed] = useState(false);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [problem, setProblem] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
+  const { message, setMessage, run, pending } = useApiSubmit();
 
   function cents(text: string, field: string, bad: Record<string, string>): number {
     try {
@@ -45,7 +45,7 @@ export function DecisionForm({
 
   async function submit(e: React.FormEvent) {
     e.preventDefault();
-    setProblem(null);
+    setMessage(null);
     const bad: Record<string, string> = {};
     const body =
       action === "approve"
@@ -62,22 +62,17 @@ export function DecisionForm({
     const all = { ...(parsed.success ? {} : fieldsFromIssues(parsed.error.issues)), ...bad };
     setErrors(all);
     if (Object.keys(all).length) return;
-    setBusy(true);
-    try {
+    await run(async () => {
       await apiFetch(`/api/house/lots/${lotId}/decision`, { json: body });
       router.push("/house/review");
       router.refresh();
-    } catch (err) {
-      setProblem((err as Error).message);
-    } finally {
-      setBusy(false);
-    }
+    });
   }
 
   return (
     <form onSubmit={submit} className="card space-y-4" noValidate aria-label="Review decision">
       <h2 className="text-lg font-semibold">Decision</h2>
-      {problem ? <FormAlert>{problem}</FormAlert> : null}
+      {message ? <FormAlert>{message.text}</FormAlert> : null}
       <fieldset className="flex flex-wrap gap-4">
         <legend className="label mb-1">What next for this lot?</legend>
         {(
@@ -142,7 +137,7 @@ export function DecisionForm({
           onChange={(e) => setComment(e.target.value)}
         />
       </Field>
-      <button type="submit" className="btn-primary" disabled={busy}>
+      <button type="submit" className="btn-primary" disabled={pending}>
         {action === "approve"
           ? "Approve and lock the lot"
           : action === "decline"

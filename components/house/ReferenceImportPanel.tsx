@@ -1,5 +1,6 @@
 "use client";
 
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
@@ -22,17 +23,20 @@ export function ReferenceImportPanel() {
   const [result, setResult] = useState<Result | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
 
-  async function send(apply: boolean) {
-    setProblem(null);
-    try {
-      const r = await apiFetch<Result>("/api/valves/types/import", { json: { csv, apply, reason } });
+  // A preview changes nothing; an apply is all or nothing and the same file applied twice changes nothing more.
+  const importCsv = useMutation({
+    mutationFn: (apply: boolean) => apiFetch<Result>("/api/valves/types/import", { json: { csv, apply, reason } }),
+    onMutate: () => setProblem(null),
+    onSuccess: (r) => {
       setResult(r);
       if (r.applied) router.refresh();
-    } catch (e) {
+    },
+    onError: (e) => {
       setResult(null);
       setProblem(e instanceof Error ? e.message : "Something went wrong");
-    }
-  }
+    },
+  });
+  const send = (apply: boolean) => importCsv.mutate(apply);
   const counts = result
     ? (["add", "change", "unchanged"] as const)
         .map((a) => `${result.lines.filter((l) => l.action === a).length} ${a}`)
@@ -69,14 +73,14 @@ export function ReferenceImportPanel() {
       </label>
       <input id="ref-reason" className="input" value={reason} onChange={(e) => setReason(e.target.value)} />
       <div className="flex gap-2">
-        <button type="button" className="btn-quiet" onClick={() => void send(false)}>
+        <button type="button" className="btn-quiet" onClick={() => send(false)}>
           Preview
         </button>
         <button
           type="button"
           className="btn-primary"
           disabled={!result || result.errors.length > 0 || result.applied}
-          onClick={() => void send(true)}
+          onClick={() => send(true)}
         >
           Apply
         </button>

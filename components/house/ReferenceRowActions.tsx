@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
 
 /** Record a check against a named data sheet, and retire the type or put it back on file. */
@@ -10,18 +11,15 @@ export function ReferenceRowActions({ designation, retired }: { designation: str
   const router = useRouter();
   const [against, setAgainst] = useState("");
   const [reason, setReason] = useState("");
-  const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
+  const { message, run } = useApiSubmit();
   const base = `/api/valves/types/${encodeURIComponent(designation)}`;
 
-  async function call(path: string, json: unknown, done: string) {
-    setMessage(null);
-    try {
+  function call(path: string, json: unknown, done: string) {
+    return run(async () => {
       await apiFetch(path, { json });
-      setMessage({ tone: "sound", text: done });
       router.refresh();
-    } catch (e) {
-      setMessage({ tone: "fault", text: e instanceof Error ? e.message : "Something went wrong" });
-    }
+      return done;
+    });
   }
 
   return (

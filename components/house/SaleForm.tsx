@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Field, FormAlert } from "@/components/forms/Field";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { fieldsFromIssues } from "@/lib/api/errors";
 import { apiFetch } from "@/lib/client/api";
 import { formatCents, parseMoneyToCents } from "@/lib/money/cents";
@@ -31,11 +32,11 @@ export function SaleForm({ lots, softCloseSeconds = 120 }: { lots: Offerable[]; 
   const [soft, setSoft] = useState(String(softCloseSeconds));
   const [chosen, setChosen] = useState<Record<string, string>>({});
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [problem, setProblem] = useState<string | null>(null);
+  const { message, setMessage, run } = useApiSubmit();
 
   async function submit(e: React.FormEvent) {
     e.preventDefault();
-    setProblem(null);
+    setMessage(null);
     const bad: Record<string, string> = {};
     const picked = lots
       .filter((l) => chosen[l.id] !== undefined)
@@ -59,17 +60,15 @@ export function SaleForm({ lots, softCloseSeconds = 120 }: { lots: Offerable[]; 
     const all = { ...(parsed.success ? {} : fieldsFromIssues(parsed.error.issues)), ...bad };
     setErrors(all);
     if (Object.keys(all).length) return;
-    try {
+    await run(async () => {
       const { sale } = await apiFetch<{ sale: { id: string } }>("/api/sales", { json: body });
       router.push(`/sales/${sale.id}`);
-    } catch (err) {
-      setProblem((err as Error).message);
-    }
+    });
   }
 
   return (
     <form onSubmit={submit} className="card space-y-4" noValidate aria-label="Schedule a sale">
-      {problem ? <FormAlert>{problem}</FormAlert> : null}
+      {message ? <FormAlert>{message.text}</FormAlert> : null}
       <Field id="sale-title" label="Title" error={errors.title}>
         <input id="sale-title" className="input" value={title} onChange={(e) => setTitle(e.target.value)} />
       </Field>

@@ -6,6 +6,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormAlert } from "@/components/forms/Field";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
 import { formatCents } from "@/lib/money/cents";
 import type { presentInvoice } from "@/lib/services/invoices";
@@ -27,20 +28,17 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
   });
   // Deadlines are judged against the moment the view was first drawn; the server decides again on every action.
   const [drawnAt] = useState(() => Date.now());
-  const [message, setMessage] = useState<{ tone: "fault" | "sound"; text: string } | null>(null);
+  const { message, setMessage, run } = useApiSubmit();
   const [carrier, setCarrier] = useState("");
   const [tracking, setTracking] = useState("");
 
-  async function act(path: string, json?: unknown) {
-    setMessage(null);
-    try {
+  function act(path: string, json?: unknown) {
+    return run(async () => {
       await apiFetch(path, { method: "POST", json: json ?? {} });
       await qc.invalidateQueries({ queryKey: ["invoice", initial.id] });
       router.refresh();
-      setMessage({ tone: "sound", text: "Done." });
-    } catch (e) {
-      setMessage({ tone: "fault", text: (e as Error).message });
-    }
+      return "Done.";
+    });
   }
 
   const rows: [string, number][] = [

@@ -1,7 +1,7 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Field, FormAlert } from "@/components/forms/Field";
@@ -36,12 +36,15 @@ export function PayForm({
     defaultValues: { attemptKey: firstAttempt },
   });
 
+  // One attempt per submit, never retried on its own: a refused card gets a new attempt key from the user.
+  const pay = useMutation({
+    mutationFn: (values: CardPayment) => apiFetch<Outcome>(`/api/invoices/${invoiceId}/pay`, { json: values }),
+  });
+
   async function onSubmit(values: CardPayment) {
     setMessage(null);
     try {
-      const r = await apiFetch<Outcome>(`/api/invoices/${invoiceId}/pay`, {
-        json: values,
-      });
+      const r = await pay.mutateAsync(values);
       if (r.status === "requires_action") {
         setMessage({ tone: "sound", text: "Your card asks you to confirm the payment; taking you there…" });
         window.location.assign(r.redirectUrl);

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useRef, useState, useSyncExternalStore } from "react";
 import { ApiClientError, apiFetch } from "@/lib/client/api";
 import { canBidIn, panelMessage, type LastAction } from "@/lib/auction/standing";
@@ -89,7 +89,6 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
   const [announce, setAnnounce] = useState<string | null>(null);
   const [last, setLast] = useState<LastAction | null>(null);
   const [amount, setAmount] = useState("");
-  const [busy, setBusy] = useState(false);
   const keyRef = useRef<string | null>(null);
   const zone = useViewerZone();
   const live = data.live;
@@ -120,6 +119,16 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
     refetch,
   );
 
+  // The socket-or-HTTP send runs as a mutation: never retried on its own; a retry by the dealer reuses the key.
+  const placeBid = useMutation({
+    mutationFn: (b: { cents: number; idempotencyKey: string }) => sendBid(id, b.cents, b.idempotencyKey),
+  });
+  const watch = useMutation({
+    mutationFn: (on: boolean) => apiFetch(`/api/sale-lots/${id}/watch`, { json: { on } }),
+    onSuccess: () => refetch(),
+  });
+  const busy = placeBid.isPending;
+
   async function bid(e: React.FormEvent) {
     e.preventDefault();
     let cents: number;
@@ -129,9 +138,8 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
       return setLast({ kind: "refused", seq: live.seq, message: "Enter an amount like 125 or 125.50." });
     }
     keyRef.current ??= crypto.randomUUID(); // the same key if this very bid is retried
-    setBusy(true);
     try {
-      const r = await sendBid(id, cents, keyRef.current);
+      const r = await placeBid.mutateAsync({ cents, idempotencyKey: keyRef.current });
       setLast({ kind: "bid", outcome: r.outcome, seq: r.live.seq, maxCents: r.yourMaxCents });
       const cur = qc.getQueryData<Data>(key);
       if (cur && r.live.seq >= cur.live.seq) {
@@ -152,14 +160,12 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
       if (err instanceof ApiClientError && err.status === 409) keyRef.current = null; // refused: the next try is a new bid
       setLast({ kind: "refused", seq: live.seq, message: (err as Error).message });
     } finally {
-      setBusy(false);
       refetch();
     }
   }
 
-  async function toggleWatch() {
-    await apiFetch(`/api/sale-lots/${id}/watch`, { json: { on: !data.you.watching } });
-    refetch();
+  function toggleWatch() {
+    watch.mutate(!data.you.watching);
   }
 
   // Leading follows the latest public state at once when the dealer's paddle is known.
@@ -273,7 +279,7 @@ export function LiveLot({ initial, canBid, lotHref }: { initial: Data; canBid: b
             Read the lot&apos;s evidence
           </Link>
           {canBid && open ? (
-            <button type="button" className="underline" onClick={() => void toggleWatch()}>
+            <button type="button" className="underline" onClick={toggleWatch}>
               {data.you.watching ? "Stop following on my desk" : "Follow on my desk"}
             </button>
           ) : null}

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { apiFetch } from "@/lib/client/api";
 import { liveSocket } from "./socket";
@@ -27,6 +27,10 @@ export function NoticeBell() {
       s.off("notice.created", on);
     };
   }, [qc]);
+  const markRead = useMutation({
+    mutationFn: () => apiFetch("/api/notices/read", { method: "POST" }),
+    onSuccess: () => void qc.invalidateQueries({ queryKey: ["notices"] }),
+  });
   const unread = data?.notices.filter((n) => !n.read).length ?? 0;
   return (
     <div className="relative">
@@ -34,12 +38,9 @@ export function NoticeBell() {
         type="button"
         className="text-sm text-flash-700 underline-offset-4 hover:underline"
         aria-expanded={open}
-        onClick={async () => {
+        onClick={() => {
           setOpen(!open);
-          if (!open && unread) {
-            await apiFetch("/api/notices/read", { method: "POST" });
-            void qc.invalidateQueries({ queryKey: ["notices"] });
-          }
+          if (!open && unread) markRead.mutate();
         }}
       >
         Notices

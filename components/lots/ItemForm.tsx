@@ -1,12 +1,12 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useState } from "react";
 import { useFieldArray, useForm, useWatch } from "react-hook-form";
 import { CautionStrip } from "@/components/CautionStrip";
 import { Field, FormAlert } from "@/components/forms/Field";
+import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { ConstructionFields } from "@/components/valves/ConstructionFields";
-import { ApiClientError, apiFetch } from "@/lib/client/api";
+import { apiFetch } from "@/lib/client/api";
 import type { ItemView } from "@/lib/services/lots";
 import {
   BASIS_VALUES,
@@ -72,11 +72,11 @@ export function ItemForm({
   item?: ItemView;
   onDone: () => void;
 }) {
-  const [problem, setProblem] = useState<string | null>(null);
   const { register, control, handleSubmit, formState, setError, setValue } = useForm<ItemInput>({
     resolver: (values, ctx, opts) => zodResolver(ItemSchema)(withoutBlankSections(values), ctx, opts),
     defaultValues: item ? toInput(item) : EMPTY,
   });
+  const { message, run } = useApiSubmit<ItemInput>(setError);
   const readings = useFieldArray({ control, name: "readings" });
   const typed = useWatch({ control, name: "designation" });
   const defects = useWatch({ control, name: "defects" });
@@ -86,16 +86,11 @@ export function ItemForm({
     : [];
 
   async function onSubmit(values: ItemInput) {
-    setProblem(null);
-    try {
+    const saved = await run(async () => {
       if (item) await apiFetch(`/api/lots/${lotId}/items/${item.id}`, { method: "PUT", json: values });
       else await apiFetch(`/api/lots/${lotId}/items`, { json: values });
-      onDone();
-    } catch (e) {
-      if (e instanceof ApiClientError && e.fields)
-        for (const [k, v] of Object.entries(e.fields)) setError(k as keyof ItemInput, { message: v });
-      setProblem(e instanceof Error ? e.message : "Could not save the item");
-    }
+    });
+    if (saved) onDone();
   }
 
   const e = formState.errors;
@@ -106,7 +101,7 @@ export function ItemForm({
       noValidate
       aria-label={item ? "Edit item" : "Add an item"}
     >
-      {problem ? <FormAlert>{problem}</FormAlert> : null}
+      {message ? <FormAlert>{message.text}</FormAlert> : null}
       <div className="grid gap-3 sm:grid-cols-3">
         <Field
           id="designation"

@@ -1,27 +1,24 @@
 import type { Client } from "pg";
 import type { BidOutcome, ProxyState } from "../auction/proxy";
-import type { LotLive } from "../realtime/events";
 import { db } from "../../models";
+import type { BidRow } from "./bid-rows";
+import type { SaleLotRow } from "./sale-lot-rows";
 
 /** The lot row as the bid sees it under its lock, with the sale's clock and any earlier bid under this key. */
-export type LockedLot = {
-  id: string;
-  sale_id: string;
-  phase: LotLive["phase"];
-  closes_at: Date;
-  extension_count: number;
-  seq: number;
-  state: ProxyState;
-  hammer_cents: number | null;
+export type LockedLot = Pick<
+  SaleLotRow,
+  "id" | "sale_id" | "phase" | "closes_at" | "extension_count" | "seq" | "state" | "hammer_cents"
+> & {
   starts_at: Date;
   soft_close_seconds: number;
   /** Extension cap frozen on the sale from its settings version (null = no cap). */
   max_extensions: number | null;
   db_now: Date;
   leader_paddle: number | null;
-  prior_seq: number | null;
-  prior_outcome: BidOutcome | null;
-  prior_max: number | null;
+  /** The earlier bid under this key, if any (bids.seq, outcome, max_cents). */
+  prior_seq: BidRow["seq"] | null;
+  prior_outcome: BidRow["outcome"] | null;
+  prior_max: BidRow["max_cents"] | null;
 };
 
 /** What an accepted bid writes: the lot's new state and the bid row, under the same lock. */

@@ -2,11 +2,11 @@
 import { QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
-import { applyBid, initialProxyState, type ProxyState } from "../auction/proxy";
+import { applyBid, initialProxyState } from "../auction/proxy";
 import { type LotLive } from "../realtime/events";
 import { emitLot } from "../realtime/lot-emitter";
 import { db } from "../../models";
-import { liveFrom } from "./live-lot";
+import { liveFrom, type LiveSource } from "./live-lot";
 import { paddlesOf } from "./paddles";
 import type { BidRow } from "./bid-rows";
 
@@ -18,15 +18,7 @@ import type { BidRow } from "./bid-rows";
 export async function retractBid(admin: Viewer, saleLotId: string, bidId: string, reason: string): Promise<LotLive> {
   const s = db();
   const row = await s.transaction(async (t) => {
-    const [sl] = await s.query<{
-      id: string;
-      sale_id: string;
-      phase: LotLive["phase"];
-      seq: number;
-      state: ProxyState;
-      closes_at: Date;
-      hammer_cents: number | null;
-    }>(
+    const [sl] = await s.query<LiveSource>(
       `SELECT id, sale_id, phase, seq, state, closes_at, hammer_cents FROM sale_lots WHERE id = :saleLotId FOR UPDATE`,
       { replacements: { saleLotId }, type: QueryTypes.SELECT, transaction: t },
     );

@@ -1,16 +1,18 @@
 import { QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
-import { minimumBidFor, placeBid, type BidOutcome, type BidRefusal, type ProxyState } from "../auction/proxy";
+import { minimumBidFor, placeBid, type BidOutcome, type BidRefusal } from "../auction/proxy";
 import { extendOnBid } from "../auction/soft-close";
 import { type LotLive } from "../realtime/events";
 import { beginLotWrite, finishLotWrite } from "../realtime/lot-emitter";
 import { db } from "../../models";
 import { withLotLock, type LockedLot } from "./bid-lock";
 import { scheduleClose } from "./close-schedule";
-import { liveFrom } from "./live-lot";
+import type { BidRow } from "./bid-rows";
+import { liveFrom, type LiveSource } from "./live-lot";
 import { queueOutbidNotice } from "./outbid-notices";
 import { paddleFor, paddlesOf } from "./paddles";
+import type { SaleLotRow } from "./sale-lot-rows";
 
 /** Refusals in words a dealer reads. */
 export const REFUSAL_WORDS: Record<BidRefusal | "not-started", string> = {
@@ -36,22 +38,6 @@ export type BidResult =
     }
   | { accepted: false; reason: BidRefusal | "not-started"; message: string; minimumCents: number; live: LotLive };
 
-type Row = {
-  id: string;
-  sale_id: string;
-  phase: LotLive["phase"];
-  closes_at: Date;
-  extension_count: number;
-  seq: number;
-  state: ProxyState;
-  starts_at: Date;
-  soft_close_seconds: number;
-  /** Extension cap frozen on the sale from its settings version (null = no cap). */
-  max_extensions: number | null;
-  db_now: Date;
-  hammer_cents: number | null;
-};
-
 const saleOf = new Map<string, string>();
 
 /**
@@ -69,7 +55,7 @@ export async function placeMaxBid(
   const s = db();
   let saleId = saleOf.get(saleLotId);
   if (!saleId) {
-    const r = await s.query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :saleLotId`, {
+    const r = await s.query<Pick<SaleLotRow, "sale_id">>(`SELECT sale_id FROM sale_lots WHERE id = :saleLotId`, {
       replacements: { saleLotId },
       type: QueryTypes.SELECT,
     });
@@ -82,7 +68,7 @@ export async function placeMaxBid(
   // Most refusals need no lock: the minimum only rises between bids (a house retraction bumps the
   // lot's seq, and every bid is checked again under the lock), so a maximum below the minimum read
   // without locking is below it now. Retries of an accepted bid are answered from the log below.
-  const [peek] = await s.query<Row & { prior_seq: number | null }>(
+  const [peek] = await s.query<LiveSource & { prior_seq: BidRow["seq"] | null }>(
     `SELECT sl.id, sl.sale_id, sl.phase, sl.closes_at, sl.seq, sl.state, sl.hammer_cents,
             (SELECT seq FROM bids WHERE sale_lot_id = sl.id AND bidder_id = :bidder AND idempotency_key = :key) AS prior_seq
        FROM sale_lots sl WHERE sl.id = :saleLotId`,

@@ -2,6 +2,8 @@ import { QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { standingOf, type Standing } from "../auction/standing";
 import { db } from "../../models";
+import type { BidRow } from "./bid-rows";
+import type { SaleLotRow } from "./sale-lot-rows";
 import { myCases } from "./disputes/cases";
 import { watchlist } from "./sales";
 
@@ -34,17 +36,13 @@ export type DeskWin = {
  */
 export async function dealerDesk(viewer: Viewer) {
   const s = db();
-  const bids = await s.query<{
-    id: string;
-    sale_id: string;
-    title: string;
-    price_cents: number;
-    bid_count: number;
-    ceiling: number;
-    leading: boolean;
-    closes_at: Date;
-    phase: DeskBid["phase"];
-  }>(
+  const bids = await s.query<
+    Pick<SaleLotRow, "id" | "sale_id" | "price_cents" | "bid_count" | "closes_at" | "phase"> & {
+      title: string;
+      ceiling: BidRow["max_cents"];
+      leading: boolean;
+    }
+  >(
     `SELECT sl.id, sl.sale_id, l.title, sl.price_cents, sl.bid_count, m.ceiling, (sl.leader_id = :me) AS leading, sl.closes_at, sl.phase
        FROM (SELECT sale_lot_id, MAX(max_cents) AS ceiling FROM bids WHERE bidder_id = :me AND retracted_at IS NULL GROUP BY sale_lot_id) m
        JOIN sale_lots sl ON sl.id = m.sale_lot_id JOIN lots l ON l.id = sl.lot_id
@@ -52,16 +50,16 @@ export async function dealerDesk(viewer: Viewer) {
       ORDER BY (sl.phase = 'open') DESC, sl.closes_at LIMIT 200`,
     { replacements: { me: viewer.id }, type: QueryTypes.SELECT },
   );
-  const wins = await s.query<{
-    id: string;
-    sale_id: string;
-    title: string;
-    hammer_cents: number;
-    invoice_id: string | null;
-    state: string | null;
-    total_cents: number | null;
-    due_at: Date | null;
-  }>(
+  const wins = await s.query<
+    Pick<SaleLotRow, "id" | "sale_id"> & {
+      title: string;
+      hammer_cents: NonNullable<SaleLotRow["hammer_cents"]>; // a sold lot has its hammer price
+      invoice_id: string | null;
+      state: string | null;
+      total_cents: number | null;
+      due_at: Date | null;
+    }
+  >(
     `SELECT sl.id, sl.sale_id, l.title, sl.hammer_cents, i.id AS invoice_id, i.state, i.total_cents, i.due_at
        FROM sale_lots sl JOIN lots l ON l.id = sl.lot_id LEFT JOIN invoices i ON i.sale_lot_id = sl.id
       WHERE sl.phase = 'sold' AND sl.buyer_id = :me ORDER BY sl.closed_at DESC LIMIT 100`,

@@ -12,6 +12,7 @@ import { notify } from "./notices";
 import { db, User } from "../../models";
 import type { InvoiceState } from "../money/invoice-states";
 import { findInvoice, type InvoiceRow } from "./invoice-rows";
+import type { SaleLotRow } from "./sale-lot-rows";
 import { post } from "./ledger";
 import { statementCsv, statementFor, statementPdf } from "./statements";
 
@@ -284,7 +285,7 @@ async function mailStatement(
 ): Promise<void> {
   const u = await User.findByPk(inv.consignor_id, { attributes: ["id", "email", "displayName", "roles"] });
   if (!u) return;
-  const [sl] = await db().query<{ sale_id: string }>(`SELECT sale_id FROM sale_lots WHERE id = :id`, {
+  const [sl] = await db().query<Pick<SaleLotRow, "sale_id">>(`SELECT sale_id FROM sale_lots WHERE id = :id`, {
     replacements: { id: inv.sale_lot_id },
     type: QueryTypes.SELECT,
   });

@@ -1,16 +1,9 @@
-import { minimumBidFor, type ProxyState } from "../auction/proxy";
+import { minimumBidFor } from "../auction/proxy";
 import type { LotLive } from "../realtime/events";
+import type { SaleLotRow } from "./sale-lot-rows";
 
-/** The row fields the live presenter reads. */
-export type LiveSource = {
-  id: string;
-  sale_id: string;
-  phase: LotLive["phase"];
-  seq: number;
-  state: ProxyState;
-  closes_at: Date;
-  hammer_cents: number | null;
-};
+/** The sale_lots columns the live presenter reads. */
+export type LiveSource = Pick<SaleLotRow, "id" | "sale_id" | "phase" | "seq" | "state" | "closes_at" | "hammer_cents">;
 
 /** The public state of a lot from its row (never the leader's maximum). */
 export function liveFrom(r: LiveSource, leaderPaddle: number | null, extended = false): LotLive {

@@ -126,13 +126,13 @@ async function closingMail(row: Closing, outcome: ReturnType<typeof closeOutcome
 
 /** Every open lot already due: queue its close (a lost or late job is caught here). */
 export async function sweepDueLots(): Promise<number> {
-  const due = await db().query<{ id: string; closes_at: Date }>(
+  const due = await db().query<Pick<SaleLotRow, "id" | "closes_at">>(
     `SELECT id, closes_at FROM sale_lots WHERE phase = 'open' AND closes_at <= now() ORDER BY closes_at LIMIT 200`,
     { type: QueryTypes.SELECT },
   );
   for (const d of due) await scheduleClose(d.id, d.closes_at);
   // A sold lot whose invoice was not written (a crash between the two) is invoiced now.
-  const uninvoiced = await db().query<{ id: string }>(
+  const uninvoiced = await db().query<Pick<SaleLotRow, "id">>(
     `SELECT sl.id FROM sale_lots sl WHERE sl.phase = 'sold' AND NOT EXISTS (SELECT 1 FROM invoices i WHERE i.sale_lot_id = sl.id) LIMIT 50`,
     { type: QueryTypes.SELECT },
   );

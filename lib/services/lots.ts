@@ -8,6 +8,7 @@ import { db, Lot, LotEvent, LotItem, LotPhoto, User } from "../../models";
 import type { LotState } from "../../models/Lot";
 import { assertCanView, assertConsignorCanEdit, seesReserve } from "./lot-access";
 import { currentReferenceTable } from "./reference-table";
+import type { SaleLotRow } from "./sale-lot-rows";
 import type { ReferenceTable } from "../valves/reference-table";
 import { typeFamily } from "../lots/type-family";
 import { hazardsForType } from "../valves/hazards";
@@ -261,14 +262,9 @@ export async function saleLotOf(lotId: string): Promise<{
   hammerCents: number | null;
   closedAt: string | null;
 } | null> {
-  const [row] = await db().query<{
-    id: string;
-    sale_id: string;
-    title: string;
-    phase: string;
-    hammer_cents: number | null;
-    closed_at: Date | null;
-  }>(
+  const [row] = await db().query<
+    Pick<SaleLotRow, "id" | "sale_id" | "phase" | "hammer_cents" | "closed_at"> & { title: string } // the sale's title
+  >(
     `SELECT sl.id, sl.sale_id, s.title, sl.phase, sl.hammer_cents, sl.closed_at FROM sale_lots sl JOIN sales s ON s.id = sl.sale_id WHERE sl.lot_id = :lotId ORDER BY sl.created_at DESC LIMIT 1`,
     { replacements: { lotId }, type: QueryTypes.SELECT },
   );

@@ -1,7 +1,7 @@
 import { Op, QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
-import { initialProxyState, type ProxyState } from "../auction/proxy";
+import { initialProxyState } from "../auction/proxy";
 import { staggeredCloseTimes } from "../auction/soft-close";
 import { type LotLive } from "../realtime/events";
 import type { SaleCreateInput } from "../validation/sales";
@@ -9,9 +9,10 @@ import { db, Lot, Sale, SaleLot } from "../../models";
 import { lotChanged } from "./catalogue/events";
 import { scheduleClose } from "./close-schedule";
 import { currentSettings } from "./house-settings";
-import { liveFrom } from "./live-lot";
+import { liveFrom, type LiveSource } from "./live-lot";
 import { paddlesOf } from "./paddles";
 import { BID_LOG_COLUMNS, bidColumns, type BidLogRow } from "./bid-rows";
+import type { SaleLotRow } from "./sale-lot-rows";
 
 /**
  * The house schedules approved lots into a sale with staggered closing
@@ -88,20 +89,9 @@ export async function createSale(admin: Viewer | null, input: SaleCreateInput, o
   return { id: sale.id, lots: saleLots.length };
 }
 
-type LiveRow = {
-  id: string;
-  sale_id: string;
-  lot_id: string;
-  title: string;
-  position: number;
-  phase: LotLive["phase"];
-  seq: number;
-  state: ProxyState;
-  closes_at: Date;
-  hammer_cents: number | null;
-  consignor: string;
-  leader_paddle: number | null;
-};
+/** A sale lot's live columns with its lot's title, its consignor's name and the leader's paddle (joined). */
+type LiveRow = LiveSource &
+  Pick<SaleLotRow, "lot_id" | "position"> & { title: string; consignor: string; leader_paddle: number | null };
 
 /** Sale lots with their live state and the leader's paddle (any number of sales, one query). */
 export async function liveRows(
@@ -211,7 +201,7 @@ export async function getSaleLot(viewer: Viewer, saleLotId: string) {
        FROM bids b LEFT JOIN paddles p ON p.sale_id = :saleId AND p.user_id = b.bidder_id WHERE b.sale_lot_id = :saleLotId ORDER BY b.seq DESC LIMIT 200`,
     { replacements: { saleId: live.saleId, saleLotId }, type: QueryTypes.SELECT },
   );
-  const [row] = await s.query<{ state: ProxyState; consignor_id: string }>(
+  const [row] = await s.query<Pick<SaleLotRow, "state" | "consignor_id">>(
     `SELECT state, consignor_id FROM sale_lots WHERE id = :saleLotId`,
     { replacements: { saleLotId }, type: QueryTypes.SELECT },
   );

@@ -5,6 +5,7 @@
 
 import { parse } from "csv-parse/sync";
 import { z } from "zod";
+import { COLUMN_LENGTHS } from "../validation/columns";
 import { BASE_FAMILY_LABELS } from "./designation/base-families";
 import { normaliseDesignation } from "./designation/normalise";
 import type { BaseFamily } from "./index-types";
@@ -48,10 +49,13 @@ const num = z
   .transform((v) => (v === "" ? undefined : v));
 const yesNo = z.enum(["", "yes", "no"]).transform((v) => v === "yes");
 const text = (max: number) => z.string().trim().max(max);
+/** What the valve_types table holds: a longer value is refused here by column, never cut short or a database error. */
+const HELD = COLUMN_LENGTHS.valve_types;
+const tooLong = (max: number) => `is longer than ${max} characters (the reference table holds at most ${max})`;
 
 /** One CSV line as validated fields. */
 export const ReferenceCsvLine = z.object({
-  designation: z.string().trim().min(1, "is required").max(32),
+  designation: z.string().trim().min(1, "is required").max(HELD.designation, tooLong(HELD.designation)),
   aliases: text(400),
   kind: z.enum(VALVE_KINDS as [ValveKind, ...ValveKind[]], { message: "is not a kind we use" }),
   base: z.enum(Object.keys(BASE_FAMILY_LABELS) as [BaseFamily, ...BaseFamily[]], {
@@ -73,6 +77,7 @@ export const ReferenceCsvLine = z.object({
   source: z
     .string()
     .trim()
+    .max(HELD.source, tooLong(HELD.source))
     .refine(
       (s) => parseRowSource(s) !== undefined,
       "must be a tag from the sources list, e.g. REG MEM, EU-DS ✓, CTP, MEM",
@@ -118,6 +123,10 @@ function toRow(
     .split(";")
     .map((s) => s.trim())
     .filter(Boolean)) {
+    if (a.length > HELD.alias) {
+      errors.push({ line, column: "aliases", message: `"${a}" ${tooLong(HELD.alias)}` });
+      continue;
+    }
     const k = key(a);
     if (!k) errors.push({ line, column: "aliases", message: `"${a}" cannot be read as a designation` });
     else if (k !== designation && !aliases.includes(k)) aliases.push(k);

@@ -42,3 +42,34 @@ describe("reference CSV", () => {
     ]);
   });
 });
+
+// The valve_types columns (migrations/20261201000200-valve-knowledge.ts, COLUMN_LENGTHS): designation and each
+// alias at most 32 characters. Refusing a longer value by line and column, not cutting it short, is [SUG].
+describe("reference CSV against the table's column sizes", () => {
+  const header = "designation,aliases,kind,base,heater_volts,heater_amps,source";
+  const line = (designation: string, aliases = "") =>
+    `${designation},${aliases},pentode,miniature-7-pin,6.3,0.3,REG MEM`;
+
+  it("refuses a designation of 33 characters on its line, naming the column and the limit of 32", () => {
+    const long = "6AU6" + "X".repeat(29); // 33 characters
+    const { rows, errors } = parseReferenceCsv([header, line("6BA6"), line(long)].join("\n"));
+    expect(rows).toEqual([]);
+    expect(errors).toEqual([{ line: 3, column: "designation", message: expect.stringContaining("32 characters") }]);
+  });
+
+  it("refuses an alias of 33 characters by the aliases column, and keeps a 6AU6 with a short alias", () => {
+    const long = "6AU6" + "W".repeat(29);
+    const bad = parseReferenceCsv([header, line("6AU6", `6AU6W;${long}`)].join("\n"));
+    expect(bad.rows).toEqual([]);
+    expect(bad.errors).toEqual([
+      {
+        line: 2,
+        column: "aliases",
+        message: `"${long}" is longer than 32 characters (the reference table holds at most 32)`,
+      },
+    ]);
+    const good = parseReferenceCsv([header, line("6AU6", "6AU6W")].join("\n"));
+    expect(good.errors).toEqual([]);
+    expect(good.rows[0]?.row.aliases).toEqual(["6AU6W"]);
+  });
+});

@@ -3,8 +3,8 @@ import { readJson, route } from "@/lib/api/route";
 import { myAddress, saveMyAddress } from "@/lib/services/addresses";
 import { AddressSchema } from "@/lib/validation/address";
 
-export const GET = route({ permission: "address.keep" }, async ({ viewer }) => ({ address: await myAddress(viewer!) }));
+export const GET = route({ permission: "address.keep" }, async ({ viewer }) => ({ address: await myAddress(viewer) }));
 
 export const PUT = route({ permission: "address.keep" }, async ({ req, viewer }) => ({
-  address: await saveMyAddress(viewer!, await readJson(req, AddressSchema)),
+  address: await saveMyAddress(viewer, await readJson(req, AddressSchema)),
 }));

@@ -12,5 +12,5 @@ export const GET = route({ permission: "house.manage" }, async () => ({
 }));
 
 export const PUT = route({ permission: "house.manage" }, async ({ req, viewer }) => ({
-  version: await changeSettings(viewer!, await readJson(req, PutSchema)),
+  version: await changeSettings(viewer, await readJson(req, PutSchema)),
 }));

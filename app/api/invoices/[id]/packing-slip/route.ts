@@ -6,6 +6,6 @@ import { packingSlipDocument } from "@/lib/services/documents/invoice-docs";
 import { IdParam } from "@/lib/validation/common";
 
 export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ params, viewer }) => {
-  const doc = await packingSlipDocument(viewer!, parseParams(IdParam, params).id);
+  const doc = await packingSlipDocument(viewer, parseParams(IdParam, params).id);
   return pdfResponse(await packingSlipPdf(doc), `getterline-packing-slip-${doc.invoiceNumber}`);
 });

@@ -6,6 +6,6 @@ import { invoiceDocument } from "@/lib/services/documents/invoice-docs";
 import { IdParam } from "@/lib/validation/common";
 
 export const GET = route<{ id: string }>({ permission: "account.read" }, async ({ params, viewer }) => {
-  const doc = await invoiceDocument(viewer!, parseParams(IdParam, params).id);
+  const doc = await invoiceDocument(viewer, parseParams(IdParam, params).id);
   return pdfResponse(await invoicePdf(doc), `getterline-invoice-${doc.number}`);
 });
