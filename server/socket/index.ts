@@ -21,7 +21,7 @@ import { SocketBidSchema } from "../../lib/validation/sales";
  * from the database (as every guard does), then the same service as the
  * HTTP route. The answer comes back on the ack, in the one error shape.
  */
-async function placeBidOverSocket(userId: string, raw: unknown): Promise<BidAck> {
+async function placeBidOverSocket(userId: string, sessionVersion: number, raw: unknown): Promise<BidAck> {
   const parsed = SocketBidSchema.safeParse(raw);
   if (!parsed.success)
     return {
@@ -33,7 +33,7 @@ async function placeBidOverSocket(userId: string, raw: unknown): Promise<BidAck>
       },
     };
   try {
-    const roles = await currentRoles(userId);
+    const roles = await currentRoles(userId, sessionVersion);
     if (!roles) return { ok: false, error: { code: "unauthenticated", message: "Sign in first" } };
     if (!can(roles, "lots.bid"))
       return { ok: false, error: { code: "forbidden", message: "Your account's roles do not allow this" } };
@@ -85,7 +85,7 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
     try {
       const viewer = await viewerFromCookieHeader(socket.handshake.headers.cookie);
       if (!viewer) return next(new Error("unauthenticated"));
-      socket.data = { userId: viewer.id, roles: viewer.roles };
+      socket.data = { userId: viewer.id, roles: viewer.roles, sessionVersion: viewer.sessionVersion };
       next();
     } catch {
       next(new Error("unavailable"));
@@ -110,7 +110,7 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
     });
     socket.on("bid.place", (p, ack) => {
       if (typeof ack !== "function") return;
-      void placeBidOverSocket(socket.data.userId, p).then(ack);
+      void placeBidOverSocket(socket.data.userId, socket.data.sessionVersion, p).then(ack);
     });
     socket.on("room.leave", ({ room }) => {
       if (typeof room === "string" && joinableRoom(room)) void socket.leave(room);
