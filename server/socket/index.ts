@@ -11,7 +11,9 @@ import type {
 } from "../../lib/realtime/events";
 import { joinableRoom, userRoom, type BidAck } from "../../lib/realtime/events";
 import { ApiError, fieldsFromIssues } from "../../lib/api/errors";
+import { handshakeOriginAllowed } from "../../lib/auth/origin";
 import { can } from "../../lib/auth/roles";
+import { env } from "../../lib/config/env";
 import { currentRoles } from "../../lib/services/accounts";
 import { placeMaxBid } from "../../lib/services/bidding";
 import { SocketBidSchema } from "../../lib/validation/sales";
@@ -75,6 +77,12 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
     path: "/socket.io",
     serveClient: false,
     cors: { origin: false },
+    // Another site's page must not open a socket with a dealer's cookie and bid: same rule as route().
+    allowRequest: (req, cb) => {
+      const e = env();
+      const configured = [...e.TRUSTED_ORIGINS.split(",").map((o) => o.trim()), new URL(e.NEXTAUTH_URL).origin];
+      cb(null, handshakeOriginAllowed(req.headers.origin, req.headers.host, configured));
+    },
     adapter: createAdapter(pool, {
       payloadThreshold: 7000,
       errorHandler: (e: Error) => console.error("[socket adapter]", e.message),
