@@ -50,6 +50,17 @@ export function guardRequest(req: http.IncomingMessage, res: http.ServerResponse
 
 /** Replace the body of an empty 405 with the error shape, keeping the framework's Allow header. */
 function shapeMethodNotAllowed(req: http.IncomingMessage, res: http.ServerResponse): void {
+  // The framework streams even an empty body and flushes the headers first: hold them back for a 405.
+  const flush = res.flushHeaders.bind(res);
+  res.flushHeaders = () => {
+    if (res.statusCode !== 405) flush();
+  };
+  const write = res.write.bind(res) as (...a: unknown[]) => boolean;
+  res.write = ((...args: unknown[]) => {
+    const n = (args[0] as { length?: number } | undefined)?.length;
+    if (res.statusCode === 405 && !res.headersSent && n === 0) return true;
+    return write(...args);
+  }) as typeof res.write;
   const end = res.end.bind(res) as (...a: unknown[]) => http.ServerResponse;
   res.end = ((...args: unknown[]) => {
     const chunk = typeof args[0] === "function" ? undefined : args[0];

@@ -16,6 +16,8 @@ describe("the custom server's request guard", () => {
       if (req.method === "PATCH") {
         res.statusCode = 405;
         res.setHeader("Allow", "GET, POST");
+        res.flushHeaders(); // as Next's stream piping does, writing an empty chunk before the end
+        res.write(new Uint8Array(0));
         res.end();
         return;
       }
