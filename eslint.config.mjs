@@ -41,6 +41,7 @@ const config = [
   {
     ignores: [
       ".next/**",
+      "dist/**",
       "node_modules/**",
       ".data/**",
       "reports/**",

@@ -34,7 +34,8 @@ export default defineConfig({
   },
   projects: [{ name: "chromium", use: { ...devices["Desktop Chrome"] } }],
   webServer: {
-    command: "node --import tsx server/index.ts",
+    // The compiled server (npm run build:server); scripts/test.sh and e2e-only.sh build it.
+    command: "node --enable-source-maps dist/server.js",
     url: `${baseURL}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,

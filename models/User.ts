@@ -16,6 +16,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string;
   declare roles: Role[];
   declare disabledAt: CreationOptional<Date | null>;
+  /** Bumped on sign-out and password change; a JWT carrying an older one no longer signs anyone in. */
+  declare sessionVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -48,6 +50,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
           },
         },
         disabledAt: { type: DataTypes.DATE, allowNull: true },
+        sessionVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -30,7 +30,7 @@ VITEST=$?
 echo "== browser tests (Playwright, Debian's Chromium)"
 PW=1
 if DATABASE_URL=$E2E_DATABASE_URL MIGRATE_QUIET=1 node --import tsx scripts/migrate.ts fresh >/dev/null \
-   && NODE_ENV=production npx next build >reports/next-build.log 2>&1; then
+   && NODE_ENV=production npm run build >reports/next-build.log 2>&1; then
   rm -rf .data/mail-test .data/s3-e2e .data/stripe-e2e
   MAIL_CATCHER_SMTP_PORT=2525 MAIL_CATCHER_HTTP_PORT=2580 MAIL_CATCHER_DIR=.data/mail-test S3_FAKE_PORT=4589 S3_FAKE_DIR=.data/s3-e2e STRIPE_FAKE_PORT=12121 STRIPE_FAKE_DIR=.data/stripe-e2e STRIPE_WEBHOOK_URL=http://127.0.0.1:3100/api/webhooks/stripe STRIPE_FAKE_RETRY_BASE_MS=200 \
     start_local_services

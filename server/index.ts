@@ -15,6 +15,7 @@ import { startPeriodicJobs } from "../lib/services/periodic-jobs";
 import { startWantListWorker } from "../lib/services/want-list-matching";
 import { repairCatalogue } from "../lib/services/catalogue/entries";
 import { warmCatalogue } from "../lib/services/catalogue/search";
+import { guardRequest } from "./http-guard";
 import { gracefulShutdown } from "./shutdown";
 import { attachSockets } from "./socket";
 
@@ -31,7 +32,7 @@ async function main(): Promise<void> {
   const server = http.createServer((req, res) => {
     // Our own stamp of the peer address, used for sign-in throttling; a client cannot set it.
     req.headers["x-getterline-peer"] = req.socket.remoteAddress ?? "unknown";
-    void handle(req, res);
+    if (guardRequest(req, res)) void handle(req, res);
   });
 
   // Two connections: one held for LISTEN, one that publishes, so a lot's broadcasts leave in the order

@@ -5,9 +5,11 @@ declare module "next-auth" {
   interface User {
     id: string;
     roles: Role[];
+    /** The account's session version at sign-in (users.session_version). */
+    sessionVersion: number;
   }
   interface Session {
-    user: { id: string; roles: Role[] } & DefaultSession["user"];
+    user: { id: string; roles: Role[]; sv?: number } & DefaultSession["user"];
   }
 }
 
@@ -15,5 +17,7 @@ declare module "next-auth/jwt" {
   interface JWT {
     uid: string;
     roles: Role[];
+    /** Session version at sign-in; the guards compare it with the database on every request. */
+    sv?: number;
   }
 }

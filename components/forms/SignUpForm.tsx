@@ -14,7 +14,7 @@ export function SignUpForm() {
     resolver: zodResolver(SignUpSchema),
     defaultValues: { role: "dealer" },
   });
-  const { message, run } = useApiSubmit<SignUpInput>(setError);
+  const { message, setMessage, run } = useApiSubmit<SignUpInput>(setError);
 
   async function onSubmit(values: SignUpInput) {
     if (
@@ -24,7 +24,7 @@ export function SignUpForm() {
     )
       return;
     const csrf = await fetch("/api/auth/csrf").then((r) => r.json() as Promise<{ csrfToken: string }>);
-    await fetch("/api/auth/callback/credentials", {
+    const signedIn = await fetch("/api/auth/callback/credentials", {
       method: "POST",
       headers: { "content-type": "application/x-www-form-urlencoded" },
       body: new URLSearchParams({
@@ -33,7 +33,19 @@ export function SignUpForm() {
         csrfToken: csrf.csrfToken,
         json: "true",
       }),
-    });
+    }).then(
+      async (r) =>
+        r.ok &&
+        !new URL(((await r.json()) as { url?: string }).url ?? "/?error=1", location.href).searchParams.has("error"),
+    );
+    if (!signedIn) {
+      // The address already had an account (its owner has been told): the answer says no more than that.
+      setMessage({
+        tone: "sound",
+        text: "Check your e-mail. If this address already has an account, sign in or reset your password.",
+      });
+      return;
+    }
     router.push(values.role === "dealer" ? "/dealer" : "/consignor");
     router.refresh();
   }

@@ -12,11 +12,12 @@ import { can, type Permission, type Role } from "./roles";
 /** The signed-in person as every guard sees it, roles fresh from the database. */
 export type Viewer = { id: string; email: string; name: string; roles: Role[] };
 
-type TokenLike = { uid?: string; email?: string | null; name?: string | null } | null;
+type TokenLike = { uid?: string; sv?: number; email?: string | null; name?: string | null } | null;
 
+/** The token's account with fresh roles, or null when it is gone, disabled or the session was revoked. */
 async function viewerFromToken(token: TokenLike): Promise<Viewer | null> {
   if (!token?.uid) return null;
-  const roles = await currentRoles(token.uid);
+  const roles = await currentRoles(token.uid, token.sv ?? 0);
   if (!roles) return null;
   return { id: token.uid, email: token.email ?? "", name: token.name ?? "", roles };
 }
@@ -36,23 +37,31 @@ export async function viewerFromRequest(req: NextRequest): Promise<Viewer | null
   return viewerFromToken(token as TokenLike);
 }
 
-/** For the socket.io handshake: the viewer from a raw Cookie header. */
-export async function viewerFromCookieHeader(cookieHeader: string | undefined): Promise<Viewer | null> {
+/** For the socket.io handshake: the viewer (and the token's session version) from a raw Cookie header. */
+export async function viewerFromCookieHeader(
+  cookieHeader: string | undefined,
+): Promise<(Viewer & { sessionVersion: number }) | null> {
   const cookies: Record<string, string> = {};
   for (const part of (cookieHeader ?? "").split(";")) {
     const i = part.indexOf("=");
     if (i > 0) cookies[part.slice(0, i).trim()] = decodeURIComponent(part.slice(i + 1).trim());
   }
   const req = { headers: { cookie: cookieHeader ?? "" }, cookies } as unknown as NextRequest;
-  const token = await getToken({ req, secret: env().NEXTAUTH_SECRET });
-  return viewerFromToken(token as TokenLike);
+  const token = (await getToken({ req, secret: env().NEXTAUTH_SECRET })) as TokenLike;
+  const viewer = await viewerFromToken(token);
+  return viewer ? { ...viewer, sessionVersion: token?.sv ?? 0 } : null;
 }
 
 /** For server components and server actions. */
 export async function currentViewer(): Promise<Viewer | null> {
   const session = await getServerSession(authOptions());
   if (!session?.user?.id) return null;
-  return viewerFromToken({ uid: session.user.id, email: session.user.email, name: session.user.name });
+  return viewerFromToken({
+    uid: session.user.id,
+    sv: session.user.sv,
+    email: session.user.email,
+    name: session.user.name,
+  });
 }
 
 /** For server actions: the viewer holding the permission, or an ApiError. */

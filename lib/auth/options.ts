@@ -2,7 +2,7 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { ApiError } from "../api/errors";
 import { env } from "../config/env";
-import { authenticate } from "../services/accounts";
+import { authenticate, revokeSessions } from "../services/accounts";
 import { SignInSchema } from "../validation/account";
 import { clientIp } from "./client-ip";
 
@@ -27,7 +27,13 @@ export function authOptions(): NextAuthOptions {
           const headers = new Headers(req?.headers as Record<string, string> | undefined);
           try {
             const account = await authenticate(parsed.data, clientIp(headers));
-            return { id: account.id, email: account.email, name: account.displayName, roles: account.roles };
+            return {
+              id: account.id,
+              email: account.email,
+              name: account.displayName,
+              roles: account.roles,
+              sessionVersion: account.sessionVersion,
+            };
           } catch (e) {
             if (e instanceof ApiError && e.code === "invalid_credentials") return null;
             throw e;
@@ -40,12 +46,19 @@ export function authOptions(): NextAuthOptions {
         if (user) {
           token.uid = user.id;
           token.roles = user.roles;
+          token.sv = user.sessionVersion;
         }
         return token;
       },
       async session({ session, token }) {
-        session.user = { ...session.user, id: token.uid, roles: token.roles ?? [] };
+        session.user = { ...session.user, id: token.uid, roles: token.roles ?? [], sv: token.sv ?? 0 };
         return session;
+      },
+    },
+    events: {
+      // Signing out ends every session of the account, so a copied token stops working too.
+      async signOut({ token }) {
+        if (token?.uid) await revokeSessions(token.uid);
       },
     },
   };

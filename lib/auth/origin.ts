@@ -26,3 +26,18 @@ export function allowedOriginsFor(host: string | null, configured: string[], pro
   }
   return [...list];
 }
+
+/**
+ * The socket.io handshake's rule, the same as for cookie-authenticated writes: a browser always sends Origin on
+ * a WebSocket or cross-origin request, so another site's (or an opaque "null") origin is refused; a client with
+ * no Origin at all (a server, a test) carries no ambient browser cookie and passes.
+ */
+export function handshakeOriginAllowed(
+  origin: string | undefined,
+  host: string | undefined,
+  configured: string[],
+): boolean {
+  if (origin === undefined || origin === "") return true;
+  if (origin === "null") return false;
+  return allowedOriginsFor(host ?? null, configured).includes(origin);
+}

@@ -55,7 +55,8 @@ export interface ClientToServerEvents {
   "room.leave": (p: { room: string }) => void;
 }
 
-export type SocketData = { userId: string; roles: string[] };
+/** What the handshake learnt; the session version lets each bid check the session was not revoked since. */
+export type SocketData = { userId: string; roles: string[]; sessionVersion: number };
 
 /** Between app instances: a lot's events, sent by the instance that committed them, for the others to deliver locally in the same order. */
 export interface InterServerEvents {

@@ -17,6 +17,9 @@ const dummyHash = () => (dummy ??= bcrypt.hash("no-such-account", BCRYPT_ROUNDS)
 /** What the rest of the app may know about a person (never the hash). */
 export type AccountView = { id: string; email: string; displayName: string; roles: Role[]; createdAt: string };
 
+/** What sign-in puts in the JWT besides the account: the session version it was issued under. */
+export type SignedInAccount = AccountView & { sessionVersion: number };
+
 export function presentAccount(u: User): AccountView {
   return {
     id: u.id,
@@ -29,25 +32,38 @@ export function presentAccount(u: User): AccountView {
 
 export const hashPassword = (plain: string) => bcrypt.hash(plain, BCRYPT_ROUNDS);
 
-/** Sign-up as consignor or dealer; a second sign-up with the same e-mail is a 409. */
-export async function signUp(input: SignUpInput): Promise<AccountView> {
+/** What every valid sign-up answers, whether or not the address already had an account. */
+export const SIGN_UP_ANSWER = {
+  ok: true,
+  message: "If the address was new, the account is open. If it already had one, its owner has been e-mailed.",
+} as const;
+
+/**
+ * Sign-up as consignor or dealer. Reveals nothing: an address that already has an account gets the same
+ * answer (and about the same time: the password is hashed either way), and its owner an e-mail saying someone
+ * tried to sign up with it. The notice is sent after the answer, so a slow mail server does not tell either.
+ */
+export async function signUp(input: SignUpInput): Promise<typeof SIGN_UP_ANSWER> {
   db();
+  const passwordHash = await hashPassword(input.password);
   try {
-    const user = await User.create({
-      email: input.email,
-      displayName: input.displayName,
-      passwordHash: await hashPassword(input.password),
-      roles: [input.role],
-    });
-    return presentAccount(user);
+    await User.create({ email: input.email, displayName: input.displayName, passwordHash, roles: [input.role] });
   } catch (e) {
-    if (e instanceof UniqueConstraintError) {
-      throw new ApiError("conflict", "An account with that e-mail already exists", {
-        email: "Already registered; sign in or reset the password",
-      });
-    }
-    throw e;
+    if (!(e instanceof UniqueConstraintError)) throw e;
+    const owner = await User.findOne({ where: { email: input.email.trim().toLowerCase() } });
+    if (owner)
+      void signUpNotice(owner).catch((err: Error) => console.error("[mail] sign-up notice failed", err.message));
   }
+  return SIGN_UP_ANSWER;
+}
+
+async function signUpNotice(owner: User): Promise<void> {
+  const base = env().NEXTAUTH_URL;
+  await sendMail({
+    to: owner.email,
+    subject: "Someone tried to open a Getterline account with your address",
+    text: `Hello ${owner.displayName},\n\nSomeone tried to sign up for Getterline with this e-mail address, which already has an account. Nothing was changed and no new account was opened.\n\nIf it was you, sign in at ${base}/sign-in, or reset your password at ${base}/forgot-password.\nIf it was not you, you need do nothing.\n\nGetterline Exchange`,
+  });
 }
 
 /**
@@ -75,7 +91,7 @@ export async function assertNotThrottled(emailRaw: string, ip: string): Promise<
  * rate_limited (429) before looking at the password when either is over its
  * limit, invalid_credentials (401) on a wrong e-mail or password.
  */
-export async function authenticate(input: SignInInput, ip: string): Promise<AccountView> {
+export async function authenticate(input: SignInInput, ip: string): Promise<SignedInAccount> {
   db();
   const email = input.email.trim().toLowerCase();
   await assertNotThrottled(email, ip);
@@ -86,15 +102,26 @@ export async function authenticate(input: SignInInput, ip: string): Promise<Acco
   await SignInAttempt.create({ email, ip, succeeded });
   if (!succeeded || !user)
     throw new ApiError("invalid_credentials", "That e-mail and password do not match an account");
-  return presentAccount(user);
+  return { ...presentAccount(user), sessionVersion: user.sessionVersion };
 }
 
-/** Current roles from the database (JWT roles can be stale). */
-export async function currentRoles(userId: string): Promise<Role[] | null> {
+/**
+ * Current roles from the database (JWT roles can be stale), or null when the account is gone, disabled, or the
+ * token's session version is older than the account's (signed out, or the password changed since).
+ * A token without a version (made before versions existed) counts as version 0.
+ */
+export async function currentRoles(userId: string, sessionVersion?: number): Promise<Role[] | null> {
   db();
-  const u = await User.findByPk(userId, { attributes: ["id", "roles", "disabledAt"] });
+  const u = await User.findByPk(userId, { attributes: ["id", "roles", "disabledAt", "sessionVersion"] });
   if (!u || u.disabledAt) return null;
+  if (sessionVersion !== undefined && (sessionVersion ?? 0) !== u.sessionVersion) return null;
   return [...u.roles];
+}
+
+/** End every session of the account: sign-out and password change call it. */
+export async function revokeSessions(userId: string): Promise<void> {
+  db();
+  await User.increment("sessionVersion", { by: 1, where: { id: userId } });
 }
 
 const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
@@ -132,10 +159,12 @@ export async function confirmPasswordReset(input: ResetConfirmInput): Promise<vo
       transaction: t,
     });
     if (!row) throw new ApiError("gone", "This reset link has expired or was already used. Ask for a new one.");
+    // A new password ends every session: a copied token from before stops working.
     await User.update(
       { passwordHash: await hashPassword(input.password) },
       { where: { id: row.userId }, transaction: t },
     );
+    await User.increment("sessionVersion", { by: 1, where: { id: row.userId }, transaction: t });
     await row.update({ usedAt: new Date() }, { transaction: t });
   });
 }

@@ -65,6 +65,12 @@ export const SOURCES: readonly SourceEntry[] = [
     kind: "publication",
   },
   {
+    tag: "RFC-3986",
+    title: "URI syntax",
+    publication: "IETF RFC 3986, Uniform Resource Identifier (URI): Generic Syntax, §2.1 Percent-Encoding, 2005.",
+    kind: "publication",
+  },
+  {
     tag: "UAX-9",
     title: "Unicode bidirectional algorithm",
     publication:

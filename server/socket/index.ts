@@ -11,7 +11,9 @@ import type {
 } from "../../lib/realtime/events";
 import { joinableRoom, userRoom, type BidAck } from "../../lib/realtime/events";
 import { ApiError, fieldsFromIssues } from "../../lib/api/errors";
+import { handshakeOriginAllowed } from "../../lib/auth/origin";
 import { can } from "../../lib/auth/roles";
+import { env } from "../../lib/config/env";
 import { currentRoles } from "../../lib/services/accounts";
 import { placeMaxBid } from "../../lib/services/bidding";
 import { SocketBidSchema } from "../../lib/validation/sales";
@@ -21,7 +23,7 @@ import { SocketBidSchema } from "../../lib/validation/sales";
  * from the database (as every guard does), then the same service as the
  * HTTP route. The answer comes back on the ack, in the one error shape.
  */
-async function placeBidOverSocket(userId: string, raw: unknown): Promise<BidAck> {
+async function placeBidOverSocket(userId: string, sessionVersion: number, raw: unknown): Promise<BidAck> {
   const parsed = SocketBidSchema.safeParse(raw);
   if (!parsed.success)
     return {
@@ -33,7 +35,7 @@ async function placeBidOverSocket(userId: string, raw: unknown): Promise<BidAck>
       },
     };
   try {
-    const roles = await currentRoles(userId);
+    const roles = await currentRoles(userId, sessionVersion);
     if (!roles) return { ok: false, error: { code: "unauthenticated", message: "Sign in first" } };
     if (!can(roles, "lots.bid"))
       return { ok: false, error: { code: "forbidden", message: "Your account's roles do not allow this" } };
@@ -75,6 +77,12 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
     path: "/socket.io",
     serveClient: false,
     cors: { origin: false },
+    // Another site's page must not open a socket with a dealer's cookie and bid: same rule as route().
+    allowRequest: (req, cb) => {
+      const e = env();
+      const configured = [...e.TRUSTED_ORIGINS.split(",").map((o) => o.trim()), new URL(e.NEXTAUTH_URL).origin];
+      cb(null, handshakeOriginAllowed(req.headers.origin, req.headers.host, configured));
+    },
     adapter: createAdapter(pool, {
       payloadThreshold: 7000,
       errorHandler: (e: Error) => console.error("[socket adapter]", e.message),
@@ -85,7 +93,7 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
     try {
       const viewer = await viewerFromCookieHeader(socket.handshake.headers.cookie);
       if (!viewer) return next(new Error("unauthenticated"));
-      socket.data = { userId: viewer.id, roles: viewer.roles };
+      socket.data = { userId: viewer.id, roles: viewer.roles, sessionVersion: viewer.sessionVersion };
       next();
     } catch {
       next(new Error("unavailable"));
@@ -110,7 +118,7 @@ export async function attachSockets(server: http.Server, pool: pg.Pool): Promise
     });
     socket.on("bid.place", (p, ack) => {
       if (typeof ack !== "function") return;
-      void placeBidOverSocket(socket.data.userId, p).then(ack);
+      void placeBidOverSocket(socket.data.userId, socket.data.sessionVersion, p).then(ack);
     });
     socket.on("room.leave", ({ room }) => {
       if (typeof room === "string" && joinableRoom(room)) void socket.leave(room);

@@ -14,14 +14,14 @@ function expectErrorShape(body: unknown): asserts body is ErrorBody {
 }
 
 describe("API routes: one error shape, role checks, cross-site refusal", () => {
-  it("creates an account (201) and answers bad input with 400 and field messages", async () => {
+  it("opens an account (202) and answers bad input with 400 and field messages", async () => {
     const ok = await signUpRoute(
       request("/api/account/sign-up", {
         json: { displayName: "Northbank Test", email: "nb@example.test", password: "long-enough-pw", role: "dealer" },
       }),
       noParams,
     );
-    expect(ok.status).toBe(201);
+    expect(ok.status).toBe(202);
     const bad = await signUpRoute(
       request("/api/account/sign-up", { json: { email: "not-mail", role: "admin" } }),
       noParams,
@@ -33,6 +33,17 @@ describe("API routes: one error shape, role checks, cross-site refusal", () => {
     expect(Object.keys(body.error.fields!)).toEqual(
       expect.arrayContaining(["email", "role", "password", "displayName"]),
     );
+  });
+
+  it("answers a sign-up for a known address exactly as for a new one [SUG]", async () => {
+    const json = { displayName: "Echo Test", email: "echo@example.test", password: "long-enough-pw", role: "dealer" };
+    const first = await signUpRoute(request("/api/account/sign-up", { json }), noParams);
+    const second = await signUpRoute(
+      request("/api/account/sign-up", { json: { ...json, displayName: "Someone Else", password: "other-long-pw" } }),
+      noParams,
+    );
+    expect(second.status).toBe(first.status);
+    expect(await second.text()).toBe(await first.text());
   });
 
   it("refuses a self-granted house role at sign-up", async () => {

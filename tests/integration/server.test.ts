@@ -26,6 +26,32 @@ describe("socket.io handshake uses the same guard as the routes", () => {
     s.close();
   });
 
+  it("refuses another site's Origin even with a dealer's cookie, and admits the app's own [SUG]", async () => {
+    const dealer = await makeUser(["dealer"]);
+    const cookie = await sessionCookie(dealer);
+    for (const origin of ["https://elsewhere.example", "null"]) {
+      const s = connect(live.url, {
+        path: "/socket.io",
+        transports: ["websocket"],
+        extraHeaders: { cookie, origin },
+        reconnection: false,
+      });
+      const err = await new Promise<Error>((r) => s.on("connect_error", r));
+      expect(err).toBeInstanceOf(Error);
+      expect(s.connected).toBe(false);
+      s.close();
+    }
+    const own = connect(live.url, {
+      path: "/socket.io",
+      transports: ["websocket"],
+      extraHeaders: { cookie, origin: live.url },
+      reconnection: false,
+    });
+    const ready = await new Promise<{ userId: string }>((r) => own.on("session.ready", r));
+    expect(ready.userId).toBe(dealer.id);
+    own.close();
+  });
+
   it("admits a signed-in dealer, tells it who it is, and lets it join only public rooms", async () => {
     const dealer = await makeUser(["dealer"]);
     const s = open(await sessionCookie(dealer));

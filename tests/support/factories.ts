@@ -22,7 +22,14 @@ export async function makeUser(roles: Role[], password = "correct-horse-battery"
 /** A next-auth session cookie for the user, signed with the test secret. */
 export async function sessionCookie(user: User): Promise<string> {
   const token = await encode({
-    token: { uid: user.id, roles: user.roles, email: user.email, name: user.displayName, sub: user.id },
+    token: {
+      uid: user.id,
+      roles: user.roles,
+      sv: user.sessionVersion ?? 0,
+      email: user.email,
+      name: user.displayName,
+      sub: user.id,
+    },
     secret: process.env.NEXTAUTH_SECRET!,
   });
   return `next-auth.session-token=${token}`;

@@ -1,10 +1,9 @@
-// POST /api/account/sign-up — open a consignor or dealer account
+// POST /api/account/sign-up — open a consignor or dealer account (202, the same answer for a known address)
 import { readJson, route } from "@/lib/api/route";
 import { signUp } from "@/lib/services/accounts";
 import { SignUpSchema } from "@/lib/validation/account";
 
 export const POST = route({ public: true }, async ({ req }) => {
   const input = await readJson(req, SignUpSchema);
-  const account = await signUp(input);
-  return Response.json({ account }, { status: 201 });
+  return Response.json(await signUp(input), { status: 202 });
 });
