@@ -300,7 +300,11 @@ export async function recordReturnShipment(
 
 /** Records the processor transfer that repaid the return postage. */
 export async function recordPostageTransfer(id: string, transferId: string, t: Transaction): Promise<void> {
-  await exec(`UPDATE disputes SET postage_transfer_id = :tr, updated_at = now() WHERE id = :id`, { tr: transferId, id }, t);
+  await exec(
+    `UPDATE disputes SET postage_transfer_id = :tr, updated_at = now() WHERE id = :id`,
+    { tr: transferId, id },
+    t,
+  );
 }
 
 /** The consignor's confirmation that the return arrived; false when it was confirmed before. */
@@ -319,12 +323,18 @@ export async function stuckSettling(): Promise<{ id: string }[]> {
   );
 }
 
-/** Returns shipped `days` or more ago whose receipt the consignor has not confirmed. */
-export async function unconfirmedReturns(days: number): Promise<DisputeRow[]> {
+/** Returns shipped at least the sale's receipt-confirmation days ago whose receipt the consignor has not confirmed. */
+export async function unconfirmedReturns(fallbackDays: number): Promise<DisputeRow[]> {
+  // Each case by its own sale's frozen settings (the invoice's version, else the sale's); `fallbackDays` only for a
+  // version document without the figure.
   return select<DisputeRow>(
-    `SELECT ${ALL} FROM disputes WHERE state = 'awaiting-return' AND return_shipped_at IS NOT NULL
-      AND return_shipped_at + (:days || ' days')::interval <= now() LIMIT 20`,
-    { days: String(days) },
+    `SELECT ${columns(DISPUTE_COLUMNS, "d")} FROM disputes d
+       JOIN invoices i ON i.id = d.invoice_id JOIN sale_lots sl ON sl.id = i.sale_lot_id JOIN sales s ON s.id = sl.sale_id
+       JOIN house_settings_versions v ON v.version = COALESCE(i.settings_version, s.settings_version)
+      WHERE d.state = 'awaiting-return' AND d.return_shipped_at IS NOT NULL
+        AND d.return_shipped_at + make_interval(days => COALESCE((v.settings #>> '{claims,receiptConfirmDays}')::int, :days)) <= now()
+      LIMIT 20`,
+    { days: fallbackDays },
   );
 }
 
