@@ -11,7 +11,8 @@ import type { BuyerReport, GradedReading, ListingSide, SideRanking, Verdict } fr
 
 /**
  * Tester-to-tester variation allowed before a lower reading counts against
- * the listing [CTP: roughly ±10–15 %; we take the generous end].
+ * the listing [CTP: roughly ±10–15 %; we take the generous end]. Only the fallback: a claim is weighed with its
+ * sale's frozen `claims.testerTolerancePct`, passed in as `Evidence.tolerancePct`.
  */
 export const TESTER_VARIATION_PCT = 15;
 
@@ -37,6 +38,8 @@ export interface Evidence {
   buyerRanking: SideRanking;
   listingReadings: GradedReading[];
   buyerReadings: GradedReading[];
+  /** Points of "% of new" testers may differ by (the claim's sale's settings). */
+  tolerancePct: number;
 }
 
 /** A judge's answer. */
@@ -118,7 +121,7 @@ function undisclosedVacuumLoss({ listing, report }: Evidence): Judgement {
 }
 
 /** Readings below the listed band by more than testers differ [CTP]. */
-function readingsNotAsListed({ listingReadings, buyerReadings }: Evidence): Judgement {
+function readingsNotAsListed({ listingReadings, buyerReadings, tolerancePct }: Evidence): Judgement {
   const findings: string[] = [];
   let verdict: Verdict = "inconclusive";
   // Like with like: same tube, same measure, both graded on a chart value [CTP].
@@ -138,15 +141,10 @@ function readingsNotAsListed({ listingReadings, buyerReadings }: Evidence): Judg
     }
     if (l.hardFail || l.grade === "reject") continue; // a failure the listing disclosed is not a claim
     const floor = BAND_FLOOR[l.grade];
-    if (
-      floor !== undefined &&
-      floor > 0 &&
-      b.worstPercentOfNew != null &&
-      b.worstPercentOfNew < floor - TESTER_VARIATION_PCT
-    ) {
+    if (floor !== undefined && floor > 0 && b.worstPercentOfNew != null && b.worstPercentOfNew < floor - tolerancePct) {
       worse++;
       findings.push(
-        `Tube ${b.tubeNo}: listed ${l.grade} (${floor} % of new or more); the buyer reads ${b.worstPercentOfNew.toFixed(0)} %, more than ${TESTER_VARIATION_PCT} points below the band.`,
+        `Tube ${b.tubeNo}: listed ${l.grade} (${floor} % of new or more); the buyer reads ${b.worstPercentOfNew.toFixed(0)} %, more than ${tolerancePct} points below the band.`,
       );
     }
   }
@@ -158,7 +156,7 @@ function readingsNotAsListed({ listingReadings, buyerReadings }: Evidence): Judg
   else {
     verdict = "does-not-support";
     findings.push(
-      `${compared} tube reading(s) compared: none falls below its listed band by more than the ${TESTER_VARIATION_PCT} % testers differ by.`,
+      `${compared} tube reading(s) compared: none falls below its listed band by more than the ${tolerancePct} % testers differ by.`,
     );
   }
   return { verdict, findings };

@@ -14,7 +14,7 @@ import { decodeDesignation } from "../valves/designation";
 import type { ReferenceTable } from "../valves/reference-table";
 import { gradeReading } from "../valves/grading";
 import type { DisputeReason } from "./rules";
-import { judge } from "./verdicts";
+import { judge, TESTER_VARIATION_PCT } from "./verdicts";
 import type { BuyerReport, GradedReading, ItemWeighing, ListingSide, SideRanking, Verdict } from "./weigh-types";
 
 export type { BuyerReport, GradedReading, ItemWeighing, ListingSide, SideRanking, Verdict } from "./weigh-types";
@@ -99,7 +99,8 @@ function rank(
 
 /**
  * Weigh one claimed item against the house's reference table. `sourceMakers` are the makers the house's code
- * registry gives for each side's source code (null when absent or unknown).
+ * registry gives for each side's source code (null when absent or unknown). `tolerancePct`: the claim's sale's
+ * tester tolerance (points of "% of new"), read by the caller from the sale's frozen settings.
  */
 export function weighItem(
   table: ReferenceTable,
@@ -108,6 +109,7 @@ export function weighItem(
   report: BuyerReport,
   profiles: readonly ReferenceProfile[],
   sourceMakers: { listing: string | null; buyer: string | null },
+  tolerancePct: number = TESTER_VARIATION_PCT,
 ): ItemWeighing {
   const d = decodeDesignation(table, listing.designation);
   const family = d.ok ? typeFamily(table, d.normalised).key : undefined;
@@ -131,6 +133,7 @@ export function weighItem(
     buyerRanking,
     listingReadings,
     buyerReadings,
+    tolerancePct,
   });
   return {
     position: listing.position,

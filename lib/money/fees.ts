@@ -55,19 +55,16 @@ export interface FeeSchedule {
   buyersPremiumBp: number;
   /** Marginal commission tiers charged to the consignor. */
   commissionTiers: readonly CommissionTier[];
-  /** Flat fee per sold lot charged to the consignor, cents. */
-  lotFeeCents: number;
   /** Sales tax rate, basis points (0 = no tax configured). */
   taxRateBp: number;
   /** Which parts of the invoice the tax applies to. */
   taxBase: TaxBase;
 }
 
-/** Default schedule: 10 % premium, default tiers, no lot fee, no tax configured [SUG]. */
+/** Default schedule: 10 % premium, default tiers, no tax configured [SUG]. */
 export const DEFAULT_FEE_SCHEDULE: FeeSchedule = {
   buyersPremiumBp: DEFAULT_BUYERS_PREMIUM_BP,
   commissionTiers: DEFAULT_COMMISSION_TIERS,
-  lotFeeCents: 0,
   taxRateBp: 0,
   taxBase: { hammer: true, premium: true, shipping: false },
 };

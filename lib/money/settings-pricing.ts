@@ -76,7 +76,6 @@ export function feeScheduleOf(settings: HouseSettings, rule: TaxRule | null): Fe
   return {
     buyersPremiumBp: settings.buyersPremiumBp,
     commissionTiers: settings.commissionTiers,
-    lotFeeCents: settings.lotFeeCents,
     taxRateBp: rule?.rateBp ?? 0,
     taxBase: {
       hammer: rule?.taxHammer ?? false,

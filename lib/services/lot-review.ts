@@ -5,6 +5,7 @@ import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
 import type { AmendmentInput, ReviewDecision } from "../validation/lots";
 import { needsExtraReview } from "../disputes/rules";
+import { currentSettings } from "./house-settings";
 import { consignorRecord } from "./track-record";
 import { db, Lot, LotEvent, LotItem, User } from "../../models";
 import type { LotState } from "../../models/Lot";
@@ -44,7 +45,9 @@ export async function submitLot(viewer: Viewer, lotId: string): Promise<LotView>
     const resubmission = lot!.state === "needs-changes";
     // A consignor with repeated upheld misattribution claims has their next lots reviewed more closely.
     const record = await consignorRecord(viewer.id);
-    const extra = lot!.extraReview || needsExtraReview(record.upheldMisattributionClaims);
+    const { settings } = await currentSettings(t); // the threshold in force now
+    const extra =
+      lot!.extraReview || needsExtraReview(record.upheldMisattributionClaims, settings.claims.extraReviewAfterUpheld);
     await lot!.update({ state: "in-review", submittedAt: new Date(), extraReview: extra }, { transaction: t });
     const note = extra
       ? `Extra review: ${record.upheldMisattributionClaims} upheld misattribution claim(s) on earlier lots`

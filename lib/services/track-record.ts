@@ -1,6 +1,7 @@
 import { QueryTypes } from "sequelize";
 import { needsExtraReview, trackRecord, type TrackRecord } from "../disputes/rules";
 import { db } from "../../models";
+import { currentSettings } from "./house-settings";
 
 /** A consignor's attribution record from sales and decided claims. */
 export async function consignorRecord(consignorId: string): Promise<TrackRecord> {
@@ -24,10 +25,14 @@ export async function consignorRecord(consignorId: string): Promise<TrackRecord>
   });
 }
 
-/** After an upheld misattribution, the consignor's lots awaiting review go to extra review (new ones are flagged on submission). */
+/**
+ * After an upheld misattribution, the consignor's lots awaiting review go to extra review (new ones are flagged on
+ * submission). The threshold is the current settings version's `claims.extraReviewAfterUpheld`: review is the house's
+ * work now, not a sale's frozen terms.
+ */
 export async function flagExtraReview(consignorId: string): Promise<void> {
-  const record = await consignorRecord(consignorId);
-  if (!needsExtraReview(record.upheldMisattributionClaims)) return;
+  const [record, { settings }] = await Promise.all([consignorRecord(consignorId), currentSettings()]);
+  if (!needsExtraReview(record.upheldMisattributionClaims, settings.claims.extraReviewAfterUpheld)) return;
   await db().query(
     `UPDATE lots SET extra_review = true, updated_at = now() WHERE consignor_id = :c AND state IN ('draft','in-review','needs-changes') AND extra_review = false`,
     { replacements: { c: consignorId } },

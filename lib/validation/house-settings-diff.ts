@@ -7,7 +7,6 @@ import type { HouseSettings } from "./house-settings";
 const SECTION_WORDS: Record<keyof HouseSettings, string> = {
   buyersPremiumBp: "Buyer's premium (bp)",
   commissionTiers: "Commission tiers",
-  lotFeeCents: "Lot fee (cents)",
   incrementLadder: "Increment ladder",
   softClose: "Late-bid window",
   inspection: "Inspection",

@@ -75,7 +75,6 @@ export const HouseSettingsSchema = z
   .object({
     buyersPremiumBp: basisPoints("Buyer's premium"),
     commissionTiers: z.array(CommissionTierSchema).min(1, "At least one tier").max(10),
-    lotFeeCents: cents("Lot fee"),
     incrementLadder: z.array(LadderRungSchema).min(1, "At least one rung").max(30),
     softClose: z.object({
       windowSeconds: whole("Late-bid window (s)", 30, 1_800),
@@ -170,7 +169,6 @@ export type HouseSettingsChange = z.infer<typeof HouseSettingsChangeSchema>;
 export const INITIAL_HOUSE_SETTINGS: HouseSettings = {
   buyersPremiumBp: DEFAULT_FEE_SCHEDULE.buyersPremiumBp,
   commissionTiers: DEFAULT_FEE_SCHEDULE.commissionTiers.map((t) => ({ ...t })),
-  lotFeeCents: DEFAULT_FEE_SCHEDULE.lotFeeCents,
   incrementLadder: DEFAULT_INCREMENT_LADDER.map((r) => ({ ...r })),
   softClose: { ...DEFAULT_SOFT_CLOSE },
   inspection: {

@@ -45,12 +45,17 @@ test("the house changes the premium on the settings page; a sale scheduled after
   await house.goto("/house");
   await house.getByRole("link", { name: /House settings/ }).click();
   await expect(house.getByRole("heading", { level: 1 })).toHaveText("House settings");
-  // A negative premium is refused in the form, beside the field.
-  await house.getByLabel("Buyer's premium (basis points)").fill("-100");
+  // The premium is typed in percent (the API keeps basis points: 1 % = 100 bp [SUG]); the version in force shows 10 %.
+  const premium = house.getByLabel("Buyer's premium (%)");
+  await expect(premium).toHaveValue("10");
+  // A negative premium, or more decimals than a basis point holds, is refused in the form, beside the field.
+  await premium.fill("-1");
   await house.getByLabel(/Why the change/).fill("Premium to 12.5 % for trade sales");
   await house.getByRole("button", { name: "Save as a new version" }).click();
-  await expect(house.getByText("Buyer's premium cannot be negative")).toBeVisible();
-  await house.getByLabel("Buyer's premium (basis points)").fill("1250");
+  await expect(house.getByText("Cannot be negative")).toBeVisible();
+  await premium.fill("12.345");
+  await expect(house.getByText("At most two decimals (0.01 % is the smallest step)")).toBeVisible();
+  await premium.fill("12.5");
   await house.getByRole("button", { name: "Save as a new version" }).click();
   await expect(house.getByText(/Saved as version \d+/)).toBeVisible();
   await expect(house.getByRole("region", { name: "History" })).toContainText("Premium to 12.5 % for trade sales");

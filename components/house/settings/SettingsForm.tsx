@@ -22,7 +22,7 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
     mode: "onBlur",
   });
   const { register, handleSubmit, setError, formState, control } = form;
-  const api: SettingsFormApi = { register, errors: formState.errors };
+  const api: SettingsFormApi = { register, errors: formState.errors, control };
   const tiers = useFieldArray({ control, name: "settings.commissionTiers" });
   const ladder = useFieldArray({ control, name: "settings.incrementLadder" });
   const { message, run } = useApiSubmit<HouseSettingsChange>(setError);
@@ -50,8 +50,7 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
 
       <Section title="Buyer's premium and commission">
         <div className="grid gap-3 sm:grid-cols-2">
-          <NumberField api={api} name="settings.buyersPremiumBp" label="Buyer's premium (basis points)" unit="bp" />
-          <NumberField api={api} name="settings.lotFeeCents" label="Lot fee per sold lot (cents)" unit="cents" />
+          <NumberField api={api} name="settings.buyersPremiumBp" label="Buyer's premium (%)" unit="bp" />
         </div>
         <fieldset className="space-y-2">
           <legend className="label">Commission tiers (marginal; the last has no ceiling)</legend>
@@ -60,11 +59,11 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
               <NumberField
                 api={api}
                 name={`settings.commissionTiers.${i}.upToCents`}
-                label={`Tier ${i + 1} up to (cents, empty = no ceiling)`}
+                label={`Tier ${i + 1} up to ($, empty = no ceiling)`}
                 unit="cents"
                 nullable
               />
-              <NumberField api={api} name={`settings.commissionTiers.${i}.rateBp`} label="Rate (bp)" unit="bp" />
+              <NumberField api={api} name={`settings.commissionTiers.${i}.rateBp`} label="Rate (%)" unit="bp" />
               <button
                 type="button"
                 className="btn-quiet"
@@ -91,16 +90,11 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
           <legend className="label">Increment ladder (from each price up, bids rise by the increment)</legend>
           {ladder.fields.map((f, i) => (
             <div key={f.id} className="flex flex-wrap items-end gap-2">
-              <NumberField
-                api={api}
-                name={`settings.incrementLadder.${i}.fromCents`}
-                label={`From (cents)`}
-                unit="cents"
-              />
+              <NumberField api={api} name={`settings.incrementLadder.${i}.fromCents`} label={`From ($)`} unit="cents" />
               <NumberField
                 api={api}
                 name={`settings.incrementLadder.${i}.incrementCents`}
-                label="Increment (cents)"
+                label="Increment ($)"
                 unit="cents"
               />
               <button

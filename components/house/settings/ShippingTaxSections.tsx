@@ -81,12 +81,7 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
           <TextField api={api} name="settings.shipping.sameCountryZone" label="Zone within one country" />
           <TextField api={api} name="settings.shipping.otherZone" label="Zone when no group joins the countries" />
           <NumberField api={api} name="settings.shipping.gramsPerTube" label="Packed weight per tube (g)" />
-          <NumberField
-            api={api}
-            name="settings.shipping.handlingCents"
-            label="Handling per parcel (cents)"
-            unit="cents"
-          />
+          <NumberField api={api} name="settings.shipping.handlingCents" label="Handling per parcel ($)" unit="cents" />
         </div>
         <fieldset className="space-y-2">
           <legend className="label">Weight bands (rate per zone, cents)</legend>
@@ -102,7 +97,7 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
                   key={z}
                   api={api}
                   name={`settings.shipping.bands.${i}.ratesCents.${z}`}
-                  label={`${z} (cents)`}
+                  label={`${z} ($)`}
                   unit="cents"
                 />
               ))}
@@ -180,7 +175,7 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
                 {error ? <p className="field-error">{error}</p> : null}
               </div>
               <TextField api={api} name={`settings.tax.rules.${i}.region`} label="Region (empty = whole country)" />
-              <NumberField api={api} name={`settings.tax.rules.${i}.rateBp`} label="Rate (bp)" unit="bp" />
+              <NumberField api={api} name={`settings.tax.rules.${i}.rateBp`} label="Rate (%)" unit="bp" />
               {(["taxHammer", "taxPremium", "taxShipping"] as const).map((k) => (
                 <label key={k} className="flex items-center gap-1 text-sm">
                   <input type="checkbox" {...api.register(`settings.tax.rules.${i}.${k}`)} />

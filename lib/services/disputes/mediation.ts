@@ -12,6 +12,7 @@ import { weighItem, weighingSummary, type ItemWeighing } from "../../disputes/we
 import { settlePartialRefund, type SaleFigures } from "../../money/refunds";
 import { lookupSourceCode } from "../../valves/source-code";
 import type { RefundPreviewInput } from "../../validation/disputes";
+import { settingsForInvoice } from "../house-settings";
 import { registryEntries } from "../makers";
 import { currentReferenceTable } from "../reference-table";
 import { referenceProfiles } from "../shelf";
@@ -40,7 +41,13 @@ export async function takeCase(viewer: Viewer, id: string): Promise<void> {
 export async function workspace(viewer: Viewer, id: string, read?: CaseView) {
   const c = read ?? (await getCase(viewer, id));
   requireOfficial(c.role, true);
-  const [profiles, registry] = await Promise.all([referenceProfiles(), registryEntries()]);
+  // Testers differ by the tolerance of the claim's sale's frozen settings (the invoice's version, else the sale's).
+  const [profiles, registry, frozen] = await Promise.all([
+    referenceProfiles(),
+    registryEntries(),
+    settingsForInvoice(c.invoiceId),
+  ]);
+  const testerTolerancePct = frozen.claims.testerTolerancePct;
   const makerFor = (code: string | null | undefined) => {
     if (!code) return null;
     const r = lookupSourceCode(code, registry);
@@ -68,6 +75,7 @@ export async function workspace(viewer: Viewer, id: string, read?: CaseView) {
       i.report,
       profiles,
       { listing: makerFor(i.listing.sourceCode), buyer: makerFor(i.report.sourceCode) },
+      testerTolerancePct,
     );
     weighings.push({ ...w, itemId: i.id, tubes: i.tubes });
   }
@@ -75,6 +83,7 @@ export async function workspace(viewer: Viewer, id: string, read?: CaseView) {
   const manifestItems = all.map(asManifestItem);
   return {
     weighings,
+    testerTolerancePct,
     summary: weighingSummary(weighings),
     lines: all.map((i) => ({
       id: i.id,

@@ -2,13 +2,13 @@
 import { ApiError } from "../../api/errors";
 import type { Viewer } from "../../auth/guards";
 import { buildManifest, defaultLineValues } from "../../disputes/manifest";
-import { DISPUTE_SETTINGS } from "../../disputes/rules";
 import { settleLotRejection } from "../../money/refunds";
 import { repayablePostage, returnedCharges, returnPostageEntries } from "../../money/return-refund";
 import { stripe, stripeConfig } from "../../stripe/client";
 import type { ReturnShipmentInput } from "../../validation/disputes";
 import { db } from "../../../models";
 import { payoutAccount } from "../escrow";
+import { settingsForInvoice } from "../house-settings";
 import { post } from "../ledger";
 import { mail, notice } from "./mail";
 import { saleOf } from "./mediation";
@@ -51,10 +51,8 @@ export async function recordReturn(viewer: Viewer, id: string, input: ReturnShip
   });
   const facts = { id: d.id, number: d.number, carrier: input.carrier, tracking: input.tracking };
   await notice(d.consignor_id, returnShippedNotice(facts), casePath(d.id));
-  await mail(
-    d.consignor_id,
-    returnShippedToConsignor({ ...facts, receiptConfirmDays: DISPUTE_SETTINGS.receiptConfirmDays }),
-  );
+  const { claims } = await settingsForInvoice(d.invoice_id); // the sale's frozen settings, as the sweep uses
+  await mail(d.consignor_id, returnShippedToConsignor({ ...facts, receiptConfirmDays: claims.receiptConfirmDays }));
 }
 
 /** Pay the full refund on a returned lot and close the case (the consignor confirmed, or the deadline passed). */

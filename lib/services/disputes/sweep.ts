@@ -17,6 +17,7 @@ export async function disputeSweep(): Promise<number> {
     await settleDecision(s.id).catch((e: Error) => console.error("[disputes] resume failed", e.message));
     n++;
   }
+  // Each case waits the receipt-confirmation days of its own sale's frozen settings version.
   for (const d of await unconfirmedReturns(DISPUTE_SETTINGS.receiptConfirmDays)) {
     await refundReturnedLot(d, "receipt was not confirmed in time").catch((e: Error) =>
       console.error("[disputes] refund failed", e.message),

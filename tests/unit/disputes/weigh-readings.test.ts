@@ -31,6 +31,15 @@ describe("weighItem: readings not as listed [CTP] bands, §8 test disputes", () 
     expect(TESTER_VARIATION_PCT).toBe(15);
   });
 
+  it("the claim's sale's tolerance is passed in: 85 % against strong stands at 10 points, not at 15 [CTP] ±10–15 %", () => {
+    const buyer = report({ readings: [gm(1, [1_360, 1_400])] }); // 1,360 / 1,600 = 85.0 %
+    const at15 = weighItem(SEED, "readings-not-as-listed", strongListing, buyer, PROFILES, noCodes, 15);
+    const at10 = weighItem(SEED, "readings-not-as-listed", strongListing, buyer, PROFILES, noCodes, 10);
+    expect(at15.verdict).toBe("does-not-support");
+    expect(at10.verdict).toBe("supports");
+    expect(at10.findings[0]).toMatch(/more than 10 points below the band/);
+  });
+
   it("listed strong, buyer reads weak → supports, naming the band floor and the buyer's figure", () => {
     const w = weighItem(
       SEED,

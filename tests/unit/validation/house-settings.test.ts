@@ -57,7 +57,12 @@ describe("house settings schema", () => {
 
   it("keeps cents inside the integer column and positive increments [PG-INT] 2,147,483,647", () => {
     expect(MAX_COLUMN_CENTS).toBe(2_147_483_647); // [PG-INT]
-    expect(fieldsOf({ ...clone(), lotFeeCents: MAX_COLUMN_CENTS + 1 })["lotFeeCents"]).toMatch(/largest amount/);
+    expect(fieldsOf({ ...clone(), buyersPremiumBp: 10_001 })["buyersPremiumBp"]).toMatch(/between 0 % and 100 %/);
+    const big = clone();
+    big.shipping.handlingCents = MAX_COLUMN_CENTS + 1;
+    expect(fieldsOf(big)["shipping.handlingCents"]).toMatch(/largest amount/);
+    // A document from before the lot fee was dropped still reads (unknown keys are ignored).
+    expect(HouseSettingsSchema.parse({ ...clone(), lotFeeCents: 0 })).not.toHaveProperty("lotFeeCents");
     const s = clone();
     s.incrementLadder = [{ fromCents: 0, incrementCents: 0 }];
     expect(fieldsOf(s)["incrementLadder.0.incrementCents"]).toMatch(/at least 1 cent/);

@@ -326,12 +326,18 @@ export async function stuckSettling(): Promise<{ id: string }[]> {
   );
 }
 
-/** Returns shipped `days` or more ago whose receipt the consignor has not confirmed. */
-export async function unconfirmedReturns(days: number): Promise<DisputeRow[]> {
+/** Returns shipped at least the sale's receipt-confirmation days ago whose receipt the consignor has not confirmed. */
+export async function unconfirmedReturns(fallbackDays: number): Promise<DisputeRow[]> {
+  // Each case by its own sale's frozen settings (the invoice's version, else the sale's); `fallbackDays` only for a
+  // version document without the figure.
   return select<DisputeRow>(
-    `SELECT ${ALL} FROM disputes WHERE state = 'awaiting-return' AND return_shipped_at IS NOT NULL
-      AND return_shipped_at + (:days || ' days')::interval <= now() LIMIT 20`,
-    { days: String(days) },
+    `SELECT ${columns(DISPUTE_COLUMNS, "d")} FROM disputes d
+       JOIN invoices i ON i.id = d.invoice_id JOIN sale_lots sl ON sl.id = i.sale_lot_id JOIN sales s ON s.id = sl.sale_id
+       JOIN house_settings_versions v ON v.version = COALESCE(i.settings_version, s.settings_version)
+      WHERE d.state = 'awaiting-return' AND d.return_shipped_at IS NOT NULL
+        AND d.return_shipped_at + make_interval(days => COALESCE((v.settings #>> '{claims,receiptConfirmDays}')::int, :days)) <= now()
+      LIMIT 20`,
+    { days: fallbackDays },
   );
 }
 
