@@ -84,7 +84,7 @@ export function ShippingTaxSections({ api, control }: { api: SettingsFormApi; co
           <NumberField api={api} name="settings.shipping.handlingCents" label="Handling per parcel ($)" unit="cents" />
         </div>
         <fieldset className="space-y-2">
-          <legend className="label">Weight bands (rate per zone, cents)</legend>
+          <legend className="label">Weight bands (rate per zone, dollars)</legend>
           {bands.fields.map((f, i) => (
             <div key={f.id} className="flex flex-wrap items-end gap-2 border-t border-flash-100 pt-2">
               <NumberField
