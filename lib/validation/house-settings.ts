@@ -8,7 +8,8 @@ import { DEFAULT_INCREMENT_LADDER } from "../auction/increments";
 import { DEFAULT_SOFT_CLOSE } from "../auction/soft-close";
 import { DISPUTE_SETTINGS } from "../disputes/rules";
 import { DEFAULT_FEE_SCHEDULE } from "../money/fees";
-import { DEFAULT_INSPECTION_SETTINGS, DEFAULT_TESTER_TOLERANCE_PCT } from "../money/inspection";
+import { DEFAULT_INSPECTION_SETTINGS } from "../money/inspection";
+import { TESTER_VARIATION_PCT } from "../disputes/verdicts";
 import { DEFAULT_SHIPPING_TABLE } from "../money/shipping";
 
 /** Largest amount an integer (int4) cents column holds: 2^31 − 1 [PostgreSQL integer type]. */
@@ -182,7 +183,9 @@ export const INITIAL_HOUSE_SETTINGS: HouseSettings = {
     returnShipDays: DISPUTE_SETTINGS.returnShipDays,
     receiptConfirmDays: DISPUTE_SETTINGS.receiptConfirmDays,
     extraReviewAfterUpheld: DISPUTE_SETTINGS.extraReviewAfterUpheld,
-    testerTolerancePct: DEFAULT_TESTER_TOLERANCE_PCT,
+    // The points a buyer's reading may fall below the listed band before a claim weighs against the listing:
+    // the generous end of the 10–15 testers differ by [CTP], as the weighing has always used.
+    testerTolerancePct: TESTER_VARIATION_PCT,
   },
   payment: { dueDays: 7, reminderDaysBefore: 2 },
   shipping: {
