@@ -61,16 +61,25 @@ function shapeMethodNotAllowed(req: http.IncomingMessage, res: http.ServerRespon
     if (res.statusCode === 405 && !res.headersSent && n === 0) return true;
     return write(...args);
   }) as typeof res.write;
+  // Next's compression layer sends the headers itself (through writeHead) before it ends the body, so the
+  // content type is set as the headers go out, and the body is added even when they have already gone.
+  const writeHead = res.writeHead.bind(res) as (...a: unknown[]) => http.ServerResponse;
+  res.writeHead = ((...args: unknown[]) => {
+    if (args[0] === 405) res.setHeader("content-type", "application/json");
+    return writeHead(...args);
+  }) as typeof res.writeHead;
   const end = res.end.bind(res) as (...a: unknown[]) => http.ServerResponse;
   res.end = ((...args: unknown[]) => {
     const chunk = typeof args[0] === "function" ? undefined : args[0];
     const empty = chunk === undefined || chunk === null || (chunk as { length?: number }).length === 0;
-    if (res.statusCode === 405 && empty && !res.headersSent) {
+    if (res.statusCode === 405 && empty) {
       const body = JSON.stringify({
         error: { code: "method_not_allowed", message: `${req.method ?? "This method"} is not supported here` },
       });
-      res.setHeader("content-type", "application/json");
-      res.setHeader("content-length", Buffer.byteLength(body));
+      if (!res.headersSent) {
+        res.setHeader("content-type", "application/json");
+        res.setHeader("content-length", Buffer.byteLength(body));
+      }
       return end(body);
     }
     return end(...args);
