@@ -1,7 +1,7 @@
 // Demo only: helpers shared by the demo's sale and claim stories.
 import type { Viewer } from "../lib/auth/guards";
 import type { Role } from "../lib/auth/roles";
-import type { ItemInput } from "../lib/validation/lots";
+import { BLANK_ITEM, type ItemInput } from "../lib/validation/lots";
 import { User } from "../models";
 
 /** Wait a while (the demo story paces itself; never used in tests). */
@@ -15,20 +15,4 @@ export async function viewer(email: string): Promise<Viewer> {
 }
 
 /** A lot item with the blank fields filled. */
-export const item = (p: Partial<ItemInput>): ItemInput => ({
-  designation: "",
-  quantity: 1,
-  labelBrand: "",
-  makerName: null,
-  makerBasis: "unconfirmed",
-  sourceCode: null,
-  dateCode: null,
-  features: {},
-  condition: "used",
-  vacuumLoss: false,
-  defects: [],
-  hazards: [],
-  readings: [],
-  notes: "",
-  ...p,
-});
+export const item = (p: Partial<ItemInput>): ItemInput => ({ ...BLANK_ITEM, ...p });

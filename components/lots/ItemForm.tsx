@@ -10,6 +10,7 @@ import { apiFetch } from "@/lib/client/api";
 import type { ItemView } from "@/lib/services/lots";
 import {
   BASIS_VALUES,
+  BLANK_ITEM,
   CONDITION_VALUES,
   HAZARD_VALUES,
   ItemSchema,
@@ -20,23 +21,6 @@ import { decodeDesignation } from "@/lib/valves/designation";
 import { hazardsForType } from "@/lib/valves/hazards";
 import type { ReferenceTable } from "@/lib/valves/reference-table";
 import { BASIS_WORDS, CONDITION_WORDS, HAZARD_WORDS } from "./words";
-
-const EMPTY: ItemInput = {
-  designation: "",
-  quantity: 1,
-  labelBrand: "",
-  makerName: null,
-  makerBasis: "unconfirmed",
-  sourceCode: null,
-  dateCode: null,
-  features: {},
-  condition: "used",
-  vacuumLoss: false,
-  defects: [],
-  hazards: [],
-  readings: [],
-  notes: "",
-};
 
 export function toInput(i: ItemView): ItemInput {
   return {
@@ -74,7 +58,7 @@ export function ItemForm({
 }) {
   const { register, control, handleSubmit, formState, setError, setValue } = useForm<ItemInput>({
     resolver: (values, ctx, opts) => zodResolver(ItemSchema)(withoutBlankSections(values), ctx, opts),
-    defaultValues: item ? toInput(item) : EMPTY,
+    defaultValues: item ? toInput(item) : BLANK_ITEM,
   });
   const { message, run } = useApiSubmit<ItemInput>(setError);
   const readings = useFieldArray({ control, name: "readings" });

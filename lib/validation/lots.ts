@@ -80,6 +80,24 @@ export const ItemSchema = z
   });
 export type ItemInput = z.infer<typeof ItemSchema>;
 
+/** A new line before anything is filled in: the item form's starting values, and the base of demo items. */
+export const BLANK_ITEM: ItemInput = {
+  designation: "",
+  quantity: 1,
+  labelBrand: "",
+  makerName: null,
+  makerBasis: "unconfirmed",
+  sourceCode: null,
+  dateCode: null,
+  features: {},
+  condition: "used",
+  vacuumLoss: false,
+  defects: [],
+  hazards: [],
+  readings: [],
+  notes: "",
+};
+
 /** Blank section boxes in a form arrive as undefined: the form drops them before checking. */
 export function withoutBlankSections(values: ItemInput): ItemInput {
   return {
