@@ -8,7 +8,8 @@ import { DISPUTE_SETTINGS } from "../../disputes/rules";
 import { release } from "../escrow";
 import { refundReturnedLot } from "./returns";
 import { settleDecision } from "./settle";
-import { closeDispute, overdueReturns, stuckSettling, unconfirmedReturns } from "./tables/disputes";
+import { closeDispute } from "./tables/disputes";
+import { overdueReturns, stuckSettling, unconfirmedReturns } from "./tables/sweep-queries";
 
 /** One pass of the sweep; the number of cases it moved. */
 export async function disputeSweep(): Promise<number> {
