@@ -26,6 +26,27 @@ function flatten(value: unknown, path: string, out: Map<string, string>): void {
   }
 }
 
+const UNIT_WORDS: Record<string, string> = {
+  bp: "(bp)",
+  cents: "($ in cents)",
+  pct: "(%)",
+  days: "(days)",
+  hours: "(hours)",
+  seconds: "(seconds)",
+  grams: "(g)",
+};
+
+/** One step of a settings path in words: `rateBp` → "rate (bp)", a list index 0 → "1". */
+function stepWords(step: string): string {
+  if (/^\d+$/.test(step)) return String(Number(step) + 1);
+  const words = step
+    .replace(/([a-z0-9])([A-Z])/g, "$1 $2")
+    .toLowerCase()
+    .split(" ");
+  const unit = UNIT_WORDS[words[words.length - 1]!];
+  return unit && words.length > 1 ? `${words.slice(0, -1).join(" ")} ${unit}` : words.join(" ");
+}
+
 /** One line per changed leaf, labelled by its section, in a stable order; empty when nothing changed. */
 export function settingsChanges(before: HouseSettings, after: HouseSettings): string[] {
   const a = new Map<string, string>();
@@ -40,7 +61,7 @@ export function settingsChanges(before: HouseSettings, after: HouseSettings): st
     if (was === now) continue;
     const [section, ...rest] = key.split(".");
     const label = SECTION_WORDS[section as keyof HouseSettings] ?? section;
-    const where = rest.length ? `${label} ${rest.join(".")}` : label;
+    const where = rest.length ? `${label} · ${rest.map(stepWords).join(" ")}` : label;
     lines.push(`${where}: ${was ?? "—"} → ${now ?? "—"}`);
   }
   return lines;

@@ -106,14 +106,14 @@ describe("settings changes for the history", () => {
     expect(settingsChanges(a, b)).toEqual([]);
     b.buyersPremiumBp = 1_500;
     b.payment.dueDays = 10;
-    expect(settingsChanges(a, b)).toEqual(["Buyer's premium (bp): 1000 → 1500", "Payment terms dueDays: 7 → 10"]);
+    expect(settingsChanges(a, b)).toEqual(["Buyer's premium (bp): 1000 → 1500", "Payment terms · due (days): 7 → 10"]);
     const c = clone();
     c.shipping.groups = [{ name: "North", zone: "near", countries: ["US", "CA"] }];
     expect(settingsChanges(a, c)).toEqual([
-      "Shipping groups.0.countries.0: — → US",
-      "Shipping groups.0.countries.1: — → CA",
-      "Shipping groups.0.name: — → North",
-      "Shipping groups.0.zone: — → near",
+      "Shipping · groups 1 countries 1: — → US",
+      "Shipping · groups 1 countries 2: — → CA",
+      "Shipping · groups 1 name: — → North",
+      "Shipping · groups 1 zone: — → near",
     ]);
   });
 });
