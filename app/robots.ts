@@ -17,6 +17,7 @@ export const PRIVATE_PATHS = [
   "/want-lists",
   "/forgot-password",
   "/reset-password",
+  "/confirm-email",
   "/forbidden",
 ];
 

@@ -18,6 +18,11 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare disabledAt: CreationOptional<Date | null>;
   /** Bumped on sign-out and password change; a JWT carrying an older one no longer signs anyone in. */
   declare sessionVersion: CreationOptional<number>;
+  /** Null until a self-service account opens the link e-mailed at sign-up; such an account cannot sign in. */
+  declare emailConfirmedAt: CreationOptional<Date | null>;
+  /** SHA-256 of the latest confirmation link's token, and when that link stops working. */
+  declare confirmTokenHash: CreationOptional<string | null>;
+  declare confirmExpiresAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -51,6 +56,9 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         },
         disabledAt: { type: DataTypes.DATE, allowNull: true },
         sessionVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        emailConfirmedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: DataTypes.NOW },
+        confirmTokenHash: { type: DataTypes.STRING(64), allowNull: true, unique: true },
+        confirmExpiresAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { safeCallbackPath } from "@/lib/auth/callback";
-import { SignInSchema, type SignInInput } from "@/lib/validation/account";
+import { SignInSchema, UNCONFIRMED_MESSAGE, type SignInInput } from "@/lib/validation/account";
 import { Field, FormAlert } from "./Field";
 
 /**
@@ -33,6 +33,7 @@ export function SignInForm({ from }: { from?: string }) {
     const body = (await res.json().catch(() => ({}))) as { url?: string; error?: { message?: string } };
     if (res.status === 429) return setProblem(body.error?.message ?? "Too many attempts; wait a while and try again.");
     const url = body.url ? new URL(body.url, window.location.origin) : null;
+    if (url?.searchParams.get("error") === "unconfirmed") return setProblem(UNCONFIRMED_MESSAGE);
     if (!res.ok || !url || url.searchParams.get("error")) {
       return setProblem("That e-mail and password do not match an account. Check both, or reset your password.");
     }

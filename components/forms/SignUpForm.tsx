@@ -1,7 +1,7 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
+import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/client/api";
 import { SignUpSchema, type SignUpInput } from "@/lib/validation/account";
@@ -9,45 +9,34 @@ import { Field, FormAlert } from "./Field";
 import { useApiSubmit } from "./useApiSubmit";
 
 export function SignUpForm() {
-  const router = useRouter();
-  const { register, handleSubmit, formState, setError } = useForm<SignUpInput>({
+  const [sent, setSent] = useState<string | null>(null);
+  const { register, handleSubmit, formState, setError, reset } = useForm<SignUpInput>({
     resolver: zodResolver(SignUpSchema),
     defaultValues: { role: "dealer" },
   });
-  const { message, setMessage, run } = useApiSubmit<SignUpInput>(setError);
+  const { message, run } = useApiSubmit<SignUpInput>(setError);
 
   async function onSubmit(values: SignUpInput) {
-    if (
-      !(await run(async () => {
-        await apiFetch("/api/account/sign-up", { json: values });
-      }))
-    )
-      return;
-    const csrf = await fetch("/api/auth/csrf").then((r) => r.json() as Promise<{ csrfToken: string }>);
-    const signedIn = await fetch("/api/auth/callback/credentials", {
-      method: "POST",
-      headers: { "content-type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({
-        email: values.email,
-        password: values.password,
-        csrfToken: csrf.csrfToken,
-        json: "true",
-      }),
-    }).then(
-      async (r) =>
-        r.ok &&
-        !new URL(((await r.json()) as { url?: string }).url ?? "/?error=1", location.href).searchParams.has("error"),
+    // The same answer for every address (the server's words): the account opens from the e-mailed link.
+    const ok = await run(async () => {
+      const answer = await apiFetch<{ message: string }>("/api/account/sign-up", { json: values });
+      setSent(answer.message);
+    });
+    if (ok) reset({ role: values.role, displayName: "", email: "", password: "" });
+  }
+
+  if (sent) {
+    return (
+      <div className="space-y-3" data-testid="sign-up-sent">
+        <FormAlert tone="sound">{sent}</FormAlert>
+        <p className="text-sm text-flash-700">
+          No e-mail after a few minutes? Look in the spam folder, or sign up again with the same address for a new link.
+        </p>
+        <button type="button" className="btn-quiet" onClick={() => setSent(null)}>
+          Use another address
+        </button>
+      </div>
     );
-    if (!signedIn) {
-      // The address already had an account (its owner has been told): the answer says no more than that.
-      setMessage({
-        tone: "sound",
-        text: "Check your e-mail. If this address already has an account, sign in or reset your password.",
-      });
-      return;
-    }
-    router.push(values.role === "dealer" ? "/dealer" : "/consignor");
-    router.refresh();
   }
 
   const e = formState.errors;

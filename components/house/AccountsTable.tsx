@@ -17,7 +17,14 @@ import { useState } from "react";
 import { ROLES, ROLE_LABEL, type Role } from "@/lib/auth/roles";
 import { apiFetch } from "@/lib/client/api";
 
-type Account = { id: string; email: string; displayName: string; roles: Role[]; createdAt: string };
+type Account = {
+  id: string;
+  email: string;
+  displayName: string;
+  roles: Role[];
+  createdAt: string;
+  addressConfirmed: boolean;
+};
 
 const features = tableFeatures({
   rowSortingFeature,
@@ -67,7 +74,17 @@ export function AccountsTable({ selfId }: { selfId: string }) {
   const columns = helper.columns([
     helper.accessor("displayName", { header: "Name", sortFn: "alphanumeric" }),
     helper.accessor("email", { header: "E-mail", sortFn: "alphanumeric" }),
-    helper.accessor("createdAt", { header: "Joined", cell: (c) => c.getValue().slice(0, 10) }),
+    helper.accessor("createdAt", {
+      header: "Joined",
+      cell: (c) => (
+        <>
+          {c.getValue().slice(0, 10)}
+          {c.row.original.addressConfirmed ? null : (
+            <span className="block text-xs text-flash-600">waiting for the e-mailed link</span>
+          )}
+        </>
+      ),
+    }),
     helper.display({
       id: "roles",
       header: "Roles",

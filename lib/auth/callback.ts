@@ -8,7 +8,7 @@ export function safeCallbackPath(raw: string | null | undefined): string | null 
   const path = raw;
   if (!path.startsWith("/") || path.startsWith("//") || path.includes("\\") || /[\u0000-\u001f]/.test(path))
     return null;
-  if (/^\/(sign-in|sign-up|forgot-password|reset-password|api\/)/.test(path)) return null;
+  if (/^\/(sign-in|sign-up|forgot-password|reset-password|confirm-email|api\/)/.test(path)) return null;
   return path;
 }
 

@@ -36,6 +36,8 @@ export function authOptions(): NextAuthOptions {
             };
           } catch (e) {
             if (e instanceof ApiError && e.code === "invalid_credentials") return null;
+            // next-auth answers a thrown error with "?error=<message>": the form words this one for the owner.
+            if (e instanceof ApiError && e.details?.reason === "unconfirmed") throw new Error("unconfirmed");
             throw e;
           }
         },

@@ -1,13 +1,13 @@
 import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
-import { Op, UniqueConstraintError } from "sequelize";
+import { Op } from "sequelize";
 import { db, PasswordResetToken, SignInAttempt, User } from "../../models";
 import { ApiError } from "../api/errors";
 import { throttleDecision, SIGN_IN_WINDOW_MS } from "../auth/rate-limit";
 import type { Role } from "../auth/roles";
 import { env } from "../config/env";
 import { sendMail } from "../mail/mailer";
-import type { ResetConfirmInput, SignInInput, SignUpInput } from "../validation/account";
+import { UNCONFIRMED_MESSAGE, type ResetConfirmInput, type SignInInput } from "../validation/account";
 
 const BCRYPT_ROUNDS = 11;
 const RESET_TTL_MS = 60 * 60 * 1000;
@@ -15,7 +15,15 @@ let dummy: Promise<string> | undefined;
 const dummyHash = () => (dummy ??= bcrypt.hash("no-such-account", BCRYPT_ROUNDS));
 
 /** What the rest of the app may know about a person (never the hash). */
-export type AccountView = { id: string; email: string; displayName: string; roles: Role[]; createdAt: string };
+export type AccountView = {
+  id: string;
+  email: string;
+  displayName: string;
+  roles: Role[];
+  createdAt: string;
+  /** False while a self-service account waits for its owner to follow the sign-up link. */
+  addressConfirmed: boolean;
+};
 
 /** What sign-in puts in the JWT besides the account: the session version it was issued under. */
 export type SignedInAccount = AccountView & { sessionVersion: number };
@@ -27,44 +35,11 @@ export function presentAccount(u: User): AccountView {
     displayName: u.displayName,
     roles: [...u.roles],
     createdAt: u.createdAt.toISOString(),
+    addressConfirmed: Boolean(u.emailConfirmedAt),
   };
 }
 
 export const hashPassword = (plain: string) => bcrypt.hash(plain, BCRYPT_ROUNDS);
-
-/** What every valid sign-up answers, whether or not the address already had an account. */
-export const SIGN_UP_ANSWER = {
-  ok: true,
-  message: "If the address was new, the account is open. If it already had one, its owner has been e-mailed.",
-} as const;
-
-/**
- * Sign-up as consignor or dealer. Reveals nothing: an address that already has an account gets the same
- * answer (and about the same time: the password is hashed either way), and its owner an e-mail saying someone
- * tried to sign up with it. The notice is sent after the answer, so a slow mail server does not tell either.
- */
-export async function signUp(input: SignUpInput): Promise<typeof SIGN_UP_ANSWER> {
-  db();
-  const passwordHash = await hashPassword(input.password);
-  try {
-    await User.create({ email: input.email, displayName: input.displayName, passwordHash, roles: [input.role] });
-  } catch (e) {
-    if (!(e instanceof UniqueConstraintError)) throw e;
-    const owner = await User.findOne({ where: { email: input.email.trim().toLowerCase() } });
-    if (owner)
-      void signUpNotice(owner).catch((err: Error) => console.error("[mail] sign-up notice failed", err.message));
-  }
-  return SIGN_UP_ANSWER;
-}
-
-async function signUpNotice(owner: User): Promise<void> {
-  const base = env().NEXTAUTH_URL;
-  await sendMail({
-    to: owner.email,
-    subject: "Someone tried to open a Getterline account with your address",
-    text: `Hello ${owner.displayName},\n\nSomeone tried to sign up for Getterline with this e-mail address, which already has an account. Nothing was changed and no new account was opened.\n\nIf it was you, sign in at ${base}/sign-in, or reset your password at ${base}/forgot-password.\nIf it was not you, you need do nothing.\n\nGetterline Exchange`,
-  });
-}
 
 /**
  * Refuse (429, with Retry-After) while an account or an address is over its
@@ -98,8 +73,11 @@ export async function authenticate(input: SignInInput, ip: string): Promise<Sign
   const user = await User.findOne({ where: { email } });
   // Compare against a dummy hash when the account is missing so timing does not reveal it.
   const ok = await bcrypt.compare(input.password, user?.passwordHash ?? (await dummyHash()));
-  const succeeded = Boolean(user && ok && !user.disabledAt);
+  const succeeded = Boolean(user && ok && !user.disabledAt && user.emailConfirmedAt);
   await SignInAttempt.create({ email, ip, succeeded });
+  // Only someone who knows the password learns that the account waits for its address to be confirmed.
+  if (user && ok && !user.disabledAt && !user.emailConfirmedAt)
+    throw new ApiError("forbidden", UNCONFIRMED_MESSAGE, undefined, undefined, { reason: "unconfirmed" });
   if (!succeeded || !user)
     throw new ApiError("invalid_credentials", "That e-mail and password do not match an account");
   return { ...presentAccount(user), sessionVersion: user.sessionVersion };
@@ -160,9 +138,11 @@ export async function confirmPasswordReset(input: ResetConfirmInput): Promise<vo
     });
     if (!row) throw new ApiError("gone", "This reset link has expired or was already used. Ask for a new one.");
     // A new password ends every session: a copied token from before stops working.
-    await User.update(
-      { passwordHash: await hashPassword(input.password) },
-      { where: { id: row.userId }, transaction: t },
+    // The link came to the account's mailbox, so following it confirms the address too.
+    const user = await User.findByPk(row.userId, { transaction: t, lock: t.LOCK.UPDATE });
+    await user!.update(
+      { passwordHash: await hashPassword(input.password), emailConfirmedAt: user!.emailConfirmedAt ?? new Date() },
+      { transaction: t },
     );
     await User.increment("sessionVersion", { by: 1, where: { id: row.userId }, transaction: t });
     await row.update({ usedAt: new Date() }, { transaction: t });

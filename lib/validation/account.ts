@@ -11,6 +11,10 @@ export const SignUpSchema = z.object({
 });
 export type SignUpInput = z.infer<typeof SignUpSchema>;
 
+/** What sign-in tells the owner of an account whose address is not confirmed yet (service and form). */
+export const UNCONFIRMED_MESSAGE =
+  "Confirm your e-mail address first: open the link we sent when you signed up. To get a new link, sign up again with the same address.";
+
 /** Shared by the sign-in form and the credentials check. */
 export const SignInSchema = z.object({
   email: z.email("Enter a valid e-mail address").max(254),
@@ -31,6 +35,17 @@ export const ResetConfirmSchema = z
   })
   .refine((v) => v.password === v.confirm, { message: "The two passwords differ", path: ["confirm"] });
 export type ResetConfirmInput = z.infer<typeof ResetConfirmSchema>;
+
+/** Shared by the confirm-address page and POST /api/account/confirm-email. */
+export const ConfirmEmailSchema = z.object({
+  token: z
+    .string()
+    .regex(
+      /^[\w-]{20,200}$/,
+      "This page needs the link from the e-mail, whole. To get a new one, sign up again with the same address.",
+    ),
+});
+export type ConfirmEmailInput = z.infer<typeof ConfirmEmailSchema>;
 
 /** Shared by the house's user table and PATCH /api/admin/users/:id. */
 export const RolesUpdateSchema = z.object({

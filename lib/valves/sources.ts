@@ -71,6 +71,13 @@ export const SOURCES: readonly SourceEntry[] = [
     kind: "publication",
   },
   {
+    tag: "OWASP-AUTH",
+    title: "Authentication and account enumeration",
+    publication:
+      'OWASP Cheat Sheet Series, Authentication Cheat Sheet, "Authentication and Error Messages" (the same answer whether or not an account exists, account creation included).',
+    kind: "publication",
+  },
+  {
     tag: "UAX-9",
     title: "Unicode bidirectional algorithm",
     publication:

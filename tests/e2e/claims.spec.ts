@@ -2,7 +2,7 @@ import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import pg from "pg";
 import sharp from "sharp";
-import { DEMO, payWithTestCard, shipAndDeliver, signedInPage } from "./helpers";
+import { DEMO, openAccount, payWithTestCard, shipAndDeliver, signedInPage } from "./helpers";
 
 const DB = process.env.E2E_DATABASE_URL ?? "postgres://app@127.0.0.1:54329/getterline_e2e";
 const SHOTS = process.env.SHOTS_DIR; // set to keep screenshots of the pages for review
@@ -37,13 +37,12 @@ test("an estate lists a box, a dealer wins, pays and receives it, claims misattr
   // An estate opens a consignor account and lists the box.
   const estate = await (await browser.newContext()).newPage();
   const email = `hollis-estate-${Date.now()}@example.test`;
-  await estate.goto("/sign-up");
-  await estate.getByLabel(/Consign valves/).check();
-  await estate.getByLabel("Name or business name").fill("Estate of Marek Lindqvist-Oyelaran");
-  await estate.getByLabel("E-mail").fill(email);
-  await estate.getByLabel("Password").fill("a-long-password");
-  await estate.getByRole("button", { name: "Open account" }).click();
-  await expect(estate).toHaveURL(/\/consignor$/);
+  await openAccount(estate, {
+    role: "consignor",
+    name: "Estate of Marek Lindqvist-Oyelaran",
+    email,
+    password: "a-long-password",
+  });
   await estate.getByRole("link", { name: "Start a lot" }).click();
   const title = `Estate box ${Date.now().toString(36)}`;
   await estate.getByLabel("Title").fill(title);

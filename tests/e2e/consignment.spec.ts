@@ -1,6 +1,6 @@
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import sharp from "sharp";
-import { DEMO, signIn } from "./helpers";
+import { DEMO, openAccount, signIn } from "./helpers";
 
 const HEADER = "designation,qty,label,condition,measure,section_1,section_2,chart_new";
 // Readings are invented demo data; 1,600 µmho is the 12AX7's registered Gm [REG ✓], used as the chart value.
@@ -40,13 +40,12 @@ test("a consignor lists a box, the house asks for a change and approves, a deale
   // A new consignor opens an account.
   const consignor = await (await browser.newContext()).newPage();
   const email = `estate-${Date.now()}@example.test`;
-  await consignor.goto("/sign-up");
-  await consignor.getByLabel(/Consign valves/).check();
-  await consignor.getByLabel("Name or business name").fill("Estate of Wren Hollis");
-  await consignor.getByLabel("E-mail").fill(email);
-  await consignor.getByLabel("Password").fill("a-long-password");
-  await consignor.getByRole("button", { name: "Open account" }).click();
-  await expect(consignor).toHaveURL(/\/consignor$/);
+  await openAccount(consignor, {
+    role: "consignor",
+    name: "Estate of Wren Hollis",
+    email,
+    password: "a-long-password",
+  });
 
   await consignor.getByRole("link", { name: "Start a lot" }).click();
   await consignor.getByLabel("Title").fill("Workshop box: 32 small-signal valves");

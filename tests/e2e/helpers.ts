@@ -29,6 +29,44 @@ export async function signedInPage(browser: Browser, email: string): Promise<Pag
   return page;
 }
 
+/** The mail catcher's messages to one address, newest first (the e2e services' port). */
+export async function mailTo(to: string): Promise<{ subject: string; text: string }[]> {
+  return (await (await fetch(`http://127.0.0.1:2580/api/messages?to=${encodeURIComponent(to)}`)).json()) as {
+    subject: string;
+    text: string;
+  }[];
+}
+
+/**
+ * A new account opened the way a person opens one: the sign-up form (which signs nobody in), the link e-mailed
+ * to the address, the confirm button, then sign-in. Leaves the page on the account's desk.
+ */
+export async function openAccount(
+  page: Page,
+  a: { role: "dealer" | "consignor"; name: string; email: string; password: string },
+): Promise<void> {
+  await page.goto("/sign-up");
+  await page.getByLabel(a.role === "dealer" ? /Buy as a dealer/ : /Consign valves/).check();
+  await page.getByLabel("Name or business name").fill(a.name);
+  await page.getByLabel("E-mail").fill(a.email);
+  await page.getByLabel("Password").fill(a.password);
+  await page.getByRole("button", { name: "Open account" }).click();
+  await expect(page.getByTestId("sign-up-sent")).toContainText("Check your e-mail");
+  let link = "";
+  await expect
+    .poll(async () => {
+      const mail = (await mailTo(a.email)).find((m) => m.subject.startsWith("Confirm your e-mail address"));
+      link = mail?.text.match(/https?:\/\/\S+\/confirm-email\?token=[\w-]+/)?.[0] ?? "";
+      return link;
+    })
+    .not.toBe("");
+  await page.goto(link.replace(/^https?:\/\/[^/]+/, ""));
+  await page.getByRole("button", { name: "Confirm my address" }).click();
+  await expect(page.getByRole("main").getByRole("status")).toContainText("Your address is confirmed");
+  await signIn(page, a.email, a.password);
+  await expect(page).toHaveURL(a.role === "dealer" ? /\/dealer$/ : /\/consignor$/);
+}
+
 /** Fills the card form on an open invoice page with the fake's always-approved test card. */
 export async function fillTestCard(page: Page, number = "4242 4242 4242 4242"): Promise<void> {
   await page.getByLabel("Card number").fill(number);

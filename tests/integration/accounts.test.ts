@@ -1,15 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { ApiError } from "../../lib/api/errors";
 import { ACCOUNT_MAX_FAILURES } from "../../lib/auth/rate-limit";
-import {
-  authenticate,
-  confirmPasswordReset,
-  requestPasswordReset,
-  setRoles,
-  signUp,
-} from "../../lib/services/accounts";
-import { User } from "../../models";
-import { inbox, makeUser, waitForMail, waitForSubject } from "../support/factories";
+import { authenticate, confirmPasswordReset, requestPasswordReset, setRoles } from "../../lib/services/accounts";
+import { makeUser, waitForMail } from "../support/factories";
 
 const code = async (p: Promise<unknown>) => {
   try {
@@ -21,42 +14,6 @@ const code = async (p: Promise<unknown>) => {
 };
 
 describe("accounts service (real PostgreSQL)", () => {
-  it("signs up a dealer with a bcrypt hash; a second sign-up with the address answers the same and mails its owner [SUG]", async () => {
-    const a = await signUp({
-      displayName: "Quill Test",
-      email: "Signup@Example.test",
-      password: "long-enough-pw",
-      role: "dealer",
-    });
-    const row = await User.findOne({ where: { email: "signup@example.test" } });
-    expect(row!.roles).toEqual(["dealer"]);
-    expect(row!.passwordHash).toMatch(/^\$2[aby]\$11\$/);
-    expect(a).not.toHaveProperty("passwordHash");
-    expect(a).not.toHaveProperty("id");
-    const again = await signUp({
-      displayName: "Again",
-      email: "signup@example.test",
-      password: "another-long-pw",
-      role: "consignor",
-    });
-    expect(again).toEqual(a);
-    const notice = await waitForSubject("signup@example.test", /Someone tried to open a Getterline account/);
-    expect(notice.text).toContain("already has an account");
-    // Nothing about the account changed.
-    const after = await User.findOne({ where: { email: "signup@example.test" } });
-    expect(after!.displayName).toBe("Quill Test");
-    expect(after!.passwordHash).toBe(row!.passwordHash);
-    expect(await User.count({ where: { email: "signup@example.test" } })).toBe(1);
-    // A new address gets no such mail.
-    await signUp({
-      displayName: "Fresh Test",
-      email: "fresh-signup@example.test",
-      password: "long-enough-pw",
-      role: "consignor",
-    });
-    expect((await inbox("fresh-signup@example.test")).length).toBe(0);
-  });
-
   it("rejects a wrong password and then throttles the account on the tenth attempt", async () => {
     const u = await makeUser(["dealer"]);
     expect(await code(authenticate({ email: u.email, password: "wrong" }, "10.0.0.1"))).toBe("invalid_credentials");

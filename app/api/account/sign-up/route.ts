@@ -1,6 +1,6 @@
-// POST /api/account/sign-up — open a consignor or dealer account (202, the same answer for a known address)
+// POST /api/account/sign-up — open a consignor or dealer account that waits for its e-mailed link (202, the same answer for a known address)
 import { readJson, route } from "@/lib/api/route";
-import { signUp } from "@/lib/services/accounts";
+import { signUp } from "@/lib/services/sign-up";
 import { SignUpSchema } from "@/lib/validation/account";
 
 export const POST = route({ public: true }, async ({ req }) => {
