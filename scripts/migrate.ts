@@ -1,4 +1,5 @@
-// Database CLI: node --import tsx scripts/migrate.ts up|down|seed|reset|fresh
+// Database CLI: node --import tsx scripts/migrate.ts up|down|seed|reset|fresh (development, demo, tests), or compiled
+// by scripts/build-migrate.mjs: node dist/migrate.js up|down|seed|reset|fresh (production: npm run db:migrate).
 // Creates the database named in DATABASE_URL when it does not exist yet.
 import { loadEnvConfig } from "@next/env";
 loadEnvConfig(process.cwd());
