@@ -100,7 +100,7 @@ export function InvoiceView({ initial, house }: { initial: Invoice; house: boole
           ) : null}
         </tbody>
       </table>
-      <InvoiceAddresses buyer={inv.addresses.buyer} origin={inv.addresses.origin} />
+      <InvoiceAddresses house={inv.addresses.house} buyer={inv.addresses.buyer} origin={inv.addresses.origin} />
       {inv.unexpectedCharges.map((u, i) => (
         <p key={i} data-testid="unexpected-refund" className="card text-sm">
           A further payment of <span className="code">{formatCents(u.amountCents)}</span> was not owed on this invoice.{" "}

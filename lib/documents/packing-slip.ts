@@ -8,6 +8,8 @@ export type PackingDoc = {
   saleTitle: string;
   buyerName: string;
   shipTo: AddressBlock;
+  /** The house as sender: where the paperwork comes from and where questions about the parcel go. */
+  from: AddressBlock;
   preparedAt: string;
   /** One line per type and condition, in the lot's order. */
   lines: { designation: string; condition: string; tubes: number }[];
@@ -16,7 +18,10 @@ export type PackingDoc = {
 
 export function packingSlipPdf(p: PackingDoc): Promise<Buffer> {
   return renderPdf({ title: `Packing slip ${p.invoiceNumber}`, subtitle: p.lotTitle }, (doc) => {
-    addresses(doc, [{ caption: "Ship to", block: p.shipTo }]);
+    addresses(doc, [
+      { caption: "From", block: p.from },
+      { caption: "Ship to", block: p.shipTo },
+    ]);
     facts(doc, [
       ["Invoice", p.invoiceNumber],
       ["Buyer", p.buyerName],

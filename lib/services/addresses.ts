@@ -6,7 +6,9 @@ import { QueryTypes, type Transaction } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
 import { addressBlock, AddressSchema, type Address, type AddressBlock } from "../validation/address";
+import { houseBlock } from "../validation/house-details";
 import { db, UserAddress } from "../../models";
+import { settingsForInvoice } from "./house-settings";
 
 /** A person's address, or null when they have not given one. */
 export async function addressOf(userId: string, t?: Transaction): Promise<Address | null> {
@@ -53,4 +55,12 @@ export async function invoiceAddresses(invoiceId: string): Promise<InvoiceAddres
   );
   if (!row) throw new ApiError("not_found", "No such invoice");
   return invoiceAddressBlocks(row);
+}
+
+/**
+ * The house as the sender on an invoice's papers: its details in the settings version the invoice follows (its own,
+ * else the one frozen on its sale), so a later change of the house's address leaves a sale's papers as they were.
+ */
+export async function invoiceHouseBlock(invoiceId: string, t?: Transaction): Promise<NonNullable<AddressBlock>> {
+  return houseBlock((await settingsForInvoice(invoiceId, t)).house);
 }

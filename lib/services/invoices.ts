@@ -8,9 +8,10 @@ import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
 import { invoiceIssuedEntries } from "../money/ledger";
 import { lotShippingCents, priceSoldLot } from "../money/settings-pricing";
+import type { AddressBlock } from "../validation/address";
 import { INITIAL_HOUSE_SETTINGS } from "../validation/house-settings";
 import { db, User } from "../../models";
-import { addressOf, invoiceAddressBlocks } from "./addresses";
+import { addressOf, invoiceAddressBlocks, invoiceHouseBlock } from "./addresses";
 import { settingsVersion } from "./house-settings";
 import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
 import { post } from "./ledger";
@@ -135,14 +136,15 @@ export async function getInvoice(viewer: Viewer, invoiceId: string) {
   );
   const house = viewer.roles.includes("admin");
   if (!inv) throw new ApiError("not_found", "No such invoice");
-  if (house || inv.buyer_id === viewer.id || inv.consignor_id === viewer.id) return presentInvoice(inv, viewer);
+  const from = await invoiceHouseBlock(invoiceId);
+  if (house || inv.buyer_id === viewer.id || inv.consignor_id === viewer.id) return presentInvoice(inv, viewer, from);
   // A mediator reads (never changes) the invoice of a case they mediate; any other invoice stays hidden.
   if (can(viewer.roles, "disputes.mediate") && inv.dispute_id) {
     const [mediated] = await db().query(`SELECT 1 FROM disputes WHERE id = :d AND mediator_id = :me`, {
       replacements: { d: inv.dispute_id, me: viewer.id },
       type: QueryTypes.SELECT,
     });
-    if (mediated) return { ...presentInvoice(inv, viewer), readOnly: true as const };
+    if (mediated) return { ...presentInvoice(inv, viewer, from), readOnly: true as const };
   }
   throw new ApiError("not_found", "No such invoice");
 }
@@ -158,6 +160,8 @@ export function presentInvoice(
     unexpected?: UnexpectedOnInvoice[];
   },
   viewer: Viewer,
+  /** The house as sender (its details in the invoice's settings version); lists leave it out. */
+  from: AddressBlock | null = null,
 ) {
   const buyerView = viewer.roles.includes("admin") || inv.buyer_id === viewer.id;
   return {
@@ -193,7 +197,7 @@ export function presentInvoice(
     commissionReturnedCents: buyerView && !viewer.roles.includes("admin") ? undefined : inv.commission_returned_cents,
     disputeId: inv.dispute_id ?? null,
     // The consignor sees where the lot goes (they ship it); the buyer sees where it comes from.
-    addresses: shownAddresses(inv, viewer),
+    addresses: { ...shownAddresses(inv, viewer), house: from },
     unexpectedCharges: buyerView ? (inv.unexpected ?? []) : [],
   };
 }

@@ -1,11 +1,12 @@
 /**
  * A shipping address kept by a buyer or consignor (shared by the address form and PUT /api/account/address).
  * Countries are ISO 3166-1 alpha-2 codes checked against the i18n-iso-countries package, never a list typed here;
- * lines and postal codes are bounded.
+ * lines and postal codes are bounded, control characters stripped as from any one-line text.
  */
 import countries from "i18n-iso-countries";
 import en from "i18n-iso-countries/langs/en.json";
 import { z } from "zod";
+import { lineText } from "./text";
 
 countries.registerLocale(en);
 
@@ -21,12 +22,8 @@ export function countryName(code: string): string {
   return countries.getName(code, "en", { select: "official" }) ?? code;
 }
 
-const line = (label: string, max: number) =>
-  z
-    .string()
-    .trim()
-    .max(max, `${label}: at most ${max} characters`)
-    .regex(/^[^\p{Cc}]*$/u, `${label}: no control characters`);
+/** One line of an address: control and direction characters stripped (lib/validation/text.ts), then bounded. */
+const line = (label: string, max: number) => lineText().trim().max(max, `${label}: at most ${max} characters`);
 
 export const AddressSchema = z.object({
   name: line("Name", 100).min(2, "Give the recipient's name"),

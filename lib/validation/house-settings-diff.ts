@@ -14,6 +14,7 @@ const SECTION_WORDS: Record<keyof HouseSettings, string> = {
   payment: "Payment terms",
   shipping: "Shipping",
   tax: "Tax",
+  house: "House details",
 };
 
 function flatten(value: unknown, path: string, out: Map<string, string>): void {
@@ -22,7 +23,7 @@ function flatten(value: unknown, path: string, out: Map<string, string>): void {
     const entries = Array.isArray(value) ? value.map((v, i) => [String(i), v] as const) : Object.entries(value);
     for (const [k, v] of entries) flatten(v, path ? `${path}.${k}` : k, out);
   } else {
-    out.set(path, value === null ? "none" : String(value));
+    out.set(path, value === null ? "none" : value === "" ? "(blank)" : String(value));
   }
 }
 
@@ -36,8 +37,16 @@ const UNIT_WORDS: Record<string, string> = {
   grams: "(g)",
 };
 
+/** Steps whose split-up name would not read well. */
+const STEP_WORDS: Record<string, string> = {
+  line1: "line 1",
+  line2: "line 2",
+  paperworkEmail: "paperwork e-mail",
+};
+
 /** One step of a settings path in words: `rateBp` → "rate (bp)", a list index 0 → "1". */
 function stepWords(step: string): string {
+  if (STEP_WORDS[step]) return STEP_WORDS[step];
   if (/^\d+$/.test(step)) return String(Number(step) + 1);
   const words = step
     .replace(/([a-z0-9])([A-Z])/g, "$1 $2")

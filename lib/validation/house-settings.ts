@@ -1,7 +1,8 @@
 /**
  * The house settings: every figure that prices or times a sale, held as one versioned document. One schema is
  * shared by the settings form (zodResolver) and PUT /api/house/settings; a sale freezes the version in force when it
- * is scheduled (lib/services/house-settings.ts). Defaults are today's built-in constants, so version 1 changes nothing.
+ * is scheduled (lib/services/house-settings.ts). Defaults are today's built-in constants, so version 1 changes nothing;
+ * versions kept before the house's own details were added get the initial ones (migration 20261203002300).
  */
 import { z } from "zod";
 import { DEFAULT_INCREMENT_LADDER } from "../auction/increments";
@@ -11,6 +12,7 @@ import { DEFAULT_FEE_SCHEDULE } from "../money/fees";
 import { DEFAULT_INSPECTION_SETTINGS } from "../money/inspection";
 import { TESTER_VARIATION_PCT } from "../disputes/verdicts";
 import { DEFAULT_SHIPPING_TABLE } from "../money/shipping";
+import { HouseDetailsSchema, INITIAL_HOUSE_DETAILS } from "./house-details";
 
 /** Largest amount an integer (int4) cents column holds: 2^31 − 1 [PostgreSQL integer type]. */
 export const MAX_COLUMN_CENTS = 2_147_483_647;
@@ -108,6 +110,8 @@ export const HouseSettingsSchema = z
       bands: z.array(ShippingBandSchema).min(1, "At least one weight band").max(20),
     }),
     tax: z.object({ rules: z.array(TaxRuleSchema).max(200) }),
+    /** The house's trading name, postal address and paperwork e-mail, printed as the sender on its papers. */
+    house: HouseDetailsSchema,
   })
   .superRefine((s, ctx) => {
     const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: "custom", path, message });
@@ -198,4 +202,5 @@ export const INITIAL_HOUSE_SETTINGS: HouseSettings = {
     bands: DEFAULT_SHIPPING_TABLE.bands.map((b) => ({ upToGrams: b.upToGrams, ratesCents: { ...b.ratesCents } })),
   },
   tax: { rules: [] },
+  house: structuredClone(INITIAL_HOUSE_DETAILS),
 };

@@ -69,6 +69,21 @@ test("the house changes the premium on the settings page; a sale scheduled after
   await expect(dealer.getByTestId("invoice-line-buyers")).toContainText("Buyer's premium (12.5 %)");
   await expect(dealer.getByTestId("invoice-line-buyers")).toContainText("$10.00");
   await expect(dealer.getByTestId("invoice-total")).toHaveText("$102.00");
+  // The house as sender, as the sale's version has it (the invented first address [SUG]).
+  await expect(dealer.getByTestId("invoice-from")).toContainText("Getterline Exchange");
+  await expect(dealer.getByTestId("invoice-from")).toContainText("Glowmere, GM4 7EX");
+
+  // The house moves: the history names the change in words, and this sale's invoice keeps its frozen address.
+  await house.goto("/house/settings");
+  await expect(house.getByLabel("Trading name")).toHaveValue("Getterline Exchange");
+  await house.getByLabel("City or town").fill("Emberton");
+  await house.getByLabel(/Why the change/).fill("The house moves to Emberton");
+  await house.getByRole("button", { name: "Save as a new version" }).click();
+  await expect(house.getByRole("region", { name: "History" })).toContainText(
+    "House details · address city: Glowmere → Emberton",
+  );
+  await dealer.reload();
+  await expect(dealer.getByTestId("invoice-from")).toContainText("Glowmere, GM4 7EX");
 });
 
 test("a buyer with an address in another zone gets zone shipping and the destination's tax on the invoice", async ({

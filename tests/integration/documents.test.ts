@@ -3,14 +3,19 @@
 import { randomUUID } from "node:crypto";
 import { PDFParse } from "pdf-parse";
 import { QueryTypes } from "sequelize";
-import { describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it } from "vitest";
 import { GET as invoicePdfRoute } from "../../app/api/invoices/[id]/pdf/route";
 import { GET as packingSlipRoute } from "../../app/api/invoices/[id]/packing-slip/route";
 import { GET as lotSheetRoute } from "../../app/api/lots/[id]/sheet/route";
 import { GET as catalogueRoute } from "../../app/api/sales/[id]/catalogue/route";
 import { formatCents } from "../../lib/money/cents";
+import { placeMaxBid } from "../../lib/services/bidding";
+import { changeSettings, currentSettings } from "../../lib/services/house-settings";
+import { getInvoice } from "../../lib/services/invoices";
+import { closeSaleLot } from "../../lib/services/lot-closing";
 import { createLot, addItem } from "../../lib/services/lots";
 import { createSale } from "../../lib/services/sales";
+import { INITIAL_HOUSE_SETTINGS } from "../../lib/validation/house-settings";
 import { db } from "../../models";
 import { approvedLot, invoicedLot, itemInput, makeUser, request, sessionCookie, viewerOf } from "../support/factories";
 
@@ -48,6 +53,19 @@ const items = [
   itemInput({ designation: "866A", quantity: 1 }),
   itemInput({ designation: "6V6GT", quantity: 1, vacuumLoss: true }),
 ];
+
+// The house's details as version 1 has them: an invented sender [SUG demo house, scenario.md].
+const HOUSE = { name: "Getterline Exchange", street: "27 Anode Street", town: "Glowmere, GM4 7EX" };
+
+// Leave the settings as version 1 had them for the test files that run after this one.
+afterAll(async () => {
+  const now = await currentSettings();
+  if (JSON.stringify(now.settings) !== JSON.stringify(INITIAL_HOUSE_SETTINGS))
+    await changeSettings(viewerOf(await makeUser(["admin"])), {
+      settings: INITIAL_HOUSE_SETTINGS,
+      reason: "Back to version 1 figures after the documents test",
+    });
+});
 
 describe("printable documents", () => {
   it("prints the invoice with the row's own lines, total = hammer + premium + shipping + tax", async () => {
@@ -120,6 +138,77 @@ describe("printable documents", () => {
     );
     expect(slip).toMatch(/ship to[\s\S]*Wren Hollow Estate[\s\S]*14 Lantern Row/i);
   });
+
+  it("prints the house as the sender: its trading name, street and town on the invoice and the packing slip", async () => {
+    const f = await invoicedLot([3_000, 2_500], items);
+    const invoice = await textOf(await get(invoicePdfRoute, `/api/invoices/${f.invoiceId}/pdf`, f.invoiceId, f.buyer));
+    // The caption, then the house's block (its trading name in the block's own case, not the header's capitals).
+    expect(invoice).toMatch(/^From\b/im);
+    expect(invoice).toContain(HOUSE.name);
+    expect(invoice).toContain(HOUSE.street);
+    expect(invoice).toContain(HOUSE.town);
+    expect(invoice).toContain("paperwork@house.getterline.test"); // [SUG] where paperwork questions go
+    const slip = await textOf(
+      await get(packingSlipRoute, `/api/invoices/${f.invoiceId}/packing-slip`, f.invoiceId, f.buyer),
+    );
+    expect(slip).toMatch(/^From\b/im);
+    expect(slip).toContain(HOUSE.town);
+    // The web invoice shows the same block to its buyer.
+    const web = await getInvoice(viewerOf(f.buyer), f.invoiceId);
+    expect(web.addresses.house).toEqual({
+      name: HOUSE.name,
+      lines: [
+        "Flashfield Works, Unit 4",
+        HOUSE.street,
+        HOUSE.town,
+        "United Kingdom",
+        "paperwork@house.getterline.test",
+      ],
+    });
+  }, 60_000);
+
+  it("keeps a sale's papers on the house address frozen when it was scheduled; later sales print the new one", async () => {
+    const admin = await makeUser(["admin"]);
+    const consignor = await makeUser(["consignor"]);
+    const lot = await approvedLot(consignor, admin, 2_000, items);
+    const sale = await createSale(viewerOf(admin), {
+      title: "Frozen address sale",
+      startsAt: new Date(Date.now() - 60_000).toISOString(),
+      firstCloseAt: new Date(Date.now() + 3_600_000).toISOString(),
+      gapSeconds: 30,
+      softCloseSeconds: 60,
+      lots: [{ lotId: lot.id, openingCents: 1_000 }],
+    });
+    // The house moves after the sale is scheduled (an invented town).
+    const now = await currentSettings();
+    const moved = structuredClone(now.settings);
+    moved.house.address = { ...moved.house.address, line2: "8 Mica Lane", city: "Emberton", postalCode: "EM2 9QX" };
+    await changeSettings(viewerOf(admin), { settings: moved, reason: "The house moves to Emberton" });
+
+    // The lot sells and is invoiced after the move: its papers still carry the address of the sale's version.
+    const sl = await one<{ id: string }>(`SELECT id FROM sale_lots WHERE sale_id = :id`, sale.id);
+    const buyer = await makeUser(["dealer"]);
+    await placeMaxBid(viewerOf(buyer), sl.id, 3_000, `w-${sl.id}`);
+    await placeMaxBid(viewerOf(await makeUser(["dealer"])), sl.id, 2_500, `u-${sl.id}`);
+    await db().query(`UPDATE sale_lots SET closes_at = now() - interval '1 second' WHERE id = :id`, {
+      replacements: { id: sl.id },
+    });
+    expect(await closeSaleLot(sl.id)).toBe("closed");
+    const { id: invoiceId } = await one<{ id: string }>(`SELECT id FROM invoices WHERE sale_lot_id = :id`, sl.id);
+    const frozen = await textOf(await get(invoicePdfRoute, `/api/invoices/${invoiceId}/pdf`, invoiceId, buyer));
+    expect(frozen).toContain(HOUSE.town);
+    expect(frozen).not.toContain("Emberton");
+    const slip = await textOf(await get(packingSlipRoute, "/x", invoiceId, buyer));
+    expect(slip).toContain(HOUSE.town);
+    expect(slip).not.toContain("Emberton");
+    expect((await getInvoice(viewerOf(buyer), invoiceId)).addresses.house?.lines).toContain(HOUSE.town);
+
+    // A sale scheduled after the move prints the new address.
+    const later = await invoicedLot([3_000, 2_500]);
+    const text = await textOf(await get(invoicePdfRoute, "/x", later.invoiceId, later.buyer));
+    expect(text).toMatch(/8 Mica Lane[\s\S]*Emberton, EM2 9QX/);
+    expect(text).not.toContain(HOUSE.town);
+  }, 60_000);
 
   it("keeps the invoice papers to the buyer, the house and the claim's mediator (401/403/404)", async () => {
     const f = await invoicedLot([3_000, 2_500]);

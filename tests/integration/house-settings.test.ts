@@ -10,6 +10,7 @@ import { changeSettings, currentSettings } from "../../lib/services/house-settin
 import { closeSaleLot } from "../../lib/services/lot-closing";
 import { createSale } from "../../lib/services/sales";
 import { INITIAL_HOUSE_SETTINGS, type HouseSettings } from "../../lib/validation/house-settings";
+import { up as addHouseDetails } from "../../migrations/20261203002300-house-details";
 import { db } from "../../models";
 import { approvedLot, makeUser, noParams, request, sessionCookie, viewerOf } from "../support/factories";
 
@@ -109,6 +110,57 @@ describe("GET/PUT /api/house/settings", () => {
       "settings.buyersPremiumBp": "Buyer's premium cannot be negative",
       "settings.commissionTiers.1.upToCents": "Tiers must ascend without overlapping the tier before",
       reason: "Say why the settings change (at least 5 characters)",
+    });
+  });
+});
+
+describe("the house's own details in the settings", () => {
+  it("gives a version stored without them the first details, and leaves a version that has them alone [SUG]", async () => {
+    // Two versions far above any the run reaches, taken out again at the end so they never become current.
+    const { house: _house, ...older } = structuredClone(INITIAL_HOUSE_SETTINGS);
+    const newer = structuredClone(INITIAL_HOUSE_SETTINGS);
+    newer.house.address.city = "Emberton";
+    const put = (version: number, settings: unknown) =>
+      db().query(
+        `INSERT INTO house_settings_versions (version, settings, reason) VALUES (:v, CAST(:s AS jsonb), 'test')`,
+        {
+          replacements: { v: version, s: JSON.stringify(settings) },
+        },
+      );
+    await put(900_001, older);
+    await put(900_002, newer);
+    try {
+      await addHouseDetails({ context: db().getQueryInterface() });
+      const rows = await db().query<{ version: number; house: { tradingName: string; address: { city: string } } }>(
+        `SELECT version, settings->'house' AS house FROM house_settings_versions WHERE version > 900000 ORDER BY version`,
+        { type: QueryTypes.SELECT },
+      );
+      expect(rows.map((r) => [r.house.tradingName, r.house.address.city])).toEqual([
+        ["Getterline Exchange", "Glowmere"], // [SUG] the invented first details
+        ["Getterline Exchange", "Emberton"],
+      ]);
+    } finally {
+      await db().query(`DELETE FROM house_settings_versions WHERE version > 900000`);
+    }
+  });
+
+  it("answers a bad country and an over-long trading name with 400 and per-field messages [ISO-3166]", async () => {
+    const cookie = await sessionCookie(await makeUser(["admin"]));
+    const settings = structuredClone(INITIAL_HOUSE_SETTINGS) as HouseSettings;
+    settings.house.address.country = "ZZ"; // unassigned [ISO-3166]
+    settings.house.tradingName = "G".repeat(101); // [SUG] 100 at most
+    const r = await putSettings(
+      request("/api/house/settings", {
+        method: "PUT",
+        json: { settings, reason: "Move the house" },
+        headers: { cookie },
+      }),
+      noParams,
+    );
+    expect(r.status).toBe(400);
+    expect(((await r.json()) as ErrorBody).error.fields).toEqual({
+      "settings.house.address.country": "Choose a country from the list",
+      "settings.house.tradingName": "Trading name: at most 100 characters",
     });
   });
 });

@@ -8,6 +8,7 @@ import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
 import { HouseSettingsChangeSchema, type HouseSettingsChange } from "@/lib/validation/house-settings";
 import { NumberField, Section, errorAt, type SettingsFormApi } from "./fields";
+import { HouseDetailsSection } from "./HouseDetailsSection";
 import { ShippingTaxSections } from "./ShippingTaxSections";
 
 /**
@@ -151,6 +152,8 @@ export function SettingsForm({ version, initial }: { version: number; initial: H
       </Section>
 
       <ShippingTaxSections api={api} control={control} />
+
+      <HouseDetailsSection api={api} />
 
       <Section title="Save">
         <div>

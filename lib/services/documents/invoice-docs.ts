@@ -5,7 +5,7 @@ import type { AddressBlock } from "../../documents/layout";
 import type { InvoiceDoc } from "../../documents/invoice";
 import type { PackingDoc } from "../../documents/packing-slip";
 import { db, LotItem } from "../../../models";
-import { invoiceAddresses } from "../addresses";
+import { invoiceAddresses, invoiceHouseBlock } from "../addresses";
 import { getInvoice } from "../invoices";
 import { presentItem } from "../lots";
 import { summaryFor } from "../lot-summary";
@@ -37,12 +37,12 @@ async function readable(viewer: Viewer, invoiceId: string, kind: Kind) {
 export type InvoiceAddresses = { buyer: AddressBlock; house: AddressBlock };
 
 /**
- * The buyer's block comes from the invoice's own snapshot; where the lot ships from (the consignor's address) stays
- * off the buyer's papers, as on the web invoice, and the house keeps no postal address of its own yet.
+ * The buyer's block comes from the invoice's own snapshot; the house's from the settings version frozen for the sale.
+ * Where the lot ships from (the consignor's address) stays off the buyer's papers, as on the web invoice.
  */
 async function papersAddresses(invoiceId: string): Promise<InvoiceAddresses> {
-  const { buyer } = await invoiceAddresses(invoiceId);
-  return { buyer, house: null };
+  const [{ buyer }, house] = await Promise.all([invoiceAddresses(invoiceId), invoiceHouseBlock(invoiceId)]);
+  return { buyer, house };
 }
 
 /** The invoice document's data, for a viewer allowed to print it. Money lines are the invoice row's own. */
@@ -90,6 +90,7 @@ export async function packingSlipDocument(viewer: Viewer, invoiceId: string): Pr
     saleTitle: extra.sale_title,
     buyerName: extra.buyer,
     shipTo: addresses.buyer,
+    from: addresses.house,
     preparedAt: new Date().toISOString(),
     lines,
     cautions: paperCautions(summary.hazards),

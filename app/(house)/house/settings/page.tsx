@@ -13,9 +13,10 @@ export default async function HouseSettingsPage() {
       <header className="space-y-2">
         <h1 className="text-2xl font-semibold">House settings</h1>
         <p className="max-w-3xl text-flash-700">
-          Premium, commission, bidding, payment, inspection, claims, shipping and tax. Each save is a new version, kept
-          with who made it and why. A sale keeps the version in force when it was scheduled, so a change never alters a
-          sale already scheduled or live. In force now: <strong>version {version}</strong>.
+          Premium, commission, bidding, payment, inspection, claims, shipping, tax and the house’s own address on its
+          papers. Each save is a new version, kept with who made it and why. A sale keeps the version in force when it
+          was scheduled, so a change never alters a sale already scheduled or live. In force now:{" "}
+          <strong>version {version}</strong>.
         </p>
       </header>
       <div className="grid gap-6 xl:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
