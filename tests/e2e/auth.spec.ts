@@ -1,6 +1,6 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test } from "@playwright/test";
-import { DEMO, expectHeading, openAccount, signIn } from "./helpers";
+import { confirmAndSignIn, DEMO, expectHeading, signIn, submitSignUp } from "./helpers";
 
 test.describe("sign-in lands each role on its home", () => {
   const cases = [
@@ -28,21 +28,20 @@ test("a wrong password shows a clear message and stays on the form", async ({ pa
 test("a new dealer signs up, is kept out until the e-mailed link is followed, then lands on the dealer desk [OWASP-AUTH]", async ({
   page,
 }) => {
-  const email = `tinplate-${Date.now()}@example.test`;
-  await page.goto("/sign-up");
-  await page.getByLabel(/Buy as a dealer/).check();
-  await page.getByLabel("Name or business name").fill("Tinplate Valve Exchange");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill("a-long-password");
-  await page.getByRole("button", { name: "Open account" }).click();
-  await expect(page.getByTestId("sign-up-sent")).toContainText("Check your e-mail");
+  const account = {
+    role: "dealer",
+    name: "Tinplate Valve Exchange",
+    email: `tinplate-${Date.now()}@example.test`,
+    password: "a-long-password",
+  } as const;
+  await submitSignUp(page, account);
   await expect(page).toHaveURL(/\/sign-up$/);
   // Before the link: the right password is told to confirm the address first, and nothing opens.
-  await signIn(page, email, "a-long-password");
+  await signIn(page, account.email, account.password);
   await expect(page.getByRole("main").getByRole("alert")).toContainText("Confirm your e-mail address first");
   await expect(page).toHaveURL(/\/sign-in/);
-  // The whole way through: the link, the confirm button, sign-in, the desk.
-  await openAccount(page, { role: "dealer", name: "Tinplate Valve Exchange", email, password: "a-long-password" });
+  // Then the link, the confirm button, sign-in and the desk.
+  await confirmAndSignIn(page, account);
   await expectHeading(page, /Dealer desk · Tinplate Valve Exchange/);
 });
 
