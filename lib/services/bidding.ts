@@ -1,7 +1,14 @@
 import { QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { ApiError } from "../api/errors";
-import { minimumBidFor, placeBid, type BidOutcome, type BidRefusal, type ProxyState } from "../auction/proxy";
+import {
+  minimumBidFor,
+  placeBid,
+  type BidDecision,
+  type BidOutcome,
+  type BidRefusal,
+  type ProxyState,
+} from "../auction/proxy";
 import { extendOnBid } from "../auction/soft-close";
 import { type LotLive } from "../realtime/events";
 import { beginLotWrite, finishLotWrite } from "../realtime/lot-emitter";
@@ -113,6 +120,46 @@ type LockedDecision =
       extended: boolean;
     };
 
+/** An accepted bid under the lock: the soft-close clock moved if late, and the lot row and bid row to write. */
+function acceptUnderLock(
+  row: LockedLot,
+  decision: Extract<BidDecision, { accepted: true }>,
+  previousLeader: string | null,
+  nowMs: number,
+  bidderId: string,
+  maxCents: number,
+  idempotencyKey: string,
+): { write: BidWrite; result: LockedDecision } {
+  const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, {
+    windowSeconds: row.soft_close_seconds,
+    maxExtensions: row.max_extensions,
+  });
+  const next = decision.state;
+  const seq = row.seq + 1;
+  return {
+    write: {
+      seq,
+      state: next,
+      closesAt: new Date(clock.closesAtMs),
+      extensionCount: clock.extensionCount,
+      bidderId,
+      maxCents,
+      outcome: decision.outcome,
+      key: idempotencyKey,
+      placedAt: row.db_now,
+    },
+    result: {
+      kind: "accepted",
+      outcome: decision.outcome,
+      seq,
+      previousLeader,
+      previousLeaderPaddle: row.leader_paddle,
+      extended: clock.extended,
+      row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
+    },
+  };
+}
+
 /**
  * The pure decision taken while the lot's row is locked: replay, refuse, or accept the bid with the next
  * seq and any soft-close extension; an accepted bid also says what to write before the commit.
@@ -150,34 +197,7 @@ function decideUnderLock(
       write: null,
       result: { kind: "refused", row, reason: decision.reason, minimumCents: decision.minimumCents },
     };
-  const clock = extendOnBid({ closesAtMs: row.closes_at.getTime(), extensionCount: row.extension_count }, nowMs, {
-    windowSeconds: row.soft_close_seconds,
-    maxExtensions: row.max_extensions,
-  });
-  const next = decision.state;
-  const seq = row.seq + 1;
-  return {
-    write: {
-      seq,
-      state: next,
-      closesAt: new Date(clock.closesAtMs),
-      extensionCount: clock.extensionCount,
-      bidderId,
-      maxCents,
-      outcome: decision.outcome,
-      key: idempotencyKey,
-      placedAt: row.db_now,
-    },
-    result: {
-      kind: "accepted",
-      outcome: decision.outcome,
-      seq,
-      previousLeader,
-      previousLeaderPaddle: row.leader_paddle,
-      extended: clock.extended,
-      row: { ...row, seq, state: next, closes_at: new Date(clock.closesAtMs) },
-    },
-  };
+  return acceptUnderLock(row, decision, previousLeader, nowMs, bidderId, maxCents, idempotencyKey);
 }
 
 /**
