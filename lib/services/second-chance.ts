@@ -87,11 +87,11 @@ async function issueSecondChanceInvoice(
   })) as [{ n: string }];
   await s.query(
     `INSERT INTO invoices (id, number, sale_lot_id, lot_id, buyer_id, consignor_id, state, hammer_cents, premium_bp, premium_cents, shipping_cents, tax_cents, total_cents,
-                           commission_cents, tube_count, settings_version, buyer_address, origin_address, shipping_zone, tax_bp,
-                           due_at, second_chance, created_at, updated_at)
-     VALUES (:id, :number, :sl, :lot, :buyer, :consignor, 'awaiting-payment', :hammer, :bp, :premium, :shipping, :tax, :total, :commission, :tubes,
-             :version, CAST(:buyerAddress AS jsonb), CAST(:originAddress AS jsonb), :zone, :taxBp,
-             now() + (:dueDays || ' days')::interval, true, now(), now())`,
+                             commission_cents, tube_count, settings_version, buyer_address, origin_address, shipping_zone, tax_bp,
+                             due_at, second_chance, created_at, updated_at)
+       VALUES (:id, :number, :sl, :lot, :buyer, :consignor, 'awaiting-payment', :hammer, :bp, :premium, :shipping, :tax, :total, :commission, :tubes,
+               :version, CAST(:buyerAddress AS jsonb), CAST(:originAddress AS jsonb), :zone, :taxBp,
+               now() + (:dueDays || ' days')::interval, true, now(), now())`,
     {
       replacements: {
         id,
