@@ -10,7 +10,7 @@ import { estimateLot, type ComparableSale, type EstimateGroup, type LotEstimate 
 import { itemTubeCount, type AttributionBasis, type ItemCondition, type LotItem } from "./item";
 import { lotHazardFlags, type LotHazardFlag } from "./lot-hazards";
 import type { ReferenceTable } from "../valves/reference-table";
-import { typeFamily } from "./type-family";
+import { typeFamily, type TypeFamily } from "./type-family";
 
 export { readingsVsNominal, nominalGmFromReference, type NominalPoint } from "./readings-chart";
 export type { ComparableSale, LotEstimate } from "./estimate";
@@ -112,6 +112,115 @@ function chartLookup(values: Record<string, number> | undefined, issues: string[
   return map;
 }
 
+type UnknownDesignation = LotSummary["unknownDesignations"][number];
+
+/** Running totals while the lot's items are read, one item at a time. */
+interface ItemTally {
+  tubeCount: number;
+  vacuumLoss: number;
+  attribution: Record<AttributionBasis, number>;
+  families: Map<string, FamilySummary>;
+  batches: Map<string, Batch>;
+  unknown: Map<string, UnknownDesignation>;
+  /** The family key of each item, by item index. */
+  itemFamily: string[];
+  issues: string[];
+}
+
+/** The family's summary so far, started empty the first time the family is seen. */
+function familyEntry(families: Map<string, FamilySummary>, fam: TypeFamily): FamilySummary {
+  const f = families.get(fam.key) ?? {
+    key: fam.key,
+    label: fam.label,
+    tubes: 0,
+    designations: [],
+    tests: emptyCounts(),
+    pairs: 0,
+    quads: 0,
+    quadsProven: true,
+  };
+  families.set(fam.key, f);
+  return f;
+}
+
+/** Count an item whose designation is flagged unknown under the designation as shown. */
+function noteUnknownDesignation(
+  unknown: Map<string, UnknownDesignation>,
+  d: LotItem["designation"],
+  shown: string,
+  tubes: number,
+  itemIndex: number,
+): void {
+  const u = unknown.get(shown) ?? {
+    typed: d.typed,
+    normalised: d.normalised,
+    tubes: 0,
+    itemIndexes: [],
+    candidates: d.candidates ?? [],
+  };
+  u.tubes += tubes;
+  u.itemIndexes.push(itemIndex);
+  unknown.set(shown, u);
+}
+
+/** Put each of the item's readings in its family-and-measure batch, with the chart value it is graded against. */
+function batchReadings(
+  batches: Map<string, Batch>,
+  item: LotItem,
+  itemIndex: number,
+  familyKey: string,
+  charts: ReadonlyMap<string, number>,
+): void {
+  const d = item.designation;
+  item.readings.forEach((r, j) => {
+    const chart = r.chartNewValue ?? (d.normalised ? charts.get(d.normalised) : undefined) ?? charts.get(familyKey);
+    const batchKey = `${familyKey}\u0000${r.measure}`;
+    const batch = batches.get(batchKey) ?? { familyKey, measure: r.measure, tubes: [] };
+    batches.set(batchKey, batch);
+    // A failed check rejects whatever the reading [CTP]; without a chart value,
+    // grade on the failure alone rather than leave the tube "not graded".
+    const failed = Boolean(r.shorts || r.leakage || r.gas || item.vacuumLoss);
+    batch.tubes.push({
+      id: `${itemIndex}:${j}`,
+      sections: chart === undefined && failed ? [] : r.sections,
+      ...(chart !== undefined ? { chartNewValue: chart } : {}),
+      ...(r.plateCurrentMa !== undefined ? { plateCurrentMa: r.plateCurrentMa } : {}),
+      shorts: r.shorts,
+      leakage: r.leakage,
+      gas: r.gas,
+      vacuumLoss: item.vacuumLoss,
+    });
+  });
+}
+
+/** Add one item to the tally: its tubes, family, vacuum loss, attribution, unknown designation and readings. */
+function tallyItem(
+  tally: ItemTally,
+  item: LotItem,
+  i: number,
+  reference: ReferenceTable,
+  charts: ReadonlyMap<string, number>,
+): void {
+  const tubes = itemTubeCount(item);
+  if (item.readings.length > item.quantity)
+    tally.issues.push(
+      `item ${i + 1}: ${item.readings.length} readings for a quantity of ${item.quantity}; counted as ${tubes} tubes`,
+    );
+  const d = item.designation;
+  const fam = typeFamily(reference, d.normalised ?? d.typed);
+  tally.itemFamily.push(fam.key);
+  const f = familyEntry(tally.families, fam);
+  f.tubes += tubes;
+  const shown = d.normalised ?? d.typed;
+  if (!f.designations.includes(shown)) f.designations.push(shown);
+  f.tests.notTested += tubes - item.readings.length;
+  tally.tubeCount += tubes;
+  if (item.vacuumLoss) tally.vacuumLoss += tubes;
+  tally.attribution[item.attributedMaker.basis] += tubes;
+  if (d.status === "unknown-flagged") noteUnknownDesignation(tally.unknown, d, shown, tubes, i);
+  batchReadings(tally.batches, item, i, fam.key, charts);
+}
+
 /**
  * Summarises a lot. Readings are graded with gradeBatch per type family and
  * measure; the chart value is the reading's own, else the chart value for its
@@ -124,89 +233,30 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
   const tolerancePct = opts.tolerancePct ?? 5;
   const issues: string[] = [];
   const charts = chartLookup(opts.chartNewValues, issues);
-  const families = new Map<string, FamilySummary>();
-  const batches = new Map<string, Batch>();
-  const attribution: Record<AttributionBasis, number> = {
-    "source-code-confirmed": 0,
-    "construction-matched": 0,
-    unconfirmed: 0,
+  const tally: ItemTally = {
+    tubeCount: 0,
+    vacuumLoss: 0,
+    attribution: { "source-code-confirmed": 0, "construction-matched": 0, unconfirmed: 0 },
+    families: new Map(),
+    batches: new Map(),
+    unknown: new Map(),
+    itemFamily: [],
+    issues,
   };
-  const unknown = new Map<string, LotSummary["unknownDesignations"][number]>();
-  const itemFamily: string[] = [];
-  let tubeCount = 0;
-  let vacuumLoss = 0;
+  items.forEach((item, i) => tallyItem(tally, item, i, opts.reference, charts));
+  const { families, itemFamily, attribution } = tally;
 
-  items.forEach((item, i) => {
-    const tubes = itemTubeCount(item);
-    if (item.readings.length > item.quantity)
-      issues.push(
-        `item ${i + 1}: ${item.readings.length} readings for a quantity of ${item.quantity}; counted as ${tubes} tubes`,
-      );
-    const d = item.designation;
-    const fam = typeFamily(opts.reference, d.normalised ?? d.typed);
-    itemFamily.push(fam.key);
-    const f = families.get(fam.key) ?? {
-      key: fam.key,
-      label: fam.label,
-      tubes: 0,
-      designations: [],
-      tests: emptyCounts(),
-      pairs: 0,
-      quads: 0,
-      quadsProven: true,
-    };
-    families.set(fam.key, f);
-    f.tubes += tubes;
-    const shown = d.normalised ?? d.typed;
-    if (!f.designations.includes(shown)) f.designations.push(shown);
-    f.tests.notTested += tubes - item.readings.length;
-    tubeCount += tubes;
-    if (item.vacuumLoss) vacuumLoss += tubes;
-    attribution[item.attributedMaker.basis] += tubes;
-    if (d.status === "unknown-flagged") {
-      const u = unknown.get(shown) ?? {
-        typed: d.typed,
-        normalised: d.normalised,
-        tubes: 0,
-        itemIndexes: [],
-        candidates: d.candidates ?? [],
-      };
-      u.tubes += tubes;
-      u.itemIndexes.push(i);
-      unknown.set(shown, u);
-    }
-    item.readings.forEach((r, j) => {
-      const chart = r.chartNewValue ?? (d.normalised ? charts.get(d.normalised) : undefined) ?? charts.get(fam.key);
-      const batchKey = `${fam.key}\u0000${r.measure}`;
-      const batch = batches.get(batchKey) ?? { familyKey: fam.key, measure: r.measure, tubes: [] };
-      batches.set(batchKey, batch);
-      // A failed check rejects whatever the reading [CTP]; without a chart value,
-      // grade on the failure alone rather than leave the tube "not graded".
-      const failed = Boolean(r.shorts || r.leakage || r.gas || item.vacuumLoss);
-      batch.tubes.push({
-        id: `${i}:${j}`,
-        sections: chart === undefined && failed ? [] : r.sections,
-        ...(chart !== undefined ? { chartNewValue: chart } : {}),
-        ...(r.plateCurrentMa !== undefined ? { plateCurrentMa: r.plateCurrentMa } : {}),
-        shorts: r.shorts,
-        leakage: r.leakage,
-        gas: r.gas,
-        vacuumLoss: item.vacuumLoss,
-      });
-    });
-  });
-
-  const rejectsByItem = gradeBatches(batches, families, tolerancePct);
+  const rejectsByItem = gradeBatches(tally.batches, families, tolerancePct);
   const { groups, zeroValuedTubes } = estimateGroups(items, families, itemFamily, rejectsByItem);
 
   const tests = emptyCounts();
   const familyList = [...families.values()].sort((a, b) => b.tubes - a.tubes || a.key.localeCompare(b.key));
   for (const f of familyList) addCounts(tests, f.tests);
   return {
-    tubeCount,
+    tubeCount: tally.tubeCount,
     families: familyList,
     tests,
-    vacuumLoss,
+    vacuumLoss: tally.vacuumLoss,
     matched: {
       pairs: familyList.reduce((s, f) => s + f.pairs, 0),
       quads: familyList.reduce((s, f) => s + f.quads, 0),
@@ -214,7 +264,7 @@ export function summariseLot(items: readonly LotItem[], opts: SummaryOptions): L
     },
     attribution,
     hazards: lotHazardFlags(opts.reference, items, itemTubeCount),
-    unknownDesignations: [...unknown.values()],
+    unknownDesignations: [...tally.unknown.values()],
     estimate: estimateLot([...groups.values()], opts.comparables, { since: opts.comparablesSince }),
     zeroValuedTubes,
     issues,

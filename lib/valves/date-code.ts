@@ -216,24 +216,8 @@ function readCentury(
   }
 }
 
-/**
- * Read an EIA date code ("5943", "943", or joined "X46-5943") into ranked
- * candidate dates. Four digits are YYWW [EIA-476]; three digits are YWW and
- * give one candidate per decade between the type's introduction and the end
- * of production, never before the introduction [CTP].
- */
-export function readDateCode(code: string, ctx: DateCodeContext = {}): DateCodeResult {
-  const input = code;
-  let text = code.trim();
-  const flags: DateCodeFlag[] = [];
-  const rejected: RejectedReading[] = [];
-  let sourceCode: string | undefined;
-  const joined = splitJoinedCode(text);
-  if (joined) {
-    sourceCode = joined.sourcePart;
-    text = joined.datePart;
-    flags.push("joined-source-code");
-  }
+/** The refusal of a code that is empty, not digits, or not 3 or 4 digits long (null when it has a date code's shape). */
+function refuseMalformed(input: string, text: string, rejected: RejectedReading[]): DateCodeResult | null {
   if (text === "") return { ok: false, input, error: { code: "empty", message: "no date code given" }, rejected };
   if (!/^\d+$/.test(text)) {
     return {
@@ -254,68 +238,130 @@ export function readDateCode(code: string, ctx: DateCodeContext = {}): DateCodeR
       rejected,
     };
   }
-  const readings: DateReading[] = [];
-  const addReading = (year: number, week: number, form: DateCodeForm, verdict: YearVerdict, extra: string[]) => {
+  return null;
+}
+
+/** An AddReading that scores a candidate from its verdict and collects it into `readings`. */
+function readingCollector(readings: DateReading[]): AddReading {
+  return (year, week, form, verdict, extra) => {
     const reasons = [...extra, ...verdict.supports, ...verdict.conflicts.map((c) => c.reason)];
     if (week === MAX_WEEK) reasons.push(`week 53: ${year} ${hasIsoWeek53(year) ? "has" : "has no"} ISO week 53`);
     const score = verdict.supports.length - 2 * verdict.conflicts.length - (form === "WWYY" ? 1 : 0);
     readings.push({ year, week, form, score, rank: 0, reasons });
   };
+}
 
-  let weekValid = false;
-  if (text.length === 4) {
-    const first = Number(text.slice(0, 2));
-    const second = Number(text.slice(2));
-    if (validWeek(second)) {
-      weekValid = true;
-      readCentury(first, second, ctx, rejected, flags, addReading);
-    } else {
-      rejected.push({
-        reading: { form: "YYWW", year: 1900 + first, week: second },
-        reason: `week ${text.slice(2)} cannot exist (weeks run 01–${MAX_WEEK})`,
-      });
-    }
-    if (!validWeek(first)) {
-      rejected.push({
-        reading: { form: "WWYY", week: first },
-        reason: `week-first reading impossible: week ${text.slice(0, 2)} cannot exist`,
-      });
-    } else if (!ctx.considerWeekFirst) {
-      rejected.push({
-        reading: { form: "WWYY", year: 1900 + second, week: first },
-        reason: "week-first order is not EIA-476; enable it only for a maker known to print it",
-      });
-    } else {
-      const verdict = judgeYear(1900 + second, ctx);
-      if (verdict.conflicts.length > 0) {
-        rejected.push({ reading: { form: "WWYY", year: 1900 + second, week: first }, reason: joinConflicts(verdict) });
-      } else {
-        weekValid = true;
-        addReading(1900 + second, first, "WWYY", verdict, ["week-first order (not EIA-476), read on request"]);
-      }
-    }
+/** Four digits week-first (WWYY), read only on request and only when the year is clean; true if a week was valid. */
+function readWeekFirst(
+  text: string,
+  ctx: DateCodeContext,
+  rejected: RejectedReading[],
+  addReading: AddReading,
+): boolean {
+  const first = Number(text.slice(0, 2));
+  const second = Number(text.slice(2));
+  if (!validWeek(first)) {
+    rejected.push({
+      reading: { form: "WWYY", week: first },
+      reason: `week-first reading impossible: week ${text.slice(0, 2)} cannot exist`,
+    });
+  } else if (!ctx.considerWeekFirst) {
+    rejected.push({
+      reading: { form: "WWYY", year: 1900 + second, week: first },
+      reason: "week-first order is not EIA-476; enable it only for a maker known to print it",
+    });
   } else {
-    const digit = Number(text[0]);
-    const week = Number(text.slice(1));
-    flags.push("may-be-source-code");
-    if (!validWeek(week)) {
-      rejected.push({
-        reading: { form: "YWW", week },
-        reason: `week ${text.slice(1)} cannot exist (weeks run 01–${MAX_WEEK})`,
-      });
+    const verdict = judgeYear(1900 + second, ctx);
+    if (verdict.conflicts.length > 0) {
+      rejected.push({ reading: { form: "WWYY", year: 1900 + second, week: first }, reason: joinConflicts(verdict) });
     } else {
-      weekValid = true;
-      if (ctx.introducedYear === undefined) flags.push("type-introduction-unknown");
-      for (const year of decadeCandidates(digit, ctx)) {
-        const verdict = judgeYear(year, ctx);
-        if (verdict.conflicts.length > 0) {
-          rejected.push({ reading: { form: "YWW", year, week }, reason: joinConflicts(verdict) });
-        } else {
-          addReading(year, week, "YWW", verdict, [`YWW: year digit ${digit}, week ${week}; decade inferred`]);
-        }
-      }
+      addReading(1900 + second, first, "WWYY", verdict, ["week-first order (not EIA-476), read on request"]);
+      return true;
     }
   }
+  return false;
+}
+
+/** Four digits: YYWW in either century, then the week-first reading; true if any week was valid. */
+function readFourDigits(
+  text: string,
+  ctx: DateCodeContext,
+  rejected: RejectedReading[],
+  flags: DateCodeFlag[],
+  addReading: AddReading,
+): boolean {
+  let weekValid = false;
+  const first = Number(text.slice(0, 2));
+  const second = Number(text.slice(2));
+  if (validWeek(second)) {
+    weekValid = true;
+    readCentury(first, second, ctx, rejected, flags, addReading);
+  } else {
+    rejected.push({
+      reading: { form: "YYWW", year: 1900 + first, week: second },
+      reason: `week ${text.slice(2)} cannot exist (weeks run 01–${MAX_WEEK})`,
+    });
+  }
+  if (readWeekFirst(text, ctx, rejected, addReading)) weekValid = true;
+  return weekValid;
+}
+
+/** Three digits (YWW): one candidate per decade that survives judgeYear; true if the week was valid. */
+function readThreeDigits(
+  text: string,
+  ctx: DateCodeContext,
+  rejected: RejectedReading[],
+  flags: DateCodeFlag[],
+  addReading: AddReading,
+): boolean {
+  const digit = Number(text[0]);
+  const week = Number(text.slice(1));
+  flags.push("may-be-source-code");
+  if (!validWeek(week)) {
+    rejected.push({
+      reading: { form: "YWW", week },
+      reason: `week ${text.slice(1)} cannot exist (weeks run 01–${MAX_WEEK})`,
+    });
+    return false;
+  }
+  if (ctx.introducedYear === undefined) flags.push("type-introduction-unknown");
+  for (const year of decadeCandidates(digit, ctx)) {
+    const verdict = judgeYear(year, ctx);
+    if (verdict.conflicts.length > 0) {
+      rejected.push({ reading: { form: "YWW", year, week }, reason: joinConflicts(verdict) });
+    } else {
+      addReading(year, week, "YWW", verdict, [`YWW: year digit ${digit}, week ${week}; decade inferred`]);
+    }
+  }
+  return true;
+}
+
+/**
+ * Read an EIA date code ("5943", "943", or joined "X46-5943") into ranked
+ * candidate dates. Four digits are YYWW [EIA-476]; three digits are YWW and
+ * give one candidate per decade between the type's introduction and the end
+ * of production, never before the introduction [CTP].
+ */
+export function readDateCode(code: string, ctx: DateCodeContext = {}): DateCodeResult {
+  const input = code;
+  let text = code.trim();
+  const flags: DateCodeFlag[] = [];
+  const rejected: RejectedReading[] = [];
+  let sourceCode: string | undefined;
+  const joined = splitJoinedCode(text);
+  if (joined) {
+    sourceCode = joined.sourcePart;
+    text = joined.datePart;
+    flags.push("joined-source-code");
+  }
+  const malformed = refuseMalformed(input, text, rejected);
+  if (malformed) return malformed;
+  const readings: DateReading[] = [];
+  const addReading = readingCollector(readings);
+  const weekValid =
+    text.length === 4
+      ? readFourDigits(text, ctx, rejected, flags, addReading)
+      : readThreeDigits(text, ctx, rejected, flags, addReading);
   if (!weekValid) {
     return {
       ok: false,
