@@ -1,4 +1,3 @@
-import { randomUUID } from "node:crypto";
 import { QueryTypes } from "sequelize";
 import type { Viewer } from "../auth/guards";
 import { can } from "../auth/roles";
@@ -6,7 +5,6 @@ import { ApiError } from "../api/errors";
 import { env } from "../config/env";
 import { sendMail } from "../mail/mailer";
 import { formatCents } from "../money/cents";
-import { invoiceIssuedEntries } from "../money/ledger";
 import { lotShippingCents, priceSoldLot } from "../money/settings-pricing";
 import type { AddressBlock } from "../validation/address";
 import { INITIAL_HOUSE_SETTINGS } from "../validation/house-settings";
@@ -14,7 +12,7 @@ import { db, User } from "../../models";
 import { addressOf, invoiceAddressBlocks, invoiceHouseBlock } from "./addresses";
 import { settingsVersion } from "./house-settings";
 import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
-import { post } from "./ledger";
+import { issueInvoice } from "./invoice-issue";
 import { forgetComparables } from "./lot-summary";
 
 /**
@@ -71,45 +69,19 @@ export async function invoiceSoldLot(saleLotId: string): Promise<string | null> 
     const destination = await addressOf(sl.buyer_id, t);
     const origin = await addressOf(sl.consignor_id, t);
     const inv = priceSoldLot({ hammerCents: sl.hammer_cents, tubes, origin, destination }, settings);
-    const id = randomUUID();
-    const [{ n }] = (await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, {
-      type: QueryTypes.SELECT,
-      transaction: t,
-    })) as [{ n: string }];
-    await s.query(
-      `INSERT INTO invoices (id, number, sale_lot_id, lot_id, buyer_id, consignor_id, state, hammer_cents, premium_bp, premium_cents, shipping_cents, tax_cents, total_cents,
-                             commission_cents, tube_count, settings_version, buyer_address, origin_address, shipping_zone, tax_bp,
-                             due_at, created_at, updated_at)
-       VALUES (:id, :number, :saleLotId, :lotId, :buyer, :consignor, 'awaiting-payment', :hammer, :bp, :premium, :shipping, :tax, :total, :commission, :tubes,
-               :version, CAST(:buyerAddress AS jsonb), CAST(:originAddress AS jsonb), :zone, :taxBp,
-               now() + (:dueDays || ' days')::interval, now(), now())`,
-      {
-        replacements: {
-          id,
-          number: `GL-${new Date().getUTCFullYear()}-${n}`,
-          saleLotId,
-          lotId: sl.lot_id,
-          buyer: sl.buyer_id,
-          consignor: sl.consignor_id,
-          hammer: inv.hammerCents,
-          bp: inv.premiumBp,
-          premium: inv.premiumCents,
-          shipping: inv.shippingCents,
-          tax: inv.taxCents,
-          total: inv.totalCents,
-          commission: inv.commissionCents,
-          tubes,
-          version: sl.settings_version,
-          buyerAddress: destination ? JSON.stringify(destination) : null,
-          originAddress: origin ? JSON.stringify(origin) : null,
-          zone: inv.zone,
-          taxBp: inv.taxBp,
-          dueDays: String(settings.payment.dueDays),
-        },
-        transaction: t,
-      },
-    );
-    await post(t, "invoice-issued", id, invoiceIssuedEntries(inv));
+    const id = await issueInvoice(t, {
+      saleLotId,
+      lotId: sl.lot_id,
+      buyerId: sl.buyer_id,
+      consignorId: sl.consignor_id,
+      priced: inv,
+      tubes,
+      settingsVersion: sl.settings_version,
+      buyerAddress: destination,
+      originAddress: origin,
+      dueDays: settings.payment.dueDays,
+      secondChance: false,
+    });
     return { id, buyerId: sl.buyer_id, total: inv.totalCents, dueDays: settings.payment.dueDays };
   });
   if (!created) return null;

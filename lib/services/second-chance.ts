@@ -1,4 +1,3 @@
-import { randomUUID } from "node:crypto";
 import { QueryTypes, type Transaction } from "sequelize";
 import { ApiError } from "../api/errors";
 import { env } from "../config/env";
@@ -10,6 +9,7 @@ import { db, User } from "../../models";
 import { addressOf } from "./addresses";
 import { settingsForInvoice } from "./house-settings";
 import type { BidRow } from "./bid-rows";
+import { issueInvoice } from "./invoice-issue";
 import { invoiceColumns, type InvoiceRow } from "./invoice-rows";
 import { post } from "./ledger";
 
@@ -74,51 +74,24 @@ async function issueSecondChanceInvoice(
   inv: UnpaidInvoice,
   under: Underbidder,
 ): Promise<SecondChanceOffer> {
-  const s = db();
   const hammer = Math.min(under.max_cents, inv.hammer_cents);
   const settings = await settingsForInvoice(invoiceId, t);
   const destination = await addressOf(under.bidder_id, t);
   const origin = await addressOf(inv.consignor_id, t);
   const next = priceSoldLot({ hammerCents: hammer, tubes: inv.tube_count, origin, destination }, settings);
-  const id = randomUUID();
-  const [{ n }] = (await s.query<{ n: string }>(`SELECT nextval('invoice_numbers') AS n`, {
-    type: QueryTypes.SELECT,
-    transaction: t,
-  })) as [{ n: string }];
-  await s.query(
-    `INSERT INTO invoices (id, number, sale_lot_id, lot_id, buyer_id, consignor_id, state, hammer_cents, premium_bp, premium_cents, shipping_cents, tax_cents, total_cents,
-                             commission_cents, tube_count, settings_version, buyer_address, origin_address, shipping_zone, tax_bp,
-                             due_at, second_chance, created_at, updated_at)
-       VALUES (:id, :number, :sl, :lot, :buyer, :consignor, 'awaiting-payment', :hammer, :bp, :premium, :shipping, :tax, :total, :commission, :tubes,
-               :version, CAST(:buyerAddress AS jsonb), CAST(:originAddress AS jsonb), :zone, :taxBp,
-               now() + (:dueDays || ' days')::interval, true, now(), now())`,
-    {
-      replacements: {
-        id,
-        number: `GL-${new Date().getUTCFullYear()}-${n}`,
-        sl: inv.sale_lot_id,
-        lot: inv.lot_id,
-        buyer: under.bidder_id,
-        consignor: inv.consignor_id,
-        hammer,
-        bp: next.premiumBp,
-        premium: next.premiumCents,
-        shipping: next.shippingCents,
-        tax: next.taxCents,
-        total: next.totalCents,
-        commission: next.commissionCents,
-        tubes: inv.tube_count,
-        version: inv.settings_version,
-        buyerAddress: destination ? JSON.stringify(destination) : null,
-        originAddress: origin ? JSON.stringify(origin) : null,
-        zone: next.zone,
-        taxBp: next.taxBp,
-        dueDays: String(settings.payment.dueDays),
-      },
-      transaction: t,
-    },
-  );
-  await post(t, "invoice-issued", id, invoiceIssuedEntries(next));
+  const id = await issueInvoice(t, {
+    saleLotId: inv.sale_lot_id,
+    lotId: inv.lot_id,
+    buyerId: under.bidder_id,
+    consignorId: inv.consignor_id,
+    priced: next,
+    tubes: inv.tube_count,
+    settingsVersion: inv.settings_version,
+    buyerAddress: destination,
+    originAddress: origin,
+    dueDays: settings.payment.dueDays,
+    secondChance: true,
+  });
   return {
     offeredTo: under.bidder_id,
     newInvoiceId: id,

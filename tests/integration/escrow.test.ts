@@ -237,6 +237,16 @@ describe("unpaid invoices", () => {
     expect((await invoice(invoiceId)).state).toBe("cancelled");
     const offer = await invoice(r.newInvoiceId!);
     expect(offer.state).toBe("awaiting-payment");
+    // Both are written by the same issuing code; only the offer is flagged, each with its own number.
+    const flags = await db().query<{ id: string; second_chance: boolean; number: string }>(
+      `SELECT id, second_chance, number FROM invoices WHERE id IN (:ids)`,
+      { replacements: { ids: [invoiceId, r.newInvoiceId] }, type: QueryTypes.SELECT },
+    );
+    const byId = new Map(flags.map((f) => [f.id, f]));
+    expect(byId.get(invoiceId)!.second_chance).toBe(false);
+    expect(byId.get(r.newInvoiceId!)!.second_chance).toBe(true);
+    expect(byId.get(r.newInvoiceId!)!.number).toMatch(/^GL-\d{4}-\d+$/);
+    expect(byId.get(r.newInvoiceId!)!.number).not.toBe(byId.get(invoiceId)!.number);
     expect(offer.hammer_cents).toBe(2_500); // the under-bidder's own maximum [brief §8 practice: offer at their last bid]
     expect(await trialBalance()).toBe(0);
     const b = await balances(invoiceId);
