@@ -7,7 +7,7 @@ import { useApiSubmit } from "@/components/forms/useApiSubmit";
 import { apiFetch } from "@/lib/client/api";
 import type { Outcome } from "@/lib/disputes/rules";
 import { formatCents, parseMoneyToCents } from "@/lib/money/cents";
-import type { RefundSettlement } from "@/lib/money/refunds";
+import type { SettlementFigures } from "@/lib/money/refunds";
 import { DecisionSchema, RefundPreviewSchema } from "@/lib/validation/disputes";
 
 export type DecisionLine = {
@@ -25,17 +25,7 @@ type LineValues = { value: string; single: string };
 type RulingValues = { upheld: boolean; tubes: number; worth: string };
 export type DecisionValues = { outcome: Outcome; reasons: string; lines: LineValues[]; rulings: RulingValues[] };
 /** The refund the server works out (its settlement, lib/money/refunds.ts), as far as the form shows it. */
-export type RefundWorkedOut = Pick<
-  RefundSettlement,
-  | "lotValueCents"
-  | "claimValueCents"
-  | "hammerRefundCents"
-  | "premiumRefundCents"
-  | "commissionReductionCents"
-  | "buyerRefundCents"
-  | "consignorChangeCents"
-  | "houseChangeCents"
->;
+export type RefundWorkedOut = SettlementFigures;
 type Ruling = { itemId: string; upheld: boolean; tubes: number; worthCents?: number };
 type Amounts = { ok: true; lines: LineValue[]; rulings: Ruling[] } | { ok: false };
 

@@ -216,3 +216,16 @@ export function figuresAfterRefunds(sale: SaleFigures, settlements: readonly Ref
   checkSale(left);
   return left;
 }
+
+/** The figures of a settlement that a decision records and the mediator's form shows. */
+export type SettlementFigures = Pick<
+  RefundSettlement,
+  | "lotValueCents"
+  | "claimValueCents"
+  | "hammerRefundCents"
+  | "premiumRefundCents"
+  | "commissionReductionCents"
+  | "buyerRefundCents"
+  | "consignorChangeCents"
+  | "houseChangeCents"
+>;

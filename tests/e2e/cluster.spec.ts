@@ -3,6 +3,7 @@ import { expect, test } from "@playwright/test";
 import { encode } from "next-auth/jwt";
 import pg from "pg";
 import { io } from "socket.io-client";
+import { BLANK_ITEM } from "../../lib/validation/lots";
 
 // Two app instances on one PostgreSQL: broadcasts cross instances through the
 // Postgres adapter; killing one mid-sale loses no committed bid and every lot
@@ -92,20 +93,10 @@ test("two instances: broadcasts cross, a killed instance loses no committed bid,
         })
       ).body.lot as { id: string };
       const item = {
+        ...BLANK_ITEM,
         designation: "6V6GT",
         quantity: 2,
         labelBrand: "Tri-County Parts",
-        makerName: null,
-        makerBasis: "unconfirmed",
-        sourceCode: null,
-        dateCode: null,
-        features: {},
-        condition: "used",
-        vacuumLoss: false,
-        defects: [],
-        hazards: [],
-        readings: [],
-        notes: "",
       };
       expect((await call(PORTS[0]!, consignor, "POST", `/api/lots/${lot.id}/items`, item)).status).toBe(201);
       expect((await call(PORTS[1]!, consignor, "POST", `/api/lots/${lot.id}/submit`)).status).toBe(200);

@@ -1,5 +1,6 @@
 import { expect, type Browser, type Page } from "@playwright/test";
 import pg from "pg";
+import { BLANK_ITEM } from "../../lib/validation/lots";
 
 /** Demo accounts seeded by seeders/20261201000100-demo-users.ts (README lists them). */
 export const DEMO_PASSWORD = "valve-demo-2026";
@@ -123,20 +124,10 @@ export async function soldToDealer(
     ).json()) as { lot: { id: string } }
   ).lot;
   const item = {
+    ...BLANK_ITEM,
     designation: "6SN7GT",
     quantity: 4,
     labelBrand: "Carrow Instruments",
-    makerName: null,
-    makerBasis: "unconfirmed",
-    sourceCode: null,
-    dateCode: null,
-    features: {},
-    condition: "used",
-    vacuumLoss: false,
-    defects: [],
-    hazards: [],
-    readings: [],
-    notes: "",
   };
   expect((await consignor.request.post(`/api/lots/${lot.id}/items`, { data: item })).status()).toBe(201);
   expect((await consignor.request.post(`/api/lots/${lot.id}/submit`)).status()).toBe(200);

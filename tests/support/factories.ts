@@ -3,6 +3,7 @@ import { encode } from "next-auth/jwt";
 import { NextRequest } from "next/server";
 import type { Role } from "../../lib/auth/roles";
 import { hashPassword } from "../../lib/services/accounts";
+import { BLANK_ITEM, type ItemInput } from "../../lib/validation/lots";
 import { db, User } from "../../models";
 import { until } from "./wait";
 
@@ -112,24 +113,12 @@ export function viewerOf(u: User) {
 }
 
 /** A plain item as the consignor's form sends it. */
-export function itemInput(
-  over: Partial<import("../../lib/validation/lots").ItemInput> = {},
-): import("../../lib/validation/lots").ItemInput {
+export function itemInput(over: Partial<ItemInput> = {}): ItemInput {
   return {
+    ...BLANK_ITEM,
     designation: "12AX7",
     quantity: 1,
     labelBrand: "Fairmont Home Radio",
-    makerName: null,
-    makerBasis: "unconfirmed",
-    sourceCode: null,
-    dateCode: null,
-    features: {},
-    condition: "used",
-    vacuumLoss: false,
-    defects: [],
-    hazards: [],
-    readings: [],
-    notes: "",
     ...over,
   };
 }

@@ -7,21 +7,11 @@ import type { Transaction } from "sequelize";
 import type { LineValue, Ruling } from "../../../disputes/manifest";
 import type { DisputeReason, DisputeState, Outcome, Remedy, Stance } from "../../../disputes/rules";
 import { DISPUTE_TRANSITIONS, statesBefore } from "../../../disputes/states";
-import type { RefundSettlement } from "../../../money/refunds";
+import type { SettlementFigures } from "../../../money/refunds";
 import { columns, exec, select } from "./query";
 
 /** The money a decision moved, as recorded on it. */
-export type StoredSettlement = Pick<
-  RefundSettlement,
-  | "lotValueCents"
-  | "claimValueCents"
-  | "hammerRefundCents"
-  | "premiumRefundCents"
-  | "commissionReductionCents"
-  | "buyerRefundCents"
-  | "consignorChangeCents"
-  | "houseChangeCents"
->;
+export type StoredSettlement = SettlementFigures;
 
 /** What else a returned lot's refund repaid: its shipping and tax on the card, the return postage by transfer. */
 export type StoredReturnExtras = { shippingCents?: number; taxCents?: number; postageCents?: number };
